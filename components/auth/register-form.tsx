@@ -1,0 +1,57 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { signIn } from 'next-auth/react';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
+import { PASSWORD_MIN, RegisterSchema, type RegisterInput } from '@/lib/validations/user';
+
+export function RegisterForm() {
+  const router = useRouter();
+  const [formError, setFormError] = useState<string | null>(null);
+  const { register, handleSubmit, formState, setError } = useForm<RegisterInput>({ resolver: zodResolver(RegisterSchema), mode: 'onTouched' });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    const response = await fetch('/api/register', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(values) });
+    if (!response.ok) {
+      const body = (await response.json().catch(() => null)) as { message?: string; fields?: Record<string, string[]> } | null;
+      for (const [field, messages] of Object.entries(body?.fields ?? {})) {
+        if (field === 'name' || field === 'email' || field === 'password') setError(field, { message: messages[0] });
+      }
+      setFormError(body?.message ?? 'We could not create your account. Please try again.');
+      return;
+    }
+    const result = await signIn('credentials', { redirect: false, email: values.email, password: values.password });
+    if (!result || result.error) {
+      router.push('/signin');
+      return;
+    }
+    router.push('/pantry');
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4">
+      <div aria-live="polite">
+        {formError ? <p className="rounded-lg border border-beet-500 bg-beet-50 px-3 py-2 text-sm text-beet-700">{formError}</p> : null}
+      </div>
+      <TextField label="Your name" autoComplete="name" hint="As it should appear on your certificate." error={formState.errors.name?.message} {...register('name')} />
+      <TextField label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register('email')} />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint={`At least ${PASSWORD_MIN} characters. A short sentence is easy to remember.`}
+        error={formState.errors.password?.message}
+        {...register('password')}
+      />
+      <Button type="submit" pending={formState.isSubmitting} className="w-full">
+        Create my account
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,28 @@
+import Link from 'next/link';
+import { Logo } from '@/components/logo';
+import { PUBLIC_NAV } from '@/lib/nav';
+import { UserNav } from './user-nav';
+
+/** Static header; the signed-in part is a client leaf so public pages stay static. */
+export function SiteHeader() {
+  return (
+    <header data-site-header className="bg-brine-800 text-white">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:rounded focus:bg-white focus:px-3 focus:py-1 focus:text-brine-900">
+        Skip to content
+      </a>
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+        <Link href="/" className="no-underline" aria-label="Brinewright home">
+          <Logo />
+        </Link>
+        <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-x-4 gap-y-1">
+          {PUBLIC_NAV.map((item) => (
+            <Link key={item.href} href={item.href} className="text-sm font-medium text-brine-50 no-underline hover:text-white hover:underline">
+              {item.label}
+            </Link>
+          ))}
+        </nav>
+        <UserNav />
+      </div>
+    </header>
+  );
+}

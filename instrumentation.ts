@@ -1,0 +1,8 @@
+// Validates the configuration once when the server starts, so a missing variable
+// stops the server with a clear message instead of failing on the first request.
+export async function register() {
+  if (process.env.NEXT_RUNTIME === 'nodejs') {
+    const { getEnv } = await import('./lib/env');
+    getEnv();
+  }
+}

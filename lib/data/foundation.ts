@@ -1,0 +1,34 @@
+import 'server-only';
+import { QueryTypes } from 'sequelize';
+import { db } from '@/models';
+import type { Role } from '@/lib/roles';
+import type { EnrollmentStatus } from '@/lib/enrollment-status';
+
+export type LearnerEnrollment = { id: number; courseSlug: string; courseTitle: string; status: EnrollmentStatus; workshopStartsAt: Date | null };
+
+/** The courses a learner is enrolled in, newest first. */
+export async function fetchLearnerEnrollments({ userId }: { userId: number }): Promise<LearnerEnrollment[]> {
+  return db().sequelize.query<LearnerEnrollment>(
+    `SELECT e.id, c.slug AS courseSlug, c.title AS courseTitle, e.status, w.startsAt AS workshopStartsAt
+       FROM enrollments e JOIN courses c ON c.id = e.courseId LEFT JOIN workshops w ON w.id = e.workshopId
+      WHERE e.userId = :userId ORDER BY e.createdAt DESC`,
+    { replacements: { userId }, type: QueryTypes.SELECT },
+  );
+}
+
+/** How many enrollments are in each status, for the desk's summary. */
+export async function fetchEnrollmentCounts(): Promise<Record<EnrollmentStatus, number>> {
+  const rows = await db().sequelize.query<{ status: EnrollmentStatus; n: number }>('SELECT status, COUNT(*) AS n FROM enrollments GROUP BY status', {
+    type: QueryTypes.SELECT,
+  });
+  const counts: Record<EnrollmentStatus, number> = { awaiting_payment: 0, active: 0, completed: 0, withdrawn: 0 };
+  for (const row of rows) counts[row.status] = Number(row.n);
+  return counts;
+}
+
+export type UserRow = { id: number; name: string; email: string; role: Role; createdAt: Date };
+
+export async function fetchUsers({ limit = 200 }: { limit?: number } = {}): Promise<UserRow[]> {
+  const users = await db().User.findAll({ attributes: ['id', 'name', 'email', 'role', 'createdAt'], order: [['name', 'ASC']], limit });
+  return users.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role, createdAt: u.createdAt }));
+}

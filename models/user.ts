@@ -1,0 +1,29 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { ROLES, type Role } from '@/lib/roles';
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<number>;
+  declare email: string;
+  declare name: string;
+  declare passwordHash: string;
+  declare role: CreationOptional<Role>;
+  declare emailVerifiedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    User.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+        role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: 'learner' },
+        emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, modelName: 'User', tableName: 'users' },
+    );
+  }
+}

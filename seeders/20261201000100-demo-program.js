@@ -1,0 +1,57 @@
+'use strict';
+
+// Demo data only: the Cedar Hollow County home-preserving program, an invented scenario.
+const bcrypt = require('bcryptjs');
+
+const ACCOUNTS = [
+  { email: 'learner@cedarhollow.example', name: 'Maren Osei', role: 'learner', password: 'demo-learner-pass' },
+  { email: 'instructor@cedarhollow.example', name: 'Tomas Lindqvist', role: 'instructor', password: 'demo-instructor-pass' },
+  { email: 'coordinator@cedarhollow.example', name: 'Priya Halvorsen', role: 'coordinator', password: 'demo-coordinator-pass' },
+  { email: 'admin@cedarhollow.example', name: 'Dale Okafor', role: 'admin', password: 'demo-admin-pass' },
+];
+
+const COURSES = [
+  { slug: 'pickling-and-canning', title: 'Safe Pickling and Water-Bath Canning', feeCents: 4500, currency: 'usd', passMarkPct: 80, validityMonths: 36 },
+  { slug: 'volunteer-refresher', title: 'Volunteer Refresher: Acid, Time and Altitude', feeCents: 1500, currency: 'usd', passMarkPct: 80, validityMonths: 36 },
+];
+
+const DAY = 24 * 60 * 60 * 1000;
+
+/** @type {import('sequelize-cli').Migration} */
+module.exports = {
+  ACCOUNTS,
+  async up(queryInterface) {
+    const now = new Date();
+    await queryInterface.bulkInsert(
+      'users',
+      ACCOUNTS.map((a) => ({
+        email: a.email,
+        name: a.name,
+        role: a.role,
+        passwordHash: bcrypt.hashSync(a.password, 10),
+        emailVerifiedAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
+    await queryInterface.bulkInsert('courses', COURSES.map((c) => ({ ...c, createdAt: now, updatedAt: now })));
+    const [[course]] = await queryInterface.sequelize.query("SELECT id FROM courses WHERE slug = 'pickling-and-canning'");
+    const [[instructor]] = await queryInterface.sequelize.query("SELECT id FROM users WHERE email = 'instructor@cedarhollow.example'");
+    // Workshops start at 9:00 local time (Mountain time, UTC-7 in winter) two and five weeks from the seed.
+    const at = (days, hourUtc) => {
+      const d = new Date(now.getTime() + days * DAY);
+      d.setUTCHours(hourUtc, 0, 0, 0);
+      return d;
+    };
+    await queryInterface.bulkInsert('workshops', [
+      { courseId: course.id, instructorId: instructor.id, startsAt: at(14, 16), endsAt: at(14, 21), timeZone: 'America/Denver', place: 'Cedar Hollow Grange Hall, 14 Mill Road, Cedar Hollow', seats: 12, attendanceRequired: true, createdAt: now, updatedAt: now },
+      { courseId: course.id, instructorId: instructor.id, startsAt: at(35, 16), endsAt: at(35, 21), timeZone: 'America/Denver', place: 'Upper Fork Community Kitchen, 220 Aspen Street, Upper Fork', seats: 10, attendanceRequired: true, createdAt: now, updatedAt: now },
+    ]);
+  },
+
+  async down(queryInterface) {
+    await queryInterface.bulkDelete('workshops', {});
+    await queryInterface.bulkDelete('courses', { slug: COURSES.map((c) => c.slug) });
+    await queryInterface.bulkDelete('users', { email: ACCOUNTS.map((a) => a.email) });
+  },
+};

@@ -1,0 +1,40 @@
+import { QueryTypes } from 'sequelize';
+import { hashPassword, type SessionUser } from '@/lib/auth/users';
+import type { Role } from '@/lib/roles';
+import { db } from '@/models';
+
+/** Empties every table (not the migration record) so each test file starts clean. */
+export async function resetDatabase(): Promise<void> {
+  const { sequelize } = db();
+  const tables = await sequelize.query<{ name: string }>(
+    "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() AND table_name NOT IN ('SequelizeMeta', 'SequelizeData')",
+    { type: QueryTypes.SELECT },
+  );
+  await sequelize.transaction(async (transaction) => {
+    await sequelize.query('SET FOREIGN_KEY_CHECKS = 0', { transaction });
+    for (const { name } of tables) await sequelize.query(`TRUNCATE TABLE \`${name}\``, { transaction });
+    await sequelize.query('SET FOREIGN_KEY_CHECKS = 1', { transaction });
+  });
+}
+
+let counter = 0;
+
+/** Creates a user with a role; the password is 'test-password-123'. */
+export async function createUser(role: Role = 'learner', overrides: Partial<{ email: string; name: string }> = {}): Promise<SessionUser> {
+  counter += 1;
+  const user = await db().User.create({
+    email: overrides.email ?? `${role}${counter}-${Date.now()}@test.example`,
+    name: overrides.name ?? `Test ${role} ${counter}`,
+    role,
+    passwordHash: await hashPassword('test-password-123'),
+  });
+  return { id: user.id, email: user.email, name: user.name, role: user.role };
+}
+
+/** The two courses of the catalog, as the demo seeder makes them. */
+export async function createCourses() {
+  const { Course } = db();
+  const flagship = await Course.create({ slug: 'pickling-and-canning', title: 'Safe Pickling and Water-Bath Canning', feeCents: 4500, currency: 'usd' });
+  const refresher = await Course.create({ slug: 'volunteer-refresher', title: 'Volunteer Refresher: Acid, Time and Altitude', feeCents: 1500, currency: 'usd' });
+  return { flagship, refresher };
+}

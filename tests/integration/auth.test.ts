@@ -1,0 +1,97 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import { POST as register } from '@/app/api/register/route';
+import { requireRole } from '@/lib/auth/guard';
+import { ThrottledError, verifyCredentials } from '@/lib/auth/users';
+import { changeRole } from '@/lib/users-admin';
+import { db } from '@/models';
+import { createUser, resetDatabase } from '../helpers/db';
+import { jsonRequest } from '../helpers/request';
+import { actAs } from '../helpers/session';
+
+beforeEach(async () => {
+  await resetDatabase();
+  actAs(null);
+});
+
+describe('POST /api/register', () => {
+  it('creates a learner and never stores the password itself', async () => {
+    const response = await register(jsonRequest('/api/register', { name: 'Juniper Vale', email: 'Juniper@Example.org', password: 'a long pass phrase' }), {});
+    expect(response.status).toBe(201);
+    const body = await response.json();
+    expect(body.user).toMatchObject({ email: 'juniper@example.org', role: 'learner' });
+    const row = await db().User.findOne({ where: { email: 'juniper@example.org' } });
+    expect(row?.passwordHash).toMatch(/^\$2[aby]\$10\$/);
+    expect(row?.passwordHash).not.toContain('a long pass phrase');
+    expect(await db().AuditLog.count({ where: { action: 'user.registered' } })).toBe(1);
+  });
+
+  it('answers a second registration of the same e-mail with 409 and no second row', async () => {
+    const input = { name: 'Juniper Vale', email: 'juniper@example.org', password: 'a long pass phrase' };
+    expect((await register(jsonRequest('/api/register', input), {})).status).toBe(201);
+    const again = await register(jsonRequest('/api/register', { ...input, email: 'JUNIPER@example.org' }), {});
+    expect(again.status).toBe(409);
+    expect((await again.json()).fields.email[0]).toMatch(/already exists/);
+    expect(await db().User.count()).toBe(1);
+  });
+
+  it('answers 400 naming each wrong field, and a short password with a clear message', async () => {
+    const response = await register(jsonRequest('/api/register', { name: '', email: 'nope', password: 'short' }), {});
+    expect(response.status).toBe(400);
+    const body = await response.json();
+    expect(Object.keys(body.fields).sort()).toEqual(['email', 'name', 'password']);
+    expect(body.fields.password[0]).toBe('Use at least 10 characters for your password.');
+    expect(await db().User.count()).toBe(0);
+  });
+
+  it('answers malformed JSON with 400, not 500', async () => {
+    const response = await register(jsonRequest('/api/register', '{"name": "x", '), {});
+    expect(response.status).toBe(400);
+  });
+});
+
+describe('verifyCredentials', () => {
+  it('gives the same answer for a wrong password and an unknown e-mail', async () => {
+    const user = await createUser('learner', { email: 'hazel@test.example' });
+    expect(await verifyCredentials('hazel@test.example', 'test-password-123', 'a1')).toMatchObject({ id: user.id, role: 'learner' });
+    expect(await verifyCredentials('hazel@test.example', 'wrong-password-1', 'a1')).toBeNull();
+    expect(await verifyCredentials('nobody@test.example', 'wrong-password-1', 'a1')).toBeNull();
+  });
+
+  it('throttles an account after 5 failures, even for the right password, from any address', async () => {
+    await createUser('learner', { email: 'rowan@test.example' });
+    for (let i = 0; i < 5; i++) expect(await verifyCredentials('rowan@test.example', 'guess-number-' + i, `addr-${i}`)).toBeNull();
+    await expect(verifyCredentials('rowan@test.example', 'test-password-123', 'addr-new')).rejects.toBeInstanceOf(ThrottledError);
+    expect(await db().SignInThrottle.count()).toBeGreaterThan(0);
+  });
+
+  it('throttles an address after 20 failures across accounts', async () => {
+    await createUser('learner', { email: 'ash@test.example' });
+    for (let i = 0; i < 20; i++) await verifyCredentials(`someone${i}@test.example`, 'wrong-password-1', 'shared-address');
+    await expect(verifyCredentials('ash@test.example', 'test-password-123', 'shared-address')).rejects.toBeInstanceOf(ThrottledError);
+    expect(await verifyCredentials('ash@test.example', 'test-password-123', 'other-address')).not.toBeNull();
+  });
+});
+
+describe('requireRole', () => {
+  it('is 401 signed out, 403 for the wrong role, and passes the right one', async () => {
+    await expect(requireRole('coordinator')).rejects.toMatchObject({ status: 401 });
+    const learner = await createUser('learner');
+    actAs(learner);
+    await expect(requireRole('coordinator')).rejects.toMatchObject({ status: 403 });
+    await expect(requireRole('learner')).resolves.toMatchObject({ id: learner.id });
+    const admin = await createUser('admin');
+    actAs(admin);
+    await expect(requireRole('coordinator')).resolves.toMatchObject({ role: 'admin' });
+  });
+});
+
+describe('changeRole', () => {
+  it('changes a role with an audit entry, and refuses to demote oneself', async () => {
+    const admin = await createUser('admin');
+    const learner = await createUser('learner');
+    await changeRole(admin.id, { userId: learner.id, role: 'instructor' });
+    expect((await db().User.findByPk(learner.id))?.role).toBe('instructor');
+    expect(await db().AuditLog.count({ where: { action: 'user.role_changed' } })).toBe(1);
+    await expect(changeRole(admin.id, { userId: admin.id, role: 'learner' })).rejects.toMatchObject({ status: 409 });
+  });
+});

@@ -1,0 +1,61 @@
+import path from 'node:path';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+
+const root = path.dirname(new URL(import.meta.url).pathname);
+const alias = {
+  '@': root,
+  // server-only throws outside a React server bundle; tests import server modules directly.
+  'server-only': path.join(root, 'tests/setup/empty.ts'),
+};
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: { alias },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          environment: 'node',
+          include: ['lib/**/*.test.ts', 'tests/unit/**/*.test.ts', 'content/**/*.test.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'components',
+          environment: 'jsdom',
+          include: ['components/**/*.test.tsx', 'app/**/*.test.tsx', 'tests/components/**/*.test.tsx'],
+          setupFiles: ['tests/setup/components.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'integration',
+          environment: 'node',
+          include: ['tests/integration/**/*.test.ts'],
+          globalSetup: ['tests/setup/integration-global.ts'],
+          setupFiles: ['tests/setup/integration.ts'],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/setup/e2e-global.ts'],
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 300_000,
+        },
+      },
+    ],
+  },
+});
