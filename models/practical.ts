@@ -14,6 +14,7 @@ export class Practical extends Model<InferAttributes<Practical>, InferCreationAt
   declare status: CreationOptional<PracticalStatus>;
   declare details: unknown;
   declare flags: CreationOptional<Record<string, unknown>[]>;
+  declare flagCount: CreationOptional<number>;
   declare submittedAt: Date;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -26,6 +27,7 @@ export class Practical extends Model<InferAttributes<Practical>, InferCreationAt
         status: { type: DataTypes.ENUM(...PRACTICAL_STATUSES), allowNull: false, defaultValue: 'submitted' },
         details: { type: DataTypes.JSON, allowNull: false },
         flags: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
+        flagCount: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 0 },
         submittedAt: { type: DataTypes.DATE, allowNull: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

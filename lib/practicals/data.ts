@@ -1,0 +1,204 @@
+import 'server-only';
+import { QueryTypes } from 'sequelize';
+import { PRACTICAL_STATUSES, type PracticalStatus } from '@/models/practical';
+import { db } from '@/models';
+import { TASTING_PAGE_SIZE, type PracticalDetails, type TastingTableQuery } from '@/lib/validations/practical';
+import type { Flag } from './checks';
+import { photoUrl } from './service';
+
+// Reads for the Tasting table, the submission page and the learner's practical page.
+
+export type TastingRow = {
+  id: number;
+  round: number;
+  status: PracticalStatus;
+  flagCount: number;
+  submittedAt: string;
+  product: string | null;
+  learnerName: string;
+  courseSlug: string;
+  workshopId: number | null;
+  workshopStartsAt: string | null;
+  workshopPlace: string | null;
+};
+
+export type TastingTablePage = {
+  rows: TastingRow[];
+  page: number;
+  pageSize: number;
+  total: number;
+  pageCount: number;
+  counts: Record<PracticalStatus, number>;
+};
+
+const ORDER: Record<TastingTableQuery['sort'], string> = {
+  oldest: 'p.submittedAt ASC, p.id ASC',
+  newest: 'p.submittedAt DESC, p.id DESC',
+  learner: 'u.name ASC, p.submittedAt ASC, p.id ASC',
+  flags: 'p.flagCount DESC, p.submittedAt ASC, p.id ASC',
+  status: "FIELD(p.status, 'submitted', 'changes_requested', 'approved'), p.submittedAt ASC, p.id ASC",
+};
+
+const iso = (d: unknown) => (d instanceof Date ? d.toISOString() : d === null || d === undefined ? null : String(d));
+
+/** One page of submissions for the Tasting table, with the count in each status under the same filters. */
+export async function fetchTastingTable(query: TastingTableQuery, now = new Date()): Promise<TastingTablePage> {
+  const { sequelize } = db();
+  const where: string[] = [];
+  const replacements: Record<string, unknown> = {};
+  if (query.workshop) {
+    where.push('e.workshopId = :workshop');
+    replacements.workshop = query.workshop;
+  }
+  if (query.flagged === 'yes') where.push('p.flagCount > 0');
+  if (query.flagged === 'no') where.push('p.flagCount = 0');
+  if (query.olderThanDays !== undefined) {
+    where.push('p.submittedAt <= :before');
+    replacements.before = new Date(now.getTime() - query.olderThanDays * 86_400_000);
+  }
+  // The workshop filter is the only one that needs the enrollment; leave the join out otherwise.
+  const join = query.workshop ? 'JOIN enrollments e ON e.id = p.enrollmentId' : '';
+  const countsSql = `SELECT p.status, COUNT(*) AS n FROM practicals p ${join} ${where.length ? `WHERE ${where.join(' AND ')}` : ''} GROUP BY p.status`;
+  const statusWhere = query.status === 'all' ? where : [...where, 'p.status = :status'];
+  if (query.status !== 'all') replacements.status = query.status;
+  const whereSql = statusWhere.length ? `WHERE ${statusWhere.join(' AND ')}` : '';
+  const offset = (query.page - 1) * TASTING_PAGE_SIZE;
+
+  const [rows, countRows] = await Promise.all([
+    sequelize.query<TastingRow>(
+      `SELECT p.id, p.round, p.status, p.flagCount, p.submittedAt,
+              JSON_UNQUOTE(JSON_EXTRACT(p.details, '$.product')) AS product,
+              u.name AS learnerName, c.slug AS courseSlug,
+              w.id AS workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace
+         FROM practicals p
+         JOIN users u ON u.id = p.userId
+         JOIN enrollments e ON e.id = p.enrollmentId
+         JOIN courses c ON c.id = e.courseId
+         LEFT JOIN workshops w ON w.id = e.workshopId
+         ${whereSql}
+        ORDER BY ${ORDER[query.sort]}
+        LIMIT ${TASTING_PAGE_SIZE} OFFSET ${offset}`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ status: PracticalStatus; n: number | string }>(countsSql, { replacements, type: QueryTypes.SELECT }),
+  ]);
+  const counts = Object.fromEntries(PRACTICAL_STATUSES.map((s) => [s, 0])) as Record<PracticalStatus, number>;
+  for (const row of countRows) counts[row.status] = Number(row.n);
+  const total = query.status === 'all' ? Object.values(counts).reduce((a, b) => a + b, 0) : counts[query.status];
+  return {
+    rows: rows.map((r) => ({
+      ...r,
+      id: Number(r.id),
+      round: Number(r.round),
+      flagCount: Number(r.flagCount),
+      submittedAt: iso(r.submittedAt)!,
+      workshopId: r.workshopId === null ? null : Number(r.workshopId),
+      workshopStartsAt: iso(r.workshopStartsAt),
+    })),
+    page: query.page,
+    pageSize: TASTING_PAGE_SIZE,
+    total,
+    pageCount: Math.max(1, Math.ceil(total / TASTING_PAGE_SIZE)),
+    counts,
+  };
+}
+
+export type WorkshopOption = { id: number; label: string };
+
+/** Workshops for the Tasting table's filter. */
+export async function fetchWorkshopOptions(): Promise<WorkshopOption[]> {
+  const rows = await db().sequelize.query<{ id: number; startsAt: Date; place: string; title: string }>(
+    `SELECT w.id, w.startsAt, w.place, c.title FROM workshops w JOIN courses c ON c.id = w.courseId ORDER BY w.startsAt DESC LIMIT 200`,
+    { type: QueryTypes.SELECT },
+  );
+  return rows.map((w) => ({
+    id: Number(w.id),
+    label: `${new Date(w.startsAt).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${w.place.split(',')[0]}`,
+  }));
+}
+
+export type RubricEntry = { verdict: 'met' | 'not_met'; comment: string };
+export type ReviewView = { id: number; decision: 'approved' | 'changes_requested'; rubric: Record<string, RubricEntry>; comment: string | null; reviewerName: string; createdAt: string };
+export type PhotoView = { id: number; url: string; thumbnailUrl: string; width: number; height: number; caption: string | null };
+export type RoundView = {
+  id: number;
+  round: number;
+  status: PracticalStatus;
+  details: PracticalDetails;
+  flags: Flag[];
+  submittedAt: string;
+  photos: PhotoView[];
+  reviews: ReviewView[];
+};
+
+async function roundsWhere(where: Record<string, unknown>): Promise<RoundView[]> {
+  const { Practical, PracticalPhoto, Review, User } = db();
+  const practicals = await Practical.findAll({
+    where,
+    order: [['round', 'DESC']],
+    include: [
+      { model: PracticalPhoto, as: 'photos' },
+      { model: Review, as: 'reviews', include: [{ model: User, as: 'reviewer', attributes: ['name'] }] },
+    ],
+  });
+  return practicals.map((p) => {
+    const withIncludes = p as typeof p & { photos: InstanceType<typeof PracticalPhoto>[]; reviews: (InstanceType<typeof Review> & { reviewer?: { name: string } })[] };
+    return {
+      id: p.id,
+      round: p.round,
+      status: p.status,
+      details: p.details as PracticalDetails,
+      flags: (p.flags ?? []) as unknown as Flag[],
+      submittedAt: p.submittedAt.toISOString(),
+      photos: [...withIncludes.photos]
+        .sort((a, b) => a.id - b.id)
+        .map((ph) => ({ id: ph.id, url: photoUrl(ph.id), thumbnailUrl: photoUrl(ph.id, 'thumb'), width: ph.width, height: ph.height, caption: ph.caption ?? null })),
+      reviews: [...withIncludes.reviews]
+        .sort((a, b) => a.id - b.id)
+        .map((r) => ({
+          id: r.id,
+          decision: r.decision,
+          rubric: r.rubric as Record<string, RubricEntry>,
+          comment: r.comment ?? null,
+          reviewerName: r.reviewer?.name ?? 'An instructor',
+          createdAt: r.createdAt.toISOString(),
+        })),
+    };
+  });
+}
+
+export type SubmissionView = {
+  round: RoundView;
+  earlierRounds: RoundView[];
+  learner: { id: number; name: string; email: string };
+  course: { slug: string; title: string };
+  workshop: { id: number; startsAt: string; place: string } | null;
+};
+
+/** One submission for the Tasting table, with the earlier rounds of the same enrollment. */
+export async function fetchSubmission({ id }: { id: number }): Promise<SubmissionView | null> {
+  const { Practical, User, Enrollment, Course, Workshop } = db();
+  const practical = await Practical.findByPk(id, { attributes: ['id', 'enrollmentId', 'userId'] });
+  if (!practical) return null;
+  const [rounds, learner, enrollment] = await Promise.all([
+    roundsWhere({ enrollmentId: practical.enrollmentId }),
+    User.findByPk(practical.userId, { attributes: ['id', 'name', 'email'] }),
+    Enrollment.findByPk(practical.enrollmentId),
+  ]);
+  if (!learner || !enrollment) return null;
+  const [course, workshop] = await Promise.all([Course.findByPk(enrollment.courseId), enrollment.workshopId ? Workshop.findByPk(enrollment.workshopId) : null]);
+  if (!course) return null;
+  const round = rounds.find((r) => r.id === id)!;
+  return {
+    round,
+    earlierRounds: rounds.filter((r) => r.round < round.round),
+    learner: { id: learner.id, name: learner.name, email: learner.email },
+    course: { slug: course.slug, title: course.title },
+    workshop: workshop ? { id: workshop.id, startsAt: workshop.startsAt.toISOString(), place: workshop.place } : null,
+  };
+}
+
+/** Every round of a learner's practical in a course, newest first (for the practical page and the Pantry). */
+export async function fetchLearnerPracticals({ userId, enrollmentId }: { userId: number; enrollmentId: number }): Promise<RoundView[]> {
+  return roundsWhere({ userId, enrollmentId });
+}

@@ -1,0 +1,159 @@
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import { Op } from 'sequelize';
+import { findActiveEnrollment } from '@/lib/access';
+import { audit } from '@/lib/audit';
+import type { SessionUser } from '@/lib/auth/users';
+import { enqueueEmail } from '@/lib/email/outbox';
+import { getEnv } from '@/lib/env';
+import { AppError } from '@/lib/errors';
+import { roleAllows } from '@/lib/roles';
+import { getStorage } from '@/lib/storage';
+import type { PracticalForm, ReviewInput } from '@/lib/validations/practical';
+import { db } from '@/models';
+import { checkPractical, type Flag } from './checks';
+import { reviewEmail } from './email';
+import { PhotoRejected, processPhoto } from './images';
+
+// A learner may keep only so many uploaded photos that are not yet part of a submission.
+const MAX_LOOSE_PHOTOS = 30;
+
+async function requireEnrollment(user: SessionUser, courseSlug: string) {
+  const enrollment = await findActiveEnrollment(user.id, courseSlug);
+  if (!enrollment) throw new AppError('forbidden', 'Only a learner with an active enrollment in this course can submit a practical.');
+  return enrollment;
+}
+
+export type AcceptedPhoto = { id: number; width: number; height: number; bytes: number; url: string; thumbnailUrl: string };
+
+export const photoUrl = (id: number, size: 'full' | 'thumb' = 'full') => `/api/photos/${id}${size === 'thumb' ? '?size=thumb' : ''}`;
+
+/** Checks, re-encodes and stores one photo for the learner's practical; nothing is stored when it is refused. */
+export async function acceptPhoto(user: SessionUser, courseSlug: string, input: Buffer): Promise<AcceptedPhoto> {
+  await requireEnrollment(user, courseSlug);
+  const { PracticalPhoto } = db();
+  const loose = await PracticalPhoto.count({ where: { userId: user.id, practicalId: null } });
+  if (loose >= MAX_LOOSE_PHOTOS) throw new AppError('conflict', 'You have many photos waiting that are not part of a submission. Submit your practical first.');
+  let processed;
+  try {
+    processed = await processPhoto(input);
+  } catch (error) {
+    if (error instanceof PhotoRejected) throw new AppError(error.reason === 'too-large' ? 'too_large' : 'unsupported_media', error.message);
+    throw error;
+  }
+  const storage = getStorage();
+  const base = `${user.id}/${randomUUID()}`;
+  const storageKey = `photos/${base}.jpg`;
+  const thumbnailKey = `thumbs/${base}.jpg`;
+  await storage.put(storageKey, processed.image.data, processed.image.contentType);
+  await storage.put(thumbnailKey, processed.thumbnail.data, processed.thumbnail.contentType);
+  try {
+    const row = await PracticalPhoto.create({
+      userId: user.id,
+      practicalId: null,
+      storageKey,
+      thumbnailKey,
+      contentType: processed.image.contentType,
+      width: processed.image.width,
+      height: processed.image.height,
+      bytes: processed.image.data.length,
+    });
+    return { id: row.id, width: row.width, height: row.height, bytes: row.bytes, url: photoUrl(row.id), thumbnailUrl: photoUrl(row.id, 'thumb') };
+  } catch (error) {
+    // Keep disk and database in step: no row, no files.
+    await Promise.allSettled([storage.delete(storageKey), storage.delete(thumbnailKey)]);
+    throw error;
+  }
+}
+
+/** The stored bytes of a photo for a viewer allowed to see it: its owner, instructors and coordinators. */
+export async function readPhotoFor(viewer: SessionUser, photoId: number, size: 'full' | 'thumb') {
+  const photo = await db().PracticalPhoto.findByPk(photoId);
+  if (!photo) throw new AppError('not_found', 'There is no such photo.');
+  if (photo.userId !== viewer.id && !roleAllows(viewer.role, ['instructor'])) throw new AppError('forbidden', 'This photo belongs to another learner.');
+  const stored = await getStorage().get(size === 'thumb' ? photo.thumbnailKey : photo.storageKey);
+  if (!stored) throw new AppError('not_found', 'The photo file is missing from storage.');
+  return stored;
+}
+
+export type SubmittedPractical = { id: number; round: number; flags: Flag[] };
+
+/** Submits a round of the learner's practical, linked to the enrollment that grants access. */
+export async function submitPractical(user: SessionUser, courseSlug: string, form: PracticalForm): Promise<SubmittedPractical> {
+  const enrollment = await requireEnrollment(user, courseSlug);
+  const { Practical, PracticalPhoto, sequelize } = db();
+  const { photoIds, ...details } = form;
+  const flags = checkPractical(details);
+  return sequelize.transaction(async (transaction) => {
+    const latest = await Practical.findOne({ where: { enrollmentId: enrollment.id }, order: [['round', 'DESC']], lock: transaction.LOCK.UPDATE, transaction });
+    if (latest?.status === 'submitted') throw new AppError('conflict', 'Your last round is still waiting at the Tasting table; you can submit again once it is reviewed.');
+    if (latest?.status === 'approved') throw new AppError('conflict', 'Your practical is already approved.');
+    const photos = await PracticalPhoto.findAll({
+      where: { id: { [Op.in]: photoIds }, userId: user.id, practicalId: null },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (photos.length !== photoIds.length) {
+      throw new AppError('bad_request', 'Some of the photos are not yours or already belong to a submission. Upload them again.', {
+        fields: { photoIds: ['Upload the photos again.'] },
+      });
+    }
+    const practical = await Practical.create(
+      {
+        enrollmentId: enrollment.id,
+        userId: user.id,
+        round: (latest?.round ?? 0) + 1,
+        status: 'submitted',
+        details,
+        flags,
+        flagCount: flags.length,
+        submittedAt: new Date(),
+      },
+      { transaction },
+    );
+    // Keep the learner's order of photos.
+    for (const [index, id] of photoIds.entries()) {
+      await PracticalPhoto.update({ practicalId: practical.id, caption: `Photo ${index + 1}` }, { where: { id }, transaction });
+    }
+    await audit(
+      { actorId: user.id, action: 'practical.submitted', subjectType: 'practical', subjectId: practical.id, data: { round: practical.round, flags: flags.map((f) => f.check) } },
+      { transaction },
+    );
+    return { id: practical.id, round: practical.round, flags };
+  });
+}
+
+/** Records an instructor's rubric and decision on a waiting round and e-mails the learner, all in one transaction. */
+export async function reviewPractical(reviewer: SessionUser, practicalId: number, input: ReviewInput) {
+  const { Practical, Review, User, Enrollment, Course, sequelize } = db();
+  return sequelize.transaction(async (transaction) => {
+    const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
+    if (!practical) throw new AppError('not_found', 'There is no such submission.');
+    if (practical.status !== 'submitted') throw new AppError('conflict', 'This round has already been reviewed.');
+    const [learner, enrollment] = await Promise.all([
+      User.findByPk(practical.userId, { transaction }),
+      Enrollment.findByPk(practical.enrollmentId, { transaction }),
+    ]);
+    const course = enrollment ? await Course.findByPk(enrollment.courseId, { transaction }) : null;
+    if (!learner || !course) throw new AppError('not_found', 'The learner or course of this submission is missing.');
+    const review = await Review.create(
+      { practicalId: practical.id, reviewerId: reviewer.id, decision: input.decision, rubric: input.rubric, comment: input.comment || null },
+      { transaction },
+    );
+    await practical.update({ status: input.decision }, { transaction });
+    const message = reviewEmail({
+      learnerName: learner.name,
+      courseTitle: course.title,
+      round: practical.round,
+      review: input,
+      reviewerName: reviewer.name,
+      url: new URL(`/learn/${course.slug}/practical`, getEnv().APP_URL).toString(),
+    });
+    await enqueueEmail({ kind: 'practical.reviewed', to: learner.email, ...message }, { transaction });
+    await audit(
+      { actorId: reviewer.id, action: `practical.${input.decision}`, subjectType: 'practical', subjectId: practical.id, data: { round: practical.round, reviewId: review.id } },
+      { transaction },
+    );
+    return { id: review.id, practicalId: practical.id, status: input.decision };
+  });
+}
