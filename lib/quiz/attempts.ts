@@ -1,0 +1,236 @@
+import 'server-only';
+import { QueryTypes, type Transaction } from 'sequelize';
+import { findActiveEnrollment } from '@/lib/access';
+import type { SessionUser } from '@/lib/auth/users';
+import { AppError } from '@/lib/errors';
+import { roleAllows } from '@/lib/roles';
+import { db } from '@/models';
+import { convertUnits, getBank } from './bank';
+import { checkAnswers, drawQuestions, gradeAttempt, publicQuestions, responseTokens, rightAnswer, type Answers, type Drawn, type Grade, type PublicQuestion } from './grading';
+import type { Bank } from './schema';
+
+// Starting, submitting and reading quiz attempts. Every rule is enforced here, on the server.
+
+/** Answers that arrive this long after the deadline still count (network delay, a slow click). */
+export const DEADLINE_GRACE_MS = 15_000;
+
+type AttemptRow = {
+  id: number;
+  userId: number;
+  courseId: number;
+  quizSlug: string;
+  drawn: Drawn | string;
+  answers: StoredAnswers | string | null;
+  scorePct: string | number | null;
+  passed: number | boolean | null;
+  startedAt: Date;
+  deadlineAt: Date | null;
+  submittedAt: Date | null;
+};
+
+/** What quiz_attempts.answers holds once graded. */
+type StoredAnswers = { given: Answers; grade: Grade; late?: boolean };
+
+const json = <T>(v: T | string): T => (typeof v === 'string' ? (JSON.parse(v) as T) : v);
+
+export type AttemptView = {
+  id: number;
+  quizSlug: string;
+  title: string;
+  courseSlug: string;
+  lessonSlug: string | null;
+  passMarkPct: number;
+  startedAt: string;
+  deadlineAt: string | null;
+  submittedAt: string | null;
+  questions: PublicQuestion[];
+  result?: AttemptResult;
+};
+
+export type AttemptResult = {
+  scorePct: number;
+  passed: boolean;
+  correct: number;
+  total: number;
+  late: boolean;
+  questions: {
+    id: string;
+    correct: boolean;
+    answered: boolean;
+    given: string[] | boolean | { value: number; unit: string } | null;
+    right: ReturnType<typeof rightAnswer>;
+    explanation: string;
+  }[];
+};
+
+function requireBank(quizSlug: string): Bank {
+  const bank = getBank(quizSlug);
+  if (!bank) throw new AppError('not_found', 'There is no quiz with that name.');
+  return bank;
+}
+
+async function courseFor(slug: string, transaction?: Transaction) {
+  const course = await db().Course.findOne({ where: { slug }, attributes: ['id', 'slug', 'passMarkPct'], transaction });
+  if (!course) throw new AppError('not_found', 'The course of this quiz is not in the catalog.');
+  return course;
+}
+
+function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: boolean): AttemptView {
+  const drawn = json<Drawn>(row.drawn);
+  const out: AttemptView = {
+    id: row.id,
+    quizSlug: row.quizSlug,
+    title: bank.title,
+    courseSlug: bank.course,
+    lessonSlug: bank.lesson ?? null,
+    passMarkPct,
+    startedAt: new Date(row.startedAt).toISOString(),
+    deadlineAt: row.deadlineAt ? new Date(row.deadlineAt).toISOString() : null,
+    submittedAt: row.submittedAt ? new Date(row.submittedAt).toISOString() : null,
+    questions: publicQuestions(bank.questions, drawn),
+  };
+  if (withResult && row.submittedAt && row.answers) {
+    const stored = json<StoredAnswers>(row.answers);
+    const byId = new Map(bank.questions.map((q) => [q.id, q]));
+    const shown = new Map(drawn.questions.map((d) => [d.id, d]));
+    out.result = {
+      scorePct: stored.grade.scorePct,
+      passed: stored.grade.passed,
+      correct: stored.grade.correct,
+      total: stored.grade.total,
+      late: stored.late ?? false,
+      questions: stored.grade.results.flatMap((r) => {
+        const q = byId.get(r.id);
+        const d = shown.get(r.id);
+        if (!q || !d) return [];
+        const raw = stored.given[r.id];
+        const given =
+          raw === undefined ? null : q.kind === 'single' || q.kind === 'multiple' ? responseTokens(d, r.response) : (raw as boolean | { value: number; unit: string });
+        return [{ id: r.id, correct: r.correct, answered: r.answered, given, right: rightAnswer(q, d), explanation: q.explanation }];
+      }),
+    };
+  }
+  return out;
+}
+
+export type StartResult = { attempt: AttemptView; created: boolean };
+
+/**
+ * Starts an attempt for an enrolled learner, or returns the one still open. Refuses (429, with
+ * nextAttemptAt) when the bank's attempt limit is reached in its window.
+ */
+export async function startAttempt(user: SessionUser, quizSlug: string, now = new Date(), random: () => number = Math.random): Promise<StartResult> {
+  const bank = requireBank(quizSlug);
+  const enrollment = await findActiveEnrollment(user.id, bank.course);
+  if (!enrollment) throw new AppError('forbidden', 'Enroll in this course to take its quizzes.');
+  const course = await courseFor(bank.course);
+  const { sequelize, QuizAttempt } = db();
+  return sequelize.transaction(async (transaction) => {
+    // Serialises the starts of one learner, so two tabs cannot both slip under the limit.
+    await sequelize.query('SELECT id FROM users WHERE id = :id FOR UPDATE', { replacements: { id: user.id }, type: QueryTypes.SELECT, transaction });
+    const open = await sequelize.query<AttemptRow>(
+      `SELECT * FROM quiz_attempts WHERE userId = :userId AND quizSlug = :quizSlug AND submittedAt IS NULL
+          AND (deadlineAt IS NULL OR deadlineAt > :now) ORDER BY startedAt DESC LIMIT 1`,
+      { replacements: { userId: user.id, quizSlug, now }, type: QueryTypes.SELECT, transaction },
+    );
+    if (open[0]) return { attempt: view(open[0], bank, course.passMarkPct, false), created: false };
+
+    if (bank.attemptLimit) {
+      const since = new Date(now.getTime() - bank.attemptLimit.windowHours * 3_600_000);
+      const recent = await sequelize.query<{ startedAt: Date }>(
+        'SELECT startedAt FROM quiz_attempts WHERE userId = :userId AND quizSlug = :quizSlug AND startedAt > :since ORDER BY startedAt ASC',
+        { replacements: { userId: user.id, quizSlug, since }, type: QueryTypes.SELECT, transaction },
+      );
+      if (recent.length >= bank.attemptLimit.max) {
+        const oldest = new Date(recent[recent.length - bank.attemptLimit.max].startedAt);
+        const nextAttemptAt = new Date(oldest.getTime() + bank.attemptLimit.windowHours * 3_600_000);
+        throw new AppError(
+          'rate_limit',
+          `You have used the ${bank.attemptLimit.max} attempts allowed in ${bank.attemptLimit.windowHours} hours. You may try again from ${nextAttemptAt.toISOString()}.`,
+          { extra: { nextAttemptAt: nextAttemptAt.toISOString(), limit: bank.attemptLimit } },
+        );
+      }
+    }
+
+    const drawn = drawQuestions(bank.questions, bank.draw, random);
+    const deadlineAt = bank.timeLimitMinutes ? new Date(now.getTime() + bank.timeLimitMinutes * 60_000) : null;
+    const row = await QuizAttempt.create(
+      { userId: user.id, courseId: course.id, quizSlug, drawn, startedAt: now, deadlineAt },
+      { transaction },
+    );
+    const plain = row.get({ plain: true }) as unknown as AttemptRow;
+    return { attempt: view(plain, bank, course.passMarkPct, false), created: true };
+  });
+}
+
+async function lockedAttempt(id: number, transaction: Transaction): Promise<AttemptRow | null> {
+  const rows = await db().sequelize.query<AttemptRow>('SELECT * FROM quiz_attempts WHERE id = :id FOR UPDATE', { replacements: { id }, type: QueryTypes.SELECT, transaction });
+  return rows[0] ?? null;
+}
+
+export type SubmitResult = { attempt: AttemptView; graded: boolean };
+
+/**
+ * Grades an attempt once. A second submission (two tabs, a double click) waits on the row lock
+ * and then returns the result already stored. Late answers (past the deadline and its grace)
+ * are not counted: the attempt is closed with what arrived in time, i.e. nothing, and a 409 says so.
+ */
+export async function submitAttempt(user: SessionUser, attemptId: number, answers: Answers, now = new Date()): Promise<SubmitResult> {
+  const { sequelize } = db();
+  const outcome = await sequelize.transaction(async (transaction) => {
+    const row = await lockedAttempt(attemptId, transaction);
+    if (!row) throw new AppError('not_found', 'There is no such attempt.');
+    if (row.userId !== user.id) throw new AppError('forbidden', 'This attempt belongs to another learner.');
+    const bank = requireBank(row.quizSlug);
+    const course = await db().Course.findByPk(row.courseId, { attributes: ['id', 'passMarkPct'], transaction });
+    const passMarkPct = course?.passMarkPct ?? 80;
+    if (row.submittedAt) return { row, bank, passMarkPct, graded: false, late: false };
+
+    const drawn = json<Drawn>(row.drawn);
+    checkAnswers(bank.questions, drawn, answers);
+    const late = row.deadlineAt !== null && now.getTime() > new Date(row.deadlineAt).getTime() + DEADLINE_GRACE_MS;
+    const counted: Answers = late ? {} : answers;
+    const grade = gradeAttempt(bank.questions, drawn, counted, passMarkPct, convertUnits);
+    const stored: StoredAnswers = { given: counted, grade, ...(late ? { late: true } : {}) };
+
+    await sequelize.query('UPDATE quiz_attempts SET answers = :answers, scorePct = :score, passed = :passed, submittedAt = :now, updatedAt = :now WHERE id = :id', {
+      replacements: { answers: JSON.stringify(stored), score: grade.scorePct, passed: grade.passed, now, id: row.id },
+      transaction,
+    });
+    if (grade.results.length) {
+      const enrollment = await findActiveEnrollment(row.userId, bank.course);
+      const workshopId = enrollment?.workshopId ?? null;
+      const values: string[] = [];
+      const replacements: unknown[] = [];
+      for (const r of grade.results) {
+        values.push('(?, ?, ?, ?, ?, ?, ?, ?)');
+        replacements.push(row.id, row.courseId, workshopId, row.quizSlug, r.id, r.correct, r.response?.slice(0, 200) ?? null, now);
+      }
+      await sequelize.query(`INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${values.join(', ')}`, {
+        replacements,
+        transaction,
+      });
+    }
+    const updated: AttemptRow = { ...row, answers: stored, scorePct: grade.scorePct, passed: grade.passed, submittedAt: now };
+    return { row: updated, bank, passMarkPct, graded: true, late };
+  });
+  const attempt = view(outcome.row, outcome.bank, outcome.passMarkPct, true);
+  if (outcome.late) {
+    throw new AppError('conflict', 'The time limit for this attempt ran out before the answers arrived, so they were not counted.', {
+      extra: { deadlineAt: attempt.deadlineAt, attempt },
+    });
+  }
+  return { attempt, graded: outcome.graded };
+}
+
+/** An attempt for its owner, an instructor or a coordinator; the result only once submitted. */
+export async function readAttempt(user: SessionUser, attemptId: number): Promise<AttemptView> {
+  const rows = await db().sequelize.query<AttemptRow>('SELECT * FROM quiz_attempts WHERE id = :id', { replacements: { id: attemptId }, type: QueryTypes.SELECT });
+  const row = rows[0];
+  if (!row) throw new AppError('not_found', 'There is no such attempt.');
+  const staff = roleAllows(user.role, ['instructor']);
+  if (row.userId !== user.id && !staff) throw new AppError('forbidden', 'This attempt belongs to another learner.');
+  const bank = requireBank(row.quizSlug);
+  const course = await db().Course.findByPk(row.courseId, { attributes: ['passMarkPct'] });
+  return view(row, bank, course?.passMarkPct ?? 80, true);
+}
