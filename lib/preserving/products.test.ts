@@ -1,0 +1,71 @@
+import { describe, expect, it } from 'vitest';
+import { PreservingError } from './errors';
+import { JAR_SIZES, PRODUCTS, PRODUCT_IDS, getProduct } from './products';
+
+describe('products', () => {
+  it('holds the seven pickled products of the shared contract', () => {
+    expect(PRODUCT_IDS).toEqual([
+      'fresh-pack-dill-pickles',
+      'bread-and-butter-pickles',
+      'pickle-relish',
+      'dilly-beans',
+      'pickled-beets',
+      'pickled-hot-peppers',
+      'fermented-dill-pickles',
+    ]);
+    expect(JAR_SIZES).toEqual(['half-pint', 'pint', 'quart']);
+  });
+
+  it('gives every product a table row for exactly the jars it lists, with minutes rising by band', () => {
+    for (const id of PRODUCT_IDS) {
+      const product = PRODUCTS[id];
+      expect(Object.keys(product.times).sort()).toEqual([...product.jars].sort());
+      for (const jar of product.jars) {
+        const [low, mid, high] = product.times[jar]!;
+        // USDA Guide 6 pickle tables add 5 minutes per band (0–1,000; 1,001–6,000; above 6,000 ft).
+        expect(mid - low).toBe(5);
+        expect(high - mid).toBe(5);
+      }
+      expect(product.source).toMatch(/Complete Guide to Home Canning|So Easy to Preserve/);
+    }
+  });
+
+  it('gives the Guide 6 pack style and headspace of each product', () => {
+    // USDA Complete Guide to Home Canning, rev. 2015, Guide 6, each recipe's process-time table
+    // ("Style of pack") and procedure ("leaving 1/2-inch headspace").
+    expect(Object.fromEntries(PRODUCT_IDS.map((id) => [id, [PRODUCTS[id].pack, PRODUCTS[id].headspaceIn]]))).toEqual({
+      'fresh-pack-dill-pickles': ['raw', 0.5],
+      'bread-and-butter-pickles': ['hot', 0.5],
+      'pickle-relish': ['hot', 0.5],
+      'dilly-beans': ['raw', 0.5],
+      'pickled-beets': ['hot', 0.5], // from memory, unconfirmed
+      'pickled-hot-peppers': ['raw', 0.5],
+      'fermented-dill-pickles': ['raw', 0.5],
+    });
+  });
+
+  it('labels the rows that could not be confirmed as from memory', () => {
+    expect(PRODUCTS['pickled-beets'].confidence).toBe('memory');
+    expect(PRODUCTS['pickled-beets'].source).toContain('from memory');
+    expect(PRODUCTS['dilly-beans'].confidence).toBe('secondary');
+  });
+
+  it('allows low-temperature pasteurization only for the cucumber pickles the guide allows it for', () => {
+    // USDA Complete Guide, rev. 2015, Guide 6, "Low-temperature pasteurization treatment" and the
+    // bread-and-butter recipe ("or use low-temperature pasteurization treatment").
+    const allowed = PRODUCT_IDS.filter((id) => PRODUCTS[id].lowTemperaturePasteurization);
+    expect(allowed).toEqual(['fresh-pack-dill-pickles', 'bread-and-butter-pickles', 'fermented-dill-pickles']);
+  });
+
+  it('throws not-found for an unknown product', () => {
+    expect(getProduct('dilly-beans').name).toBe('Pickled dilly beans');
+    try {
+      getProduct('pickled-okra');
+      expect.unreachable();
+    } catch (error) {
+      expect(error).toBeInstanceOf(PreservingError);
+      expect((error as PreservingError).kind).toBe('not-found');
+      expect((error as PreservingError).param).toBe('product');
+    }
+  });
+});

@@ -1,0 +1,149 @@
+import { PreservingError } from './errors';
+
+/**
+ * Pickled products with their published boiling-water processing tables.
+ *
+ * Source of every table: USDA, *Complete Guide to Home Canning*, Agriculture Information Bulletin
+ * No. 539, revised 2015, Guide 6 ("Preparing and Canning Fermented Foods and Pickled Vegetables").
+ * `confidence` says how each row was checked from here:
+ * - 'verified': read in a verbatim reproduction of the guide's table (1994 edition reproductions and
+ *   the National Center for Home Food Preservation pages that carry the 2009/2015 text);
+ * - 'secondary': read only on a secondary page quoting the National Center for Home Food Preservation;
+ * - 'memory': from memory, not confirmed; shown and tested as such.
+ */
+
+export const PRODUCT_IDS = [
+  'fresh-pack-dill-pickles',
+  'bread-and-butter-pickles',
+  'pickle-relish',
+  'dilly-beans',
+  'pickled-beets',
+  'pickled-hot-peppers',
+  'fermented-dill-pickles',
+] as const;
+export type ProductId = (typeof PRODUCT_IDS)[number];
+
+export const JAR_SIZES = ['half-pint', 'pint', 'quart'] as const;
+export type JarSize = (typeof JAR_SIZES)[number];
+
+export const JAR_LABELS: Record<JarSize, string> = { 'half-pint': 'half-pint (8 fl oz, 237 mL)', pint: 'pint (16 fl oz, 473 mL)', quart: 'quart (32 fl oz, 946 mL)' };
+
+/** The three altitude bands of the Guide 6 pickle tables. The top band is "above 6,000 ft"; the
+ * guide's altitude advice stops at 10,000 ft, so Brinewright answers nothing above that. */
+export const ALTITUDE_BANDS = [
+  { fromFt: 0, toFt: 1000 },
+  { fromFt: 1001, toFt: 6000 },
+  { fromFt: 6001, toFt: 10000 },
+] as const;
+export const MAX_TABLE_ALTITUDE_FT = 10000;
+
+export type AltitudeBand = { fromFt: number; toFt: number | null };
+/** Minutes for the three bands in order (0–1,000 ft; 1,001–6,000 ft; above 6,000 ft). */
+export type BandMinutes = readonly [number, number, number];
+
+export type Confidence = 'verified' | 'secondary' | 'memory';
+
+export type Product = {
+  id: ProductId;
+  name: string;
+  pack: 'raw' | 'hot';
+  jars: readonly JarSize[];
+  headspaceIn: number;
+  /** Boiling-water minutes per jar size by altitude band. */
+  times: Partial<Record<JarSize, BandMinutes>>;
+  source: string;
+  confidence: Confidence;
+  /** Where the guide allows 180–185 °F for 30 minutes instead of the boiling-water time. */
+  lowTemperaturePasteurization?: boolean;
+};
+
+const GUIDE6 = 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6';
+
+export const PRODUCTS: Record<ProductId, Product> = {
+  'fresh-pack-dill-pickles': {
+    id: 'fresh-pack-dill-pickles',
+    name: 'Quick fresh-pack dill pickles',
+    pack: 'raw',
+    jars: ['pint', 'quart'],
+    headspaceIn: 0.5,
+    times: { pint: [10, 15, 20], quart: [15, 20, 25] },
+    source: `${GUIDE6}, "Quick fresh-pack dill pickles", recommended process time table`,
+    confidence: 'verified',
+    lowTemperaturePasteurization: true,
+  },
+  'bread-and-butter-pickles': {
+    id: 'bread-and-butter-pickles',
+    name: 'Bread-and-butter pickles',
+    pack: 'hot',
+    jars: ['pint', 'quart'],
+    headspaceIn: 0.5,
+    times: { pint: [10, 15, 20], quart: [10, 15, 20] },
+    source: `${GUIDE6}, "Bread-and-butter pickles", recommended process time table`,
+    confidence: 'verified',
+    lowTemperaturePasteurization: true,
+  },
+  'pickle-relish': {
+    id: 'pickle-relish',
+    name: 'Pickle relish',
+    pack: 'hot',
+    jars: ['half-pint', 'pint'],
+    headspaceIn: 0.5,
+    times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
+    source: `${GUIDE6}, "Pickle relish", recommended process time table`,
+    confidence: 'verified',
+  },
+  'dilly-beans': {
+    id: 'dilly-beans',
+    name: 'Pickled dilly beans',
+    pack: 'raw',
+    jars: ['pint'],
+    headspaceIn: 0.5,
+    times: { pint: [5, 10, 15] },
+    source: `${GUIDE6}, "Pickled dilly beans", recommended process time table`,
+    confidence: 'secondary',
+  },
+  'pickled-beets': {
+    id: 'pickled-beets',
+    name: 'Pickled beets',
+    pack: 'hot',
+    jars: ['pint', 'quart'],
+    headspaceIn: 0.5,
+    times: { pint: [30, 35, 40], quart: [30, 35, 40] },
+    source: `${GUIDE6}, "Pickled beets", recommended process time table (from memory, not confirmed here)`,
+    confidence: 'memory',
+  },
+  'pickled-hot-peppers': {
+    id: 'pickled-hot-peppers',
+    name: 'Pickled hot peppers',
+    pack: 'raw',
+    jars: ['half-pint', 'pint'],
+    headspaceIn: 0.5,
+    times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
+    source: `${GUIDE6}, "Pickled hot peppers", recommended process time table`,
+    confidence: 'verified',
+  },
+  'fermented-dill-pickles': {
+    id: 'fermented-dill-pickles',
+    name: 'Dill pickles (fermented, then canned)',
+    pack: 'raw',
+    jars: ['pint', 'quart'],
+    headspaceIn: 0.5,
+    times: { pint: [10, 15, 20], quart: [15, 20, 25] },
+    source: `${GUIDE6}, "Dill pickles" (fermented), recommended process time table`,
+    confidence: 'verified',
+    lowTemperaturePasteurization: true,
+  },
+};
+
+export const isProductId = (value: unknown): value is ProductId => typeof value === 'string' && (PRODUCT_IDS as readonly string[]).includes(value);
+
+/** The product, or PreservingError not-found (HTTP 404). */
+export function getProduct(id: string): Product {
+  if (!isProductId(id)) {
+    throw new PreservingError('not-found', `There is no product called "${String(id)}". Choose one of: ${PRODUCT_IDS.join(', ')}.`, 'product');
+  }
+  return PRODUCTS[id];
+}
+
+/** Options for a product picker: id and plain name. */
+export const PRODUCT_OPTIONS = PRODUCT_IDS.map((id) => ({ value: id, label: PRODUCTS[id].name }));
