@@ -24,7 +24,7 @@ async function requireEnrollment(user: SessionUser, courseSlug: string) {
   return enrollment;
 }
 
-export type AcceptedPhoto = { id: number; width: number; height: number; bytes: number; url: string; thumbnailUrl: string };
+export type AcceptedPhoto = { id: number; receivedAs: 'jpeg' | 'png' | 'webp'; width: number; height: number; bytes: number; url: string; thumbnailUrl: string };
 
 export const photoUrl = (id: number, size: 'full' | 'thumb' = 'full') => `/api/photos/${id}${size === 'thumb' ? '?size=thumb' : ''}`;
 
@@ -58,7 +58,7 @@ export async function acceptPhoto(user: SessionUser, courseSlug: string, input: 
       height: processed.image.height,
       bytes: processed.image.data.length,
     });
-    return { id: row.id, width: row.width, height: row.height, bytes: row.bytes, url: photoUrl(row.id), thumbnailUrl: photoUrl(row.id, 'thumb') };
+    return { id: row.id, receivedAs: processed.format, width: row.width, height: row.height, bytes: row.bytes, url: photoUrl(row.id), thumbnailUrl: photoUrl(row.id, 'thumb') };
   } catch (error) {
     // Keep disk and database in step: no row, no files.
     await Promise.allSettled([storage.delete(storageKey), storage.delete(thumbnailKey)]);
@@ -95,7 +95,7 @@ export async function submitPractical(user: SessionUser, courseSlug: string, for
     });
     if (photos.length !== photoIds.length) {
       throw new AppError('bad_request', 'Some of the photos are not yours or already belong to a submission. Upload them again.', {
-        fields: { photoIds: ['Upload the photos again.'] },
+        fields: { 'practical.photoIds': ['Upload the photos again.'] },
       });
     }
     const practical = await Practical.create(

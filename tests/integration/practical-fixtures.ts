@@ -1,0 +1,76 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import sharp from 'sharp';
+import type { SessionUser } from '@/lib/auth/users';
+import { diskDriver, setStorage } from '@/lib/storage';
+import type { PracticalForm } from '@/lib/validations/practical';
+import { db } from '@/models';
+import { createCourses, createUser } from '../helpers/db';
+
+// Shared set-up for the practical and photo tests: a photo folder of their own, an enrolled learner.
+
+export function useTemporaryStorage(): { root: string; files: () => string[]; cleanup: () => void } {
+  const root = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-photos-'));
+  setStorage(diskDriver(root));
+  const files = () => (fs.existsSync(root) ? (fs.readdirSync(root, { recursive: true }) as string[]).filter((f) => fs.statSync(path.join(root, f)).isFile()) : []);
+  return { root, files, cleanup: () => { setStorage(undefined); fs.rmSync(root, { recursive: true, force: true }); } };
+}
+
+export async function enrolledLearner(courseId: number, status: 'active' | 'completed' | 'withdrawn' | 'awaiting_payment' = 'active', workshopId: number | null = null) {
+  const learner = await createUser('learner');
+  const enrollment = await db().Enrollment.create({ userId: learner.id, courseId, workshopId, runKey: workshopId ? String(workshopId) : 'self-paced', status, feeCents: 4500 });
+  return { learner, enrollment };
+}
+
+export async function catalog() {
+  const { flagship, refresher } = await createCourses();
+  const instructor = await createUser('instructor');
+  const workshop = await db().Workshop.create({
+    courseId: flagship.id,
+    instructorId: instructor.id,
+    startsAt: new Date('2026-12-15T16:00:00Z'),
+    endsAt: new Date('2026-12-15T21:00:00Z'),
+    timeZone: 'America/Denver',
+    place: 'Cedar Hollow Grange Hall, 14 Mill Road',
+    seats: 12,
+  });
+  return { flagship, refresher, instructor, workshop };
+}
+
+/** A real JPEG, made here, with a colour gradient so it is not trivially compressible. */
+export async function makeJpeg(width = 640, height = 480, extra: (s: sharp.Sharp) => sharp.Sharp = (s) => s): Promise<Buffer> {
+  const raw = Buffer.alloc(width * height * 3);
+  for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) raw.set([(x * 255) / width, (y * 255) / height, 96], (y * width + x) * 3);
+  return extra(sharp(raw, { raw: { width, height, channels: 3 } }).jpeg({ quality: 85 })).toBuffer();
+}
+
+export function photoRequest(file: Buffer, filename: string, type: string, course = 'pickling-and-canning'): Request {
+  const form = new FormData();
+  form.set('course', course);
+  form.set('photo', new File([new Uint8Array(file)], filename, { type }));
+  return new Request('http://localhost:3000/api/photos', { method: 'POST', body: form });
+}
+
+export const GOOD_BATCH = (photoIds: number[]): PracticalForm => ({
+  product: 'fresh-pack-dill-pickles',
+  recipeTitle: 'Quick fresh-pack dill pickles',
+  recipeSource: 'USDA Complete Guide to Home Canning (2015), Guide 6',
+  jar: 'pint',
+  jars: 7,
+  pack: 'raw',
+  vinegarAcidityPct: 5,
+  vinegarMl: 1420,
+  waterMl: 1890,
+  headspaceIn: 0.5,
+  method: 'boiling-water',
+  altitudeFt: 5200,
+  minutes: 15,
+  batchDate: '2026-11-28',
+  sealedJars: 7,
+  unsealedJars: 0,
+  notes: '',
+  photoIds,
+});
+
+export type { SessionUser };
