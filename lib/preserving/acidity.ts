@@ -1,4 +1,4 @@
-import { PreservingError, checkNumber } from './errors';
+import { PreservingError, checkNumber, RULES } from './errors';
 
 /** Pickling vinegar strength the tested recipes call for: 5 % acidity ("50 grain"), white or cider
  * (USDA Complete Guide to Home Canning, rev. 2015, Guide 6, "Ingredients": vinegar). */
@@ -55,10 +55,10 @@ export const molarFromPct = (gPer100Ml: number) => (gPer100Ml * 10) / ACETIC_ACI
 
 /** Acidity and estimated pH of a vinegar/water/other-liquid mix, and once produce water mixes in. */
 export function brineAcidity(input: BrineAcidityInput): BrineAcidityResult {
-  const vinegarMl = checkNumber(input.vinegarMl, { param: 'vinegarMl', label: 'the vinegar in mL' });
-  const acidity = checkNumber(input.vinegarAcidityPct, { param: 'vinegarAcidityPct', label: 'the vinegar acidity in %', max: 100 });
-  const waterMl = checkNumber(input.waterMl, { param: 'waterMl', label: 'the water in mL' });
-  const otherMl = input.otherMl === undefined ? 0 : checkNumber(input.otherMl, { param: 'otherMl', label: 'the other liquid in mL' });
+  const vinegarMl = checkNumber(input.vinegarMl, RULES.vinegarMl);
+  const acidity = checkNumber(input.vinegarAcidityPct, RULES.vinegarAcidityPct);
+  const waterMl = checkNumber(input.waterMl, RULES.waterMl);
+  const otherMl = input.otherMl === undefined ? 0 : checkNumber(input.otherMl, RULES.otherMl);
   const totalMl = vinegarMl + waterMl + otherMl;
   if (totalMl <= 0) throw new PreservingError('invalid', 'Enter some liquid: the vinegar, water and other liquid add up to 0 mL.', 'vinegarMl');
 
@@ -72,9 +72,9 @@ export function brineAcidity(input: BrineAcidityInput): BrineAcidityResult {
     result.warnings.push(`This vinegar is below ${MIN_VINEGAR_ACIDITY_PCT}% acidity. Tested pickle recipes call for vinegar of at least 5% acidity; weaker vinegar cannot be made up by guessing.`);
   }
   if (input.produceG !== undefined) {
-    const produceG = checkNumber(input.produceG, { param: 'produceG', label: 'the produce in grams' });
+    const produceG = checkNumber(input.produceG, RULES.produceG);
     const waterPct =
-      input.produceWaterPct === undefined ? DEFAULT_PRODUCE_WATER_PCT : checkNumber(input.produceWaterPct, { param: 'produceWaterPct', label: 'the water in the produce in %', max: 100 });
+      input.produceWaterPct === undefined ? DEFAULT_PRODUCE_WATER_PCT : checkNumber(input.produceWaterPct, RULES.produceWaterPct);
     // 1 g of produce water taken as 1 mL (water is 0.998 g/mL at 20 °C).
     const produceWaterMl = (produceG * waterPct) / 100;
     result.equilibratedAcidityPct = (acidG / (totalMl + produceWaterMl)) * 100;

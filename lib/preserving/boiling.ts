@@ -1,4 +1,4 @@
-import { ALTITUDE_RULE, checkNumber, outsideTable } from './errors';
+import { ALTITUDE_RULE, checkNumber, outsideTable, RULES } from './errors';
 
 /**
  * Boiling point of water at an altitude:
@@ -75,7 +75,7 @@ export const PA_PER_PSI = (0.45359237 * G0) / 0.0254 ** 2;
 
 /** Temperature of saturated steam in a canner at a gauge pressure (psig) and altitude. */
 export function cannerTemperature({ psig, altitudeFt }: { psig: number; altitudeFt: number }): { fahrenheit: number; celsius: number } {
-  const gauge = checkNumber(psig, { param: 'psig', label: 'the gauge pressure in psi', max: 20 });
+  const gauge = checkNumber(psig, RULES.psig);
   const altitude = checkNumber(altitudeFt, ALTITUDE_RULE);
   const kelvin = saturationTemperatureK(standardPressurePa(altitude * 0.3048) + gauge * PA_PER_PSI);
   return { fahrenheit: kToF(kelvin), celsius: kelvin - 273.15 };

@@ -37,7 +37,7 @@ export function outsideTable(reason: string, param?: string): PreservingError {
   return new PreservingError('outside-table', `${reason} ${LOCAL_GUIDANCE}`, param);
 }
 
-type NumberRule = {
+export type NumberRule = {
   /** Query parameter / field name, e.g. "altitudeFt". */
   param: string;
   /** Plain words for the value, e.g. "the altitude". */
@@ -99,7 +99,29 @@ function capital(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
+/**
+ * The rules for every numeric input, shared by the functions, the JSON routes (query parameters of
+ * the same names) and the calculator components, so all three give the same message.
+ */
+export const RULES = {
+  altitudeFt: { param: 'altitudeFt', label: 'the altitude in feet' },
+  jars: { param: 'jars', label: 'the number of jars', min: 1, max: 500, integer: true },
+  measuredIn: { param: 'measuredIn', label: 'the measured headspace in inches', max: 6 },
+  vinegarMl: { param: 'vinegarMl', label: 'the vinegar in mL' },
+  vinegarAcidityPct: { param: 'vinegarAcidityPct', label: 'the vinegar acidity in %', max: 100 },
+  waterMl: { param: 'waterMl', label: 'the water in mL' },
+  otherMl: { param: 'otherMl', label: 'the other liquid in mL' },
+  produceG: { param: 'produceG', label: 'the produce in grams' },
+  produceWaterPct: { param: 'produceWaterPct', label: 'the water in the produce in %', max: 100 },
+  amount: { param: 'amount', label: 'the amount of salt' },
+  brinePct: { param: 'brinePct', label: 'the brine strength in %', max: 26 },
+  psig: { param: 'psig', label: 'the gauge pressure in psi', max: 20 },
+  processedMinutes: { param: 'processedMinutes', label: 'the minutes processed' },
+  /** Converter input: negative values are allowed here and refused by convert() unless a temperature. */
+  value: { param: 'value', label: 'the value', min: Number.NEGATIVE_INFINITY },
+} satisfies Record<string, NumberRule>;
+
 /** Shared rule for altitude inputs (feet above sea level). */
-export const ALTITUDE_RULE = { param: 'altitudeFt', label: 'the altitude in feet' } as const;
+export const ALTITUDE_RULE = RULES.altitudeFt;
 /** Shared rule for jar counts. */
-export const JARS_RULE = { param: 'jars', label: 'the number of jars', min: 1, max: 500, integer: true } as const;
+export const JARS_RULE = RULES.jars;

@@ -1,4 +1,4 @@
-import { checkNumber } from './errors';
+import { checkNumber, RULES } from './errors';
 import { getProduct } from './products';
 
 export type HeadspaceVerdict = 'too-little' | 'ok' | 'too-much';
@@ -21,7 +21,7 @@ export function headspaceCheck({ product, measuredIn }: { product: string; measu
   const found = getProduct(product);
   const result: HeadspaceResult = { recommendedIn: found.headspaceIn, source: found.source };
   if (measuredIn === undefined) return result;
-  const measured = checkNumber(measuredIn, { param: 'measuredIn', label: 'the measured headspace in inches', max: 6 });
+  const measured = checkNumber(measuredIn, RULES.measuredIn);
   const verdict: HeadspaceVerdict =
     measured < found.headspaceIn - HEADSPACE_TOLERANCE_IN - 1e-9 ? 'too-little' : measured > found.headspaceIn + HEADSPACE_TOLERANCE_IN + 1e-9 ? 'too-much' : 'ok';
   return { ...result, verdict, why: WHY[verdict] };

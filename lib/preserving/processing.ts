@@ -1,4 +1,4 @@
-import { ALTITUDE_RULE, checkChoice, checkNumber, outsideTable } from './errors';
+import { ALTITUDE_RULE, checkChoice, checkNumber, outsideTable, RULES } from './errors';
 import { ALTITUDE_BANDS, JAR_SIZES, MAX_TABLE_ALTITUDE_FT, getProduct, type AltitudeBand, type JarSize } from './products';
 
 export type ProcessingTimeInput = { product: string; jar: JarSize | string; altitudeFt: number };
@@ -44,7 +44,7 @@ export function processingTime({ product, jar, altitudeFt }: ProcessingTimeInput
 
 /** True when the minutes a learner processed for are at least the table's minutes. */
 export function isProcessedLongEnough(input: ProcessingTimeInput & { processedMinutes: number }): boolean {
-  const processed = checkNumber(input.processedMinutes, { param: 'processedMinutes', label: 'the minutes processed' });
+  const processed = checkNumber(input.processedMinutes, RULES.processedMinutes);
   return processed >= processingTime(input).minutes;
 }
 

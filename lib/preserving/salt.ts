@@ -1,4 +1,4 @@
-import { PreservingError, checkChoice, checkNumber } from './errors';
+import { PreservingError, checkChoice, checkNumber, RULES } from './errors';
 import { convert, isUnit, unitKind, type Unit } from './units';
 
 export const SALT_KINDS = ['canning', 'table', 'kosher-flake', 'kosher-coarse', 'sea-fine'] as const;
@@ -60,14 +60,14 @@ export type SaltToGramsResult = { grams: number; brinePct?: number; suitable: bo
 export function saltToGrams({ salt, amount, unit, waterMl }: SaltToGramsInput): SaltToGramsResult {
   const kind = checkChoice(salt, SALT_KINDS, 'salt', 'a kind of salt');
   const info = SALTS[kind];
-  const value = checkNumber(amount, { param: 'amount', label: 'the amount of salt' });
+  const value = checkNumber(amount, RULES.amount);
   if (!isUnit(unit) || (unitKind(unit) !== 'volume' && unitKind(unit) !== 'mass')) {
     throw new PreservingError('invalid', 'Choose a unit for the salt: a volume (tsp, tbsp, cup, mL…) or a weight (g, kg, oz, lb).', 'unit');
   }
   const grams = unitKind(unit) === 'mass' ? convert(value, unit, 'g') : convert(value, unit, 'tsp') * info.gPerTsp;
   const result: SaltToGramsResult = { grams, suitable: info.suitable, why: info.why, gPerTsp: info.gPerTsp };
   if (waterMl !== undefined) {
-    const water = checkNumber(waterMl, { param: 'waterMl', label: 'the water in mL' });
+    const water = checkNumber(waterMl, RULES.waterMl);
     if (grams + water <= 0) throw new PreservingError('invalid', 'Enter some salt or water: both are 0.', 'waterMl');
     result.brinePct = (grams / (grams + water * WATER_G_PER_ML)) * 100;
   }
@@ -77,8 +77,8 @@ export function saltToGrams({ salt, amount, unit, waterMl }: SaltToGramsInput): 
 /** Salt for a brine of a given strength by weight (salt ÷ (salt + water) × 100). */
 export function saltForBrine({ salt, waterMl, brinePct }: { salt: SaltKind | string; waterMl: number; brinePct: number }): { grams: number; teaspoons: number } {
   const kind = checkChoice(salt, SALT_KINDS, 'salt', 'a kind of salt');
-  const water = checkNumber(waterMl, { param: 'waterMl', label: 'the water in mL' });
-  const pct = checkNumber(brinePct, { param: 'brinePct', label: 'the brine strength in %', max: 26 });
+  const water = checkNumber(waterMl, RULES.waterMl);
+  const pct = checkNumber(brinePct, RULES.brinePct);
   const grams = ((pct / (100 - pct)) * water * WATER_G_PER_ML);
   return { grams, teaspoons: grams / SALTS[kind].gPerTsp };
 }
