@@ -1,0 +1,112 @@
+import 'server-only';
+import { QueryTypes } from 'sequelize';
+import { getEnv } from '@/lib/env';
+import { AppError } from '@/lib/errors';
+import { hitRateLimit } from '@/lib/rate-limit';
+import { roleAllows } from '@/lib/roles';
+import type { SessionUser } from '@/lib/auth/users';
+import { db } from '@/models';
+import { renderCertificatePdf } from './pdf';
+import { normalizeSerial } from './serial';
+import { certificateState, type CertificateState } from './validity';
+
+/** What the public verification shows: the state, the name, the course and the dates, nothing more. */
+export type Verification =
+  | { found: false; serial: string; reason: 'malformed' | 'unknown' }
+  | { found: true; serial: string; state: CertificateState; learnerName: string; courseTitle: string; issuedAt: string; validUntil: string; revokedAt: string | null };
+
+type CertificateRecord = {
+  id: number;
+  serial: string;
+  userId: number;
+  issuedAt: Date;
+  validUntil: Date;
+  revokedAt: Date | null;
+  learnerName: string;
+  courseTitle: string;
+  courseSlug: string;
+};
+
+async function findBySerial(serial: string): Promise<CertificateRecord | null> {
+  const [row] = await db().sequelize.query<CertificateRecord>(
+    `SELECT ce.id, ce.serial, ce.userId, ce.issuedAt, ce.validUntil, ce.revokedAt, u.name AS learnerName, c.title AS courseTitle, c.slug AS courseSlug
+       FROM certificates ce JOIN users u ON u.id = ce.userId JOIN enrollments e ON e.id = ce.enrollmentId JOIN courses c ON c.id = e.courseId
+      WHERE ce.serial = :serial`,
+    { replacements: { serial }, type: QueryTypes.SELECT },
+  );
+  if (!row) return null;
+  const d = (v: unknown) => (v === null ? null : new Date(v as string));
+  return { ...row, id: Number(row.id), userId: Number(row.userId), issuedAt: d(row.issuedAt)!, validUntil: d(row.validUntil)!, revokedAt: d(row.revokedAt) };
+}
+
+/** Looks a serial up for the public check; no throttle (see verifyForAddress). */
+export async function verifySerial(input: string, now: Date = new Date()): Promise<Verification> {
+  const serial = normalizeSerial(input);
+  if (!serial) return { found: false, serial: input.slice(0, 40), reason: 'malformed' };
+  const cert = await findBySerial(serial);
+  if (!cert) return { found: false, serial, reason: 'unknown' };
+  return {
+    found: true,
+    serial,
+    state: certificateState(cert, now),
+    learnerName: cert.learnerName,
+    courseTitle: cert.courseTitle,
+    issuedAt: cert.issuedAt.toISOString(),
+    validUntil: cert.validUntil.toISOString(),
+    revokedAt: cert.revokedAt?.toISOString() ?? null,
+  };
+}
+
+/**
+ * The public check, throttled per client address (VERIFY_MAX_PER_ADDRESS per VERIFY_WINDOW_MINUTES,
+ * counted in MariaDB): throws AppError 429 with retryAfterSeconds when the address is over.
+ */
+export async function verifyForAddress(input: string, address: string, now: Date = new Date()): Promise<Verification> {
+  const env = getEnv();
+  const limit = await hitRateLimit(`verify:${address}`, env.VERIFY_MAX_PER_ADDRESS, env.VERIFY_WINDOW_MINUTES * 60, now);
+  if (!limit.allowed) {
+    throw new AppError('rate_limit', 'Too many certificate checks from your address. Please wait a few minutes and try again.', {
+      extra: { retryAfterSeconds: limit.retryAfterSeconds },
+    });
+  }
+  return verifySerial(input, now);
+}
+
+/**
+ * The PDF of a certificate for a signed-in viewer: its owner, or a coordinator or admin.
+ * Others get 404, so the existence of a serial is not revealed to them.
+ */
+export async function certificatePdfFor(serialInput: string, viewer: SessionUser): Promise<{ serial: string; pdf: Uint8Array }> {
+  const serial = normalizeSerial(serialInput);
+  const cert = serial ? await findBySerial(serial) : null;
+  const staff = roleAllows(viewer.role, ['coordinator']);
+  if (!cert || (!staff && cert.userId !== viewer.id)) throw new AppError('not_found', 'There is no certificate with that serial for your account.');
+  if (cert.revokedAt && !staff) throw new AppError('conflict', 'This certificate was revoked, so it can no longer be downloaded.');
+  const env = getEnv();
+  const pdf = await renderCertificatePdf({
+    learnerName: cert.learnerName,
+    courseTitle: cert.courseTitle,
+    programName: env.CERTIFICATE_PROGRAM_NAME,
+    serial: cert.serial,
+    issuedAt: cert.issuedAt,
+    validUntil: cert.validUntil,
+    appUrl: env.APP_URL,
+  });
+  return { serial: cert.serial, pdf };
+}
+
+export type LearnerCertificate = { id: number; serial: string; courseSlug: string; courseTitle: string; issuedAt: Date; validUntil: Date; revokedAt: Date | null; state: CertificateState };
+
+/** A learner's certificates, newest first, for the Pantry. */
+export async function fetchLearnerCertificates({ userId, now = new Date() }: { userId: number; now?: Date }): Promise<LearnerCertificate[]> {
+  const rows = await db().sequelize.query<Omit<LearnerCertificate, 'state'>>(
+    `SELECT ce.id, ce.serial, c.slug AS courseSlug, c.title AS courseTitle, ce.issuedAt, ce.validUntil, ce.revokedAt
+       FROM certificates ce JOIN enrollments e ON e.id = ce.enrollmentId JOIN courses c ON c.id = e.courseId
+      WHERE ce.userId = :userId ORDER BY ce.issuedAt DESC`,
+    { replacements: { userId }, type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => {
+    const cert = { ...r, id: Number(r.id), issuedAt: new Date(r.issuedAt), validUntil: new Date(r.validUntil), revokedAt: r.revokedAt ? new Date(r.revokedAt) : null };
+    return { ...cert, state: certificateState(cert, now) };
+  });
+}

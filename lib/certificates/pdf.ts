@@ -1,0 +1,114 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import * as fontkitModule from '@pdf-lib/fontkit';
+import { PDFDocument, rgb, type PDFFont } from 'pdf-lib';
+import { qrPng, verificationUrl } from './qr';
+import { woffToSfnt } from './woff';
+
+export type CertificatePdfInput = {
+  learnerName: string;
+  courseTitle: string;
+  programName: string;
+  serial: string;
+  issuedAt: Date;
+  validUntil: Date;
+  appUrl: string;
+};
+
+// The package's types name its exports, its ES build has only a default export: accept both.
+const fontkit = ((fontkitModule as unknown as { default?: typeof fontkitModule }).default ?? fontkitModule) as typeof fontkitModule;
+
+type FontFace = { bytes: Buffer; covers: (codePoint: number) => boolean };
+type FontSet = { regular: FontFace[]; bold: FontFace[] };
+
+let fonts: FontSet | undefined;
+
+function fontDir(): string {
+  return path.join(process.env.BRINEWRIGHT_ROOT ?? process.cwd(), 'node_modules/@fontsource/merriweather/files');
+}
+
+function loadFace(file: string): FontFace {
+  const bytes = woffToSfnt(fs.readFileSync(path.join(fontDir(), file)));
+  const font = fontkit.create(bytes);
+  return { bytes, covers: (cp) => font.hasGlyphForCodePoint(cp) };
+}
+
+/** Merriweather 400 and 700, the latin subset first and latin-ext for names it does not cover. */
+function fontSet(): FontSet {
+  fonts ??= {
+    regular: [loadFace('merriweather-latin-400-normal.woff'), loadFace('merriweather-latin-ext-400-normal.woff')],
+    bold: [loadFace('merriweather-latin-700-normal.woff'), loadFace('merriweather-latin-ext-700-normal.woff')],
+  };
+  return fonts;
+}
+
+const formatDate = (date: Date) => new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeZone: 'UTC' }).format(date);
+
+const INK = rgb(0.12, 0.16, 0.16);
+const BRINE = rgb(0.12, 0.37, 0.33);
+const COPPER = rgb(0.72, 0.4, 0.18);
+
+/**
+ * Renders the certificate: learner, course, program, dates, serial and a QR code to the
+ * verification page. Merriweather is embedded as a subset (only the glyphs used).
+ */
+export async function renderCertificatePdf(input: CertificatePdfInput): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.registerFontkit(fontkit);
+  doc.setTitle(`Certificate ${input.serial}`);
+  doc.setSubject(`${input.courseTitle}: ${input.learnerName}`);
+  doc.setProducer('Brinewright');
+  doc.setCreator('Brinewright certificate desk');
+  const set = fontSet();
+  const embedded = new Map<Buffer, PDFFont>();
+  const pick = async (faces: FontFace[], text: string): Promise<{ font: PDFFont; text: string }> => {
+    const codePoints = [...text].map((c) => c.codePointAt(0)!);
+    const face = faces.find((f) => codePoints.every((cp) => cp <= 32 || f.covers(cp))) ?? faces[0];
+    let font = embedded.get(face.bytes);
+    if (!font) {
+      font = await doc.embedFont(face.bytes, { subset: true });
+      embedded.set(face.bytes, font);
+    }
+    // A character no Merriweather subset has would print as an empty box: show '?' instead.
+    const safe = [...text].map((c) => (c.codePointAt(0)! <= 32 || face.covers(c.codePointAt(0)!) ? c : '?')).join('');
+    return { font, text: safe };
+  };
+
+  const page = doc.addPage([792, 612]); // US Letter, landscape, in points
+  const { width, height } = page.getSize();
+  page.drawRectangle({ x: 24, y: 24, width: width - 48, height: height - 48, borderColor: BRINE, borderWidth: 3 });
+  page.drawRectangle({ x: 34, y: 34, width: width - 68, height: height - 68, borderColor: COPPER, borderWidth: 0.8 });
+
+  const centred = async (faces: FontFace[], raw: string, y: number, size: number, color = INK, maxWidth = width - 140) => {
+    const { font, text } = await pick(faces, raw);
+    let s = size;
+    while (s > 8 && font.widthOfTextAtSize(text, s) > maxWidth) s -= 1;
+    page.drawText(text, { x: (width - font.widthOfTextAtSize(text, s)) / 2, y, size: s, font, color });
+  };
+
+  await centred(set.regular, input.programName, height - 92, 14, BRINE);
+  await centred(set.bold, 'Certificate of completion', height - 140, 30, INK);
+  await centred(set.regular, 'This certifies that', height - 190, 13);
+  await centred(set.bold, input.learnerName, height - 232, 28, BRINE);
+  await centred(set.regular, 'has completed the course', height - 268, 13);
+  await centred(set.bold, input.courseTitle, height - 302, 18);
+  await centred(set.regular, `Issued ${formatDate(input.issuedAt)}  ·  Valid until ${formatDate(input.validUntil)}`, height - 344, 12);
+
+  const url = verificationUrl(input.appUrl, input.serial);
+  const qr = await doc.embedPng(await qrPng(url));
+  const qrSize = 118;
+  page.drawImage(qr, { x: width - 60 - qrSize, y: 56, width: qrSize, height: qrSize });
+
+  const left = async (faces: FontFace[], raw: string, y: number, size: number, color = INK) => {
+    const { font, text } = await pick(faces, raw);
+    page.drawText(text, { x: 64, y, size, font, color });
+  };
+  await left(set.regular, 'Serial', 150, 10, BRINE);
+  await left(set.bold, input.serial, 132, 16);
+  await left(set.regular, 'Check this certificate by scanning the code or at', 108, 9);
+  await left(set.regular, url, 94, 9, BRINE);
+  await left(set.regular, 'This records completed training. It does not certify any recipe or product as safe;', 70, 8);
+  await left(set.regular, 'follow tested recipes, local codes and licensed practice.', 59, 8);
+
+  return doc.save();
+}
