@@ -1,8 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import convertUnitsLib from 'convert-units';
+import { createRequire } from 'node:module';
 import { convertUnits } from './compute';
 import { checkAnswers, drawQuestions, gradeAttempt, publicQuestions, rightAnswer, withinTolerance, type Drawn } from './grading';
 import type { ResolvedQuestion } from './schema';
+
+// convert-units ships no type declarations; a small local type is enough here.
+const convertUnitsLib = createRequire(import.meta.url)('convert-units') as (v: number) => { from: (u: string) => { to: (u: string) => number } };
 
 const questions: ResolvedQuestion[] = [
   { id: 'one', kind: 'single', prompt: 'Pick b', explanation: 'x', choices: [{ id: 'a', text: 'A' }, { id: 'b', text: 'B' }, { id: 'c', text: 'C' }], answer: 'b' },
