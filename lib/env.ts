@@ -25,6 +25,25 @@ const EnvSchema = z.object({
   SIGNIN_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
   SIGNIN_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(20),
   SIGNIN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
+  // Certificates (lib/certificates): the program named on the PDF, and the verification throttle.
+  CERTIFICATE_PROGRAM_NAME: z.string().min(1).max(120).default('Cedar Hollow County home-preserving program'),
+  VERIFY_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(60),
+  VERIFY_WINDOW_MINUTES: z.coerce.number().int().positive().default(10),
+  // Payments through the stripe SDK; in the demo and the tests it talks to fakes/payments.
+  STRIPE_SECRET_KEY: z.string().min(1).default('sk_test_brinewright_local'),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).default('whsec_brinewright_local_signing_secret'),
+  STRIPE_API_HOST: z.string().min(1).default('127.0.0.1'),
+  STRIPE_API_PORT: z.coerce.number().int().positive().max(65535).default(12111),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
+  CHECKOUT_EXPIRES_MINUTES: z.coerce.number().int().min(30).max(1440).default(30),
+  // E-mail through nodemailer; in the demo and the tests, fakes/smtp.
+  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().positive().max(65535).default(2525),
+  SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Brinewright <hello@brinewright.example>'),
+  MAILBOX_URL: z.url().optional(),
 });
 
 export type Env = z.infer<typeof EnvSchema>;

@@ -5,7 +5,7 @@ import useSWR from 'swr';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
-import { formatWorkshopDate, formatWorkshopTimes } from './format';
+import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
 
 export type WorkshopItem = {
   id: number;

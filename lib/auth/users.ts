@@ -4,6 +4,7 @@ import { UniqueConstraintError } from 'sequelize';
 import { AppError } from '@/lib/errors';
 import type { Role } from '@/lib/roles';
 import { db } from '@/models';
+import { queueWelcomeEmail } from '@/lib/email/welcome';
 import type { RegisterInput } from '@/lib/validations/user';
 import { clearAccount, isThrottled, recordFailure } from './throttle';
 
@@ -23,6 +24,7 @@ export async function registerLearner(input: RegisterInput): Promise<SessionUser
     return await sequelize.transaction(async (transaction) => {
       const user = await User.create({ name: input.name, email: input.email, passwordHash, role: 'learner' }, { transaction });
       await AuditLog.create({ actorId: user.id, action: 'user.registered', subjectType: 'user', subjectId: String(user.id), data: null }, { transaction });
+      await queueWelcomeEmail(user, transaction);
       return { id: user.id, email: user.email, name: user.name, role: user.role };
     });
   } catch (error) {

@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { db } from '@/models';
-import { SEAT_HOLDING_STATUSES } from './state';
+import { SEAT_HOLDING_STATUSES } from './transitions';
 
 export type PublicWorkshop = {
   id: number;

@@ -1,0 +1,12 @@
+import { requireRole } from '@/lib/auth/guard';
+import { enrollInWorkshop } from '@/lib/enrollment/enroll';
+import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { EnrollSchema } from '@/lib/validations/enrollment';
+
+// A learner takes a seat: answers the checkout page's address, or (with a waiver) the confirmation page.
+export const POST = route(async (request) => {
+  const user = await requireRole('learner');
+  const input = parseOrThrow(EnrollSchema, await readJson(request), 'enrollment');
+  const result = await enrollInWorkshop({ user, workshopId: input.workshopId, waiverCode: input.waiverCode });
+  return Response.json(result, { status: 201 });
+});

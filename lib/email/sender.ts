@@ -1,0 +1,123 @@
+import 'server-only';
+import crypto from 'node:crypto';
+import os from 'node:os';
+import nodemailer, { type Transporter } from 'nodemailer';
+import { Op, QueryTypes } from 'sequelize';
+import { getEnv } from '@/lib/env';
+import { db, type OutboxEmail } from '@/models';
+import type { OutgoingAttachment } from './outbox';
+
+export type SenderOptions = {
+  /** Rows claimed per round. */
+  batchSize?: number;
+  /** First retry delay; doubled after each failed attempt, up to maxBackoffMs. */
+  backoffBaseMs?: number;
+  maxBackoffMs?: number;
+  /** After this many failed attempts a row is marked failed and left for a person to look at. */
+  maxAttempts?: number;
+  /** A row left 'sending' longer than this (a sender that died mid-way) is claimed again. */
+  staleClaimMs?: number;
+  transport?: Transporter;
+  now?: () => Date;
+};
+
+export type RoundResult = { claimed: number; sent: number; failed: number; retrying: number };
+
+/** Delay before the next attempt after `attempts` failed ones: base · 2^(attempts−1), capped. */
+export function backoffMs(attempts: number, baseMs = 5_000, maxMs = 15 * 60_000): number {
+  return Math.min(maxMs, baseMs * 2 ** Math.max(0, attempts - 1));
+}
+
+let transportCache: { key: string; transport: Transporter } | undefined;
+
+/** The SMTP transport from configuration (the local fake in the demo and the tests). */
+export function smtpTransport(): Transporter {
+  const env = getEnv();
+  const key = `${env.SMTP_HOST}:${env.SMTP_PORT}:${env.SMTP_SECURE}:${env.SMTP_USER ?? ''}`;
+  if (transportCache?.key !== key) {
+    transportCache = {
+      key,
+      transport: nodemailer.createTransport({
+        host: env.SMTP_HOST,
+        port: env.SMTP_PORT,
+        secure: env.SMTP_SECURE,
+        ignoreTLS: !env.SMTP_SECURE,
+        auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASSWORD ?? '' } : undefined,
+        connectionTimeout: 5_000,
+        greetingTimeout: 5_000,
+        socketTimeout: 10_000,
+      }),
+    };
+  }
+  return transportCache.transport;
+}
+
+/**
+ * Claims due rows for this sender. One UPDATE marks them with a claim token no other sender can
+ * hold, so two senders running at once never take the same row; they then read back their own rows.
+ */
+export async function claimDue(token: string, options: Required<Pick<SenderOptions, 'batchSize' | 'staleClaimMs'>> & { now: Date }): Promise<OutboxEmail[]> {
+  const { OutboxEmail, sequelize } = db();
+  return sequelize.transaction(async (transaction) => {
+    await sequelize.query(
+      `UPDATE outbox_emails SET status = 'sending', claimedBy = :token, claimedAt = :now, attempts = attempts + 1, updatedAt = :now
+       WHERE (status = 'pending' AND nextAttemptAt <= :now) OR (status = 'sending' AND claimedAt < :stale)
+       ORDER BY id LIMIT :limit`,
+      { replacements: { token, now: options.now, stale: new Date(options.now.getTime() - options.staleClaimMs), limit: options.batchSize }, type: QueryTypes.UPDATE, transaction },
+    );
+    return OutboxEmail.findAll({ where: { claimedBy: token, status: 'sending' }, order: [['id', 'ASC']], transaction });
+  });
+}
+
+function attachmentsOf(row: OutboxEmail) {
+  const list = (row.attachments ?? []) as unknown as OutgoingAttachment[];
+  return list.map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') }));
+}
+
+/** One round: claim due rows, send each, mark it sent (or schedule the retry). */
+export async function sendDueEmails(options: SenderOptions = {}): Promise<RoundResult> {
+  const now = options.now?.() ?? new Date();
+  const token = `${os.hostname()}:${process.pid}:${crypto.randomBytes(6).toString('hex')}`;
+  const rows = await claimDue(token, { batchSize: options.batchSize ?? 20, staleClaimMs: options.staleClaimMs ?? 5 * 60_000, now });
+  const result: RoundResult = { claimed: rows.length, sent: 0, failed: 0, retrying: 0 };
+  if (!rows.length) return result;
+  const transport = options.transport ?? smtpTransport();
+  const from = getEnv().MAIL_FROM;
+  const { OutboxEmail } = db();
+  for (const row of rows) {
+    try {
+      await transport.sendMail({
+        from,
+        to: row.toAddress,
+        subject: row.subject,
+        text: row.textBody,
+        html: row.htmlBody,
+        attachments: attachmentsOf(row),
+        headers: { 'X-Brinewright-Kind': row.kind, 'X-Brinewright-Outbox-Id': String(row.id) },
+        messageId: `<outbox-${row.id}-${row.createdAt.getTime()}@brinewright.local>`,
+      });
+      await OutboxEmail.update({ status: 'sent', sentAt: new Date(), lastError: null, claimedBy: null }, { where: { id: row.id, claimedBy: token } });
+      result.sent += 1;
+    } catch (error) {
+      const message = (error instanceof Error ? error.message : String(error)).slice(0, 1000);
+      const giveUp = row.attempts >= (options.maxAttempts ?? 20);
+      await OutboxEmail.update(
+        {
+          status: giveUp ? 'failed' : 'pending',
+          lastError: message,
+          claimedBy: null,
+          nextAttemptAt: new Date(now.getTime() + backoffMs(row.attempts, options.backoffBaseMs, options.maxBackoffMs)),
+        },
+        { where: { id: row.id, claimedBy: token } },
+      );
+      if (giveUp) result.failed += 1;
+      else result.retrying += 1;
+    }
+  }
+  return result;
+}
+
+/** Rows still to go (pending or being sent), for the worker's log and the tests. */
+export async function outboxBacklog(): Promise<number> {
+  return db().OutboxEmail.count({ where: { status: { [Op.in]: ['pending', 'sending'] } } });
+}

@@ -1,0 +1,184 @@
+// Every message Brinewright sends, each with a plain-text and an HTML part. Pure functions: they
+// build an OutgoingEmail for enqueueEmail() and do no I/O, so any module (and its tests) may call them.
+import { formatMoney, formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
+import type { OutgoingAttachment, OutgoingEmail } from './outbox';
+
+export type WorkshopFacts = { startsAt: Date | string; endsAt: Date | string; timeZone: string; place: string };
+
+const esc = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const iso = (d: Date | string) => (typeof d === 'string' ? d : d.toISOString());
+const trimUrl = (u: string) => u.replace(/\/$/, '');
+
+const SIGN_OFF = 'The Brinewright team';
+const FOOTER = 'Brinewright teaches and checks arithmetic; it never calls a recipe safe. Follow tested recipes from a recognised food-safety authority and your local guidance.';
+
+type Block = { kind: 'p'; text: string } | { kind: 'facts'; rows: [string, string][] } | { kind: 'button'; label: string; href: string } | { kind: 'note'; text: string };
+
+/** One layout for every message: the same blocks rendered as text and as simple, inline-styled HTML. */
+function compose(kind: string, to: string, subject: string, greeting: string, blocks: Block[], attachments?: OutgoingAttachment[]): OutgoingEmail {
+  const text = [
+    greeting,
+    '',
+    ...blocks.flatMap((b) => {
+      if (b.kind === 'p' || b.kind === 'note') return [b.text, ''];
+      if (b.kind === 'facts') return [...b.rows.map(([k, v]) => `${k}: ${v}`), ''];
+      return [`${b.label}: ${b.href}`, ''];
+    }),
+    SIGN_OFF,
+    '',
+    '--',
+    FOOTER,
+  ].join('\n');
+  const html = `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${esc(subject)}</title></head>
+<body style="margin:0;background:#f6f1e7;font-family:Georgia,'Times New Roman',serif;color:#23302b">
+<div style="max-width:560px;margin:0 auto;padding:24px">
+<p style="font-size:20px;font-weight:bold;color:#1f4d3f;margin:0 0 16px">Brinewright</p>
+<div style="background:#ffffff;border:1px solid #d8d0bf;border-radius:12px;padding:24px">
+<p style="margin:0 0 16px">${esc(greeting)}</p>
+${blocks
+  .map((b) => {
+    if (b.kind === 'p') return `<p style="margin:0 0 16px;line-height:1.5">${esc(b.text)}</p>`;
+    if (b.kind === 'note') return `<p style="margin:0 0 16px;font-size:14px;color:#5b6660">${esc(b.text)}</p>`;
+    if (b.kind === 'facts')
+      return `<table role="presentation" style="border-collapse:collapse;margin:0 0 16px">${b.rows
+        .map(([k, v]) => `<tr><th scope="row" style="text-align:left;padding:4px 16px 4px 0;vertical-align:top">${esc(k)}</th><td style="padding:4px 0">${esc(v)}</td></tr>`)
+        .join('')}</table>`;
+    return `<p style="margin:0 0 16px"><a href="${esc(b.href)}" style="display:inline-block;background:#b4572b;color:#ffffff;padding:10px 18px;border-radius:8px;text-decoration:none;font-weight:bold">${esc(b.label)}</a></p>`;
+  })
+  .join('\n')}
+<p style="margin:0">${esc(SIGN_OFF)}</p>
+</div>
+<p style="font-size:12px;color:#5b6660;margin:16px 0 0">${esc(FOOTER)}</p>
+</div></body></html>`;
+  return { kind, to, subject, text, html, ...(attachments?.length ? { attachments } : {}) };
+}
+
+function workshopRows(workshop: WorkshopFacts | null | undefined): [string, string][] {
+  if (!workshop) return [];
+  return [
+    ['Workshop', formatWorkshopDate(iso(workshop.startsAt), workshop.timeZone)],
+    ['Time', formatWorkshopTimes(iso(workshop.startsAt), iso(workshop.endsAt), workshop.timeZone)],
+    ['Place', workshop.place],
+  ];
+}
+
+/** Sent at registration: welcome, and the link that confirms the e-mail address. */
+export function welcomeEmail({ to, name, confirmUrl }: { to: string; name: string; confirmUrl: string }): OutgoingEmail {
+  return compose('user.welcome', to, 'Welcome to Brinewright — please confirm your e-mail address', `Hello ${name},`, [
+    { kind: 'p', text: 'Your Brinewright account is ready. Lessons, calculators and quizzes are waiting in your Pantry, and workshop dates are listed on each course page.' },
+    { kind: 'p', text: 'Please confirm that this address is yours, so that receipts, workshop reminders and your certificate reach you:' },
+    { kind: 'button', label: 'Confirm my e-mail address', href: confirmUrl },
+    { kind: 'note', text: 'If you did not create this account, you can ignore this message; nothing more will be sent.' },
+  ]);
+}
+
+/** Sent when an enrollment becomes active: what was paid (or waived), and where and when the workshop is. */
+export function enrollmentReceiptEmail({
+  to,
+  name,
+  courseTitle,
+  workshop,
+  amountCents,
+  currency,
+  waived,
+  appUrl,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  workshop: WorkshopFacts | null;
+  amountCents: number;
+  currency: string;
+  waived: boolean;
+  appUrl: string;
+}): OutgoingEmail {
+  const paid = waived ? `${formatMoney(0, currency)} (course fee waived)` : formatMoney(amountCents, currency);
+  return compose('enrollment.receipt', to, `You are enrolled: ${courseTitle}`, `Hello ${name},`, [
+    { kind: 'p', text: `Your place in ${courseTitle} is confirmed. Keep this message as your receipt.` },
+    { kind: 'facts', rows: [['Course', courseTitle], ['Amount paid', paid], ...workshopRows(workshop)] },
+    { kind: 'p', text: 'Bring an apron and closed-toe shoes to the workshop; jars, produce and canners are provided.' },
+    { kind: 'button', label: 'Open my Pantry', href: `${trimUrl(appUrl)}/pantry` },
+  ]);
+}
+
+/** Sent when the coordinator refunds a course fee. */
+export function refundEmail({ to, name, courseTitle, workshop, amountCents, currency }: { to: string; name: string; courseTitle: string; workshop: WorkshopFacts | null; amountCents: number; currency: string }): OutgoingEmail {
+  return compose('payment.refunded', to, `Refund issued: ${courseTitle}`, `Hello ${name},`, [
+    { kind: 'p', text: `We have refunded your course fee for ${courseTitle}, and your workshop seat has been released.` },
+    { kind: 'facts', rows: [['Refunded', formatMoney(amountCents, currency)], ...workshopRows(workshop)] },
+    { kind: 'note', text: 'Refunds usually reach the card within 5 to 10 business days, depending on your bank.' },
+  ]);
+}
+
+/** Sent a day before a workshop. */
+export function workshopReminderEmail({ to, name, courseTitle, workshop, appUrl }: { to: string; name: string; courseTitle: string; workshop: WorkshopFacts; appUrl: string }): OutgoingEmail {
+  return compose('workshop.reminder', to, `Tomorrow: your ${courseTitle} workshop`, `Hello ${name},`, [
+    { kind: 'p', text: 'This is a reminder that your hands-on workshop is tomorrow.' },
+    { kind: 'facts', rows: workshopRows(workshop) },
+    { kind: 'p', text: 'Tie back long hair and bring an apron. If you live above 1,000 feet, note your altitude: the processing times you will practise depend on it.' },
+    { kind: 'button', label: 'Review the lessons', href: `${trimUrl(appUrl)}/pantry` },
+  ]);
+}
+
+/** Sent when an instructor has reviewed a practical (hook for the practicals feature). */
+export function practicalReviewedEmail({
+  to,
+  name,
+  courseTitle,
+  decision,
+  comment,
+  appUrl,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  decision: 'approved' | 'changes_requested';
+  comment?: string | null;
+  appUrl: string;
+}): OutgoingEmail {
+  const approved = decision === 'approved';
+  return compose('practical.reviewed', to, approved ? `Your practical batch was approved: ${courseTitle}` : `Your practical batch needs changes: ${courseTitle}`, `Hello ${name},`, [
+    {
+      kind: 'p',
+      text: approved
+        ? 'An instructor has reviewed the photos of your practical batch and approved it.'
+        : 'An instructor has reviewed the photos of your practical batch and asked for changes before it can be approved.',
+    },
+    ...(comment ? [{ kind: 'facts' as const, rows: [['Instructor’s note', comment]] as [string, string][] }] : []),
+    { kind: 'button', label: approved ? 'See your progress' : 'See what to change', href: `${trimUrl(appUrl)}/pantry` },
+  ]);
+}
+
+/** Sent when a certificate is issued (hook for the certificates feature); the PDF may be attached. */
+export function certificateIssuedEmail({
+  to,
+  name,
+  courseTitle,
+  serial,
+  validUntil,
+  verifyUrl,
+  pdf,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  serial: string;
+  validUntil: Date;
+  verifyUrl: string;
+  pdf?: OutgoingAttachment;
+}): OutgoingEmail {
+  const until = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' }).format(validUntil);
+  return compose(
+    'certificate.issued',
+    to,
+    `Your certificate: ${courseTitle}`,
+    `Hello ${name},`,
+    [
+      { kind: 'p', text: `Congratulations — you have completed ${courseTitle}, and the program coordinator has issued your certificate.` },
+      { kind: 'facts', rows: [['Serial', serial], ['Valid until', until]] },
+      { kind: 'p', text: 'Anyone can check the certificate by its serial on the verification page:' },
+      { kind: 'button', label: 'Verify the certificate', href: verifyUrl },
+    ],
+    pdf ? [pdf] : undefined,
+  );
+}

@@ -1,0 +1,33 @@
+// Starts both local fakes in one process (the demo and the browser tests run this):
+// the payment server the stripe SDK talks to, and the SMTP server with its mailbox page.
+// Ports and secrets come from the same variables the app reads (see lib/env.ts).
+import { startFakePayments } from '../fakes/payments/server';
+import { startFakeSmtp } from '../fakes/smtp/server';
+
+async function main() {
+  const appUrl = (process.env.APP_URL ?? 'http://localhost:3000').replace(/\/$/, '');
+  const payments = await startFakePayments({
+    port: Number(process.env.STRIPE_API_PORT ?? 12111),
+    webhookUrl: process.env.FAKE_PAYMENTS_WEBHOOK_URL ?? `${appUrl}/api/webhooks/stripe`,
+    webhookSecret: process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_brinewright_local_signing_secret',
+    apiKey: process.env.STRIPE_SECRET_KEY ?? 'sk_test_brinewright_local',
+    retryBaseMs: Number(process.env.FAKE_PAYMENTS_RETRY_MS ?? 1000),
+    log: (line) => console.log(`[fake-payments] ${line}`),
+  });
+  const smtp = await startFakeSmtp({
+    smtpPort: Number(process.env.SMTP_PORT ?? 2525),
+    webPort: Number(process.env.FAKE_MAILBOX_PORT ?? 2580),
+    log: (line) => console.log(`[fake-smtp] ${line}`),
+  });
+  console.log(`[fakes] payments on ${payments.url}; SMTP on 127.0.0.1:${smtp.smtpPort}; mailbox at ${smtp.webUrl}`);
+  const stop = () => {
+    void Promise.allSettled([payments.close(), smtp.close()]).then(() => process.exit(0));
+  };
+  process.on('SIGTERM', stop);
+  process.on('SIGINT', stop);
+}
+
+main().catch((error) => {
+  console.error('[fakes] could not start:', error);
+  process.exit(1);
+});

@@ -1,0 +1,62 @@
+// npm run worker: the background jobs the app needs beside `next start`:
+// - the outbox sender (claims due e-mail rows, sends them over SMTP, retries with backoff),
+// - the day-before workshop reminders,
+// - releasing seats of checkouts that expired while their webhook never arrived.
+// Run with the react-server condition so the app's server-only modules load outside Next.
+import { queueWorkshopReminders } from '../lib/email/reminders';
+import { outboxBacklog, sendDueEmails } from '../lib/email/sender';
+import { releaseStaleCheckouts } from '../lib/payments/reconcile';
+
+const POLL_MS = Number(process.env.WORKER_POLL_MS ?? 1000);
+const REMINDER_EVERY_MS = Number(process.env.WORKER_REMINDER_MS ?? 5 * 60_000);
+const RECONCILE_EVERY_MS = Number(process.env.WORKER_RECONCILE_MS ?? 60_000);
+
+let stopping = false;
+const log = (line: string) => console.log(`[worker] ${new Date().toISOString()} ${line}`);
+
+async function every(ms: number, name: string, job: () => Promise<string | null>) {
+  while (!stopping) {
+    try {
+      const line = await job();
+      if (line) log(line);
+    } catch (error) {
+      log(`${name} failed: ${error instanceof Error ? error.message : String(error)}`);
+    }
+    await new Promise((r) => setTimeout(r, ms));
+  }
+}
+
+async function main() {
+  log(`started (poll ${POLL_MS} ms)`);
+  await Promise.all([
+    every(POLL_MS, 'outbox', async () => {
+      const r = await sendDueEmails({ backoffBaseMs: Number(process.env.WORKER_BACKOFF_MS ?? 5000) });
+      if (!r.claimed) return null;
+      return `outbox: sent ${r.sent}, retrying ${r.retrying}, failed ${r.failed}; ${await outboxBacklog()} left`;
+    }),
+    every(REMINDER_EVERY_MS, 'reminders', async () => {
+      const n = await queueWorkshopReminders();
+      return n ? `reminders: queued ${n}` : null;
+    }),
+    every(RECONCILE_EVERY_MS, 'checkouts', async () => {
+      const n = await releaseStaleCheckouts();
+      return n ? `checkouts: released ${n} seat(s) of expired checkouts` : null;
+    }),
+  ]);
+  const g = globalThis as { __brinewrightSequelize?: { close: () => Promise<void> } };
+  await g.__brinewrightSequelize?.close();
+  log('stopped');
+}
+
+const stop = () => {
+  if (stopping) process.exit(0);
+  stopping = true;
+  log('stopping after the current round…');
+};
+process.on('SIGTERM', stop);
+process.on('SIGINT', stop);
+
+main().catch((error) => {
+  console.error('[worker] fatal:', error);
+  process.exit(1);
+});
