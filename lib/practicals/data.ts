@@ -202,3 +202,35 @@ export async function fetchSubmission({ id }: { id: number }): Promise<Submissio
 export async function fetchLearnerPracticals({ userId, enrollmentId }: { userId: number; enrollmentId: number }): Promise<RoundView[]> {
   return roundsWhere({ userId, enrollmentId });
 }
+
+export type PracticalStatusSummary = {
+  round: number;
+  status: PracticalStatus;
+  submittedAt: string;
+  flagCount: number;
+  review: { decision: 'approved' | 'changes_requested'; comment: string | null; reviewerName: string; createdAt: string } | null;
+} | null;
+
+/** Where the learner's practical in a course stands (the newest round and its review), for the status panel. */
+export async function fetchPracticalStatus({ userId, enrollmentId }: { userId: number; enrollmentId: number }): Promise<PracticalStatusSummary> {
+  return summarize(await roundsWhere({ userId, enrollmentId }));
+}
+
+export function summarize(rounds: RoundView[]): PracticalStatusSummary {
+  const latest = rounds[0];
+  if (!latest) return null;
+  const review = latest.reviews[latest.reviews.length - 1];
+  return {
+    round: latest.round,
+    status: latest.status,
+    submittedAt: latest.submittedAt,
+    flagCount: latest.flags.length,
+    review: review ? { decision: review.decision, comment: review.comment, reviewerName: review.reviewerName, createdAt: review.createdAt } : null,
+  };
+}
+
+/** The course's slug and title, or null. */
+export async function fetchCourseHeading({ slug }: { slug: string }): Promise<{ id: number; slug: string; title: string } | null> {
+  const course = await db().Course.findOne({ where: { slug }, attributes: ['id', 'slug', 'title'] });
+  return course ? { id: course.id, slug: course.slug, title: course.title } : null;
+}

@@ -1,0 +1,90 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { FlagList } from '@/components/practicals/flag-list';
+import { ReviewSummary } from '@/components/practicals/practical-history';
+import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from '@/components/practicals/practical-status';
+import { BatchDetails } from '@/components/tasting-table/batch-details';
+import { PhotoViewer } from '@/components/tasting-table/photo-viewer';
+import { ReviewForm } from '@/components/tasting-table/review-form';
+import { Badge } from '@/components/ui/badge';
+import { Card } from '@/components/ui/card';
+import { requirePageRole } from '@/lib/auth/guard';
+import { computeExpectations } from '@/lib/practicals/checks';
+import { fetchSubmission } from '@/lib/practicals/data';
+
+export const metadata: Metadata = { title: 'Practical submission' };
+
+const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
+
+export default async function SubmissionPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  await requirePageRole(`/tasting-table/submissions/${id}`, 'instructor');
+  if (!/^\d{1,10}$/.test(id)) notFound();
+  const submission = await fetchSubmission({ id: Number(id) });
+  if (!submission) notFound();
+  const { round, earlierRounds, learner, course, workshop } = submission;
+  const expected = computeExpectations(round.details);
+
+  return (
+    <div className="space-y-6">
+      <p className="text-sm">
+        <Link href="/tasting-table">← All submissions</Link>
+      </p>
+      <header className="space-y-1">
+        <h1 className="text-3xl font-bold">
+          {learner.name}, round {round.round}
+        </h1>
+        <p className="flex flex-wrap items-center gap-2 text-ink-soft">
+          <Badge tone={PRACTICAL_STATUS_TONE[round.status]}>{PRACTICAL_STATUS_LABEL[round.status]}</Badge>
+          <span>
+            {course.title} · submitted {when(round.submittedAt)}
+            {workshop ? ` · workshop ${new Date(workshop.startsAt).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })}, ${workshop.place.split(',')[0]}` : ' · self-paced'}
+          </span>
+        </p>
+      </header>
+
+      <div className="grid gap-6 lg:grid-cols-2">
+        <div className="space-y-4">
+          <PhotoViewer photos={round.photos} label={`Photos of round ${round.round}`} />
+          <FlagList flags={round.flags} title="Automatic flags" />
+        </div>
+        <BatchDetails details={round.details} expected={expected} />
+      </div>
+
+      {round.reviews.length ? (
+        <Card title="Review">
+          {round.reviews.map((r) => (
+            <ReviewSummary key={r.id} review={r} />
+          ))}
+        </Card>
+      ) : null}
+      {round.status === 'submitted' ? (
+        <Card title="Rubric and decision">
+          <ReviewForm practicalId={round.id} round={round.round} />
+        </Card>
+      ) : null}
+
+      {earlierRounds.length ? (
+        <section aria-labelledby="earlier-rounds" className="space-y-3">
+          <h2 id="earlier-rounds" className="text-xl font-bold">
+            Earlier rounds
+          </h2>
+          {earlierRounds.map((r) => (
+            <Card key={r.id} title={`Round ${r.round} (${PRACTICAL_STATUS_LABEL[r.status].toLowerCase()})`}>
+              <div className="space-y-3">
+                <p className="text-sm text-ink-soft">
+                  Submitted {when(r.submittedAt)}. <Link href={`/tasting-table/submissions/${r.id}`}>Open round {r.round}</Link>
+                </p>
+                <FlagList flags={r.flags} title={`Flags on round ${r.round}`} level="h3" />
+                {r.reviews.map((review) => (
+                  <ReviewSummary key={review.id} review={review} />
+                ))}
+              </div>
+            </Card>
+          ))}
+        </section>
+      ) : null}
+    </div>
+  );
+}

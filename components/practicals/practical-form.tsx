@@ -1,0 +1,148 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
+import { useMemo, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { Button } from '@/components/ui/button';
+import { Select } from '@/components/ui/select';
+import { FieldError, TextField, fieldClasses } from '@/components/ui/text-field';
+import { cn } from '@/lib/cn';
+import { checkPractical, type Flag } from '@/lib/practicals/checks';
+import { JAR_SIZES, PRODUCT_OPTIONS } from '@/lib/preserving/products';
+import { PROCESSING_METHOD_LABELS, PROCESSING_METHODS, practicalFormSchema, type PracticalForm as FormValues, type PracticalFormInput } from '@/lib/validations/practical';
+import { FlagList } from './flag-list';
+import { PhotoUploader } from './photo-uploader';
+
+const JAR_OPTIONS = [{ value: '', label: 'Choose a jar size' }, ...JAR_SIZES.map((j) => ({ value: j, label: j === 'half-pint' ? 'Half-pint' : j[0].toUpperCase() + j.slice(1) }))];
+const PRODUCTS = [{ value: '', label: 'Choose the product' }, ...PRODUCT_OPTIONS];
+const PACK_OPTIONS = [
+  { value: '', label: 'Choose raw or hot pack' },
+  { value: 'raw', label: 'Raw pack' },
+  { value: 'hot', label: 'Hot pack' },
+];
+const METHOD_OPTIONS = [{ value: '', label: 'Choose the method' }, ...PROCESSING_METHODS.map((m) => ({ value: m, label: PROCESSING_METHOD_LABELS[m] }))];
+
+type Result = { id: number; round: number; flags: Flag[] };
+
+/** The learner's practical batch: details, photos, and the automatic checks shown as they type. */
+export function PracticalForm({ courseSlug, round }: { courseSlug: string; round: number }) {
+  const router = useRouter();
+  const [serverError, setServerError] = useState<string | null>(null);
+  const [result, setResult] = useState<Result | null>(null);
+  const {
+    register,
+    handleSubmit,
+    setValue,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<PracticalFormInput, unknown, FormValues>({
+    resolver: zodResolver(practicalFormSchema),
+    mode: 'onTouched',
+    defaultValues: { notes: '', photoIds: [], vinegarAcidityPct: 5 },
+  });
+  const values = useWatch({ control });
+  // The same checks the server runs on submit, on whatever is entered so far.
+  const flags = useMemo(() => checkPractical(values as Parameters<typeof checkPractical>[0]), [values]);
+
+  const onSubmit = async (form: FormValues) => {
+    setServerError(null);
+    const response = await fetch('/api/practicals', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ course: courseSlug, practical: form }) });
+    const body = await response.json().catch(() => ({}));
+    if (response.status === 201) {
+      setResult(body.practical);
+      router.refresh();
+      return;
+    }
+    for (const [key, messages] of Object.entries((body.fields ?? {}) as Record<string, string[]>)) {
+      setError(key.replace(/^practical\./, '') as keyof PracticalFormInput, { message: messages[0] });
+    }
+    setServerError(body.message ?? 'The practical could not be submitted. Please try again.');
+  };
+
+  if (result) {
+    return (
+      <div className="space-y-4" data-testid="practical-submitted">
+        <div role="status" className="rounded-jar border border-brine-300 bg-brine-50 p-4">
+          <h2 className="text-lg font-bold">Round {result.round} is at the Tasting table</h2>
+          <p className="text-sm text-ink-soft">An instructor will review your batch and photos. You will get an e-mail when it is reviewed.</p>
+        </div>
+        <FlagList flags={result.flags} title="Flags sent with your submission" />
+      </div>
+    );
+  }
+
+  const num = { valueAsNumber: true } as const;
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-describedby="practical-form-intro">
+      <p id="practical-form-intro" className="text-sm text-ink-soft">
+        {round > 1 ? `This is round ${round}. ` : ''}Enter what you actually did. A flag does not stop you from submitting: it tells you and your instructor where
+        the batch differs from the published numbers.
+      </p>
+
+      <fieldset className="grid gap-4 md:grid-cols-2">
+        <legend className="mb-2 font-display text-lg font-bold">The recipe</legend>
+        <Select label="Product" options={PRODUCTS} error={errors.product?.message} {...register('product')} />
+        <Select label="Pack" options={PACK_OPTIONS} error={errors.pack?.message} {...register('pack')} />
+        <TextField label="Tested recipe followed" hint="Its title" error={errors.recipeTitle?.message} {...register('recipeTitle')} />
+        <TextField label="Where it is published" hint="Book and page, or the web address" error={errors.recipeSource?.message} {...register('recipeSource')} />
+      </fieldset>
+
+      <fieldset className="grid gap-4 md:grid-cols-3">
+        <legend className="mb-2 font-display text-lg font-bold">Jars and brine</legend>
+        <Select label="Jar size" options={JAR_OPTIONS} error={errors.jar?.message} {...register('jar')} />
+        <TextField label="Number of jars" type="number" inputMode="numeric" min={1} error={errors.jars?.message} {...register('jars', num)} />
+        <TextField label="Headspace measured" hint="Inches, e.g. 0.5 for ½ inch" type="number" step="0.0625" min={0} suffix="in" error={errors.headspaceIn?.message} {...register('headspaceIn', num)} />
+        <TextField label="Vinegar acidity" hint="From the label" type="number" step="0.1" min={0} suffix="%" error={errors.vinegarAcidityPct?.message} {...register('vinegarAcidityPct', num)} />
+        <TextField label="Vinegar used" hint="1 cup = 237 mL" type="number" step="any" min={0} suffix="mL" error={errors.vinegarMl?.message} {...register('vinegarMl', num)} />
+        <TextField label="Water used" hint="In the brine" type="number" step="any" min={0} suffix="mL" error={errors.waterMl?.message} {...register('waterMl', num)} />
+      </fieldset>
+
+      <fieldset className="grid gap-4 md:grid-cols-3">
+        <legend className="mb-2 font-display text-lg font-bold">Processing</legend>
+        <Select label="Processing method" options={METHOD_OPTIONS} error={errors.method?.message} {...register('method')} />
+        <TextField label="Altitude" hint="Of your kitchen, in feet" type="number" inputMode="numeric" min={0} suffix="ft" error={errors.altitudeFt?.message} {...register('altitudeFt', num)} />
+        <TextField label="Minutes processed" hint="Counted from the return to a full boil" type="number" inputMode="numeric" min={0} suffix="min" error={errors.minutes?.message} {...register('minutes', num)} />
+        <TextField label="Date put up" type="date" error={errors.batchDate?.message} {...register('batchDate')} />
+        <TextField label="Jars sealed" hint="After 12–24 hours" type="number" inputMode="numeric" min={0} error={errors.sealedJars?.message} {...register('sealedJars', num)} />
+        <TextField label="Jars not sealed" type="number" inputMode="numeric" min={0} error={errors.unsealedJars?.message} {...register('unsealedJars', num)} />
+      </fieldset>
+
+      <div className="space-y-1">
+        <label htmlFor="practical-notes" className="block text-sm font-semibold">
+          Notes
+        </label>
+        <textarea
+          id="practical-notes"
+          rows={4}
+          aria-describedby={errors.notes ? 'practical-notes-error' : undefined}
+          className={cn(fieldClasses, 'border-ink-faint/40')}
+          {...register('notes')}
+        />
+        <FieldError id="practical-notes-error" message={errors.notes?.message} />
+      </div>
+
+      <div>
+        <PhotoUploader
+          courseSlug={courseSlug}
+          onChange={(ids) => setValue('photoIds', ids, { shouldValidate: ids.length > 0 })}
+          describedBy={errors.photoIds ? 'practical-photos-error' : undefined}
+          invalid={Boolean(errors.photoIds)}
+        />
+        <FieldError id="practical-photos-error" message={errors.photoIds?.message} />
+      </div>
+
+      <FlagList flags={flags} live title="Automatic checks (as you type)" />
+
+      {serverError ? (
+        <p role="alert" className="rounded-lg border border-beet-500 bg-beet-50 px-4 py-2 text-sm text-beet-700">
+          {serverError}
+        </p>
+      ) : null}
+      <Button type="submit" pending={isSubmitting}>
+        Submit round {round} for review
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,78 @@
+import { Badge } from '@/components/ui/badge';
+import type { RoundView } from '@/lib/practicals/data';
+import { RUBRIC_CRITERIA } from '@/lib/validations/practical';
+import { FlagList } from './flag-list';
+import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from './practical-status';
+
+const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
+
+/** One review: the decision, the rubric criterion by criterion, and the comment. */
+export function ReviewSummary({ review }: { review: RoundView['reviews'][number] }) {
+  return (
+    <div className="space-y-2 rounded-lg border border-brine-100 bg-white p-3" data-testid="review-summary">
+      <p className="text-sm">
+        <Badge tone={review.decision === 'approved' ? 'brine' : 'beet'}>{review.decision === 'approved' ? 'Approved' : 'Changes requested'}</Badge>{' '}
+        by {review.reviewerName}, {when(review.createdAt)}
+      </p>
+      {review.comment ? (
+        <p className="text-sm">
+          <span className="font-semibold">{review.decision === 'approved' ? 'Comment' : 'What to change'}:</span> {review.comment}
+        </p>
+      ) : null}
+      <ul className="grid gap-1 text-sm sm:grid-cols-2">
+        {RUBRIC_CRITERIA.map((c) => {
+          const entry = review.rubric[c.id];
+          if (!entry) return null;
+          return (
+            <li key={c.id}>
+              <span aria-hidden="true">{entry.verdict === 'met' ? '✓ ' : '✗ '}</span>
+              {c.label}: <strong>{entry.verdict === 'met' ? 'met' : 'not met'}</strong>
+              {entry.comment ? <span className="text-ink-soft"> — {entry.comment}</span> : null}
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}
+
+/** Every round of a practical, newest first, with its flags, photos and reviews. */
+export function PracticalHistory({ rounds }: { rounds: RoundView[] }) {
+  if (!rounds.length) return null;
+  return (
+    <section aria-labelledby="practical-history" className="space-y-4">
+      <h2 id="practical-history" className="text-xl font-bold">
+        Your rounds
+      </h2>
+      <ol className="space-y-4">
+        {rounds.map((r) => (
+          <li key={r.id} className="space-y-3 rounded-jar border border-brine-100 bg-white p-4 shadow-shelf" data-testid={`round-${r.round}`}>
+            <div className="flex flex-wrap items-center gap-2">
+              <h3 className="font-display text-lg font-bold">Round {r.round}</h3>
+              <Badge tone={PRACTICAL_STATUS_TONE[r.status]}>{PRACTICAL_STATUS_LABEL[r.status]}</Badge>
+              <span className="text-sm text-ink-soft">submitted {when(r.submittedAt)}</span>
+            </div>
+            <p className="text-sm text-ink-soft">
+              {r.details.recipeTitle} · {r.details.jars} × {r.details.jar} · {r.details.minutes} min at {r.details.altitudeFt.toLocaleString('en-US')} ft
+            </p>
+            {r.photos.length ? (
+              <ul className="flex flex-wrap gap-2" aria-label={`Photos of round ${r.round}`}>
+                {r.photos.map((p, i) => (
+                  <li key={p.id}>
+                    <a href={p.url} target="_blank" rel="noreferrer">
+                      <img src={p.thumbnailUrl} alt={`Round ${r.round}, photo ${i + 1}`} className="h-16 w-16 rounded object-cover" />
+                    </a>
+                  </li>
+                ))}
+              </ul>
+            ) : null}
+            <FlagList flags={r.flags} title={`Flags on round ${r.round}`} level="h4" />
+            {r.reviews.map((review) => (
+              <ReviewSummary key={review.id} review={review} />
+            ))}
+          </li>
+        ))}
+      </ol>
+    </section>
+  );
+}

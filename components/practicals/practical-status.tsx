@@ -1,0 +1,57 @@
+import Link from 'next/link';
+import { Badge, type Tone } from '@/components/ui/badge';
+import { cn } from '@/lib/cn';
+
+export type PracticalStatusValue = 'submitted' | 'changes_requested' | 'approved';
+
+export type PracticalStatusProps = {
+  courseSlug: string;
+  /** The newest round, or null when nothing has been submitted yet. */
+  latest: {
+    round: number;
+    status: PracticalStatusValue;
+    submittedAt: string;
+    flagCount: number;
+    review?: { decision: 'approved' | 'changes_requested'; comment: string | null; reviewerName: string; createdAt: string } | null;
+  } | null;
+  className?: string;
+};
+
+export const PRACTICAL_STATUS_LABEL: Record<PracticalStatusValue, string> = {
+  submitted: 'Waiting at the Tasting table',
+  changes_requested: 'Changes requested',
+  approved: 'Approved',
+};
+export const PRACTICAL_STATUS_TONE: Record<PracticalStatusValue, Tone> = { submitted: 'honey', changes_requested: 'beet', approved: 'brine' };
+
+const day = (iso: string) => new Date(iso).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' });
+
+/** A small panel with where a learner's practical stands: for the Pantry and the practical page. */
+export function PracticalStatus({ courseSlug, latest, className }: PracticalStatusProps) {
+  const href = `/learn/${courseSlug}/practical`;
+  return (
+    <div className={cn('space-y-2 rounded-lg border border-brine-100 bg-paper p-3 text-sm', className)} data-testid="practical-status">
+      <div className="flex flex-wrap items-center gap-2">
+        <span className="font-semibold">Practical batch</span>
+        {latest ? <Badge tone={PRACTICAL_STATUS_TONE[latest.status]}>{PRACTICAL_STATUS_LABEL[latest.status]}</Badge> : <Badge>Not submitted</Badge>}
+      </div>
+      {latest ? (
+        <p className="text-ink-soft">
+          Round {latest.round}, submitted {day(latest.submittedAt)}
+          {latest.flagCount ? ` with ${latest.flagCount} automatic flag${latest.flagCount === 1 ? '' : 's'}` : ''}.
+          {latest.review ? ` Reviewed by ${latest.review.reviewerName} on ${day(latest.review.createdAt)}.` : ''}
+        </p>
+      ) : (
+        <p className="text-ink-soft">Put up a batch from a tested recipe at home, then submit its details and 2 to 6 photos.</p>
+      )}
+      {latest?.review?.decision === 'changes_requested' && latest.review.comment ? (
+        <p>
+          <span className="font-semibold">What to change:</span> {latest.review.comment}
+        </p>
+      ) : null}
+      <Link href={href} className="font-semibold">
+        {!latest ? 'Submit your practical' : latest.status === 'changes_requested' ? 'See the review and submit again' : 'See your practical'}
+      </Link>
+    </div>
+  );
+}

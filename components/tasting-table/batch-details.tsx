@@ -1,0 +1,71 @@
+import { Table, TBody, TD, TH, THead, TR } from '@/components/ui/table';
+import type { Expectations } from '@/lib/practicals/checks';
+import { PRODUCTS } from '@/lib/preserving/products';
+import { PROCESSING_METHOD_LABELS, type PracticalDetails } from '@/lib/validations/practical';
+
+const n = (v: number, digits = 2) => String(Number(v.toFixed(digits)));
+
+/** The learner's batch beside what the published tables give for it. */
+export function BatchDetails({ details, expected }: { details: PracticalDetails; expected: Expectations }) {
+  const processing = expected.processing;
+  const rows: { label: string; value: string; expected?: string }[] = [
+    { label: 'Product', value: PRODUCTS[details.product]?.name ?? details.product },
+    { label: 'Tested recipe', value: `${details.recipeTitle} — ${details.recipeSource}` },
+    { label: 'Pack', value: `${details.pack} pack`, expected: expected.pack ? `${expected.pack} pack` : undefined },
+    { label: 'Jars', value: `${details.jars} × ${details.jar}` },
+    { label: 'Vinegar', value: `${n(details.vinegarMl, 0)} mL at ${n(details.vinegarAcidityPct)} % acidity`, expected: 'at least 5 % acidity' },
+    {
+      label: 'Water',
+      value: `${n(details.waterMl, 0)} mL`,
+      expected: expected.brine ? `brine ≈ ${n(expected.brine.aceticAcidPct)} % acetic acid, estimated pH ${n(expected.brine.estimatedPh)} (liquid alone)` : undefined,
+    },
+    { label: 'Headspace measured', value: `${n(details.headspaceIn, 3)} in`, expected: expected.headspace ? `${n(expected.headspace.recommendedIn, 3)} in` : undefined },
+    { label: 'Method', value: PROCESSING_METHOD_LABELS[details.method] ?? details.method },
+    { label: 'Altitude', value: `${details.altitudeFt.toLocaleString('en-US')} ft` },
+    {
+      label: 'Minutes processed',
+      value: `${details.minutes} min`,
+      expected: !processing
+        ? undefined
+        : 'unavailable' in processing
+          ? processing.unavailable
+          : details.method === 'low-temperature-pasteurization' && expected.lowTemperaturePasteurization
+            ? `${expected.lowTemperaturePasteurization.minutes} min at ${expected.lowTemperaturePasteurization.waterTempF.join('–')} °F (or ${processing.minutes} min in boiling water)`
+            : `${processing.minutes} min in boiling water for ${processing.altitudeBand.toFt === null ? `above ${processing.altitudeBand.fromFt.toLocaleString('en-US')}` : `${processing.altitudeBand.fromFt.toLocaleString('en-US')}–${processing.altitudeBand.toFt.toLocaleString('en-US')}`} ft`,
+    },
+    { label: 'Date put up', value: details.batchDate },
+    { label: 'Seals', value: `${details.sealedJars} sealed, ${details.unsealedJars} not sealed`, expected: 'every jar sealed' },
+    { label: 'Notes', value: details.notes || '—' },
+  ];
+  return (
+    <Table caption="The batch and the published numbers">
+      <THead>
+        <tr>
+          <TH>Item</TH>
+          <TH>Learner entered</TH>
+          <TH>Published for this batch</TH>
+        </tr>
+      </THead>
+      <TBody>
+        {rows.map((row) => (
+          <TR key={row.label}>
+            <TH scope="row" className="font-semibold">
+              {row.label}
+            </TH>
+            <TD className="whitespace-pre-wrap">{row.value}</TD>
+            <TD className="text-ink-soft">{row.expected ?? '—'}</TD>
+          </TR>
+        ))}
+      </TBody>
+      {processing && !('unavailable' in processing) ? (
+        <tfoot>
+          <tr>
+            <td colSpan={3} className="px-4 py-2 text-xs text-ink-soft">
+              Source: {processing.source}
+            </td>
+          </tr>
+        </tfoot>
+      ) : null}
+    </Table>
+  );
+}

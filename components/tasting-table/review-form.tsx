@@ -1,0 +1,116 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { Button } from '@/components/ui/button';
+import { FieldError, fieldClasses } from '@/components/ui/text-field';
+import { useToast } from '@/components/ui/toast';
+import { cn } from '@/lib/cn';
+import { RUBRIC_CRITERIA, reviewSchema, type ReviewInput } from '@/lib/validations/practical';
+
+type FormInput = import('zod').input<typeof reviewSchema>;
+
+/** The rubric, criterion by criterion, and the decision on one round. */
+export function ReviewForm({ practicalId, round }: { practicalId: number; round: number }) {
+  const router = useRouter();
+  const toast = useToast();
+  const [serverError, setServerError] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<FormInput, unknown, ReviewInput>({
+    resolver: zodResolver(reviewSchema),
+    defaultValues: { comment: '', rubric: Object.fromEntries(RUBRIC_CRITERIA.map((c) => [c.id, { comment: '' }])) as FormInput['rubric'] },
+  });
+  const decision = useWatch({ control, name: 'decision' });
+
+  const onSubmit = async (input: ReviewInput) => {
+    setServerError(null);
+    const response = await fetch(`/api/practicals/${practicalId}/review`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(input) });
+    const body = await response.json().catch(() => ({}));
+    if (response.status === 201) {
+      toast.show(input.decision === 'approved' ? 'Approved. The learner gets an e-mail.' : 'Changes requested. The learner gets an e-mail.', 'success');
+      router.refresh();
+      return;
+    }
+    for (const [key, messages] of Object.entries((body.fields ?? {}) as Record<string, string[]>)) setError(key as 'comment', { message: messages[0] });
+    setServerError(body.message ?? 'The review could not be saved. Please try again.');
+  };
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-5" aria-label={`Review of round ${round}`}>
+      <div className="space-y-4">
+        {RUBRIC_CRITERIA.map((c) => {
+          const err = errors.rubric?.[c.id];
+          const verdictError = err?.verdict?.message;
+          const commentError = err?.comment?.message;
+          return (
+            <fieldset key={c.id} className="rounded-lg border border-brine-100 p-3" aria-describedby={verdictError ? `${c.id}-verdict-error` : undefined}>
+              <legend className="px-1 font-semibold">{c.label}</legend>
+              <div className="flex flex-wrap gap-4">
+                <label className="flex items-center gap-2 text-sm">
+                  <input type="radio" value="met" {...register(`rubric.${c.id}.verdict`)} /> Met
+                </label>
+                <label className="flex items-center gap-2 text-sm">
+                  <input type="radio" value="not_met" {...register(`rubric.${c.id}.verdict`)} /> Not met
+                </label>
+              </div>
+              <FieldError id={`${c.id}-verdict-error`} message={verdictError} />
+              <label htmlFor={`${c.id}-comment`} className="mt-2 block text-sm">
+                Comment on {c.label.toLowerCase()}
+              </label>
+              <input
+                id={`${c.id}-comment`}
+                className={cn(fieldClasses, commentError ? 'border-beet-500' : 'border-ink-faint/40')}
+                aria-invalid={commentError ? true : undefined}
+                aria-describedby={commentError ? `${c.id}-comment-error` : undefined}
+                {...register(`rubric.${c.id}.comment`)}
+              />
+              <FieldError id={`${c.id}-comment-error`} message={commentError} />
+            </fieldset>
+          );
+        })}
+      </div>
+
+      <fieldset className="space-y-2" aria-describedby={errors.decision ? 'decision-error' : undefined}>
+        <legend className="font-display text-lg font-bold">Decision</legend>
+        <label className="flex items-center gap-2">
+          <input type="radio" value="approved" {...register('decision')} /> Approve this round
+        </label>
+        <label className="flex items-center gap-2">
+          <input type="radio" value="changes_requested" {...register('decision')} /> Ask for changes
+        </label>
+        <FieldError id="decision-error" message={errors.decision?.message} />
+      </fieldset>
+
+      <div className="space-y-1">
+        <label htmlFor="review-comment" className="block text-sm font-semibold">
+          {decision === 'changes_requested' ? 'What to change (required)' : 'Comment for the learner'}
+        </label>
+        <textarea
+          id="review-comment"
+          rows={4}
+          className={cn(fieldClasses, errors.comment ? 'border-beet-500' : 'border-ink-faint/40')}
+          aria-invalid={errors.comment ? true : undefined}
+          aria-describedby={errors.comment ? 'review-comment-error' : undefined}
+          {...register('comment')}
+        />
+        <FieldError id="review-comment-error" message={errors.comment?.message} />
+      </div>
+
+      {serverError ? (
+        <p role="alert" className="rounded-lg border border-beet-500 bg-beet-50 px-4 py-2 text-sm text-beet-700">
+          {serverError}
+        </p>
+      ) : null}
+      <Button type="submit" pending={isSubmitting}>
+        Save the review
+      </Button>
+    </form>
+  );
+}

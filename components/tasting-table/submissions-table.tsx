@@ -1,0 +1,161 @@
+'use client';
+
+import Link from 'next/link';
+import { useState } from 'react';
+import useSWR from 'swr';
+import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from '@/components/practicals/practical-status';
+import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { Select } from '@/components/ui/select';
+import { EmptyRow, Table, TBody, TD, TH, THead, TR } from '@/components/ui/table';
+import type { TastingTablePage, WorkshopOption } from '@/lib/practicals/data';
+import { PRODUCTS } from '@/lib/preserving/products';
+import type { TastingSort } from '@/lib/validations/practical';
+import { jsonFetcher } from './fetcher';
+
+type Filters = { page: number; sort: TastingSort; status: string; workshop: string; flagged: string; olderThanDays: string };
+
+const STATUS_OPTIONS = [
+  { value: 'all', label: 'Every status' },
+  { value: 'submitted', label: 'Waiting for review' },
+  { value: 'changes_requested', label: 'Changes requested' },
+  { value: 'approved', label: 'Approved' },
+];
+const FLAG_OPTIONS = [
+  { value: 'any', label: 'Flagged or not' },
+  { value: 'yes', label: 'Flagged only' },
+  { value: 'no', label: 'No flags only' },
+];
+const AGE_OPTIONS = [
+  { value: '', label: 'Any age' },
+  { value: '2', label: 'Waiting 2 days or more' },
+  { value: '7', label: 'Waiting 7 days or more' },
+  { value: '14', label: 'Waiting 14 days or more' },
+];
+const SORT_OPTIONS: { value: TastingSort; label: string }[] = [
+  { value: 'oldest', label: 'Oldest first' },
+  { value: 'newest', label: 'Newest first' },
+  { value: 'flags', label: 'Most flags first' },
+  { value: 'learner', label: 'Learner name' },
+  { value: 'status', label: 'Status' },
+];
+
+/** The data route's URL for a set of filters (exported for tests and prefetching). */
+export function submissionsKey(f: Filters): string {
+  const q = new URLSearchParams({ page: String(f.page), sort: f.sort, status: f.status, flagged: f.flagged });
+  if (f.workshop) q.set('workshop', f.workshop);
+  if (f.olderThanDays) q.set('olderThanDays', f.olderThanDays);
+  return `/api/tasting-table/submissions?${q}`;
+}
+
+function age(iso: string, now: number): string {
+  const days = Math.floor((now - new Date(iso).getTime()) / 86_400_000);
+  if (days <= 0) return 'today';
+  return days === 1 ? '1 day' : `${days} days`;
+}
+
+const productName = (id: string | null) => (id && id in PRODUCTS ? PRODUCTS[id as keyof typeof PRODUCTS].name : (id ?? '—'));
+
+/** The queue of practical submissions: server-paginated, sortable and filterable, fetched with SWR. */
+export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] }) {
+  const [filters, setFilters] = useState<Filters>({ page: 1, sort: 'oldest', status: 'all', workshop: '', flagged: 'any', olderThanDays: '' });
+  const { data, error, isLoading, isValidating, mutate } = useSWR<TastingTablePage>(submissionsKey(filters), jsonFetcher, { keepPreviousData: true });
+  const set = (change: Partial<Filters>) => setFilters((f) => ({ ...f, page: 1, ...change }));
+  const [now] = useState(() => Date.now());
+  const sortHeader = (label: string, sort: TastingSort) => (
+    <button type="button" className="font-semibold underline decoration-dotted underline-offset-2" onClick={() => set({ sort })} aria-pressed={filters.sort === sort}>
+      {label}
+      {filters.sort === sort ? <span aria-hidden="true"> ▲</span> : null}
+    </button>
+  );
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap gap-2" aria-label="Submissions in each status" role="group">
+        {(['submitted', 'changes_requested', 'approved'] as const).map((s) => (
+          <button
+            key={s}
+            type="button"
+            onClick={() => set({ status: filters.status === s ? 'all' : s })}
+            aria-pressed={filters.status === s}
+            className="rounded-full focus-visible:outline-2 focus-visible:outline-copper-500"
+          >
+            <Badge tone={PRACTICAL_STATUS_TONE[s]} className={filters.status === s ? 'ring-2' : undefined}>
+              {PRACTICAL_STATUS_LABEL[s]}: <span data-testid={`count-${s}`}>{data ? data.counts[s] : '…'}</span>
+            </Badge>
+          </button>
+        ))}
+      </div>
+
+      <div className="grid gap-3 md:grid-cols-5">
+        <Select label="Status" options={STATUS_OPTIONS} value={filters.status} onChange={(e) => set({ status: e.target.value })} />
+        <Select label="Workshop" options={[{ value: '', label: 'Every workshop' }, ...workshops.map((w) => ({ value: String(w.id), label: w.label }))]} value={filters.workshop} onChange={(e) => set({ workshop: e.target.value })} />
+        <Select label="Flags" options={FLAG_OPTIONS} value={filters.flagged} onChange={(e) => set({ flagged: e.target.value })} />
+        <Select label="Age" options={AGE_OPTIONS} value={filters.olderThanDays} onChange={(e) => set({ olderThanDays: e.target.value })} />
+        <Select label="Sort" options={SORT_OPTIONS} value={filters.sort} onChange={(e) => set({ sort: e.target.value as TastingSort })} />
+      </div>
+
+      {error ? (
+        <div role="alert" className="flex items-center justify-between rounded-lg border border-beet-500 bg-beet-50 px-4 py-3 text-sm text-beet-700">
+          <span>The submissions could not be loaded: {(error as Error).message}</span>
+          <Button size="sm" variant="secondary" onClick={() => mutate()}>
+            Try again
+          </Button>
+        </div>
+      ) : null}
+
+      <Table caption={<span>Practical submissions{data ? ` (${data.total})` : ''}</span>} aria-busy={isLoading || isValidating || undefined}>
+        <THead>
+          <tr>
+            <TH>{sortHeader('Learner', 'learner')}</TH>
+            <TH>Product</TH>
+            <TH>Round</TH>
+            <TH>{sortHeader('Status', 'status')}</TH>
+            <TH>{sortHeader('Flags', 'flags')}</TH>
+            <TH>Workshop</TH>
+            <TH>{sortHeader('Waiting', 'oldest')}</TH>
+          </tr>
+        </THead>
+        <TBody>
+          {!data && isLoading ? (
+            <EmptyRow colSpan={7}>Loading submissions…</EmptyRow>
+          ) : data && data.rows.length === 0 ? (
+            <EmptyRow colSpan={7}>No submissions match these filters.</EmptyRow>
+          ) : (
+            data?.rows.map((row) => (
+              <TR key={row.id} data-testid="submission-row">
+                <TD>
+                  <Link href={`/tasting-table/submissions/${row.id}`} className="font-semibold">
+                    {row.learnerName}
+                  </Link>
+                </TD>
+                <TD>{productName(row.product)}</TD>
+                <TD>{row.round}</TD>
+                <TD>
+                  <Badge tone={PRACTICAL_STATUS_TONE[row.status]}>{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
+                </TD>
+                <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
+                <TD>{row.workshopPlace ? `${new Date(row.workshopStartsAt!).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${row.workshopPlace.split(',')[0]}` : 'Self-paced'}</TD>
+                <TD>
+                  <time dateTime={row.submittedAt}>{age(row.submittedAt, now)}</time>
+                </TD>
+              </TR>
+            ))
+          )}
+        </TBody>
+      </Table>
+
+      <nav aria-label="Pages of submissions" className="flex items-center justify-between gap-3 text-sm">
+        <Button size="sm" variant="secondary" disabled={filters.page <= 1} onClick={() => setFilters((f) => ({ ...f, page: f.page - 1 }))}>
+          Previous page
+        </Button>
+        <span>
+          Page {data?.page ?? filters.page} of {data?.pageCount ?? '…'}
+        </span>
+        <Button size="sm" variant="secondary" disabled={!data || filters.page >= data.pageCount} onClick={() => setFilters((f) => ({ ...f, page: f.page + 1 }))}>
+          Next page
+        </Button>
+      </nav>
+    </div>
+  );
+}
