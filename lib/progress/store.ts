@@ -2,6 +2,7 @@ import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { AppError } from '@/lib/errors';
 import { isEnrolled } from '@/lib/access';
+import { getLesson } from '@/lib/content';
 import { db } from '@/models';
 
 /** The database id of a course, or a 404. */
@@ -17,6 +18,7 @@ export async function courseIdFor(courseSlug: string): Promise<number> {
  */
 export async function markLessonRead(userId: number, courseSlug: string, lessonSlug: string): Promise<{ readAt: Date; created: boolean }> {
   const courseId = await courseIdFor(courseSlug);
+  if (!getLesson(courseSlug, lessonSlug)) throw new AppError('not_found', 'There is no such lesson in this course.', { fields: { lessonSlug: ['no such lesson'] } });
   if (!(await isEnrolled(userId, courseSlug))) {
     throw new AppError('forbidden', 'Enroll in this course to keep track of the lessons you read.');
   }
