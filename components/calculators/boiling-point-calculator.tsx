@@ -1,0 +1,41 @@
+'use client';
+
+import { useState } from 'react';
+import { boilingPoint } from '@/lib/preserving/boiling';
+import { RULES } from '@/lib/preserving/errors';
+import { AltitudeField } from './altitude-field';
+import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt } from './parts';
+
+/** The boiling point of water at an altitude, and why that changes the processing time. */
+export function BoilingPointCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
+  const [altitude, setAltitude] = useState('5000');
+  const outcome = calculate((read) => boilingPoint({ altitudeFt: read.num(altitude, RULES.altitudeFt) }), ['altitudeFt']);
+  const r = outcome.result;
+  return (
+    <CalculatorShell
+      title="Boiling point of water"
+      intro="Air pressure falls with altitude, so water boils at a lower temperature and kills spoilage organisms more slowly."
+      headingLevel={headingLevel}
+      lesson={LESSONS.processing}
+      caution="Boiling water and steam scald: lift jars straight up with a jar lifter and keep children away from the canner."
+      result={
+        r ? (
+          <div className="space-y-1">
+            <p className="text-xl font-bold" data-testid="boiling-point">
+              {fmt(r.fahrenheit, 1)} °F ({fmt(r.celsius, 1)} °C)
+            </p>
+            <p className="text-sm">
+              Air pressure {fmt(r.pressurePa / 1000, 1)} kPa in the standard atmosphere; the weather moves it a little. That is {fmt(212 - r.fahrenheit, 1)} °F below
+              212 °F, which is why the tested recipe adds minutes at your altitude.
+            </p>
+            <p className="text-xs text-ink-soft">Model: {r.source}</p>
+          </div>
+        ) : (
+          <ResultMessage outcome={outcome} />
+        )
+      }
+    >
+      <AltitudeField value={altitude} onChange={setAltitude} error={outcome.fieldErrors.altitudeFt} />
+    </CalculatorShell>
+  );
+}

@@ -1,0 +1,213 @@
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import {
+  BatchPlanner,
+  BoilingPointCalculator,
+  BrineCalculator,
+  CrispingCalculator,
+  HeadspaceCalculator,
+  PressureCalculator,
+  ProcessingTimeCalculator,
+  SaltCalculator,
+  UnitConverter,
+} from './index';
+
+/** Replaces the text of a field the way a person does: select all, type. */
+async function retype(user: ReturnType<typeof userEvent.setup>, field: HTMLElement, text: string) {
+  await user.clear(field);
+  if (text) await user.type(field, text);
+}
+
+describe('ProcessingTimeCalculator', () => {
+  it('updates the minutes as the altitude is typed (USDA Guide 6, quick fresh-pack dill quarts: 15 / 20 / 25 min)', async () => {
+    const user = userEvent.setup();
+    render(<ProcessingTimeCalculator defaultProduct="fresh-pack-dill-pickles" />);
+    await user.selectOptions(screen.getByLabelText('Jar size'), 'quart');
+    expect(screen.getByTestId('processing-minutes')).toHaveTextContent('15 minutes');
+    await retype(user, screen.getByLabelText('Altitude'), '4500');
+    expect(screen.getByTestId('processing-minutes')).toHaveTextContent('20 minutes');
+    await retype(user, screen.getByLabelText('Altitude'), '7000');
+    expect(screen.getByTestId('processing-minutes')).toHaveTextContent('25 minutes');
+    expect(screen.getByText(/low-temperature pasteurization/)).toBeInTheDocument();
+  });
+
+  it('shows the same messages as the route for a bad altitude, a jar outside the table, and above 10,000 ft', async () => {
+    const user = userEvent.setup();
+    render(<ProcessingTimeCalculator defaultProduct="dilly-beans" />);
+    const altitude = screen.getByLabelText('Altitude');
+    await retype(user, altitude, '-3');
+    expect(altitude).toHaveAttribute('aria-invalid', 'true');
+    expect(altitude).toHaveAccessibleDescription(expect.stringContaining('The altitude in feet cannot be negative.'));
+    expect(screen.queryByTestId('processing-minutes')).toBeNull();
+    await retype(user, altitude, '12000');
+    expect(screen.getByRole('status')).toHaveTextContent(/up to 10,000 ft.*local extension office/);
+    await retype(user, altitude, '100');
+    await user.selectOptions(screen.getByLabelText('Jar size'), 'quart');
+    expect(screen.getByRole('status')).toHaveTextContent(/pint jars only/);
+  });
+
+  it('can be used with the keyboard alone', async () => {
+    const user = userEvent.setup();
+    render(<ProcessingTimeCalculator defaultProduct="pickle-relish" />);
+    await user.tab();
+    expect(screen.getByLabelText('Product')).toHaveFocus();
+    await user.tab();
+    expect(screen.getByLabelText('Jar size')).toHaveFocus();
+    await user.tab();
+    expect(screen.getByLabelText('Altitude')).toHaveFocus();
+    await user.keyboard('{Control>}a{/Control}{Backspace}6500');
+    expect(screen.getByTestId('processing-minutes')).toHaveTextContent('20 minutes');
+    await user.tab();
+    expect(screen.getByRole('link', { name: /Lesson: Processing/ })).toHaveFocus();
+    expect(screen.getByRole('link', { name: /Lesson: Processing/ })).toHaveAttribute('href', '/learn/pickling-and-canning/processing');
+  });
+});
+
+describe('BrineCalculator', () => {
+  it('updates acid and pH as volumes are typed (1 : 1 of 5 % vinegar: 2.5 %, pH 2.57, computed)', async () => {
+    const user = userEvent.setup();
+    render(<BrineCalculator />);
+    expect(screen.getByTestId('brine-acid')).toHaveTextContent('2.5 g per 100 mL');
+    expect(screen.getByTestId('brine-ph')).toHaveTextContent('2.57');
+    await retype(user, screen.getByLabelText('Water'), '0');
+    expect(screen.getByTestId('brine-acid')).toHaveTextContent('5 g per 100 mL');
+    expect(screen.getByTestId('brine-ph')).toHaveTextContent('2.42');
+    await retype(user, screen.getByLabelText('Produce in the jars (optional)'), '1000');
+    expect(screen.getByText(/With the produce water mixed in/)).toBeInTheDocument();
+  });
+
+  it('warns below 5 % vinegar and shows the message for a bad value', async () => {
+    const user = userEvent.setup();
+    render(<BrineCalculator />);
+    await retype(user, screen.getByLabelText('Vinegar acidity'), '4');
+    expect(screen.getByText(/below 5% acidity/)).toBeInTheDocument();
+    await retype(user, screen.getByLabelText('Vinegar'), 'lots');
+    expect(screen.getByLabelText('Vinegar')).toHaveAccessibleDescription(expect.stringContaining('Enter the vinegar in mL as a number.'));
+  });
+});
+
+describe('SaltCalculator', () => {
+  it('weighs salt and gives brine strength; unsuitable salt says why', async () => {
+    const user = userEvent.setup();
+    render(<SaltCalculator />);
+    // 3 tbsp = 9 tsp of canning salt at about 6 g/tsp (from memory) = 54 g.
+    expect(screen.getByTestId('salt-grams')).toHaveTextContent('54 g');
+    await retype(user, screen.getByLabelText('Amount of salt'), '1/2');
+    await user.selectOptions(screen.getByLabelText('Unit'), 'cup');
+    expect(screen.getByTestId('salt-grams')).toHaveTextContent('144 g');
+    expect(screen.getByText(/Brine strength: 12.59% salt by weight/)).toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Kind of salt'), 'table');
+    expect(screen.getByText(/cloudy/)).toBeInTheDocument();
+    await retype(user, screen.getByLabelText('Amount of salt'), '-2');
+    expect(screen.getByLabelText('Amount of salt')).toHaveAccessibleDescription(expect.stringContaining('The amount of salt cannot be negative.'));
+  });
+});
+
+describe('HeadspaceCalculator', () => {
+  it('gives the recommendation and a verdict as the measurement is typed', async () => {
+    const user = userEvent.setup();
+    render(<HeadspaceCalculator defaultProduct="pickled-beets" />);
+    expect(screen.getByLabelText('Product')).toHaveValue('pickled-beets');
+    expect(screen.getByTestId('headspace-recommended')).toHaveTextContent('Leave 1/2 inch (12.7 mm)');
+    const measured = screen.getByLabelText('Measured headspace (optional)');
+    await user.type(measured, '1/4');
+    expect(screen.getByText('Too little headspace.')).toBeInTheDocument();
+    await retype(user, measured, '0.5');
+    expect(screen.getByText('Headspace is right.')).toBeInTheDocument();
+    await retype(user, measured, 'about half');
+    expect(measured).toHaveAccessibleDescription(expect.stringContaining('Enter the measured headspace in inches as a number.'));
+  });
+});
+
+describe('PressureCalculator', () => {
+  it('gives the dial-gauge pounds by altitude (USDA Guide 4 tables: 11 / 12 / 13 / 14)', async () => {
+    const user = userEvent.setup();
+    render(<PressureCalculator />);
+    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('11 psi');
+    await retype(user, screen.getByLabelText('Altitude'), '5000');
+    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('13 psi');
+    await user.selectOptions(screen.getByLabelText('Gauge type'), 'weighted');
+    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('15 psi');
+    await retype(user, screen.getByLabelText('Altitude'), '');
+    expect(screen.getByLabelText('Altitude')).toHaveAccessibleDescription(expect.stringContaining('Enter the altitude in feet as a number.'));
+  });
+});
+
+describe('BoilingPointCalculator', () => {
+  it('gives the boiling point in °F and °C (about 203 °F at 5,000 ft; 212 °F at sea level within 0.1)', async () => {
+    const user = userEvent.setup();
+    render(<BoilingPointCalculator />);
+    expect(screen.getByTestId('boiling-point')).toHaveTextContent('202.8 °F (94.9 °C)');
+    await retype(user, screen.getByLabelText('Altitude'), '0');
+    expect(screen.getByTestId('boiling-point')).toHaveTextContent('212 °F (100 °C)');
+    expect(screen.getByLabelText('Altitude')).toHaveAccessibleDescription(expect.stringContaining('= 0 m'));
+  });
+});
+
+describe('CrispingCalculator', () => {
+  it('doses calcium chloride per jar and in all, then gives the lime schedule with its cautions', async () => {
+    const user = userEvent.setup();
+    render(<CrispingCalculator />);
+    expect(screen.getByTestId('crisping-dose')).toHaveTextContent('1/8 tsp per jar, 7/8 tsp in all');
+    await retype(user, screen.getByLabelText('Number of jars'), '8');
+    expect(screen.getByTestId('crisping-dose')).toHaveTextContent('1 tsp in all');
+    await user.selectOptions(screen.getByLabelText('Crisping agent'), 'pickling-lime');
+    expect(screen.getByTestId('crisping-dose')).toHaveTextContent('1 cup of lime in 1 gallon of water');
+    expect(screen.getByText(/three times/)).toBeInTheDocument();
+    await retype(user, screen.getByLabelText('Number of jars'), '2.5');
+    expect(screen.getByLabelText('Number of jars')).toHaveAccessibleDescription(expect.stringContaining('The number of jars must be a whole number.'));
+  });
+});
+
+describe('BatchPlanner', () => {
+  it('scales the tested recipe to the jars typed', async () => {
+    const user = userEvent.setup();
+    render(<BatchPlanner defaultProduct="fresh-pack-dill-pickles" />);
+    await retype(user, screen.getByLabelText('Number of jars'), '9');
+    // USDA Guide 6 quick fresh-pack dill: 8 lb cucumbers, 14 cups liquid for about 9 pints (+10 %).
+    expect(screen.getByTestId('batch-summary')).toHaveTextContent('8 lb (3.63 kg) of produce, 3,643 mL');
+    expect(screen.getByText(/14 heads fresh dill/)).toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Product'), 'dilly-beans');
+    await user.selectOptions(screen.getByLabelText('Jar size'), 'quart');
+    expect(screen.getByRole('status')).toHaveTextContent(/pint jars only/);
+  });
+});
+
+describe('UnitConverter', () => {
+  it('converts as the value is typed and refuses a volume to a weight', async () => {
+    const user = userEvent.setup();
+    render(<UnitConverter />);
+    expect(screen.getByTestId('convert-result')).toHaveTextContent('1 cup = 236.588237 mL');
+    await retype(user, screen.getByLabelText('Value'), '2');
+    await user.selectOptions(screen.getByLabelText('To'), 'tbsp');
+    expect(screen.getByTestId('convert-result')).toHaveTextContent('2 cup = 32 tbsp');
+    await user.selectOptions(screen.getByLabelText('To'), 'g');
+    expect(screen.getByLabelText('To')).toHaveAccessibleDescription(expect.stringContaining('without a stated density'));
+  });
+});
+
+describe('every calculator', () => {
+  const all = [BatchPlanner, BoilingPointCalculator, BrineCalculator, CrispingCalculator, HeadspaceCalculator, PressureCalculator, ProcessingTimeCalculator, SaltCalculator, UnitConverter];
+
+  it('ties every input to a label, has a heading, a live result, a caution and a lesson link', () => {
+    for (const Calculator of all) {
+      const { container, unmount } = render(<Calculator />);
+      const section = container.querySelector('section')!;
+      expect(within(section).getByRole('heading', { level: 3 })).toBeInTheDocument();
+      for (const input of section.querySelectorAll('input, select')) {
+        expect(input.id).not.toBe('');
+        expect(section.querySelector(`label[for="${CSS.escape(input.id)}"]`), `${Calculator.name} ${input.outerHTML}`).not.toBeNull();
+      }
+      expect(within(section).getByRole('status')).toHaveAttribute('aria-live', 'polite');
+      expect(within(section).getByRole('link', { name: /^Lesson: / }).getAttribute('href')).toMatch(/^\/learn\/pickling-and-canning\//);
+      expect(section.textContent).toContain('⚠');
+      unmount();
+    }
+  });
+
+  it('takes a heading level for pages that list them under their own h1', () => {
+    render(<BrineCalculator headingLevel={2} />);
+    expect(screen.getByRole('heading', { level: 2, name: 'Brine acidity' })).toBeInTheDocument();
+  });
+});

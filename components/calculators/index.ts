@@ -1,0 +1,9 @@
+export { BatchPlanner } from './batch-planner';
+export { BoilingPointCalculator } from './boiling-point-calculator';
+export { BrineCalculator } from './brine-calculator';
+export { CrispingCalculator } from './crisping-calculator';
+export { HeadspaceCalculator } from './headspace-calculator';
+export { PressureCalculator } from './pressure-calculator';
+export { ProcessingTimeCalculator } from './processing-time-calculator';
+export { SaltCalculator } from './salt-calculator';
+export { UnitConverter } from './unit-converter';
