@@ -1,0 +1,58 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { Button } from '@/components/ui/button';
+import { Select } from '@/components/ui/select';
+import { TextField } from '@/components/ui/text-field';
+import { useToast } from '@/components/ui/toast';
+import { WaiverSchema, type WaiverInput } from '@/lib/validations/waiver';
+
+/** The coordinator's fee waiver form (react-hook-form, the schema POST /api/waivers uses). */
+export function WaiverForm({ courses, defaultExpiry }: { courses: { id: number; title: string }[]; defaultExpiry: string }) {
+  const router = useRouter();
+  const toast = useToast();
+  const [message, setMessage] = useState<string | null>(null);
+  const defaults: WaiverInput = { code: '', courseId: '', maxUses: 1, expiresOn: defaultExpiry, note: '' };
+  const { register, handleSubmit, setError, reset, formState } = useForm<WaiverInput, unknown, z.output<typeof WaiverSchema>>({ resolver: zodResolver(WaiverSchema), defaultValues: defaults, mode: 'onTouched' });
+  const err = (name: keyof WaiverInput) => formState.errors[name]?.message as string | undefined;
+
+  const onSubmit = handleSubmit(async (values) => {
+    setMessage(null);
+    try {
+      const response = await fetch('/api/waivers', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ ...values, code: values.code ?? '', courseId: values.courseId ?? '', note: values.note ?? '' }) });
+      const body = await response.json().catch(() => null);
+      if (!response.ok) {
+        setMessage(body?.message ?? 'The code was not created.');
+        for (const [field, messages] of Object.entries((body?.fields ?? {}) as Record<string, string[]>)) setError(field as keyof WaiverInput, { message: messages[0] });
+        return;
+      }
+      toast.show(`Waiver code ${body.waiver.code} created.`, 'success');
+      reset(defaults);
+      router.refresh();
+    } catch {
+      setMessage('Brinewright could not be reached; try again.');
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="New fee waiver code">
+      <TextField label="Code" hint="Leave empty to generate one." autoComplete="off" error={err('code')} {...register('code')} />
+      <Select label="Course" options={[{ value: '', label: 'Any course' }, ...courses.map((c) => ({ value: String(c.id), label: c.title }))]} error={err('courseId')} {...register('courseId')} />
+      <TextField label="Number of uses" type="number" min={1} max={1000} inputMode="numeric" error={err('maxUses')} {...register('maxUses')} />
+      <TextField label="Last day it works" type="date" hint="The code stops working after this day (UTC)." error={err('expiresOn')} {...register('expiresOn')} />
+      <TextField label="Note" hint="For whom, or why (optional)." className="sm:col-span-2" error={err('note')} {...register('note')} />
+      <div className="flex items-center gap-3 sm:col-span-2">
+        <Button type="submit" pending={formState.isSubmitting}>
+          Create code
+        </Button>
+        <p role="status" aria-live="polite" className="text-sm font-medium text-beet-600">
+          {message}
+        </p>
+      </div>
+    </form>
+  );
+}
