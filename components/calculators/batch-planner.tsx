@@ -1,11 +1,10 @@
 'use client';
 
 import { useState } from 'react';
-import { TextField } from '@/components/ui/text-field';
 import { planBatch } from '@/lib/preserving/batch';
 import { RULES } from '@/lib/preserving/errors';
 import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt, kitchen } from './parts';
-import { JarSelect, ProductSelect, startProduct } from './product-fields';
+import { JarSelect, ProductSelect, startProduct, JarsField } from './product-fields';
 
 const UNIT_WORDS: Record<string, [string, string]> = {
   lb: ['lb', 'lb'],
@@ -61,7 +60,7 @@ export function BatchPlanner({ defaultProduct, headingLevel }: { defaultProduct?
     >
       <ProductSelect value={product} onChange={setProduct} error={outcome.fieldErrors.product} />
       <JarSelect value={jar} onChange={setJar} error={outcome.fieldErrors.jar} />
-      <TextField label="Number of jars" inputMode="numeric" autoComplete="off" value={jars} onChange={(event) => setJars(event.target.value)} error={outcome.fieldErrors.jars} />
+      <JarsField value={jars} onChange={setJars} error={outcome.fieldErrors.jars} />
     </CalculatorShell>
   );
 }

@@ -2,11 +2,10 @@
 
 import { useState } from 'react';
 import { Select } from '@/components/ui/select';
-import { TextField } from '@/components/ui/text-field';
 import { CRISPING_AGENTS, crispingPlan } from '@/lib/preserving/crisping';
 import { RULES } from '@/lib/preserving/errors';
 import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt, kitchen } from './parts';
-import { JarSelect } from './product-fields';
+import { JarSelect, JarsField } from './product-fields';
 
 const AGENT_OPTIONS = CRISPING_AGENTS.map((a) => ({ value: a, label: a === 'calcium-chloride' ? 'Calcium chloride granules' : 'Pickling lime (food-grade)' }));
 
@@ -50,7 +49,7 @@ export function CrispingCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
     >
       <Select label="Crisping agent" options={AGENT_OPTIONS} value={agent} onChange={(event) => setAgent(event.target.value)} error={outcome.fieldErrors.agent} />
       <JarSelect value={jar} onChange={setJar} error={outcome.fieldErrors.jar} />
-      <TextField label="Number of jars" inputMode="numeric" autoComplete="off" value={jars} onChange={(event) => setJars(event.target.value)} error={outcome.fieldErrors.jars} />
+      <JarsField value={jars} onChange={setJars} error={outcome.fieldErrors.jars} />
     </CalculatorShell>
   );
 }

@@ -1,6 +1,7 @@
 'use client';
 
 import { Select } from '@/components/ui/select';
+import { TextField } from '@/components/ui/text-field';
 import { JAR_LABELS, JAR_SIZES, PRODUCT_OPTIONS, isProductId } from '@/lib/preserving/products';
 
 export const JAR_OPTIONS = JAR_SIZES.map((j) => ({ value: j, label: JAR_LABELS[j] }));
@@ -14,4 +15,8 @@ export function ProductSelect({ value, onChange, error }: { value: string; onCha
 
 export function JarSelect({ value, onChange, error }: { value: string; onChange: (value: string) => void; error?: string }) {
   return <Select label="Jar size" options={JAR_OPTIONS} value={value} onChange={(event) => onChange(event.target.value)} error={error} />;
+}
+
+export function JarsField({ value, onChange, error }: { value: string; onChange: (value: string) => void; error?: string }) {
+  return <TextField label="Number of jars" inputMode="numeric" autoComplete="off" value={value} onChange={(event) => onChange(event.target.value)} error={error} />;
 }
