@@ -1,0 +1,47 @@
+import { describe, expect, it } from 'vitest';
+import { certificateIssuedEmail, enrollmentReceiptEmail, practicalReviewedEmail, refundEmail, welcomeEmail, workshopReminderEmail } from './templates';
+
+const workshop = { startsAt: '2026-12-12T16:00:00.000Z', endsAt: '2026-12-12T21:00:00.000Z', timeZone: 'America/Denver', place: 'Grange Hall, 14 Mill Road' };
+
+describe('e-mail templates', () => {
+  it('every message has a text part and an HTML part with the same facts', () => {
+    const all = [
+      welcomeEmail({ to: 'a@test.example', name: 'Ana', confirmUrl: 'http://localhost:3000/confirm-email?token=abc' }),
+      enrollmentReceiptEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'Safe Pickling', workshop, amountCents: 4500, currency: 'usd', waived: false, appUrl: 'http://localhost:3000/' }),
+      refundEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'Safe Pickling', workshop, amountCents: 4500, currency: 'usd' }),
+      workshopReminderEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'Safe Pickling', workshop, appUrl: 'http://localhost:3000' }),
+      practicalReviewedEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'Safe Pickling', decision: 'changes_requested', comment: 'Headspace <1/4 in', appUrl: 'http://localhost:3000' }),
+      certificateIssuedEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'Safe Pickling', serial: 'BW-2026-0001', validUntil: new Date('2029-12-12T00:00:00Z'), verifyUrl: 'http://localhost:3000/verify/BW-2026-0001' }),
+    ];
+    expect(all.map((m) => m.kind)).toEqual(['user.welcome', 'enrollment.receipt', 'payment.refunded', 'workshop.reminder', 'practical.reviewed', 'certificate.issued']);
+    for (const m of all) {
+      expect(m.text).toContain('Hello Ana,');
+      expect(m.html).toContain('Hello Ana,');
+      expect(m.html).toMatch(/^<!doctype html>/);
+      expect(m.text).toContain('never calls a recipe safe');
+    }
+  });
+
+  it('the receipt names amount, workshop date and time in the place’s zone, and place', () => {
+    const m = enrollmentReceiptEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'Safe Pickling', workshop, amountCents: 4500, currency: 'usd', waived: false, appUrl: 'http://localhost:3000' });
+    expect(m.text).toContain('Amount paid: $45.00');
+    // 16:00 UTC is 9:00 MST (UTC−7) in Denver in December (IANA tz database).
+    expect(m.text).toContain('Workshop: Saturday, December 12, 2026');
+    expect(m.text).toContain('Time: 9:00 AM – 2:00 PM MST');
+    expect(m.text).toContain('Place: Grange Hall, 14 Mill Road');
+    expect(m.text).toContain('http://localhost:3000/pantry');
+    expect(enrollmentReceiptEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'X', workshop: null, amountCents: 0, currency: 'usd', waived: true, appUrl: 'http://x' }).text).toContain('$0.00 (course fee waived)');
+  });
+
+  it('escapes what people typed in the HTML part', () => {
+    const m = practicalReviewedEmail({ to: 'a@test.example', name: '<b>Ana</b>', courseTitle: 'X', decision: 'approved', comment: '<script>alert(1)</script>', appUrl: 'http://x' });
+    expect(m.html).not.toContain('<script>');
+    expect(m.html).toContain('&lt;script&gt;');
+    expect(m.html).toContain('&lt;b&gt;Ana&lt;/b&gt;');
+  });
+
+  it('attaches the certificate PDF when given', () => {
+    const pdf = { filename: 'certificate.pdf', contentType: 'application/pdf', contentBase64: 'JVBERi0=' };
+    expect(certificateIssuedEmail({ to: 'a@test.example', name: 'Ana', courseTitle: 'X', serial: 'S', validUntil: new Date(), verifyUrl: 'http://x', pdf }).attachments).toEqual([pdf]);
+  });
+});
