@@ -7,6 +7,7 @@ import { migrator, seeder } from '../../lib/migrator';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 let server: ChildProcess | undefined;
+const services: ChildProcess[] = [];
 
 async function waitFor(url: string, timeoutMs: number) {
   const until = Date.now() + timeoutMs;
@@ -53,6 +54,28 @@ export default async function setup() {
     APP_URL: baseUrl,
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? 'e2e-secret-0123456789abcdef',
   };
+  // The local fakes (payments, SMTP + mailbox) and the worker, on ports derived from E2E_PORT so
+  // several checkouts can run browser tests side by side.
+  Object.assign(env, {
+    STRIPE_API_HOST: '127.0.0.1',
+    STRIPE_API_PORT: String(port + 1),
+    STRIPE_API_PROTOCOL: 'http',
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(port + 2),
+    FAKE_MAILBOX_PORT: String(port + 3),
+    MAILBOX_URL: `http://127.0.0.1:${port + 3}`,
+    FAKE_PAYMENTS_WEBHOOK_URL: `${baseUrl}/api/webhooks/stripe`,
+    FAKE_PAYMENTS_RETRY_MS: '500',
+    WORKER_POLL_MS: '300',
+    WORKER_BACKOFF_MS: '1000',
+  });
+  const tsx = path.join(root, 'node_modules/.bin/tsx');
+  process.once('exit', () => services.forEach((child) => child.kill('SIGTERM')));
+  services.push(spawn(tsx, ['scripts/fakes.ts'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] }));
+  services.push(spawn(tsx, ['--conditions=react-server', 'scripts/worker.ts'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] }));
+  await waitFor(`http://127.0.0.1:${port + 1}/_fake/health`, 30_000);
+  process.env.E2E_MAILBOX_URL = `http://127.0.0.1:${port + 3}`;
+  process.env.E2E_PAYMENTS_URL = `http://127.0.0.1:${port + 1}`;
   if (process.env.E2E_SKIP_BUILD !== '1' || !fs.existsSync(path.join(root, distDir, 'BUILD_ID'))) {
     const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });
     if (build.status !== 0) throw new Error('next build failed for the browser tests');
@@ -63,5 +86,6 @@ export default async function setup() {
 
   return async () => {
     server?.kill('SIGTERM');
+    for (const child of services) child.kill('SIGTERM');
   };
 }
