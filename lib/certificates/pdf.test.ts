@@ -1,11 +1,11 @@
 import { inflateSync } from 'node:zlib';
 import jsQR from 'jsqr';
-import { PDFDocument, PDFName, PDFRawStream, PDFDict, PDFNumber } from 'pdf-lib';
+import { PDFArray, PDFDict, PDFDocument, PDFName, PDFRawStream } from 'pdf-lib';
 import { PDFParse } from 'pdf-parse';
 import sharp from 'sharp';
 import { describe, expect, it } from 'vitest';
 import { renderCertificatePdf } from './pdf';
-import { qrPng, verificationUrl } from './qr';
+import { qrMatrix, qrPng, qrRuns, verificationUrl } from './qr';
 import { generateSerial } from './serial';
 
 const input = () => ({
@@ -18,27 +18,37 @@ const input = () => ({
   appUrl: 'http://127.0.0.1:3170',
 });
 
-/** Decodes the pixels of the first image XObject of page 1 (pdf-lib stores PNGs as Flate RGB). */
-async function firstImage(bytes: Uint8Array): Promise<{ width: number; height: number; rgba: Uint8ClampedArray }> {
+/** The page's content stream(s), inflated. */
+async function pageContent(bytes: Uint8Array): Promise<string> {
   const doc = await PDFDocument.load(bytes);
-  const resources = doc.getPage(0).node.Resources()!;
-  const xobjects = resources.lookup(PDFName.of('XObject'), PDFDict);
-  for (const [, ref] of xobjects.entries()) {
-    const stream = doc.context.lookup(ref);
-    if (!(stream instanceof PDFRawStream)) continue;
-    if (stream.dict.get(PDFName.of('Subtype'))?.toString() !== '/Image') continue;
-    const width = (stream.dict.get(PDFName.of('Width')) as PDFNumber).asNumber();
-    const height = (stream.dict.get(PDFName.of('Height')) as PDFNumber).asNumber();
-    const raw = inflateSync(stream.contents);
-    const channels = raw.length / (width * height);
-    const rgba = new Uint8ClampedArray(width * height * 4);
-    for (let i = 0; i < width * height; i++) {
-      const v = raw.subarray(i * channels, i * channels + channels);
-      rgba.set(channels >= 3 ? [v[0], v[1], v[2], 255] : [v[0], v[0], v[0], 255], i * 4);
-    }
-    return { width, height, rgba };
+  const contents = doc.getPage(0).node.Contents()!;
+  const streams = contents instanceof PDFArray ? contents.asArray().map((ref) => doc.context.lookup(ref)) : [contents];
+  return streams
+    .map((stream) => {
+      const raw = stream as PDFRawStream;
+      return (raw.dict.get(PDFName.of('Filter')) ? inflateSync(raw.contents) : Buffer.from(raw.contents)).toString('latin1');
+    })
+    .join('\n');
+}
+
+/**
+ * Renders the QR code the PDF draws: every `x y w h re` rectangle of the black path is painted
+ * into a bitmap (4 px per point) over the white square, which jsQR then reads like a camera would.
+ */
+function rasteriseQr(content: string, box: { x: number; y: number; size: number }) {
+  const path = content.slice(content.indexOf('0 0 0 rg'));
+  const rects = [...path.slice(0, path.indexOf('\nf\n')).matchAll(/([\d.]+) ([\d.]+) ([\d.]+) ([\d.]+) re/g)].map((m) => m.slice(1, 5).map(Number));
+  const scale = 4;
+  const side = box.size * scale;
+  const rgba = new Uint8ClampedArray(side * side * 4).fill(255);
+  for (const [x, y, w, h] of rects) {
+    const left = Math.round((x - box.x) * scale);
+    const right = Math.round((x + w - box.x) * scale);
+    const top = Math.round((box.y + box.size - (y + h)) * scale);
+    const bottom = Math.round((box.y + box.size - y) * scale);
+    for (let row = top; row < bottom; row++) for (let col = left; col < right; col++) rgba.fill(0, (row * side + col) * 4, (row * side + col) * 4 + 3);
   }
-  throw new Error('no image in the PDF');
+  return { rects: rects.length, rgba, side };
 }
 
 describe('renderCertificatePdf', () => {
@@ -71,19 +81,28 @@ describe('renderCertificatePdf', () => {
     expect(names.some((n) => /Merriweather.*Bold/.test(n))).toBe(true);
   });
 
-  it('embeds a QR code that decodes (jsQR) to the verification URL, the same image qrPng makes', async () => {
+  it('draws a QR code that decodes (jsQR) to the verification URL, the same symbol qrPng makes', async () => {
     const data = input();
     const url = verificationUrl(data.appUrl, data.serial);
     expect(url).toBe(`http://127.0.0.1:3170/verify/${data.serial}`);
 
     const decoded = await sharp(await qrPng(url)).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
-    const png = { width: decoded.info.width, height: decoded.info.height };
-    const fromPng = jsQR(new Uint8ClampedArray(decoded.data), png.width, png.height);
-    expect(fromPng?.data).toBe(url);
+    expect(jsQR(new Uint8ClampedArray(decoded.data), decoded.info.width, decoded.info.height)?.data).toBe(url);
 
-    const image = await firstImage(await renderCertificatePdf(data));
-    expect([image.width, image.height]).toEqual([png.width, png.height]);
-    const fromPdf = jsQR(image.rgba, image.width, image.height);
-    expect(fromPdf?.data).toBe(url);
+    const content = await pageContent(await renderCertificatePdf(data));
+    // The white square of the QR code, bottom right (614, 56, 118 pt): see pdf.ts.
+    expect(content).toContain('1 0 0 1 614 56 cm');
+    const qr = rasteriseQr(content, { x: 614, y: 56, size: 118 });
+    expect(qr.rects).toBe(qrRuns(qrMatrix(url)).length);
+    expect(jsQR(qr.rgba, qr.side, qr.side)?.data).toBe(url);
+  });
+
+  it('changes the QR code with the serial', async () => {
+    const a = input();
+    const b = { ...a, serial: generateSerial() };
+    const qa = rasteriseQr(await pageContent(await renderCertificatePdf(a)), { x: 614, y: 56, size: 118 });
+    const qb = rasteriseQr(await pageContent(await renderCertificatePdf(b)), { x: 614, y: 56, size: 118 });
+    expect(jsQR(qb.rgba, qb.side, qb.side)?.data).toBe(verificationUrl(b.appUrl, b.serial));
+    expect(jsQR(qa.rgba, qa.side, qa.side)?.data).not.toBe(jsQR(qb.rgba, qb.side, qb.side)?.data);
   });
 });

@@ -1,8 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import * as fontkitModule from '@pdf-lib/fontkit';
-import { PDFDocument, rgb, type PDFFont } from 'pdf-lib';
-import { qrPng, verificationUrl } from './qr';
+import { PDFDocument, fill, popGraphicsState, pushGraphicsState, rectangle, rgb, setFillingRgbColor, type PDFFont, type PDFPage } from 'pdf-lib';
+import { QUIET_ZONE, qrMatrix, qrRuns, verificationUrl } from './qr';
 import { woffToSfnt } from './woff';
 
 export type CertificatePdfInput = {
@@ -47,6 +47,27 @@ const formatDate = (date: Date) => new Intl.DateTimeFormat('en-US', { dateStyle:
 const INK = rgb(0.12, 0.16, 0.16);
 const BRINE = rgb(0.12, 0.37, 0.33);
 const COPPER = rgb(0.72, 0.4, 0.18);
+
+/**
+ * Draws a QR symbol as vector rectangles (one per dark run of a row, black on a white square with
+ * the quiet zone): sharp at any zoom or print size, and far cheaper than encoding and embedding a PNG.
+ */
+function drawQr(page: PDFPage, matrix: boolean[][], at: { x: number; y: number; size: number }) {
+  const modules = matrix.length + 2 * QUIET_ZONE;
+  const unit = at.size / modules;
+  const round = (n: number) => Math.round(n * 1000) / 1000;
+  page.drawRectangle({ x: at.x, y: at.y, width: at.size, height: at.size, color: rgb(1, 1, 1) });
+  // One path of `re` rectangles and a single fill: a small content stream.
+  page.pushOperators(
+    pushGraphicsState(),
+    setFillingRgbColor(0, 0, 0),
+    ...qrRuns(matrix).map((run) =>
+      rectangle(round(at.x + (run.col + QUIET_ZONE) * unit), round(at.y + at.size - (run.row + QUIET_ZONE + 1) * unit), round(run.length * unit), round(unit)),
+    ),
+    fill(),
+    popGraphicsState(),
+  );
+}
 
 /**
  * Renders the certificate: learner, course, program, dates, serial and a QR code to the
@@ -95,9 +116,7 @@ export async function renderCertificatePdf(input: CertificatePdfInput): Promise<
   await centred(set.regular, `Issued ${formatDate(input.issuedAt)}  ·  Valid until ${formatDate(input.validUntil)}`, height - 344, 12);
 
   const url = verificationUrl(input.appUrl, input.serial);
-  const qr = await doc.embedPng(await qrPng(url));
-  const qrSize = 118;
-  page.drawImage(qr, { x: width - 60 - qrSize, y: 56, width: qrSize, height: qrSize });
+  drawQr(page, qrMatrix(url), { x: width - 60 - 118, y: 56, size: 118 });
 
   const left = async (faces: FontFace[], raw: string, y: number, size: number, color = INK) => {
     const { font, text } = await pick(faces, raw);
@@ -110,5 +129,5 @@ export async function renderCertificatePdf(input: CertificatePdfInput): Promise<
   await left(set.regular, 'This records completed training. It does not certify any recipe or product as safe;', 70, 8);
   await left(set.regular, 'follow tested recipes, local codes and licensed practice.', 59, 8);
 
-  return doc.save();
+  return doc.save({ useObjectStreams: false });
 }
