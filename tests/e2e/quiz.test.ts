@@ -1,0 +1,106 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { openBrowser, seriousViolations, signIn } from './support/browser';
+
+// The key of the lesson quiz, read from the bank file as a learner who knows the material would
+// know it (the browser never receives it).
+type BankQuestion = { id: string; kind: string; prompt: string; choices?: { id: string; text: string }[]; answer: unknown; explanation: string };
+const QUIZ = 'pickling-and-canning--acidity';
+const bank = JSON.parse(fs.readFileSync(path.join(process.cwd(), 'content/quizzes', `${QUIZ}.json`), 'utf8')) as { questions: BankQuestion[] };
+
+async function answerEverything(page: Page) {
+  for (const q of bank.questions) {
+    const group = page.locator(`fieldset[data-question="${q.id}"]`);
+    if (q.kind === 'single' || q.kind === 'multiple') {
+      const right = q.kind === 'single' ? [q.answer as string] : (q.answer as string[]);
+      for (const id of right) await group.getByLabel(q.choices!.find((c) => c.id === id)!.text, { exact: true }).check();
+    } else if (q.kind === 'true-false') {
+      await group.getByLabel(q.answer ? 'True' : 'False', { exact: true }).check();
+    }
+  }
+}
+
+describe('quiz, progress and the Pantry in the browser', () => {
+  let browser: Awaited<ReturnType<typeof openBrowser>>;
+
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('the demo learner reads a lesson, passes its quiz (answers kept across a reload) and sees the jar fill', async () => {
+    const { page } = browser;
+    await signIn(page, 'learner@cedarhollow.example', 'demo-learner-pass');
+
+    await page.goto('/pantry');
+    const jarName = /^Acidity.*: not read yet, quiz not passed yet$/;
+    await page.getByRole('img', { name: jarName }).waitFor();
+    expect(await seriousViolations(page)).toEqual([]);
+
+    await page.goto('/learn/pickling-and-canning/acidity');
+    const actions = page.getByTestId('lesson-actions');
+    await actions.getByRole('button', { name: 'Mark as read' }).click();
+    await actions.getByTestId('lesson-read-state').waitFor();
+    expect(await actions.getByTestId('lesson-read-state').textContent()).toMatch(/^Read on/);
+    expect(await seriousViolations(page)).toEqual([]);
+    await actions.getByRole('link', { name: 'Take the lesson quiz' }).click();
+    await page.waitForURL(`**/quiz/${QUIZ}`);
+
+    // Before starting and after starting: no explanation (the right-answer marker) in the HTML.
+    const explanations = bank.questions.map((q) => q.explanation.slice(0, 50));
+    const hasKey = (html: string) => explanations.some((e) => html.includes(e)) || /"(answer|explanation|tolerance|computedFrom)"/.test(html);
+    expect(hasKey(await page.content())).toBe(false);
+    await page.getByRole('button', { name: 'Start the quiz' }).click();
+    await page.locator('fieldset[data-question]').first().waitFor();
+    expect(await page.locator('fieldset[data-question]').count()).toBe(bank.questions.length);
+    expect(hasKey(await page.content())).toBe(false);
+    expect(await seriousViolations(page)).toEqual([]);
+
+    await answerEverything(page);
+    await page.locator('fieldset[data-question="acid-two-to-one"]').getByLabel('Your answer').fill('3.3');
+    // A reload before submitting keeps the answers.
+    await page.reload();
+    await page.locator('fieldset[data-question]').first().waitFor();
+    expect(await page.locator('fieldset[data-question="acid-two-to-one"]').getByLabel('Your answer').inputValue()).toBe('3.3');
+    const tf = bank.questions.find((q) => q.kind === 'true-false')!;
+    expect(await page.locator(`fieldset[data-question="${tf.id}"]`).getByLabel(tf.answer ? 'True' : 'False', { exact: true }).isChecked()).toBe(true);
+
+    await page.getByRole('button', { name: 'Submit answers' }).click();
+    const result = page.getByTestId('quiz-result');
+    await result.waitFor();
+    expect(await result.getByRole('heading', { level: 2 }).textContent()).toBe('Passed: 100 %');
+    expect(await result.locator('[data-result="right"]').count()).toBe(bank.questions.length);
+    expect(await result.textContent()).toContain(bank.questions[0].explanation.slice(0, 50));
+    expect(await seriousViolations(page)).toEqual([]);
+
+    await result.getByRole('link', { name: 'Go to your Pantry' }).click();
+    await page.waitForURL('**/pantry');
+    await page.getByRole('img', { name: /^Acidity.*: read, quiz passed$/ }).waitFor();
+    expect(await page.locator('li[data-lesson="acidity"]').getAttribute('data-fill')).toBe('1');
+    expect(await seriousViolations(page)).toEqual([]);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('link', { name: 'Sign in' }).waitFor();
+  });
+
+  it('the demo instructor opens the question results and sorts them', async () => {
+    const { page } = browser;
+    await signIn(page, 'instructor@cedarhollow.example', 'demo-instructor-pass');
+    await page.goto('/tasting-table/questions');
+    const table = page.getByTestId('question-results');
+    await table.waitFor();
+    const row = table.locator('tr[data-question="acid-two-to-one"]');
+    await row.waitFor();
+    expect(await row.textContent()).toContain('100 %');
+    expect(await seriousViolations(page)).toEqual([]);
+    await table.getByRole('button', { name: /Answers/ }).click();
+    expect(await table.getByRole('columnheader', { name: /Answers/ }).getAttribute('aria-sort')).toBe('ascending');
+    await page.getByLabel('Quiz').selectOption(QUIZ);
+    await page.getByRole('button', { name: 'Show' }).click();
+    await page.waitForURL(/quiz=pickling-and-canning--acidity/);
+    expect(await table.locator('tbody tr').count()).toBe(bank.questions.length);
+  });
+});
