@@ -33,6 +33,17 @@ type StoredAnswers = { given: Answers; grade: Grade; late?: boolean };
 
 const json = <T>(v: T | string): T => (typeof v === 'string' ? (JSON.parse(v) as T) : v);
 
+/** The stored draw; rows written by other means (e.g. imported history) may hold no draw at all. */
+function drawnOf(v: AttemptRow['drawn']): Drawn {
+  const d = json<unknown>(v);
+  return d && typeof d === 'object' && Array.isArray((d as Drawn).questions) ? (d as Drawn) : { questions: [] };
+}
+
+function storedOf(v: AttemptRow['answers']): StoredAnswers | null {
+  const a = v === null ? null : json<unknown>(v);
+  return a && typeof a === 'object' && (a as StoredAnswers).grade && Array.isArray((a as StoredAnswers).grade.results) ? (a as StoredAnswers) : null;
+}
+
 export type AttemptView = {
   id: number;
   quizSlug: string;
@@ -76,7 +87,7 @@ async function courseFor(slug: string, transaction?: Transaction) {
 }
 
 function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: boolean): AttemptView {
-  const drawn = json<Drawn>(row.drawn);
+  const drawn = drawnOf(row.drawn);
   const out: AttemptView = {
     id: row.id,
     quizSlug: row.quizSlug,
@@ -89,8 +100,8 @@ function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: bool
     submittedAt: row.submittedAt ? new Date(row.submittedAt).toISOString() : null,
     questions: publicQuestions(bank.questions, drawn),
   };
-  if (withResult && row.submittedAt && row.answers) {
-    const stored = json<StoredAnswers>(row.answers);
+  const stored = withResult && row.submittedAt ? storedOf(row.answers) : null;
+  if (stored) {
     const byId = new Map(bank.questions.map((q) => [q.id, q]));
     const shown = new Map(drawn.questions.map((d) => [d.id, d]));
     out.result = {
@@ -186,7 +197,7 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
     const passMarkPct = course?.passMarkPct ?? 80;
     if (row.submittedAt) return { row, bank, passMarkPct, graded: false, late: false };
 
-    const drawn = json<Drawn>(row.drawn);
+    const drawn = drawnOf(row.drawn);
     checkAnswers(bank.questions, drawn, answers);
     const late = row.deadlineAt !== null && now.getTime() > new Date(row.deadlineAt).getTime() + DEADLINE_GRACE_MS;
     const counted: Answers = late ? {} : answers;
