@@ -1,4 +1,4 @@
-import { Table, TBody, TD, TH, THead, TR } from '@/components/ui/table';
+import { TBody, TD, TH, THead, TR } from '@/components/ui/table';
 import type { Expectations } from '@/lib/practicals/checks';
 import { PRODUCTS } from '@/lib/preserving/products';
 import { PROCESSING_METHOD_LABELS, type PracticalDetails } from '@/lib/validations/practical';
@@ -38,10 +38,13 @@ export function BatchDetails({ details, expected }: { details: PracticalDetails;
     { label: 'Notes', value: details.notes || '—' },
   ];
   return (
-    <Table caption="The batch and the published numbers">
+    // Fixed layout with wrapping cells: the table fits its column and never needs a scrollbar.
+    <div className="rounded-jar border border-brine-100 bg-white shadow-shelf">
+      <table className="w-full table-fixed border-collapse text-left text-sm [overflow-wrap:anywhere]">
+        <caption className="px-4 pt-3 pb-1 text-left font-display text-base text-brine-900">The batch and the published numbers</caption>
       <THead>
         <tr>
-          <TH>Item</TH>
+          <TH className="w-1/4 whitespace-normal">Item</TH>
           <TH>Learner entered</TH>
           <TH>Published for this batch</TH>
         </tr>
@@ -49,7 +52,7 @@ export function BatchDetails({ details, expected }: { details: PracticalDetails;
       <TBody>
         {rows.map((row) => (
           <TR key={row.label}>
-            <TH scope="row" className="font-semibold">
+            <TH scope="row" className="font-semibold whitespace-normal">
               {row.label}
             </TH>
             <TD className="whitespace-pre-wrap">{row.value}</TD>
@@ -66,6 +69,7 @@ export function BatchDetails({ details, expected }: { details: PracticalDetails;
           </tr>
         </tfoot>
       ) : null}
-    </Table>
+      </table>
+    </div>
   );
 }
