@@ -224,4 +224,14 @@ describe('GET /api/attempts/[id]', () => {
     expect((await getReq(0)).status).toBe(400);
     expect((await getReq(424242)).status).toBe(404);
   });
+
+  it('an attempt row without a draw or grade (seeded history) reads as 200 with no result, not 500', async () => {
+    const row = await db().QuizAttempt.create({ userId: learner.id, courseId: courses.flagship.id, quizSlug: LESSON_QUIZ, drawn: '[]', answers: {}, scorePct: 100, passed: true, startedAt: new Date(), submittedAt: new Date() });
+    actAs(learner);
+    const response = await getReq(row.id);
+    expect(response.status).toBe(200);
+    const body = await response.json();
+    expect(body.attempt.questions).toEqual([]);
+    expect(body.attempt.result).toBeUndefined();
+  });
 });
