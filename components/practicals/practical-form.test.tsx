@@ -1,0 +1,98 @@
+import { act, render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { PhotoUploader } from './photo-uploader';
+import { PracticalForm } from './practical-form';
+
+vi.mock('next/navigation', () => ({ useRouter: () => ({ refresh: vi.fn(), push: vi.fn() }) }));
+
+// A stand-in XMLHttpRequest: each send() waits until the test answers it.
+type Pending = { xhr: FakeXhr; body: FormData };
+const pending: Pending[] = [];
+class FakeXhr {
+  status = 0;
+  response: unknown = null;
+  responseType = '';
+  upload: { onprogress: ((e: { lengthComputable: boolean; loaded: number; total: number }) => void) | null } = { onprogress: null };
+  onload: (() => void) | null = null;
+  onerror: (() => void) | null = null;
+  open() {}
+  send(body: FormData) {
+    pending.push({ xhr: this, body });
+  }
+  answer(status: number, response: unknown) {
+    this.upload.onprogress?.({ lengthComputable: true, loaded: 100, total: 100 });
+    this.status = status;
+    this.response = response;
+    this.onload?.();
+  }
+}
+
+beforeEach(() => {
+  pending.length = 0;
+  vi.stubGlobal('XMLHttpRequest', FakeXhr);
+});
+
+const jpeg = (name: string) => new File([new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3])], name, { type: 'image/jpeg' });
+
+describe('PhotoUploader', () => {
+  it('uploads each photo on its own, shows progress, and retries a failed one alone', async () => {
+    const user = userEvent.setup();
+    const onChange = vi.fn();
+    render(<PhotoUploader courseSlug="pickling-and-canning" onChange={onChange} />);
+    await user.upload(screen.getByLabelText(/^Photos/), [jpeg('before.jpg'), jpeg('lid.jpg')]);
+    expect(pending).toHaveLength(2);
+    expect(pending[0].body.get('course')).toBe('pickling-and-canning');
+    expect(screen.getByLabelText('Uploading before.jpg')).toBeInTheDocument();
+
+    act(() => pending[0].xhr.answer(201, { photo: { id: 11, thumbnailUrl: '/api/photos/11?size=thumb', width: 10, height: 10 } }));
+    act(() => pending[1].xhr.answer(415, { message: 'That file is not a JPEG, PNG or WebP photo.' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('not a JPEG, PNG or WebP photo');
+    expect(onChange).toHaveBeenLastCalledWith([11]);
+
+    await user.click(screen.getByRole('button', { name: 'Retry lid.jpg' }));
+    expect(pending).toHaveLength(3);
+    expect((pending[2].body.get('photo') as File).name).toBe('lid.jpg');
+    act(() => pending[2].xhr.answer(201, { photo: { id: 12, thumbnailUrl: '/api/photos/12?size=thumb', width: 10, height: 10 } }));
+    await waitFor(() => expect(onChange).toHaveBeenLastCalledWith([11, 12]));
+    expect(screen.getAllByText('Uploaded')).toHaveLength(2);
+    expect(screen.queryByRole('alert')).toBeNull();
+  });
+});
+
+describe('PracticalForm', () => {
+  it('shows the flag for a too-short process time as the learner types, and keeps what was typed when a photo fails', async () => {
+    const user = userEvent.setup();
+    render(<PracticalForm courseSlug="pickling-and-canning" round={1} />);
+    const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });
+    expect(within(live).getByText(/No flags/)).toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Product'), 'fresh-pack-dill-pickles');
+    await user.selectOptions(screen.getByLabelText('Jar size'), 'quart');
+    await user.selectOptions(screen.getByLabelText('Processing method'), 'boiling-water');
+    await user.type(screen.getByLabelText('Altitude'), '7000');
+    await user.type(screen.getByLabelText('Minutes processed'), '20');
+    // USDA Guide 6, quick fresh-pack dills: quarts 25 min above 6,000 ft.
+    expect(await within(live).findByText(/Processed 20 min, shorter than the published 25 min for a quart/)).toBeInTheDocument();
+    await user.clear(screen.getByLabelText('Minutes processed'));
+    await user.type(screen.getByLabelText('Minutes processed'), '25');
+    await waitFor(() => expect(within(live).queryByText(/shorter than the published/)).toBeNull());
+
+    await user.upload(screen.getByLabelText(/^Photos/), [jpeg('a.jpg')]);
+    act(() => pending[0].xhr.answer(500, { message: 'Something went wrong on our side.' }));
+    await screen.findByRole('button', { name: 'Retry a.jpg' });
+    expect(screen.getByLabelText('Altitude')).toHaveValue(7000);
+    expect(screen.getByLabelText('Product')).toHaveValue('fresh-pack-dill-pickles');
+  });
+
+  it('names what is missing on submit and sends nothing', async () => {
+    const user = userEvent.setup();
+    const fetchSpy = vi.fn();
+    vi.stubGlobal('fetch', fetchSpy);
+    render(<PracticalForm courseSlug="pickling-and-canning" round={1} />);
+    await user.click(screen.getByRole('button', { name: 'Submit round 1 for review' }));
+    expect(await screen.findByText('Name the tested recipe you followed.')).toBeInTheDocument();
+    expect(screen.getByText(/Add at least 2 photos/)).toBeInTheDocument();
+    expect(screen.getByLabelText('Tested recipe followed')).toHaveAttribute('aria-invalid', 'true');
+    expect(fetchSpy).not.toHaveBeenCalled();
+  });
+});
