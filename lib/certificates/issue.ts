@@ -5,7 +5,9 @@ import { enqueueEmail } from '@/lib/email/outbox';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { db } from '@/models';
-import { certificateIssuedEmail, certificateRevokedEmail } from './email';
+import { certificateIssuedEmail } from '@/lib/email/templates';
+import { transitionEnrollment } from '@/lib/enrollment/state';
+import { certificateRevokedEmail } from './email';
 import type { RequirementKey } from './eligibility';
 import { loadStandings } from './facts';
 import { renderCertificatePdf } from './pdf';
@@ -37,7 +39,7 @@ async function existing(enrollmentId: number, transaction?: Transaction) {
  * queue the learner's e-mail with the PDF attached. A second call answers 'exists'.
  */
 export async function issueCertificate(enrollmentId: number, actorId: number | null, options: { now?: Date } = {}): Promise<IssueOutcome> {
-  const { sequelize, Certificate, Enrollment } = db();
+  const { sequelize, Certificate } = db();
   const env = getEnv();
   for (let attempt = 0; attempt < 3; attempt++) {
     try {
@@ -61,9 +63,8 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
           { enrollmentId, userId: row.userId, issuedById: actorId, serial, issuedAt: now, validUntil },
           { transaction },
         );
-        if (row.status === 'active') {
-          await Enrollment.update({ status: 'completed', completedAt: now }, { where: { id: enrollmentId, status: 'active' }, transaction });
-        }
+        // Through the one state machine (it audits the move as well).
+        if (row.status === 'active') await transitionEnrollment(enrollmentId, 'completed', { transaction, actorId, reason: 'certificate', data: { serial } });
         await audit(
           { actorId, action: 'certificate.issued', subjectType: 'certificate', subjectId: certificate.id, data: { enrollmentId, serial, validUntil: validUntil.toISOString() } },
           { transaction },
@@ -80,13 +81,12 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
         await enqueueEmail(
           certificateIssuedEmail({
             to: row.learnerEmail,
-            learnerName: row.learnerName,
+            name: row.learnerName,
             courseTitle: row.courseTitle,
-            programName: env.CERTIFICATE_PROGRAM_NAME,
             serial,
             validUntil,
             verifyUrl: verificationUrl(env.APP_URL, serial),
-            pdf,
+            pdf: { filename: `certificate-${serial}.pdf`, contentType: 'application/pdf', contentBase64: Buffer.from(pdf).toString('base64') },
           }),
           { transaction },
         );

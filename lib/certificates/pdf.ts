@@ -18,7 +18,8 @@ export type CertificatePdfInput = {
 // The package's types name its exports, its ES build has only a default export: accept both.
 const fontkit = ((fontkitModule as unknown as { default?: typeof fontkitModule }).default ?? fontkitModule) as typeof fontkitModule;
 
-type FontFace = { bytes: Buffer; covers: (codePoint: number) => boolean };
+type FontkitFont = ReturnType<typeof fontkit.create>;
+type FontFace = { bytes: Buffer; font: FontkitFont; covers: (codePoint: number) => boolean };
 type FontSet = { regular: FontFace[]; bold: FontFace[] };
 
 let fonts: FontSet | undefined;
@@ -30,7 +31,21 @@ function fontDir(): string {
 function loadFace(file: string): FontFace {
   const bytes = woffToSfnt(fs.readFileSync(path.join(fontDir(), file)));
   const font = fontkit.create(bytes);
-  return { bytes, covers: (cp) => font.hasGlyphForCodePoint(cp) };
+  // Text shaping (GSUB/GPOS lookups) is the next largest cost, and most lines of a certificate are
+  // the same on every one: remember the last few hundred layouts. Glyph runs are only read.
+  const layout = font.layout.bind(font);
+  const memo = new Map<string, ReturnType<typeof layout>>();
+  font.layout = ((text: string, features?: Parameters<typeof layout>[1]) => {
+    const key = features ? `${JSON.stringify(features)}\u0000${text}` : text;
+    let run = memo.get(key);
+    if (!run) {
+      run = layout(text, features);
+      if (memo.size >= 500) memo.delete(memo.keys().next().value!);
+      memo.set(key, run);
+    }
+    return run;
+  }) as typeof font.layout;
+  return { bytes, font, covers: (cp) => font.hasGlyphForCodePoint(cp) };
 }
 
 /** Merriweather 400 and 700, the latin subset first and latin-ext for names it does not cover. */
@@ -41,6 +56,18 @@ function fontSet(): FontSet {
   };
   return fonts;
 }
+
+/**
+ * pdf-lib asks fontkit to parse the font file again for every document, which is most of the time
+ * a certificate takes. This fontkit hands back the font already parsed for the same bytes (the
+ * parsed font is only read: pdf-lib makes a new subset of it per document).
+ */
+const cachingFontkit = {
+  create(data: Uint8Array, postscriptName?: string): FontkitFont {
+    const face = [...fontSet().regular, ...fontSet().bold].find((f) => f.bytes.length === data.length && Buffer.compare(f.bytes, Buffer.from(data.buffer, data.byteOffset, data.byteLength)) === 0);
+    return face ? face.font : fontkit.create(data, postscriptName);
+  },
+};
 
 const formatDate = (date: Date) => new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeZone: 'UTC' }).format(date);
 
@@ -75,7 +102,7 @@ function drawQr(page: PDFPage, matrix: boolean[][], at: { x: number; y: number; 
  */
 export async function renderCertificatePdf(input: CertificatePdfInput): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
-  doc.registerFontkit(fontkit);
+  doc.registerFontkit(cachingFontkit);
   doc.setTitle(`Certificate ${input.serial}`);
   doc.setSubject(`${input.courseTitle}: ${input.learnerName}`);
   doc.setProducer('Brinewright');
@@ -102,9 +129,10 @@ export async function renderCertificatePdf(input: CertificatePdfInput): Promise<
 
   const centred = async (faces: FontFace[], raw: string, y: number, size: number, color = INK, maxWidth = width - 140) => {
     const { font, text } = await pick(faces, raw);
-    let s = size;
-    while (s > 8 && font.widthOfTextAtSize(text, s) > maxWidth) s -= 1;
-    page.drawText(text, { x: (width - font.widthOfTextAtSize(text, s)) / 2, y, size: s, font, color });
+    // Widths scale with the size: measure once, shrink a long name to fit, centre it.
+    const unitWidth = font.widthOfTextAtSize(text, 1);
+    const s = Math.max(8, Math.min(size, Math.floor(maxWidth / unitWidth)));
+    page.drawText(text, { x: (width - unitWidth * s) / 2, y, size: s, font, color });
   };
 
   await centred(set.regular, input.programName, height - 92, 14, BRINE);
