@@ -25,10 +25,10 @@ describe('the Brine bench in the browser', () => {
     // Processing time: quick fresh-pack dill quarts at 7,000 ft → 25 minutes (USDA Complete Guide to
     // Home Canning, rev. 2015, Guide 6 table: 15 / 20 / 25).
     const processing = page.locator('#processing-time');
-    await processing.getByLabel('Jar size').selectOption('quart');
-    await processing.getByLabel('Altitude').fill('7000');
+    await processing.getByLabel('Jar size', { exact: true }).selectOption('quart');
+    await processing.getByLabel('Altitude', { exact: true }).fill('7000');
     await expect.poll(() => processing.getByTestId('processing-minutes').textContent()).toContain('25 minutes');
-    await processing.getByLabel('Altitude').fill('12000');
+    await processing.getByLabel('Altitude', { exact: true }).fill('12000');
     await expect.poll(() => processing.getByRole('status').textContent()).toContain('local extension office');
 
     // Brine acidity, typed with the keyboard: 1 L of 5 % vinegar alone → 5 g per 100 mL, pH 2.42 (computed).
