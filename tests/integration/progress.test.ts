@@ -5,10 +5,10 @@ import { POST as submit } from '@/app/api/attempts/[id]/submit/route';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getLesson } from '@/lib/content';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
+import { createCourses, createUser } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
 import { actAs } from '../helpers/session';
-import { answersFor, enroll } from './quiz-support';
+import { answersFor, enroll, freshLearner } from './quiz-support';
 
 let courses: Awaited<ReturnType<typeof createCourses>>;
 let learner: Awaited<ReturnType<typeof createUser>>;
@@ -17,11 +17,7 @@ const progressOf = (course: string) => getProgress(new Request(`http://localhost
 const shelves = async () => (await (await pantry(new Request('http://localhost/api/pantry'), {})).json()).shelves;
 
 beforeEach(async () => {
-  await resetDatabase();
-  actAs(null);
-  courses = await createCourses();
-  learner = await createUser('learner');
-  await enroll(learner.id, courses.flagship.id);
+  ({ courses, learner } = await freshLearner());
 });
 
 describe('POST /api/progress', () => {

@@ -2,6 +2,8 @@ import { QueryTypes } from 'sequelize';
 import { getBank } from '@/lib/quiz/bank';
 import { rightAnswer, type Answers, type Drawn } from '@/lib/quiz/grading';
 import { db } from '@/models';
+import { createCourses, createUser, resetDatabase } from '../helpers/db';
+import { actAs } from '../helpers/session';
 
 /** Enrolls a user in a course with the given status; returns the enrollment. */
 export async function enroll(userId: number, courseId: number, status: 'active' | 'completed' | 'awaiting_payment' | 'withdrawn' = 'active', workshopId: number | null = null) {
@@ -34,4 +36,14 @@ export async function answersFor(attemptId: number, { wrong = 0 } = {}): Promise
     else answers[q.id] = { value: spoil ? (right.value as number) + 1000 : (right.value as number), unit: right.unit! };
   });
   return answers;
+}
+
+/** A clean database with both courses and one learner enrolled (active) in the flagship; nobody signed in. */
+export async function freshLearner() {
+  await resetDatabase();
+  actAs(null);
+  const courses = await createCourses();
+  const learner = await createUser('learner');
+  await enroll(learner.id, courses.flagship.id);
+  return { courses, learner };
 }

@@ -4,10 +4,10 @@ import { POST as submit } from '@/app/api/attempts/[id]/submit/route';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getBank } from '@/lib/quiz/bank';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
+import { createCourses, createUser } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
 import { actAs } from '../helpers/session';
-import { answersFor, drawnOf, enroll } from './quiz-support';
+import { answersFor, drawnOf, enroll, freshLearner } from './quiz-support';
 
 const LESSON_QUIZ = 'pickling-and-canning--acidity';
 const EXAM = 'pickling-and-canning--final-exam';
@@ -20,11 +20,7 @@ let courses: Awaited<ReturnType<typeof createCourses>>;
 let learner: Awaited<ReturnType<typeof createUser>>;
 
 beforeEach(async () => {
-  await resetDatabase();
-  actAs(null);
-  courses = await createCourses();
-  learner = await createUser('learner');
-  await enroll(learner.id, courses.flagship.id);
+  ({ courses, learner } = await freshLearner());
 });
 
 async function startAs(user: typeof learner, quiz = LESSON_QUIZ) {
