@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { DemoMailboxLink } from '@/components/enrollment/demo-mailbox-link';
 
 export function SiteFooter() {
   return (
@@ -19,6 +20,7 @@ export function SiteFooter() {
           <Link href="/courses">Courses</Link>
           <Link href="/bench">Brine bench</Link>
           <Link href="/verify">Verify a certificate</Link>
+          <DemoMailboxLink />
         </nav>
       </div>
     </footer>

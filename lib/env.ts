@@ -74,3 +74,9 @@ export function getEnv(): Env {
   cached ??= parseEnv(process.env);
   return cached;
 }
+
+/** The local mailbox page of the demo's fake SMTP server, when one runs; read alone so a page can link it without the rest of the configuration. */
+export function mailboxUrl(source: Record<string, string | undefined> = process.env): string | null {
+  const result = z.url().safeParse(source.MAILBOX_URL);
+  return result.success ? result.data : null;
+}
