@@ -36,7 +36,7 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
             <p className="text-sm">
               Steam inside at that pressure: about {fmt(r.steam.fahrenheit, 1)} °F ({fmt(r.steam.celsius, 1)} °C).
             </p>
-            {r.confidence === 'memory' ? <p className="text-sm font-medium text-honey-700">This row is from memory and not confirmed here: check your tested recipe.</p> : null}
+            {r.confidence !== 'verified' ? <p className="text-sm font-medium text-honey-700">The USDA tables stop at 8,000 ft for dial gauges: check your tested recipe and your local extension office.</p> : null}
             <p className="text-xs text-ink-soft">Source: {r.source}</p>
           </div>
         ) : (

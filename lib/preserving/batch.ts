@@ -77,7 +77,7 @@ export const RECIPES: Record<ProductId, Recipe> = {
   'pickled-beets': {
     yieldPints: 8,
     produceLb: 7,
-    source: `${G6}, "Pickled beets" (7 lb beets, about 8 pints; recipe from memory, not confirmed here)`,
+    source: `${G6}, "Pickled beets" (7 lb beets, about 8 pints)`,
     ingredients: [
       { name: 'beets, 2 to 2 1/2 inch across', amount: 7, unit: 'lb' },
       { name: 'vinegar (5% acidity)', amount: 4, unit: 'cup', brine: true },

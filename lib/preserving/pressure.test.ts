@@ -19,11 +19,11 @@ describe('pressureForAltitude', () => {
     expect([6001, 7000, 8000].map(at)).toEqual([14, 14, 14]);
   });
 
-  it('labels the 8,001–10,000 ft dial row (15 lb) as from memory', () => {
+  it('labels the 8,001–10,000 ft dial row (15 lb; a jar maker’s altitude chart, secondary) as outside the USDA tables', () => {
     const r = pressureForAltitude({ gauge: 'dial', altitudeFt: 9000 });
     expect(r.pounds).toBe(15);
-    expect(r.confidence).toBe('memory');
-    expect(r.source).toContain('from memory');
+    expect(r.confidence).toBe('secondary');
+    expect(r.source).toContain('not in the USDA tables');
     expect(r.altitudeBand).toEqual({ fromFt: 8001, toFt: 10000 });
     expect(pressureForAltitude({ gauge: 'dial', altitudeFt: 100 }).confidence).toBe('verified');
   });

@@ -30,8 +30,6 @@ const PUBLISHED: [string, string, [number, number, number], string][] = [
   ['pickle-relish', 'half-pint', [10, 15, 20], 'Guide 6, Pickle relish, table ("half-pints or pints")'],
   ['pickle-relish', 'pint', [10, 15, 20], 'Guide 6, Pickle relish, table'],
   ['dilly-beans', 'pint', [5, 10, 15], 'Guide 6, Pickled dilly beans, table (secondary page quoting NCHFP)'],
-  ['pickled-beets', 'pint', [30, 35, 40], 'Guide 6, Pickled beets, table (FROM MEMORY, unconfirmed)'],
-  ['pickled-beets', 'quart', [30, 35, 40], 'Guide 6, Pickled beets, table (FROM MEMORY, unconfirmed)'],
   ['pickled-hot-peppers', 'half-pint', [10, 15, 20], 'Guide 6, Pickled hot peppers, table (raw pack)'],
   ['pickled-hot-peppers', 'pint', [10, 15, 20], 'Guide 6, Pickled hot peppers, table (raw pack)'],
   ['fermented-dill-pickles', 'pint', [10, 15, 20], 'Guide 6, Dill pickles (fermented), table'],
@@ -56,6 +54,24 @@ describe('processingTime', () => {
       }
     });
   }
+
+  it('pickled beets, pints and quarts: 30 / 35 / 40 / 45 min on the four-band table (Guide 6, Pickled beets, table; two reproductions, one misprinting the 1,001–3,000 ft cell)', () => {
+    const four: [number, number, { fromFt: number; toFt: number }][] = [
+      [0, 30, { fromFt: 0, toFt: 1000 }],
+      [1000, 30, { fromFt: 0, toFt: 1000 }],
+      [1001, 35, { fromFt: 1001, toFt: 3000 }],
+      [3000, 35, { fromFt: 1001, toFt: 3000 }],
+      [3001, 40, { fromFt: 3001, toFt: 6000 }],
+      [6000, 40, { fromFt: 3001, toFt: 6000 }],
+      [6001, 45, { fromFt: 6001, toFt: 10000 }],
+      [10000, 45, { fromFt: 6001, toFt: 10000 }],
+    ];
+    for (const jar of ['pint', 'quart']) {
+      for (const [altitudeFt, minutes, altitudeBand] of four) {
+        expect(processingTime({ product: 'pickled-beets', jar, altitudeFt }), `${jar} at ${altitudeFt} ft`).toMatchObject({ minutes, altitudeBand });
+      }
+    }
+  });
 
   it('gives the low-temperature pasteurization option (180–185 °F for 30 min) where the guide allows it', () => {
     // USDA Complete Guide, rev. 2015, Guide 6, "Low-temperature pasteurization treatment".

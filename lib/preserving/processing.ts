@@ -12,27 +12,26 @@ export type ProcessingTimeResult = {
   lowTemperaturePasteurization?: { waterTempF: [180, 185]; minutes: 30 };
 };
 
-/** Index of the Guide 6 altitude band; above 1,000 ft (even by a fraction) is the next band. */
-export function altitudeBandIndex(altitudeFt: number): 0 | 1 | 2 {
+/** Index of the altitude band in a table; a fraction of a foot above a band's top is the next band. */
+export function altitudeBandIndex(altitudeFt: number, bands: readonly AltitudeBand[] = ALTITUDE_BANDS): number {
   checkNumber(altitudeFt, ALTITUDE_RULE);
   if (altitudeFt > MAX_TABLE_ALTITUDE_FT) {
     throw outsideTable(`The published processing tables go up to ${MAX_TABLE_ALTITUDE_FT.toLocaleString('en-US')} ft; ${altitudeFt.toLocaleString('en-US')} ft is above them.`, 'altitudeFt');
   }
-  if (altitudeFt <= ALTITUDE_BANDS[0].toFt) return 0;
-  if (altitudeFt <= ALTITUDE_BANDS[1].toFt) return 1;
-  return 2;
+  const index = bands.findIndex((band) => altitudeFt <= (band.toFt ?? MAX_TABLE_ALTITUDE_FT));
+  return index === -1 ? bands.length - 1 : index;
 }
 
 /** Boiling-water processing minutes for a product, jar size and altitude, from its Guide 6 table. */
 export function processingTime({ product, jar, altitudeFt }: ProcessingTimeInput): ProcessingTimeResult {
   const found = getProduct(product);
   const size = checkChoice(jar, JAR_SIZES, 'jar', 'a jar size');
-  const band = altitudeBandIndex(altitudeFt);
+  const band = altitudeBandIndex(altitudeFt, found.bands);
   const row = found.times[size];
   if (!row) {
     throw outsideTable(`The published table for ${found.name.toLowerCase()} gives ${found.jars.join(' and ')} jars only, not ${size} jars.`, 'jar');
   }
-  const { fromFt, toFt } = ALTITUDE_BANDS[band];
+  const { fromFt, toFt } = found.bands[band];
   return {
     minutes: row[band],
     method: 'boiling-water',

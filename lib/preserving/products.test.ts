@@ -21,10 +21,10 @@ describe('products', () => {
       const product = PRODUCTS[id];
       expect(Object.keys(product.times).sort()).toEqual([...product.jars].sort());
       for (const jar of product.jars) {
-        const [low, mid, high] = product.times[jar]!;
-        // USDA Guide 6 pickle tables add 5 minutes per band (0–1,000; 1,001–6,000; above 6,000 ft).
-        expect(mid - low).toBe(5);
-        expect(high - mid).toBe(5);
+        const row = product.times[jar]!;
+        expect(row.length).toBe(product.bands.length);
+        // USDA Guide 6 pickle tables add 5 minutes per altitude band.
+        for (let i = 1; i < row.length; i++) expect(row[i] - row[i - 1]).toBe(5);
       }
       expect(product.source).toMatch(/Complete Guide to Home Canning|So Easy to Preserve/);
     }
@@ -38,16 +38,15 @@ describe('products', () => {
       'bread-and-butter-pickles': ['hot', 0.5],
       'pickle-relish': ['hot', 0.5],
       'dilly-beans': ['raw', 0.5],
-      'pickled-beets': ['hot', 0.5], // from memory, unconfirmed
+      'pickled-beets': ['hot', 0.5],
       'pickled-hot-peppers': ['raw', 0.5],
       'fermented-dill-pickles': ['raw', 0.5],
     });
   });
 
-  it('labels the rows that could not be confirmed as from memory', () => {
-    expect(PRODUCTS['pickled-beets'].confidence).toBe('memory');
-    expect(PRODUCTS['pickled-beets'].source).toContain('from memory');
-    expect(PRODUCTS['dilly-beans'].confidence).toBe('secondary');
+  it('labels the rows checked only on secondary pages, and uses the four-band table for beets', () => {
+    expect(PRODUCT_IDS.filter((id) => PRODUCTS[id].confidence !== 'verified')).toEqual(['dilly-beans', 'pickled-beets']);
+    expect(PRODUCTS['pickled-beets'].bands.map((b) => b.fromFt)).toEqual([0, 1001, 3001, 6001]);
   });
 
   it('allows low-temperature pasteurization only for the cucumber pickles the guide allows it for', () => {

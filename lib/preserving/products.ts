@@ -28,18 +28,26 @@ export type JarSize = (typeof JAR_SIZES)[number];
 
 export const JAR_LABELS: Record<JarSize, string> = { 'half-pint': 'half-pint (8 fl oz, 237 mL)', pint: 'pint (16 fl oz, 473 mL)', quart: 'quart (32 fl oz, 946 mL)' };
 
-/** The three altitude bands of the Guide 6 pickle tables. The top band is "above 6,000 ft"; the
+export type AltitudeBand = { fromFt: number; toFt: number | null };
+
+/** The three altitude bands of most Guide 6 pickle tables. The top band is "above 6,000 ft"; the
  * guide's altitude advice stops at 10,000 ft, so Brinewright answers nothing above that. */
-export const ALTITUDE_BANDS = [
+export const ALTITUDE_BANDS: readonly AltitudeBand[] = [
   { fromFt: 0, toFt: 1000 },
   { fromFt: 1001, toFt: 6000 },
   { fromFt: 6001, toFt: 10000 },
-] as const;
+];
+/** The four bands some Guide 6 tables use (pickled beets): 0–1,000; 1,001–3,000; 3,001–6,000; above 6,000 ft. */
+export const FOUR_ALTITUDE_BANDS: readonly AltitudeBand[] = [
+  { fromFt: 0, toFt: 1000 },
+  { fromFt: 1001, toFt: 3000 },
+  { fromFt: 3001, toFt: 6000 },
+  { fromFt: 6001, toFt: 10000 },
+];
 export const MAX_TABLE_ALTITUDE_FT = 10000;
 
-export type AltitudeBand = { fromFt: number; toFt: number | null };
-/** Minutes for the three bands in order (0–1,000 ft; 1,001–6,000 ft; above 6,000 ft). */
-export type BandMinutes = readonly [number, number, number];
+/** Minutes for the product's bands in order, lowest altitude first. */
+export type BandMinutes = readonly number[];
 
 export type Confidence = 'verified' | 'secondary' | 'memory';
 
@@ -49,7 +57,9 @@ export type Product = {
   pack: 'raw' | 'hot';
   jars: readonly JarSize[];
   headspaceIn: number;
-  /** Boiling-water minutes per jar size by altitude band. */
+  /** The altitude bands of the product's table. */
+  bands: readonly AltitudeBand[];
+  /** Boiling-water minutes per jar size, one per band. */
   times: Partial<Record<JarSize, BandMinutes>>;
   source: string;
   confidence: Confidence;
@@ -66,6 +76,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'raw',
     jars: ['pint', 'quart'],
     headspaceIn: 0.5,
+    bands: ALTITUDE_BANDS,
     times: { pint: [10, 15, 20], quart: [15, 20, 25] },
     source: `${GUIDE6}, "Quick fresh-pack dill pickles", recommended process time table`,
     confidence: 'verified',
@@ -77,6 +88,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'hot',
     jars: ['pint', 'quart'],
     headspaceIn: 0.5,
+    bands: ALTITUDE_BANDS,
     times: { pint: [10, 15, 20], quart: [10, 15, 20] },
     source: `${GUIDE6}, "Bread-and-butter pickles", recommended process time table`,
     confidence: 'verified',
@@ -88,6 +100,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'hot',
     jars: ['half-pint', 'pint'],
     headspaceIn: 0.5,
+    bands: ALTITUDE_BANDS,
     times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
     source: `${GUIDE6}, "Pickle relish", recommended process time table`,
     confidence: 'verified',
@@ -98,6 +111,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'raw',
     jars: ['pint'],
     headspaceIn: 0.5,
+    bands: ALTITUDE_BANDS,
     times: { pint: [5, 10, 15] },
     source: `${GUIDE6}, "Pickled dilly beans", recommended process time table`,
     confidence: 'secondary',
@@ -108,9 +122,12 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'hot',
     jars: ['pint', 'quart'],
     headspaceIn: 0.5,
-    times: { pint: [30, 35, 40], quart: [30, 35, 40] },
-    source: `${GUIDE6}, "Pickled beets", recommended process time table (from memory, not confirmed here)`,
-    confidence: 'memory',
+    bands: FOUR_ALTITUDE_BANDS,
+    times: { pint: [30, 35, 40, 45], quart: [30, 35, 40, 45] },
+    // Two reproductions of the table were read: both give 30 / 40 / 45; one gives 35 at
+    // 1,001–3,000 ft, the other prints 45 there, out of order with the rest (a misprint, taken as 35).
+    source: `${GUIDE6}, "Pickled beets", recommended process time table (four altitude bands)`,
+    confidence: 'secondary',
   },
   'pickled-hot-peppers': {
     id: 'pickled-hot-peppers',
@@ -118,6 +135,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'raw',
     jars: ['half-pint', 'pint'],
     headspaceIn: 0.5,
+    bands: ALTITUDE_BANDS,
     times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
     source: `${GUIDE6}, "Pickled hot peppers", recommended process time table`,
     confidence: 'verified',
@@ -128,6 +146,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     pack: 'raw',
     jars: ['pint', 'quart'],
     headspaceIn: 0.5,
+    bands: ALTITUDE_BANDS,
     times: { pint: [10, 15, 20], quart: [15, 20, 25] },
     source: `${GUIDE6}, "Dill pickles" (fermented), recommended process time table`,
     confidence: 'verified',
