@@ -26,7 +26,7 @@ export function QuestionResultsTable({ stats }: { stats: QuestionStat[] }) {
     });
   }, [stats, sort]);
 
-  const toggle = (key: Key) => setSort((s) => (s.key === key ? { key, dir: s.dir === 'asc' ? 'desc' : 'asc' } : { key, dir: COLUMNS.find((c) => c.key === key)?.numeric ? 'asc' : 'asc' }));
+  const toggle = (key: Key) => setSort((s) => (s.key === key ? { key, dir: s.dir === 'asc' ? 'desc' : 'asc' } : { key, dir: 'asc' }));
 
   return (
     <Table caption="How each question was answered" data-testid="question-results">

@@ -1,6 +1,7 @@
 import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { findActiveEnrollment } from '@/lib/access';
+import { getCourse } from '@/lib/content';
 import type { SessionUser } from '@/lib/auth/users';
 import { AppError } from '@/lib/errors';
 import { roleAllows } from '@/lib/roles';
@@ -81,9 +82,14 @@ function requireBank(quizSlug: string): Bank {
 }
 
 async function courseFor(slug: string, transaction?: Transaction) {
-  const course = await db().Course.findOne({ where: { slug }, attributes: ['id', 'slug', 'passMarkPct'], transaction });
+  const course = await db().Course.findOne({ where: { slug }, attributes: ['id'], transaction });
   if (!course) throw new AppError('not_found', 'The course of this quiz is not in the catalog.');
   return course;
+}
+
+/** The pass mark from the course's front matter (default 80 %). */
+export function passMarkFor(courseSlug: string): number {
+  return getCourse(courseSlug)?.passMarkPct ?? 80;
 }
 
 function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: boolean): AttemptView {
@@ -144,7 +150,7 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
           AND (deadlineAt IS NULL OR deadlineAt > :now) ORDER BY startedAt DESC LIMIT 1`,
       { replacements: { userId: user.id, quizSlug, now }, type: QueryTypes.SELECT, transaction },
     );
-    if (open[0]) return { attempt: view(open[0], bank, course.passMarkPct, false), created: false };
+    if (open[0]) return { attempt: view(open[0], bank, passMarkFor(bank.course), false), created: false };
 
     if (bank.attemptLimit) {
       const since = new Date(now.getTime() - bank.attemptLimit.windowHours * 3_600_000);
@@ -170,7 +176,7 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
       { transaction },
     );
     const plain = row.get({ plain: true }) as unknown as AttemptRow;
-    return { attempt: view(plain, bank, course.passMarkPct, false), created: true };
+    return { attempt: view(plain, bank, passMarkFor(bank.course), false), created: true };
   });
 }
 
@@ -193,8 +199,7 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
     if (!row) throw new AppError('not_found', 'There is no such attempt.');
     if (row.userId !== user.id) throw new AppError('forbidden', 'This attempt belongs to another learner.');
     const bank = requireBank(row.quizSlug);
-    const course = await db().Course.findByPk(row.courseId, { attributes: ['id', 'passMarkPct'], transaction });
-    const passMarkPct = course?.passMarkPct ?? 80;
+    const passMarkPct = passMarkFor(bank.course);
     if (row.submittedAt) return { row, bank, passMarkPct, graded: false, late: false };
 
     const drawn = drawnOf(row.drawn);
@@ -209,7 +214,11 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
       transaction,
     });
     if (grade.results.length) {
-      const enrollment = await findActiveEnrollment(row.userId, bank.course);
+      // The workshop the answers count towards: that of the learner's current enrollment in the course.
+      const [enrollment] = await sequelize.query<{ workshopId: number | null }>(
+        "SELECT workshopId FROM enrollments WHERE userId = :userId AND courseId = :courseId AND status IN ('active', 'completed') ORDER BY createdAt DESC LIMIT 1",
+        { replacements: { userId: row.userId, courseId: row.courseId }, type: QueryTypes.SELECT, transaction },
+      );
       const workshopId = enrollment?.workshopId ?? null;
       const values: string[] = [];
       const replacements: unknown[] = [];
@@ -242,6 +251,5 @@ export async function readAttempt(user: SessionUser, attemptId: number): Promise
   const staff = roleAllows(user.role, ['instructor']);
   if (row.userId !== user.id && !staff) throw new AppError('forbidden', 'This attempt belongs to another learner.');
   const bank = requireBank(row.quizSlug);
-  const course = await db().Course.findByPk(row.courseId, { attributes: ['passMarkPct'] });
-  return view(row, bank, course?.passMarkPct ?? 80, true);
+  return view(row, bank, passMarkFor(bank.course), true);
 }
