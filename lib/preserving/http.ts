@@ -9,26 +9,20 @@ import { PreservingError, checkChoice, parseNumber, type NumberRule } from './er
 
 /** A numeric query parameter, parsed with the same rule (and message) the components use. */
 export function numberParam(rule: NumberRule) {
-  return z
-    .string()
-    .nullish()
-    .transform((raw, ctx) => {
-      try {
-        return parseNumber(raw, rule);
-      } catch (error) {
-        ctx.addIssue({ code: 'custom', message: (error as Error).message });
-        return z.NEVER;
-      }
-    });
+  return numeric(rule, false) as z.ZodType<number, string | null | undefined>;
 }
 
 /** An optional numeric query parameter: absent or empty means "not given". */
 export function optionalNumberParam(rule: NumberRule) {
+  return numeric(rule, true);
+}
+
+function numeric(rule: NumberRule, optional: boolean) {
   return z
     .string()
     .nullish()
-    .transform((raw, ctx) => {
-      if (raw === undefined || raw === null || raw.trim() === '') return undefined;
+    .transform((raw, ctx): number | undefined => {
+      if (optional && (raw === undefined || raw === null || raw.trim() === '')) return undefined;
       try {
         return parseNumber(raw, rule);
       } catch (error) {
