@@ -19,7 +19,7 @@ export FAKE_PAYMENTS_WEBHOOK_URL="${FAKE_PAYMENTS_WEBHOOK_URL:-http://127.0.0.1:
 "$ROOT/node_modules/.bin/tsx" scripts/migrate.ts up
 "$ROOT/node_modules/.bin/tsx" scripts/migrate.ts seed
 
-if [ "${SKIP_BUILD:-0}" != "1" ] || [ ! -f .next/BUILD_ID ]; then
+if [ "${SKIP_BUILD:-0}" != "1" ] || [ ! -f "${NEXT_DIST_DIR:-.next}/BUILD_ID" ]; then
   "$ROOT/node_modules/.bin/next" build
 fi
 

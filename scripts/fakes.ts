@@ -3,6 +3,7 @@
 // Ports and secrets come from the same variables the app reads (see lib/env.ts).
 import { startFakePayments } from '../fakes/payments/server';
 import { startFakeSmtp } from '../fakes/smtp/server';
+import { watchParent } from './watch-parent';
 
 async function main() {
   const appUrl = (process.env.APP_URL ?? 'http://localhost:3000').replace(/\/$/, '');
@@ -25,6 +26,7 @@ async function main() {
   };
   process.on('SIGTERM', stop);
   process.on('SIGINT', stop);
+  watchParent(stop);
 }
 
 main().catch((error) => {

@@ -6,12 +6,25 @@
 import { queueWorkshopReminders } from '../lib/email/reminders';
 import { outboxBacklog, sendDueEmails } from '../lib/email/sender';
 import { releaseStaleCheckouts } from '../lib/payments/reconcile';
+import { watchParent } from './watch-parent';
 
 const POLL_MS = Number(process.env.WORKER_POLL_MS ?? 1000);
 const REMINDER_EVERY_MS = Number(process.env.WORKER_REMINDER_MS ?? 5 * 60_000);
 const RECONCILE_EVERY_MS = Number(process.env.WORKER_RECONCILE_MS ?? 60_000);
 
 let stopping = false;
+// Sleeps end early when the worker is asked to stop, so it never lingers for a long interval.
+const sleepers = new Set<() => void>();
+const sleep = (ms: number) =>
+  new Promise<void>((resolve) => {
+    const done = () => {
+      clearTimeout(timer);
+      sleepers.delete(done);
+      resolve();
+    };
+    const timer = setTimeout(done, ms);
+    sleepers.add(done);
+  });
 const log = (line: string) => console.log(`[worker] ${new Date().toISOString()} ${line}`);
 
 async function every(ms: number, name: string, job: () => Promise<string | null>) {
@@ -22,7 +35,7 @@ async function every(ms: number, name: string, job: () => Promise<string | null>
     } catch (error) {
       log(`${name} failed: ${error instanceof Error ? error.message : String(error)}`);
     }
-    await new Promise((r) => setTimeout(r, ms));
+    if (!stopping) await sleep(ms);
   }
 }
 
@@ -52,9 +65,12 @@ const stop = () => {
   if (stopping) process.exit(0);
   stopping = true;
   log('stopping after the current round…');
+  for (const wake of [...sleepers]) wake();
 };
 process.on('SIGTERM', stop);
 process.on('SIGINT', stop);
+// Started by the browser tests with their own pid: if that process is gone, so is the reason to run.
+watchParent(stop);
 
 main().catch((error) => {
   console.error('[worker] fatal:', error);

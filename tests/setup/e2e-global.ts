@@ -68,6 +68,7 @@ export default async function setup() {
     FAKE_PAYMENTS_RETRY_MS: '500',
     WORKER_POLL_MS: '300',
     WORKER_BACKOFF_MS: '1000',
+    BRINEWRIGHT_PARENT_PID: String(process.pid),
   });
   const tsx = path.join(root, 'node_modules/.bin/tsx');
   process.once('exit', () => services.forEach((child) => child.kill('SIGTERM')));
