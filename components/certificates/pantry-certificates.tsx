@@ -2,7 +2,9 @@ import Link from 'next/link';
 import { Badge } from '@/components/ui/badge';
 import { ButtonLink, buttonClasses } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { claimableRefreshers } from '@/lib/certificates/issue';
 import { fetchLearnerCertificates, type LearnerCertificate } from '@/lib/certificates/lookup';
+import { ClaimRefresher } from './claim-refresher';
 import { REFRESHER_COURSE_SLUG, refresherDue } from '@/lib/certificates/validity';
 
 const formatDate = (d: Date) => new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeZone: 'UTC' }).format(d);
@@ -11,8 +13,8 @@ const LABEL = { valid: 'Valid', expired: 'Expired', revoked: 'Revoked' } as cons
 
 /** The learner's certificates in the Pantry: download, expiry, and the refresher when it is due. */
 export async function PantryCertificates({ userId, now = new Date() }: { userId: number; now?: Date }) {
-  const certificates = await fetchLearnerCertificates({ userId, now });
-  if (certificates.length === 0) return null;
+  const [certificates, claimable] = await Promise.all([fetchLearnerCertificates({ userId, now }), claimableRefreshers(userId)]);
+  if (certificates.length === 0 && claimable.length === 0) return null;
   // A newer certificate in the same line (the refresher) supersedes the offer on an older one.
   const latestValidUntil = Math.max(...certificates.filter((c) => !c.revokedAt).map((c) => c.validUntil.getTime()), 0);
   const offer = certificates.some((c) => refresherDue(c, now) && c.validUntil.getTime() === latestValidUntil);
@@ -21,7 +23,10 @@ export async function PantryCertificates({ userId, now = new Date() }: { userId:
       <h2 id="pantry-certificates" className="text-2xl font-bold">
         Your certificates
       </h2>
-      {offer ? <RefresherOffer expired={latestValidUntil < now.getTime()} /> : null}
+      {claimable.map((id) => (
+        <ClaimRefresher key={id} enrollmentId={id} />
+      ))}
+      {offer && claimable.length === 0 ? <RefresherOffer expired={latestValidUntil < now.getTime()} /> : null}
       <ul className="grid gap-4 md:grid-cols-2">
         {certificates.map((c) => (
           <li key={c.id}>

@@ -4,7 +4,7 @@ import { REFRESHER_COURSE_SLUG } from './validity';
 /**
  * What each course requires for its certificate, from the course contract shared by the project
  * (lesson slugs in order, quiz slug per lesson `<course>--<lesson>`, the flagship's final exam and
- * the refresher's single quiz). `requirementsFromContent` builds the same shape from the course's
+ * the refresher's single quiz, which is its final exam). `requirementsFromContent` builds the same shape from the course's
  * front matter and lessons once they are loaded (lib/content), and is what the server uses.
  */
 const FLAGSHIP_LESSONS = [
@@ -30,8 +30,9 @@ export const DEFAULT_REQUIREMENTS: Record<string, CourseRequirements> = {
   [REFRESHER_COURSE_SLUG]: {
     courseSlug: REFRESHER_COURSE_SLUG,
     lessonSlugs: ['acid-and-ph-review', 'time-and-altitude-review'],
-    quizSlugs: ['volunteer-refresher--quiz'],
-    finalExam: null,
+    quizSlugs: [],
+    // The refresher's one quiz is its final exam (content/courses/volunteer-refresher.mdx).
+    finalExam: 'volunteer-refresher--quiz',
     practicalRequired: false,
     workshopRequired: false,
     priorCertificateRequired: true,

@@ -13,7 +13,7 @@ import { loadStandings } from './facts';
 import { renderCertificatePdf } from './pdf';
 import { verificationUrl } from './qr';
 import { generateSerial } from './serial';
-import { validUntilFor } from './validity';
+import { REFRESHER_COURSE_SLUG, validUntilFor } from './validity';
 
 export type IssueOutcome =
   | { enrollmentId: number; outcome: 'issued'; certificateId: number; serial: string }
@@ -140,4 +140,31 @@ export async function revokeCertificate(certificateId: number, actorId: number, 
     await enqueueEmail(certificateRevokedEmail({ to: info.email, learnerName: info.name, courseTitle: info.title, serial: certificate.serial, reason }), { transaction });
     return { id: certificate.id, serial: certificate.serial, revokedAt: now };
   });
+}
+
+/**
+ * The refresher needs no coordinator: once a learner has done everything it asks, the learner's
+ * own request issues its certificate (the flagship course is issued at the desk only).
+ */
+export async function claimRefresherCertificate(enrollmentId: number, learnerId: number): Promise<IssueOutcome> {
+  const [row] = await db().sequelize.query<{ userId: number; slug: string }>(
+    'SELECT e.userId, c.slug FROM enrollments e JOIN courses c ON c.id = e.courseId WHERE e.id = :enrollmentId',
+    { replacements: { enrollmentId }, type: QueryTypes.SELECT },
+  );
+  if (!row || Number(row.userId) !== learnerId) throw new AppError('not_found', 'You have no such enrollment.');
+  if (row.slug !== REFRESHER_COURSE_SLUG) throw new AppError('forbidden', 'Only the refresher certificate can be claimed by the learner; the coordinator issues the others.');
+  const outcome = await issueCertificate(enrollmentId, learnerId);
+  if (outcome.outcome === 'not_eligible') throw new AppError('conflict', 'The refresher is not complete yet.', { extra: { missing: outcome.missing } });
+  return outcome;
+}
+
+/** The learner's refresher enrollments that are complete but have no certificate yet. */
+export async function claimableRefreshers(learnerId: number): Promise<number[]> {
+  const rows = await db().sequelize.query<{ id: number }>(
+    `SELECT e.id FROM enrollments e JOIN courses c ON c.id = e.courseId LEFT JOIN certificates ce ON ce.enrollmentId = e.id
+      WHERE e.userId = :learnerId AND c.slug = :slug AND ce.id IS NULL AND e.status IN ('active', 'completed')`,
+    { replacements: { learnerId, slug: REFRESHER_COURSE_SLUG }, type: QueryTypes.SELECT },
+  );
+  const standings = await loadStandings(rows.map((r) => Number(r.id)));
+  return [...standings.values()].filter((s) => s.eligibility.eligible).map((s) => s.row.id);
 }

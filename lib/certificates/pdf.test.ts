@@ -51,7 +51,8 @@ function rasteriseQr(content: string, box: { x: number; y: number; size: number 
   return { rects: rects.length, rgba, side };
 }
 
-describe('renderCertificatePdf', () => {
+// The first render loads and parses the fonts once; on a busy machine that takes a few seconds.
+describe('renderCertificatePdf', { timeout: 30_000 }, () => {
   it('writes the serial, the name with its accents, the course, the program and the dates as text', async () => {
     const data = input();
     const bytes = await renderCertificatePdf(data);

@@ -4,7 +4,8 @@ import { POST as issueRoute } from '@/app/api/desk/certificates/route';
 import { POST as revokeRoute } from '@/app/api/desk/certificates/[id]/revoke/route';
 import { GET as pdfRoute } from '@/app/api/certificates/[serial]/pdf/route';
 import { GET as deskRoute } from '@/app/api/desk/enrollments/route';
-import { issueCertificate, issueCertificates } from '@/lib/certificates/issue';
+import { POST as claimRoute } from '@/app/api/certificates/refresher/route';
+import { claimableRefreshers, issueCertificate, issueCertificates } from '@/lib/certificates/issue';
 import { loadStandings } from '@/lib/certificates/facts';
 import { normalizeSerial } from '@/lib/certificates/serial';
 import { fetchLearnerCertificates, verifySerial } from '@/lib/certificates/lookup';
@@ -185,6 +186,38 @@ describe('expiry and the refresher', () => {
   it('refuses the refresher to someone without an earlier certificate', async () => {
     const refresher = await eligibleEnrollment(courses.refresher, { workshopId: null });
     expect(await issueCertificate(refresher.enrollmentId, null)).toMatchObject({ outcome: 'not_eligible', missing: ['prior-certificate'] });
+  });
+});
+
+describe('claiming the refresher certificate', () => {
+  it('lets the learner who completed the refresher issue it, and nobody else or any other course', async () => {
+    const flagship = await eligibleEnrollment(courses.flagship, { name: 'Maeve Rourke' });
+    await issueCertificate(flagship.enrollmentId, null);
+    const refresher = await eligibleEnrollment(courses.refresher, { userId: flagship.userId, workshopId: null });
+    const learner = { id: flagship.userId, email: 'maeve@test.example', name: 'Maeve Rourke', role: 'learner' as const };
+    const claim = (enrollmentId: number) => claimRoute(jsonRequest('/api/certificates/refresher', { enrollmentId }), {});
+
+    actAs(await createUser('learner'));
+    expect((await claim(refresher.enrollmentId)).status).toBe(404);
+    actAs(learner);
+    expect(await claimableRefreshers(learner.id)).toEqual([refresher.enrollmentId]);
+    expect((await claim(flagship.enrollmentId)).status).toBe(403);
+    const ok = await claim(refresher.enrollmentId);
+    expect(ok.status).toBe(201);
+    expect((await ok.json()).outcome).toBe('issued');
+    expect((await claim(refresher.enrollmentId)).status).toBe(200);
+    expect(await certificateCount(refresher.enrollmentId)).toBe(1);
+    expect(await claimableRefreshers(learner.id)).toEqual([]);
+  });
+
+  it('refuses an unfinished refresher with 409', async () => {
+    const flagship = await eligibleEnrollment(courses.flagship);
+    await issueCertificate(flagship.enrollmentId, null);
+    const refresher = await eligibleEnrollment(courses.refresher, { userId: flagship.userId, workshopId: null, skip: { finalExam: true } });
+    actAs({ id: flagship.userId, email: 'x@test.example', name: 'x', role: 'learner' });
+    const response = await claimRoute(jsonRequest('/api/certificates/refresher', { enrollmentId: refresher.enrollmentId }), {});
+    expect(response.status).toBe(409);
+    expect((await response.json()).missing).toEqual(['final-exam']);
   });
 });
 
