@@ -53,7 +53,9 @@ export function PracticalHistory({ rounds }: { rounds: RoundView[] }) {
               <span className="text-sm text-ink-soft">submitted {when(r.submittedAt)}</span>
             </div>
             <p className="text-sm text-ink-soft">
-              {r.details.recipeTitle} · {r.details.jars} × {r.details.jar} · {r.details.minutes} min at {r.details.altitudeFt.toLocaleString('en-US')} ft
+              {[r.details.recipeTitle, r.details.jars && r.details.jar ? `${r.details.jars} × ${r.details.jar}` : null, typeof r.details.minutes === 'number' && typeof r.details.altitudeFt === 'number' ? `${r.details.minutes} min at ${r.details.altitudeFt.toLocaleString('en-US')} ft` : null]
+                .filter(Boolean)
+                .join(' · ')}
             </p>
             {r.photos.length ? (
               <ul className="flex flex-wrap gap-2" aria-label={`Photos of round ${r.round}`}>

@@ -3,16 +3,18 @@ import type { Expectations } from '@/lib/practicals/checks';
 import { PRODUCTS } from '@/lib/preserving/products';
 import { PROCESSING_METHOD_LABELS, type PracticalDetails } from '@/lib/validations/practical';
 
-const n = (v: number, digits = 2) => String(Number(v.toFixed(digits)));
+// Details are stored JSON: rows written by older code or seeders may lack fields, so each value is optional.
+const n = (v: unknown, digits = 2) => (typeof v === 'number' && Number.isFinite(v) ? String(Number(v.toFixed(digits))) : '—');
+const t = (v: unknown) => (typeof v === 'string' && v ? v : '—');
 
 /** The learner's batch beside what the published tables give for it. */
-export function BatchDetails({ details, expected }: { details: PracticalDetails; expected: Expectations }) {
+export function BatchDetails({ details, expected }: { details: Partial<PracticalDetails>; expected: Expectations }) {
   const processing = expected.processing;
   const rows: { label: string; value: string; expected?: string }[] = [
-    { label: 'Product', value: PRODUCTS[details.product]?.name ?? details.product },
-    { label: 'Tested recipe', value: `${details.recipeTitle} — ${details.recipeSource}` },
-    { label: 'Pack', value: `${details.pack} pack`, expected: expected.pack ? `${expected.pack} pack` : undefined },
-    { label: 'Jars', value: `${details.jars} × ${details.jar}` },
+    { label: 'Product', value: (details.product && PRODUCTS[details.product]?.name) || t(details.product) },
+    { label: 'Tested recipe', value: `${t(details.recipeTitle)} — ${t(details.recipeSource)}` },
+    { label: 'Pack', value: details.pack ? `${details.pack} pack` : '—', expected: expected.pack ? `${expected.pack} pack` : undefined },
+    { label: 'Jars', value: `${n(details.jars, 0)} × ${t(details.jar)}` },
     { label: 'Vinegar', value: `${n(details.vinegarMl, 0)} mL at ${n(details.vinegarAcidityPct)} % acidity`, expected: 'at least 5 % acidity' },
     {
       label: 'Water',
@@ -20,11 +22,11 @@ export function BatchDetails({ details, expected }: { details: PracticalDetails;
       expected: expected.brine ? `brine ≈ ${n(expected.brine.aceticAcidPct)} % acetic acid, estimated pH ${n(expected.brine.estimatedPh)} (liquid alone)` : undefined,
     },
     { label: 'Headspace measured', value: `${n(details.headspaceIn, 3)} in`, expected: expected.headspace ? `${n(expected.headspace.recommendedIn, 3)} in` : undefined },
-    { label: 'Method', value: PROCESSING_METHOD_LABELS[details.method] ?? details.method },
-    { label: 'Altitude', value: `${details.altitudeFt.toLocaleString('en-US')} ft` },
+    { label: 'Method', value: (details.method && PROCESSING_METHOD_LABELS[details.method]) || t(details.method) },
+    { label: 'Altitude', value: typeof details.altitudeFt === 'number' ? `${details.altitudeFt.toLocaleString('en-US')} ft` : '—' },
     {
       label: 'Minutes processed',
-      value: `${details.minutes} min`,
+      value: `${n(details.minutes, 0)} min`,
       expected: !processing
         ? undefined
         : 'unavailable' in processing
@@ -33,8 +35,8 @@ export function BatchDetails({ details, expected }: { details: PracticalDetails;
             ? `${expected.lowTemperaturePasteurization.minutes} min at ${expected.lowTemperaturePasteurization.waterTempF.join('–')} °F (or ${processing.minutes} min in boiling water)`
             : `${processing.minutes} min in boiling water for ${processing.altitudeBand.toFt === null ? `above ${processing.altitudeBand.fromFt.toLocaleString('en-US')}` : `${processing.altitudeBand.fromFt.toLocaleString('en-US')}–${processing.altitudeBand.toFt.toLocaleString('en-US')}`} ft`,
     },
-    { label: 'Date put up', value: details.batchDate },
-    { label: 'Seals', value: `${details.sealedJars} sealed, ${details.unsealedJars} not sealed`, expected: 'every jar sealed' },
+    { label: 'Date put up', value: t(details.batchDate) },
+    { label: 'Seals', value: `${n(details.sealedJars, 0)} sealed, ${n(details.unsealedJars, 0)} not sealed`, expected: 'every jar sealed' },
     { label: 'Notes', value: details.notes || '—' },
   ];
   return (

@@ -124,7 +124,8 @@ export type RoundView = {
   id: number;
   round: number;
   status: PracticalStatus;
-  details: PracticalDetails;
+  /** Stored JSON: rows from seeders or older code may lack fields. */
+  details: Partial<PracticalDetails>;
   flags: Flag[];
   submittedAt: string;
   photos: PhotoView[];
@@ -147,7 +148,7 @@ async function roundsWhere(where: Record<string, unknown>): Promise<RoundView[]>
       id: p.id,
       round: p.round,
       status: p.status,
-      details: p.details as PracticalDetails,
+      details: (p.details ?? {}) as Partial<PracticalDetails>,
       flags: (p.flags ?? []) as unknown as Flag[],
       submittedAt: p.submittedAt.toISOString(),
       photos: [...withIncludes.photos]
