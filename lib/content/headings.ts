@@ -21,9 +21,6 @@ function textOf(node: ElementContent | RootContent): string {
   return '';
 }
 
-function isHeading(node: RootContent | ElementContent): node is Element {
-  return node.type === 'element' && (node.tagName === 'h2' || node.tagName === 'h3');
-}
 
 /**
  * A rehype plugin that gives every h2/h3 a unique id (kept if the author set one) and records
@@ -35,7 +32,8 @@ export function rehypeHeadingIds(toc: TocEntry[]) {
     const used = new Map<string, number>();
     const visit = (node: Root | Element) => {
       for (const child of node.children) {
-        if (isHeading(child)) {
+        if (child.type !== 'element') continue;
+        if (child.tagName === 'h2' || child.tagName === 'h3') {
           const text = textOf(child).replace(/\s+/g, ' ').trim();
           const given = typeof child.properties.id === 'string' ? child.properties.id : null;
           const base = given ?? slugify(text);
@@ -44,7 +42,7 @@ export function rehypeHeadingIds(toc: TocEntry[]) {
           const id = n === 0 ? base : `${base}-${n + 1}`;
           child.properties.id = id;
           toc.push({ id, text, depth: child.tagName === 'h2' ? 2 : 3 });
-        } else if (child.type === 'element') {
+        } else {
           visit(child);
         }
       }

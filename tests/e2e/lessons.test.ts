@@ -1,0 +1,116 @@
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { loadLessons } from '../../lib/content/loader';
+import { openBrowser, seriousViolations, signIn } from './support/browser';
+
+const content = path.resolve(__dirname, '../../content');
+const lessons = loadLessons(content, 'pickling-and-canning');
+const preview = lessons.find((l) => l.slug === 'acidity')!;
+const membersOnly = lessons.find((l) => l.slug === 'processing')!;
+const membersPath = `/learn/pickling-and-canning/${membersOnly.slug}`;
+
+describe('lessons in the browser', () => {
+  let browser: Awaited<ReturnType<typeof openBrowser>>;
+
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('the catalog and the course page list the courses, the fee and the lessons', async () => {
+    const { page } = browser;
+    await page.goto('/courses');
+    await page.getByRole('link', { name: 'Safe Pickling and Water-Bath Canning' }).click();
+    await page.waitForURL('**/courses/pickling-and-canning');
+    expect(await page.getByRole('heading', { level: 1, name: 'Safe Pickling and Water-Bath Canning' }).count()).toBe(1);
+    expect(await page.getByRole('region', { name: 'Course fee' }).textContent()).toContain('$45.00');
+    const lessonList = page.getByRole('list').filter({ has: page.getByRole('link', { name: preview.title }) });
+    expect(await lessonList.getByRole('listitem').count()).toBe(lessons.length);
+    expect(await seriousViolations(page)).toEqual([]);
+  });
+
+  it('opens a public lesson and uses its embedded brine calculator', async () => {
+    const { page } = browser;
+    const response = await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
+    expect(response?.status()).toBe(200);
+    await page.waitForLoadState('networkidle');
+    expect(await page.getByRole('heading', { level: 1, name: preview.title }).count()).toBe(1);
+    const toc = page.getByRole('navigation', { name: 'On this page' });
+    expect(await toc.getByRole('link').count()).toBeGreaterThan(2);
+    expect(await page.getByRole('heading', { name: 'After this lesson you can' }).count()).toBe(1);
+    expect(await page.getByRole('heading', { name: 'Sources' }).count()).toBe(1);
+
+    // The table of contents links to the headings the MDX pipeline gave ids.
+    const firstHref = await toc.getByRole('link').first().getAttribute('href');
+    expect(firstHref).toMatch(/^#[a-z0-9-]+$/);
+    expect(await page.locator(`h2${firstHref}`).count()).toBe(1);
+
+    // 1000 mL of 5% vinegar and 500 mL of water: 50 g of acetic acid in 1500 mL = 3.33 g per 100 mL
+    // (vinegar strength is grams of acetic acid per 100 mL, FDA Compliance Policy Guide Sec. 525.825).
+    const calculator = page.getByRole('region', { name: 'Brine acidity' });
+    await calculator.getByLabel('Vinegar', { exact: true }).fill('1000');
+    await calculator.getByLabel('Water', { exact: true }).fill('500');
+    await expect.poll(() => calculator.getByTestId('brine-acid').textContent()).toBe('3.33 g per 100 mL');
+
+    // A bad value shows the message instead of a number.
+    await calculator.getByLabel('Water', { exact: true }).fill('-5');
+    await expect.poll(() => calculator.getByTestId('brine-acid').count()).toBe(0);
+    await calculator.getByLabel('Water', { exact: true }).fill('500');
+    await expect.poll(() => calculator.getByTestId('brine-acid').textContent()).toBe('3.33 g per 100 mL');
+    expect(await seriousViolations(page)).toEqual([]);
+  });
+
+  it('prints a lesson as a handout: no site header, no navigation, a note where the calculator was', async () => {
+    const { page } = browser;
+    await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('header[data-site-header]').isVisible()).toBe(false);
+    expect(await page.getByRole('navigation', { name: 'On this page' }).isVisible()).toBe(false);
+    expect(await page.getByRole('region', { name: 'Brine acidity' }).isVisible()).toBe(false);
+    expect(await page.locator('[data-print-note]').first().isVisible()).toBe(true);
+    expect(await page.getByRole('heading', { level: 1, name: preview.title }).isVisible()).toBe(true);
+    await page.emulateMedia({ media: 'screen' });
+  });
+
+  it('refuses a members-only lesson to a signed-out visitor', async () => {
+    const { context } = browser;
+    await context.clearCookies();
+    const page = await context.newPage();
+    await page.goto(membersPath);
+    await page.waitForURL(`**/signin?callbackUrl=${encodeURIComponent(membersPath)}`);
+    await page.close();
+  });
+
+  it('offers enrollment, with status 403, to a learner who is not enrolled', async () => {
+    const { page } = browser;
+    await page.goto('/register');
+    await page.getByLabel('Your name').fill('Ines Calloway');
+    await page.getByLabel('E-mail').fill(`ines-${Date.now()}@test.example`);
+    await page.getByLabel('Password').fill('vinegar at five percent');
+    await page.getByRole('button', { name: 'Create my account' }).click();
+    await page.waitForURL('**/pantry');
+    const response = await page.goto(membersPath);
+    expect(response?.status()).toBe(403);
+    expect(await page.getByRole('heading', { name: 'This lesson is for enrolled learners' }).count()).toBe(1);
+    expect(await page.getByRole('link', { name: 'Enroll in the course' }).getAttribute('href')).toBe('/courses/pickling-and-canning#workshops');
+    expect(await page.getByText(membersOnly.objectives[0]).count()).toBe(0);
+    expect(await seriousViolations(page)).toEqual([]);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('link', { name: 'Sign in' }).waitFor();
+  });
+
+  it('opens a members-only lesson for the demo learner, who has an active enrollment', async () => {
+    const { page } = browser;
+    await signIn(page, 'learner@cedarhollow.example', 'demo-learner-pass');
+    const response = await page.goto(membersPath);
+    expect(response?.status()).toBe(200);
+    expect(page.url()).toMatch(new RegExp(`${membersPath}$`));
+    expect(await page.getByRole('heading', { level: 1, name: membersOnly.title }).count()).toBe(1);
+    expect(await page.getByText(membersOnly.objectives[0]).count()).toBe(1);
+    expect(await page.getByRole('link', { name: /Previous: lesson/ }).getAttribute('href')).toBe(`/learn/pickling-and-canning/${lessons[membersOnly.order - 2].slug}`);
+    await page.waitForLoadState('networkidle');
+    expect(await seriousViolations(page)).toEqual([]);
+  });
+});
