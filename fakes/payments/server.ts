@@ -37,7 +37,18 @@ export type FakeSession = {
 
 export type FakeRefund = { id: string; object: 'refund'; amount: number; currency: string; payment_intent: string; status: 'succeeded'; reason: string | null; metadata: Record<string, string>; created: number };
 
-export type Delivery = { eventId: string; type: string; payload: string; attempts: number; delivered: boolean; lastStatus: number | null; lastError: string | null; nextAt: number | null };
+export type Delivery = {
+  eventId: string;
+  type: string;
+  payload: string;
+  attempts: number;
+  delivered: boolean;
+  lastStatus: number | null;
+  lastError: string | null;
+  /** When the next attempt is due; null when none is scheduled. */
+  nextAt: number | null;
+  inFlight?: boolean;
+};
 
 export type FakePaymentsOptions = {
   port?: number;
@@ -137,9 +148,18 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   }
 
   async function attempt(delivery: Delivery) {
+    delivery.nextAt = null;
     if (closed || !webhookUrl) return;
     delivery.attempts += 1;
-    delivery.nextAt = null;
+    delivery.inFlight = true;
+    try {
+      await deliverOnce(delivery);
+    } finally {
+      delivery.inFlight = false;
+    }
+  }
+
+  async function deliverOnce(delivery: Delivery) {
     const header = signer.webhooks.generateTestHeaderString({ payload: delivery.payload, secret: options.webhookSecret });
     try {
       const response = await fetch(webhookUrl, {
@@ -422,7 +442,7 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
         },
         async settle(timeoutMs = 10_000) {
           const until = Date.now() + timeoutMs;
-          while (deliveries.some((d) => !d.delivered && d.attempts < maxAttempts) && Date.now() < until) await new Promise((r) => setTimeout(r, 20));
+          while (deliveries.some((d) => d.inFlight || d.nextAt !== null) && Date.now() < until) await new Promise((r) => setTimeout(r, 20));
         },
         close: () =>
           new Promise<void>((done) => {

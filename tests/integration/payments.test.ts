@@ -4,6 +4,7 @@ import { POST as refundPOST } from '@/app/api/enrollments/[id]/refund/route';
 import { GET as workshopsGET } from '@/app/api/courses/[course]/workshops/route';
 import { POST as webhookPOST } from '@/app/api/webhooks/stripe/route';
 import { startFakePayments } from '@/fakes/payments/server';
+import { releaseStaleCheckouts } from '@/lib/payments/reconcile';
 import { db } from '@/models';
 import { createCourses, createUser, resetDatabase } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
@@ -140,6 +141,41 @@ describe('paying through the fake payment server', () => {
     expect(b.body.url).toBe(a.body.url);
     expect(await db().Enrollment.count({ where: { userId: learner.id } })).toBe(1);
     expect(await seatsLeft()).toBe(11);
+  });
+
+  it('choosing another workshop gives up the unpaid seat and closes its checkout', async () => {
+    const learner = await createUser('learner');
+    const first = await enroll(learner);
+    const startsAt = new Date(Date.now() + 20 * 86_400_000);
+    const other = await db().Workshop.create({ courseId, instructorId: null, startsAt, endsAt: new Date(startsAt.getTime() + 3600_000), timeZone: 'America/Denver', place: 'Library', seats: 4 });
+    const second = await enroll(learner, { workshopId: other.id });
+    expect(second.status).toBe(201);
+    expect((await db().Enrollment.findByPk(first.body.enrollmentId))!.status).toBe('withdrawn');
+    expect((await db().Enrollment.findByPk(second.body.enrollmentId))!.status).toBe('awaiting_payment');
+    expect(await seatsLeft()).toBe(12);
+    // The old checkout is expired at the payment service, and its webhook changes nothing more.
+    await expect.poll(() => h.payments.sessions.get(sessionIdOf(first.body.url))!.status).toBe('expired');
+    await h.payments.settle();
+    expect((await db().Payment.findOne({ where: { enrollmentId: first.body.enrollmentId } }))!.status).toBe('expired');
+    expect((await db().Enrollment.findByPk(second.body.enrollmentId))!.status).toBe('awaiting_payment');
+  });
+
+  it('when an expiry webhook never arrives, the worker’s reconciliation releases the seat', async () => {
+    const learner = await createUser('learner');
+    const { body } = await enroll(learner);
+    h.payments.setWebhookUrl(undefined);
+    try {
+      h.payments.expire(sessionIdOf(body.url));
+      // Not yet past the grace period: nothing happens.
+      expect(await releaseStaleCheckouts()).toBe(0);
+      await db().sequelize.query('UPDATE payments SET createdAt = ? WHERE enrollmentId = ?', { replacements: [new Date(Date.now() - 2 * 3600_000), body.enrollmentId] });
+      expect(await releaseStaleCheckouts()).toBe(1);
+      expect((await db().Enrollment.findByPk(body.enrollmentId))!.status).toBe('withdrawn');
+      expect(await seatsLeft()).toBe(12);
+      expect(await releaseStaleCheckouts()).toBe(0);
+    } finally {
+      h.payments.setWebhookUrl(h.hookUrl);
+    }
   });
 
   it('a refund goes through the SDK, withdraws the enrollment, releases the seat and queues an e-mail', async () => {
