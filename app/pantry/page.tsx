@@ -1,16 +1,17 @@
 import type { Metadata } from 'next';
+import { PantryCertificates } from '@/components/certificates/pantry-certificates';
 import { PantryShelves } from '@/components/pantry/pantry-shelves';
 import { requirePageRole } from '@/lib/auth/guard';
 
 export const metadata: Metadata = { title: 'Pantry' };
 
 export default async function PantryPage() {
-  await requirePageRole('/pantry', 'learner');
+  const user = await requirePageRole('/pantry', 'learner');
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Your Pantry</h1>
       <PantryShelves />
-      {/* Certificates: <PantryCertificates /> from components/certificates/pantry-certificates.tsx goes here. */}
+      <PantryCertificates userId={user.id} />
     </div>
   );
 }

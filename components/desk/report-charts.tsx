@@ -13,7 +13,7 @@ export function ReportBarChart({ data, x, series, unit }: { data: Datum[]; x: st
   return (
     <div aria-hidden="true" className="h-64 w-full">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={data} margin={{ top: 8, right: 12, bottom: 8, left: 0 }}>
+        <BarChart data={data} margin={{ top: 8, right: 12, bottom: 8, left: 0 }} accessibilityLayer={false}>
           <CartesianGrid strokeDasharray="3 3" stroke="#d9e4e1" />
           <XAxis dataKey={x} tick={{ fontSize: 12 }} />
           <YAxis allowDecimals={false} tick={{ fontSize: 12 }} unit={unit} />
