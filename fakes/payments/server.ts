@@ -153,16 +153,16 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     delivery.attempts += 1;
     delivery.inFlight = true;
     try {
-      await deliverOnce(delivery);
+      await deliverOnce(delivery, webhookUrl);
     } finally {
       delivery.inFlight = false;
     }
   }
 
-  async function deliverOnce(delivery: Delivery) {
+  async function deliverOnce(delivery: Delivery, url: string) {
     const header = signer.webhooks.generateTestHeaderString({ payload: delivery.payload, secret: options.webhookSecret });
     try {
-      const response = await fetch(webhookUrl, {
+      const response = await fetch(url, {
         method: 'POST',
         headers: { 'content-type': 'application/json; charset=utf-8', 'stripe-signature': header, 'user-agent': 'brinewright-fake-payments/1.0' },
         body: delivery.payload,
