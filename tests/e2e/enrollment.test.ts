@@ -67,9 +67,9 @@ describe('enrolling and paying in the browser', () => {
     await page.waitForURL(/\/checkout\/success\?session_id=cs_test_/);
     await page.getByRole('heading', { name: /You are enrolled|Confirming your payment/ }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
-    await page.getByRole('heading', { name: 'You are enrolled' }).waitFor({ timeout: 20_000 });
+    await page.getByRole('heading', { name: 'You are enrolled' }).waitFor({ timeout: 45_000 });
 
-    await page.waitForURL('**/pantry', { timeout: 20_000 });
+    await page.waitForURL('**/pantry', { timeout: 45_000 });
     await page.getByText('Safe Pickling and Water-Bath Canning').first().waitFor();
     expect(await seriousViolations(page)).toEqual([]);
 
