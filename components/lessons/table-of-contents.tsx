@@ -25,7 +25,7 @@ export function TableOfContents({ entries, className }: { entries: TocEntry[]; c
               <ol className="mt-1 space-y-1">
                 {children.map((child) => (
                   <li key={child.id}>
-                    <a href={`#${child.id}`} className="block pl-6 text-ink-faint no-underline hover:text-brine-800">
+                    <a href={`#${child.id}`} className="block pl-6 text-ink-soft no-underline hover:text-brine-800">
                       {child.text}
                     </a>
                   </li>

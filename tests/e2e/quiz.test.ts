@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, seriousViolations, signIn } from './support/browser';
 
@@ -23,12 +23,13 @@ async function answerEverything(page: Page) {
 }
 
 describe('quiz, progress and the Pantry in the browser', () => {
+  // A fresh browser (empty profile) for each person, so one test's session never leaks into the next.
   let browser: Awaited<ReturnType<typeof openBrowser>>;
 
-  beforeAll(async () => {
+  beforeEach(async () => {
     browser = await openBrowser();
   });
-  afterAll(async () => {
+  afterEach(async () => {
     await browser?.close();
   });
 
