@@ -57,7 +57,7 @@ describe('PhotoUploader', () => {
     await waitFor(() => expect(onChange).toHaveBeenLastCalledWith([11, 12]));
     expect(screen.getAllByText('Uploaded')).toHaveLength(2);
     expect(screen.queryByRole('alert')).toBeNull();
-  });
+  }, 20_000);
 });
 
 describe('PracticalForm', () => {
@@ -82,7 +82,7 @@ describe('PracticalForm', () => {
     await screen.findByRole('button', { name: 'Retry a.jpg' });
     expect(screen.getByLabelText('Altitude')).toHaveValue(7000);
     expect(screen.getByLabelText('Product')).toHaveValue('fresh-pack-dill-pickles');
-  });
+  }, 30_000);
 
   it('names what is missing on submit and sends nothing', async () => {
     const user = userEvent.setup();
@@ -94,5 +94,5 @@ describe('PracticalForm', () => {
     expect(screen.getByText(/Add at least 2 photos/)).toBeInTheDocument();
     expect(screen.getByLabelText('Tested recipe followed')).toHaveAttribute('aria-invalid', 'true');
     expect(fetchSpy).not.toHaveBeenCalled();
-  });
+  }, 20_000);
 });

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import sharp from 'sharp';
+import sharp, { type Sharp } from 'sharp';
 import type { SessionUser } from '@/lib/auth/users';
 import { diskDriver, setStorage } from '@/lib/storage';
 import type { PracticalForm } from '@/lib/validations/practical';
@@ -17,8 +17,21 @@ export function useTemporaryStorage(): { root: string; files: () => string[]; cl
   return { root, files, cleanup: () => { setStorage(undefined); fs.rmSync(root, { recursive: true, force: true }); } };
 }
 
-export async function enrolledLearner(courseId: number, status: 'active' | 'completed' | 'withdrawn' | 'awaiting_payment' = 'active', workshopId: number | null = null) {
-  const learner = await createUser('learner');
+let quick = 0;
+// A learner row without a bcrypt round (they never sign in), for tests that need many.
+async function quickLearner(): Promise<SessionUser> {
+  quick += 1;
+  const user = await db().User.create({ email: `bulk${quick}-${Date.now()}@test.example`, name: `Bulk learner ${quick}`, role: 'learner', passwordHash: 'not-a-login' });
+  return { id: user.id, email: user.email, name: user.name, role: user.role };
+}
+
+export async function enrolledLearner(
+  courseId: number,
+  status: 'active' | 'completed' | 'withdrawn' | 'awaiting_payment' = 'active',
+  workshopId: number | null = null,
+  options: { quick?: boolean } = {},
+) {
+  const learner = options.quick ? await quickLearner() : await createUser('learner');
   const enrollment = await db().Enrollment.create({ userId: learner.id, courseId, workshopId, runKey: workshopId ? String(workshopId) : 'self-paced', status, feeCents: 4500 });
   return { learner, enrollment };
 }
@@ -39,7 +52,7 @@ export async function catalog() {
 }
 
 /** A real JPEG, made here, with a colour gradient so it is not trivially compressible. */
-export async function makeJpeg(width = 640, height = 480, extra: (s: sharp.Sharp) => sharp.Sharp = (s) => s): Promise<Buffer> {
+export async function makeJpeg(width = 640, height = 480, extra: (s: Sharp) => Sharp = (s) => s): Promise<Buffer> {
   const raw = Buffer.alloc(width * height * 3);
   for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) raw.set([(x * 255) / width, (y * 255) / height, 96], (y * width + x) * 3);
   return extra(sharp(raw, { raw: { width, height, channels: 3 } }).jpeg({ quality: 85 })).toBuffer();

@@ -192,7 +192,7 @@ describe('GET /api/tasting-table/submissions', () => {
     const now = Date.now();
     // 25 submissions: every third flagged, every fifth approved, ages 0..24 days, alternating workshops.
     for (let i = 0; i < 25; i++) {
-      const { learner, enrollment } = await enrolledLearner(setting.flagship.id, 'active', i % 2 ? otherWorkshop.id : setting.workshop.id);
+      const { learner, enrollment } = await enrolledLearner(setting.flagship.id, 'active', i % 2 ? otherWorkshop.id : setting.workshop.id, { quick: true });
       await db().User.update({ name: `Learner ${String.fromCharCode(65 + (i % 26))}` }, { where: { id: learner.id } });
       await db().Practical.create({
         enrollmentId: enrollment.id, userId: learner.id, round: 1, status: i % 5 === 0 ? 'approved' : 'submitted', details: { product: 'dilly-beans' },
@@ -249,5 +249,5 @@ describe('GET /api/tasting-table/submissions', () => {
 
     expect((await get('?sort=drop-table')).status).toBe(400);
     expect((await get('?page=0')).status).toBe(400);
-  });
+  }, 90_000);
 });
