@@ -1,6 +1,9 @@
 import { render, screen, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import BenchPage, { dynamic } from './page';
+
+// user-event typing is slow on a loaded two-core machine: allow more than the default 5 s.
+vi.setConfig({ testTimeout: 30_000 });
 
 describe('Brine bench page', () => {
   it('is static and shows every calculator under its own heading with a lesson link, and the safety caution', () => {

@@ -1,6 +1,6 @@
 import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import {
   BatchPlanner,
   BoilingPointCalculator,
@@ -12,6 +12,9 @@ import {
   SaltCalculator,
   UnitConverter,
 } from './index';
+
+// user-event typing is slow on a loaded two-core machine: allow more than the default 5 s.
+vi.setConfig({ testTimeout: 30_000 });
 
 /** Replaces the text of a field the way a person does: select all, type. */
 async function retype(user: ReturnType<typeof userEvent.setup>, field: HTMLElement, text: string) {
