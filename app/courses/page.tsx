@@ -41,15 +41,15 @@ export default function CoursesPage() {
               <p className="mt-2 flex-1 text-ink-soft">{course.summary}</p>
               <dl className="mt-4 grid grid-cols-3 gap-2 text-sm">
                 <div>
-                  <dt className="text-ink-faint">Fee</dt>
+                  <dt className="text-ink-soft">Fee</dt>
                   <dd className="font-semibold">{formatFee(course.feeCents, course.currency)}</dd>
                 </div>
                 <div>
-                  <dt className="text-ink-faint">Lessons</dt>
+                  <dt className="text-ink-soft">Lessons</dt>
                   <dd className="font-semibold">{lessons}</dd>
                 </div>
                 <div>
-                  <dt className="text-ink-faint">Reading time</dt>
+                  <dt className="text-ink-soft">Reading time</dt>
                   <dd className="font-semibold">{formatMinutes(minutes)}</dd>
                 </div>
               </dl>

@@ -24,7 +24,7 @@ describe('lessons in the browser', () => {
     await page.goto('/courses');
     await page.getByRole('link', { name: 'Safe Pickling and Water-Bath Canning' }).click();
     await page.waitForURL('**/courses/pickling-and-canning');
-    expect(await page.getByRole('heading', { level: 1, name: 'Safe Pickling and Water-Bath Canning' }).count()).toBe(1);
+    await page.getByRole('heading', { level: 1, name: 'Safe Pickling and Water-Bath Canning' }).waitFor();
     expect(await page.getByRole('region', { name: 'Course fee' }).textContent()).toContain('$45.00');
     const lessonList = page.getByRole('list').filter({ has: page.getByRole('link', { name: preview.title }) });
     expect(await lessonList.getByRole('listitem').count()).toBe(lessons.length);

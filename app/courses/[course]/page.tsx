@@ -63,7 +63,7 @@ export default async function CoursePage({ params }: Props) {
                     </Link>
                     <span className="block text-sm text-ink-soft">{lesson.summary}</span>
                   </span>
-                  <span className="text-sm text-ink-faint">{formatMinutes(lesson.minutes)}</span>
+                  <span className="text-sm text-ink-soft">{formatMinutes(lesson.minutes)}</span>
                   {lesson.preview ? <Badge tone="copper">Free preview</Badge> : <Badge>Enrolled learners</Badge>}
                 </li>
               ))}
