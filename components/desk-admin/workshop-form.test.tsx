@@ -2,6 +2,7 @@ import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { ToastProvider } from '@/components/ui/toast';
+import type { SaveState } from '@/app/desk/workshops/actions';
 import type { WorkshopInput } from '@/lib/validations/workshop';
 import { WorkshopForm } from './workshop-form';
 
@@ -10,7 +11,9 @@ vi.mock('next/navigation', () => ({ useRouter: () => ({ push: vi.fn(), refresh }
 
 const defaults: WorkshopInput = { courseId: '1', date: '', startTime: '09:00', endTime: '14:00', timeZone: 'America/Denver', place: '', seats: 12, instructorId: '', attendanceRequired: true };
 
-function renderForm(save = vi.fn(async () => ({ ok: true as const, id: 5 }))) {
+type Save = (id: number | null, input: WorkshopInput) => Promise<SaveState>;
+
+function renderForm(save: Save = vi.fn<Save>(async () => ({ ok: true, id: 5 }))) {
   render(
     <ToastProvider>
       <WorkshopForm workshopId={null} defaults={defaults} courses={[{ id: 1, title: 'Safe Pickling and Water-Bath Canning' }]} instructors={[{ id: 3, name: 'Tomas Lindqvist' }]} save={save} />
@@ -32,7 +35,7 @@ describe('WorkshopForm', () => {
   }, 20_000);
 
   it('sends the values and shows the server’s field errors', async () => {
-    const save = vi.fn(async () => ({ ok: false as const, message: 'Please check the highlighted fields.', fields: { seats: ['3 seats are already taken; the workshop cannot have fewer.'] } }));
+    const save = vi.fn<Save>(async () => ({ ok: false, message: 'Please check the highlighted fields.', fields: { seats: ['3 seats are already taken; the workshop cannot have fewer.'] } }));
     renderForm(save);
     await userEvent.type(screen.getByLabelText('Date'), '2027-03-13');
     await userEvent.type(screen.getByLabelText('Place'), 'Cedar Hollow Grange Hall');
