@@ -51,6 +51,9 @@ beforeEach(() => {
 });
 afterEach(() => vi.unstubAllGlobals());
 
+// user-event drives real typing and clicks; give each test room on a busy machine.
+const SLOW = 30_000;
+
 describe('QuizRunner', () => {
   it('keeps answers in localStorage and restores them after a reload (a new mount)', async () => {
     const user = userEvent.setup();
@@ -68,7 +71,7 @@ describe('QuizRunner', () => {
     expect(screen.getByLabelText('False')).toBeChecked();
     expect(screen.getByLabelText('Your answer')).toHaveValue('15');
     expect(screen.getByText('3 of 3 answered')).toBeInTheDocument();
-  });
+  }, SLOW);
 
   it('refuses a non-number before sending, then submits the answers in the API shape and shows feedback', async () => {
     const user = userEvent.setup();
@@ -91,7 +94,7 @@ describe('QuizRunner', () => {
     expect(result).toHaveTextContent('The table gives 15 minutes.');
     expect(result).toHaveTextContent('15 minutes');
     expect(window.localStorage.getItem('brinewright:attempt:41:answers')).toBeNull();
-  });
+  }, SLOW);
 
   it('shows the next allowed time when the attempt limit is reached', async () => {
     fetchMock.mockImplementationOnce(async () =>
@@ -101,5 +104,5 @@ describe('QuizRunner', () => {
     render(<QuizRunner intro={intro} />);
     await user.click(screen.getByRole('button', { name: 'Start the quiz' }));
     expect(await screen.findByRole('alert')).toHaveTextContent(`You may try again on ${new Date('2026-12-02T10:00:00.000Z').toLocaleString()}.`);
-  });
+  }, SLOW);
 });
