@@ -46,8 +46,11 @@ export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
   const format = sniffFormat(input);
   if (!format) throw new PhotoRejected('unsupported', UNSUPPORTED_MESSAGE);
   let metadataFormat: string | undefined;
+  let hasAlpha = false;
   try {
-    metadataFormat = (await sharp(input, { limitInputPixels: MAX_INPUT_PIXELS }).metadata()).format;
+    const metadata = await sharp(input, { limitInputPixels: MAX_INPUT_PIXELS }).metadata();
+    metadataFormat = metadata.format;
+    hasAlpha = Boolean(metadata.hasAlpha);
   } catch {
     throw new PhotoRejected('unreadable', 'That photo could not be read; the file may be damaged. Try saving it again.');
   }
@@ -56,13 +59,12 @@ export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
 
   try {
     // .rotate() with no angle applies the orientation tag; sharp writes no metadata unless asked to.
-    const upright = sharp(input, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
-    const image = await upright
-      .clone()
-      .resize({ width: MAX_LONG_SIDE_PX, height: MAX_LONG_SIDE_PX, fit: 'inside', withoutEnlargement: true })
-      .flatten({ background: '#ffffff' })
-      .jpeg({ quality: 82, mozjpeg: true })
-      .toBuffer({ resolveWithObject: true });
+    // One pipeline, so libjpeg can shrink on load; transparent PNG/WebP go onto white before JPEG.
+    let pipeline = sharp(input, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' })
+      .rotate()
+      .resize({ width: MAX_LONG_SIDE_PX, height: MAX_LONG_SIDE_PX, fit: 'inside', withoutEnlargement: true });
+    if (hasAlpha) pipeline = pipeline.flatten({ background: '#ffffff' });
+    const image = await pipeline.jpeg({ quality: 82 }).toBuffer({ resolveWithObject: true });
     const thumbnail = await sharp(image.data)
       .resize({ width: THUMBNAIL_LONG_SIDE_PX, height: THUMBNAIL_LONG_SIDE_PX, fit: 'inside', withoutEnlargement: true })
       .jpeg({ quality: 75 })
