@@ -203,6 +203,8 @@ async function main() {
     log(`  ${name.padEnd(48)} ${String(js.files).padStart(3)} files  ${kb(js.raw).padStart(10)}  gzip ${kb(js.gzip).padStart(9)}  ${(js.gzip / bare.gzip).toFixed(2)}× bare`);
   }
 
+  const load1 = () => os.loadavg().map((n) => n.toFixed(1)).join(' ');
+  log(`load average before the runs: ${load1()} on ${os.availableParallelism()} cores (other work on the machine lowers the app's figures far more than nginx's)`);
   log(`warming the app up (2 s per page)`);
   for (const page of pages) await load('warm-up', appUrl + page.path, 2);
 
@@ -214,6 +216,7 @@ async function main() {
     results.push(await load(`${page.name} nginx`, `${nginxUrl}/${page.file}`));
   }
 
+  log(`load average after the runs: ${load1()}`);
   log('');
   log(`${'run'.padEnd(14)} ${'req/s'.padStart(9)} ${'p50 ms'.padStart(8)} ${'p95 ms'.padStart(8)} ${'requests'.padStart(9)} ${'not 2xx'.padStart(8)}`);
   for (const r of results) {
