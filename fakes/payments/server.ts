@@ -135,6 +135,9 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   let webhookUrl = options.webhookUrl;
   let baseUrl = '';
   let closed = false;
+  // While paused (a control call the browser tests make), deliveries wait instead of going out.
+  let paused = false;
+  const held: Delivery[] = [];
   const retryBase = options.retryBaseMs ?? 1000;
   const maxRetry = options.maxRetryMs ?? 60_000;
   const maxAttempts = options.maxAttempts ?? 12;
@@ -150,6 +153,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   async function attempt(delivery: Delivery) {
     delivery.nextAt = null;
     if (closed || !webhookUrl) return;
+    if (paused) {
+      held.push(delivery);
+      return;
+    }
     delivery.attempts += 1;
     delivery.inFlight = true;
     try {
@@ -381,6 +388,15 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   async function control(req: http.IncomingMessage, res: http.ServerResponse, path: string) {
     let m: RegExpExecArray | null;
     if (path === '/_fake/health') return send(res, 200, { ok: true });
+    if (req.method === 'POST' && path === '/_fake/webhooks/pause') {
+      paused = true;
+      return send(res, 200, { paused });
+    }
+    if (req.method === 'POST' && path === '/_fake/webhooks/resume') {
+      paused = false;
+      for (const d of held.splice(0)) later(() => void attempt(d), 0);
+      return send(res, 200, { paused });
+    }
     if (req.method === 'GET' && path === '/_fake/events') return send(res, 200, { deliveries: deliveries.map(({ payload: _p, ...d }) => d) });
     if (req.method === 'POST' && (m = /^\/_fake\/checkout\/([\w-]+)\/pay$/.exec(path))) {
       const body = JSON.parse((await readBody(req)) || '{}') as { card?: string };

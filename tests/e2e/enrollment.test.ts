@@ -62,11 +62,18 @@ describe('enrolling and paying in the browser', () => {
     await page.getByRole('alert').filter({ hasText: 'Your card was declined' }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
 
-    await page.getByLabel('Card number').fill('4242 4242 4242 4242');
-    await page.getByRole('button', { name: /^Pay/ }).click();
-    await page.waitForURL(/\/checkout\/success\?session_id=cs_test_/);
-    await page.getByRole('heading', { name: /You are enrolled|Confirming your payment/ }).waitFor();
-    expect(await seriousViolations(page)).toEqual([]);
+    // Webhooks are held back for a moment, so the success page is seen waiting for the payment.
+    const payments = process.env.E2E_PAYMENTS_URL!;
+    await fetch(`${payments}/_fake/webhooks/pause`, { method: 'POST' });
+    try {
+      await page.getByLabel('Card number').fill('4242 4242 4242 4242');
+      await page.getByRole('button', { name: /^Pay/ }).click();
+      await page.waitForURL(/\/checkout\/success\?session_id=cs_test_/);
+      await page.getByRole('heading', { name: 'Confirming your payment…' }).waitFor();
+      expect(await seriousViolations(page)).toEqual([]);
+    } finally {
+      await fetch(`${payments}/_fake/webhooks/resume`, { method: 'POST' });
+    }
     await page.getByRole('heading', { name: 'You are enrolled' }).waitFor({ timeout: 45_000 });
 
     await page.waitForURL('**/pantry', { timeout: 45_000 });
