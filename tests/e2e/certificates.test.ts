@@ -72,8 +72,9 @@ describe('certificates in the browser', () => {
     await signIn(page, 'wren@cedarhollow.example', 'demo-wren-pass');
     await page.goto('/pantry');
     await page.getByRole('heading', { name: 'Your certificates' }).waitFor();
-    expect(await page.getByText('XJC3-GMFM-3AEY-FWPY').count()).toBe(1);
-    expect(await page.getByRole('link', { name: 'See the refresher course' }).count()).toBe(1);
+    const certificates = page.getByRole('region', { name: 'Your certificates' });
+    expect(await certificates.getByText('XJC3-GMFM-3AEY-FWPY', { exact: true }).count()).toBe(1);
+    expect(await certificates.getByRole('link', { name: 'See the refresher course' }).count()).toBe(1);
     const download = await page.request.get('/api/certificates/XJC3-GMFM-3AEY-FWPY/pdf');
     expect(download.status()).toBe(200);
     expect(download.headers()['content-type']).toBe('application/pdf');
