@@ -28,8 +28,8 @@ export function QuizResult({ attempt, retryHref }: { attempt: AttemptView; retry
   const byId = new Map(attempt.questions.map((q) => [q.id, q]));
   return (
     <section aria-labelledby="quiz-result-heading" className="space-y-6" data-testid="quiz-result">
-      <div className={cn('rounded-jar border-l-8 bg-white p-5 shadow-shelf', result.passed ? 'border-brine-600' : 'border-beet-600')}>
-        <h2 id="quiz-result-heading" className="text-2xl font-bold" role="status">
+      <div className={cn('rounded-jar border-l-8 bg-white p-5 shadow-shelf', result.passed ? 'border-brine-600' : 'border-beet-600')} role="status">
+        <h2 id="quiz-result-heading" className="text-2xl font-bold">
           {result.passed ? 'Passed' : 'Not passed yet'}: {result.scorePct} %
         </h2>
         <p className="mt-1 text-ink-soft">

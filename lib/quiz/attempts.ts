@@ -180,8 +180,14 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
   });
 }
 
-async function lockedAttempt(id: number, transaction: Transaction): Promise<AttemptRow | null> {
-  const rows = await db().sequelize.query<AttemptRow>('SELECT * FROM quiz_attempts WHERE id = :id FOR UPDATE', { replacements: { id }, type: QueryTypes.SELECT, transaction });
+/** The attempt, locked, with the workshop of the learner's current enrollment (one round trip). */
+async function lockedAttempt(id: number, transaction: Transaction): Promise<(AttemptRow & { workshopId: number | null }) | null> {
+  const rows = await db().sequelize.query<AttemptRow & { workshopId: number | null }>(
+    `SELECT qa.*, (SELECT e.workshopId FROM enrollments e WHERE e.userId = qa.userId AND e.courseId = qa.courseId AND e.status IN ('active', 'completed')
+                    ORDER BY e.createdAt DESC LIMIT 1) AS workshopId
+       FROM quiz_attempts qa WHERE qa.id = :id FOR UPDATE`,
+    { replacements: { id }, type: QueryTypes.SELECT, transaction },
+  );
   return rows[0] ?? null;
 }
 
@@ -215,11 +221,7 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
     });
     if (grade.results.length) {
       // The workshop the answers count towards: that of the learner's current enrollment in the course.
-      const [enrollment] = await sequelize.query<{ workshopId: number | null }>(
-        "SELECT workshopId FROM enrollments WHERE userId = :userId AND courseId = :courseId AND status IN ('active', 'completed') ORDER BY createdAt DESC LIMIT 1",
-        { replacements: { userId: row.userId, courseId: row.courseId }, type: QueryTypes.SELECT, transaction },
-      );
-      const workshopId = enrollment?.workshopId ?? null;
+      const workshopId = row.workshopId ?? null;
       const values: string[] = [];
       const replacements: unknown[] = [];
       for (const r of grade.results) {
