@@ -6,20 +6,10 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
+import type { PublicWorkshop } from '@/lib/enrollment/workshops';
 
-export type WorkshopItem = {
-  id: number;
-  courseSlug: string;
-  startsAt: string;
-  endsAt: string;
-  timeZone: string;
-  place: string;
-  seats: number;
-  seatsLeft: number;
-  instructorName: string | null;
-  attendanceRequired: boolean;
-  myStatus: string | null;
-};
+// The route answers the server's PublicWorkshop shape; the type import is erased from the client bundle.
+export type WorkshopItem = PublicWorkshop;
 
 class FetchError extends Error {
   constructor(message: string, readonly status: number) {
