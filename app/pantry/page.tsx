@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { PantryCertificates } from '@/components/certificates/pantry-certificates';
 import { PantryShelves } from '@/components/pantry/pantry-shelves';
+import { PantryPracticals } from '@/components/practicals/pantry-practicals';
 import { requirePageRole } from '@/lib/auth/guard';
 
 export const metadata: Metadata = { title: 'Pantry' };
@@ -11,6 +12,7 @@ export default async function PantryPage() {
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Your Pantry</h1>
       <PantryShelves />
+      <PantryPracticals userId={user.id} />
       <PantryCertificates userId={user.id} />
     </div>
   );

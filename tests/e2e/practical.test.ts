@@ -120,5 +120,11 @@ describe('practical batch from the learner to the Tasting table', () => {
     await page.getByTestId('practical-status').getByText('Approved').waitFor();
     expect(await page.getByTestId('round-1').getByText(/Clean rims and good seals/).count()).toBe(1);
     expect(await seriousViolations(page)).toEqual([]);
+
+    // The Pantry shows the same review beside the course.
+    await page.goto('/pantry');
+    const panel = page.getByRole('region', { name: 'Practical batches' }).getByTestId('practical-status');
+    await panel.getByText('Approved').waitFor();
+    expect(await seriousViolations(page)).toEqual([]);
   });
 });
