@@ -2,6 +2,7 @@ import path from 'node:path';
 import { createRequire } from 'node:module';
 import { Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
+import { createSequelize } from './db';
 
 type Step = { up: (qi: unknown, S: typeof Sequelize) => Promise<unknown>; down: (qi: unknown, S: typeof Sequelize) => Promise<unknown> };
 
@@ -30,3 +31,42 @@ function umzugFor(sequelize: Sequelize, folder: 'migrations' | 'seeders', tableN
 
 export const migrator = (sequelize: Sequelize) => umzugFor(sequelize, 'migrations', 'SequelizeMeta');
 export const seeder = (sequelize: Sequelize) => umzugFor(sequelize, 'seeders', 'SequelizeData');
+
+/**
+ * Drops and recreates the database named in `url`, then migrates it (and seeds it with `seed`).
+ * Only names matching `allowed` are touched, so a test or benchmark can never wipe the demo's data.
+ */
+export async function rebuildDatabase(url: string, options: { allowed: RegExp; purpose: string; seed?: boolean }): Promise<void> {
+  const name = decodeURIComponent(new URL(url).pathname.slice(1));
+  if (!options.allowed.test(name)) throw new Error(`Refusing to rebuild "${name}": ${options.purpose} only use databases matching ${options.allowed}`);
+  const serverUrl = new URL(url);
+  serverUrl.pathname = '/information_schema';
+  const server = createSequelize(serverUrl.toString());
+  try {
+    await server.query(`DROP DATABASE IF EXISTS \`${name}\``);
+    await server.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+  } finally {
+    await server.close();
+  }
+  const sequelize = createSequelize(url);
+  try {
+    await migrator(sequelize).up();
+    if (options.seed) await seeder(sequelize).up();
+  } finally {
+    await sequelize.close();
+  }
+}
+
+/** Polls `url` until it answers 2xx, or throws after `timeoutMs`. */
+export async function waitForOk(url: string, timeoutMs: number): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      // not up yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`${url} did not answer within ${timeoutMs} ms`);
+}

@@ -7,31 +7,16 @@
  * server-only modules load outside Next).
  */
 import { QueryTypes } from 'sequelize';
-import { createSequelize } from '../lib/db';
-import { migrator } from '../lib/migrator';
+import { rebuildDatabase } from '../lib/migrator';
 
 const COUNT = Number(process.env.BENCH_COUNT ?? 500);
 const CONCURRENCY = Number(process.env.BENCH_CONCURRENCY ?? 4);
-
-async function rebuild(url: string) {
-  const name = new URL(url).pathname.slice(1);
-  if (!/^brinewright_bench\w*$/.test(name)) throw new Error(`Refusing to rebuild "${name}": the benchmark only uses databases named brinewright_bench*`);
-  const serverUrl = new URL(url);
-  serverUrl.pathname = '/information_schema';
-  const admin = createSequelize(serverUrl.toString());
-  await admin.query(`DROP DATABASE IF EXISTS \`${name}\``);
-  await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-  await admin.close();
-  const sequelize = createSequelize(url);
-  await migrator(sequelize).up();
-  await sequelize.close();
-}
 
 async function main() {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set: run `npm run bench:certificates`');
   process.env.NEXTAUTH_SECRET ??= 'bench-secret-0123456789abcdef';
-  await rebuild(url);
+  await rebuildDatabase(url, { allowed: /^brinewright_bench\w*$/, purpose: 'benchmarks' });
 
   // Loaded after DATABASE_URL is final: these read the environment once.
   const { db } = await import('../models');

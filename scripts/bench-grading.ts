@@ -9,7 +9,7 @@ import path from 'node:path';
 import * as mariadb from 'mariadb';
 import { createRequire } from 'node:module';
 import { createSequelize } from '../lib/db';
-import { migrator, seeder } from '../lib/migrator';
+import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { COMPUTE_FNS } from '../lib/quiz/compute';
 import { drawQuestions, rightAnswer, type Answers } from '../lib/quiz/grading';
 import { parseBankFile, resolveBanks } from '../lib/quiz/resolve';
@@ -38,30 +38,9 @@ function percentile(values: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
 }
 
-async function waitFor(url: string, ms: number) {
-  const until = Date.now() + ms;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      /* not up yet */
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${url} did not answer in ${ms} ms`);
-}
-
 async function prepareDatabase() {
-  const server = new URL(dbUrl!);
-  const name = server.pathname.slice(1);
-  server.pathname = '/information_schema';
-  const admin = createSequelize(server.toString());
-  await admin.query(`DROP DATABASE IF EXISTS \`${name}\``);
-  await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-  await admin.close();
+  await rebuildDatabase(dbUrl!, { allowed: /^brinewright_bench\w*$/, purpose: 'benchmarks', seed: true });
   const sequelize = createSequelize(dbUrl!);
-  await migrator(sequelize).up();
-  await seeder(sequelize).up();
 
   const dir = path.join(root, 'content/quizzes');
   const banks = resolveBanks(
@@ -173,7 +152,7 @@ async function main() {
   let pool: mariadb.Pool | undefined;
   try {
     app = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(APP_PORT), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
-    await waitFor(`${base}/api/health`, 60_000);
+    await waitForOk(`${base}/api/health`, 60_000);
     const cookie = await sessionCookie(base);
 
     // Warm-up: a few submissions so the route is compiled and the pool is open.

@@ -12,6 +12,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import zlib from 'node:zlib';
+import { waitForOk } from '../lib/migrator';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: object) => AutocannonInstance;
@@ -36,20 +37,6 @@ function stopAll() {
 }
 process.on('exit', stopAll);
 process.on('SIGINT', () => process.exit(130));
-
-async function waitFor(url: string, timeoutMs: number) {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    try {
-      const response = await fetch(url);
-      if (response.ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${url} did not answer within ${timeoutMs} ms`);
-}
 
 function appEnv(): NodeJS.ProcessEnv {
   const secretFile = path.join(root, '.data', 'nextauth-secret');
@@ -178,7 +165,7 @@ async function main() {
   log(`starting the app on ${appUrl}`);
   const app = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(appPort), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
   children.push(app);
-  await waitFor(appUrl + lessonPath, 60_000);
+  await waitForOk(appUrl + lessonPath, 60_000);
 
   const pages = [
     { name: 'lesson', path: lessonPath, file: 'lesson.html' },
@@ -190,7 +177,7 @@ async function main() {
     fs.writeFileSync(path.join(dir, 'www', page.file), await response.text());
   }
   startNginx(nginx, dir);
-  await waitFor(`${nginxUrl}/lesson.html`, 10_000);
+  await waitForOk(`${nginxUrl}/lesson.html`, 10_000);
 
   log('first-load JS (every <script src> and script preload in the HTML, sizes as served and gzip -9)');
   const bare = await firstLoadJs('/');

@@ -16,7 +16,7 @@ import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
 import { createSequelize } from '../lib/db';
-import { migrator, seeder } from '../lib/migrator';
+import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { MAX_PHOTO_BYTES, processPhoto } from '../lib/practicals/images';
 
 // autocannon ships no type declarations; only the parts used here are typed.
@@ -73,19 +73,6 @@ async function reencodeChild(file: string) {
 
 function run(cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env): string {
   return execFileSync(cmd, args, { cwd: root, env, encoding: 'utf8' }).trim();
-}
-
-async function waitFor(url: string, ms: number) {
-  const until = Date.now() + ms;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${url} did not answer`);
 }
 
 /** Signs in through next-auth's credentials callback and returns the session cookie header. */
@@ -189,12 +176,7 @@ async function main() {
   const server = new URL(url);
   server.pathname = '/information_schema';
   const admin = createSequelize(server.toString());
-  await admin.query(`DROP DATABASE IF EXISTS \`${dbName}\``);
-  await admin.query(`CREATE DATABASE \`${dbName}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-  const sequelize = createSequelize(url);
-  await migrator(sequelize).up();
-  await seeder(sequelize).up();
-  await sequelize.close();
+  await rebuildDatabase(url, { allowed: /^brinewright_bench\w*$/, purpose: 'benchmarks', seed: true });
   const seeded = await seedSubmissions(url, 5000);
   console.log(`[bench] ${seeded} submissions in ${dbName}`);
 
@@ -216,7 +198,7 @@ async function main() {
   const before = new Set(fs.existsSync(photosRoot) ? (fs.readdirSync(photosRoot, { recursive: true }) as string[]) : []);
   let app: ChildProcess | undefined = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
   try {
-    await waitFor(`${base}/api/health`, 60_000);
+    await waitForOk(`${base}/api/health`, 60_000);
 
     // 1b. Upload over HTTP as the demo learner.
     const learner = await signIn(base, 'learner@cedarhollow.example', 'demo-learner-pass');

@@ -2,44 +2,18 @@ import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { createSequelize } from '../../lib/db';
-import { migrator, seeder } from '../../lib/migrator';
+import { rebuildDatabase, waitForOk } from '../../lib/migrator';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 let server: ChildProcess | undefined;
 const services: ChildProcess[] = [];
-
-async function waitFor(url: string, timeoutMs: number) {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    try {
-      const response = await fetch(url);
-      if (response.ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${url} did not answer within ${timeoutMs} ms`);
-}
 
 // Browser tests run against a production build on its own port and its own database,
 // migrated and seeded with the demo program like `npm run demo`.
 export default async function setup() {
   const url = process.env.E2E_DATABASE_URL;
   if (!url) throw new Error('E2E_DATABASE_URL is not set: run the tests through `npm test` (scripts/test.sh).');
-  const name = new URL(url).pathname.slice(1);
-  if (!/^brinewright_e2e\w*$/.test(name)) throw new Error(`Refusing to rebuild "${name}": browser tests only use databases named brinewright_e2e*`);
-  const serverUrl = new URL(url);
-  serverUrl.pathname = '/information_schema';
-  const admin = createSequelize(serverUrl.toString());
-  await admin.query(`DROP DATABASE IF EXISTS \`${name}\``);
-  await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-  await admin.close();
-  const sequelize = createSequelize(url);
-  await migrator(sequelize).up();
-  await seeder(sequelize).up();
-  await sequelize.close();
+  await rebuildDatabase(url, { allowed: /^brinewright_e2e\w*$/, purpose: 'browser tests', seed: true });
 
   const port = Number(process.env.E2E_PORT ?? 3100);
   const baseUrl = `http://127.0.0.1:${port}`;
@@ -74,7 +48,7 @@ export default async function setup() {
   process.once('exit', () => services.forEach((child) => child.kill('SIGTERM')));
   services.push(spawn(tsx, ['scripts/fakes.ts'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] }));
   services.push(spawn(tsx, ['--conditions=react-server', 'scripts/worker.ts'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] }));
-  await waitFor(`http://127.0.0.1:${port + 1}/_fake/health`, 30_000);
+  await waitForOk(`http://127.0.0.1:${port + 1}/_fake/health`, 30_000);
   process.env.E2E_MAILBOX_URL = `http://127.0.0.1:${port + 3}`;
   process.env.E2E_PAYMENTS_URL = `http://127.0.0.1:${port + 1}`;
   if (process.env.E2E_SKIP_BUILD !== '1' || !fs.existsSync(path.join(root, distDir, 'BUILD_ID'))) {
@@ -82,7 +56,7 @@ export default async function setup() {
     if (build.status !== 0) throw new Error('next build failed for the browser tests');
   }
   server = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] });
-  await waitFor(`${baseUrl}/api/health`, 60_000);
+  await waitForOk(`${baseUrl}/api/health`, 60_000);
   process.env.E2E_BASE_URL = baseUrl;
 
   return async () => {
