@@ -44,7 +44,27 @@ const EnvSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3).default('Brinewright <hello@brinewright.example>'),
   MAILBOX_URL: z.url().optional(),
-});
+  // Photo store (lib/storage): the disk under .data/photos by default; an S3-compatible bucket when
+  // several app servers share the photos. Read when the server starts, not at build time.
+  STORAGE_DRIVER: z.enum(['disk', 's3'], { error: 'STORAGE_DRIVER must be disk or s3' }).default('disk'),
+  S3_ENDPOINT: z.url({ error: 'S3_ENDPOINT is malformed: expected a URL such as http://127.0.0.1:9000' }).optional(),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  S3_BUCKET: z
+    .string()
+    .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'S3_BUCKET is malformed: 3 to 63 lower-case letters, digits, dots and hyphens')
+    .optional(),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false'], { error: 'S3_FORCE_PATH_STYLE must be true or false' }).default('false').transform((v) => v === 'true'),
+}).superRefine(requireS3Settings);
+
+/** With STORAGE_DRIVER=s3 the bucket and its keys are required. */
+function requireS3Settings(env: { STORAGE_DRIVER: string; S3_BUCKET?: string; S3_ACCESS_KEY_ID?: string; S3_SECRET_ACCESS_KEY?: string }, ctx: z.RefinementCtx) {
+  if (env.STORAGE_DRIVER !== 's3') return;
+  for (const name of ['S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'] as const) {
+    if (!env[name]) ctx.addIssue({ code: 'custom', path: [name], message: `${name} is missing: STORAGE_DRIVER=s3 needs it` });
+  }
+}
 
 export type Env = z.infer<typeof EnvSchema>;
 
