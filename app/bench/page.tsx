@@ -8,6 +8,7 @@ import {
   PressureCalculator,
   ProcessingTimeCalculator,
   SaltCalculator,
+  SugarCalculator,
   UnitConverter,
 } from '@/components/calculators';
 
@@ -22,6 +23,7 @@ export const dynamic = 'force-static';
 const TOOLS = [
   { id: 'brine', label: 'Brine acidity', Calculator: BrineCalculator },
   { id: 'salt', label: 'Salt by weight', Calculator: SaltCalculator },
+  { id: 'sugar', label: 'Sugar by weight', Calculator: SugarCalculator },
   { id: 'headspace', label: 'Headspace', Calculator: HeadspaceCalculator },
   { id: 'processing-time', label: 'Processing time', Calculator: ProcessingTimeCalculator },
   { id: 'pressure', label: 'Pressure canner', Calculator: PressureCalculator },

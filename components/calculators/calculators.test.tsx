@@ -10,6 +10,7 @@ import {
   PressureCalculator,
   ProcessingTimeCalculator,
   SaltCalculator,
+  SugarCalculator,
   UnitConverter,
 } from './index';
 
@@ -104,6 +105,23 @@ describe('SaltCalculator', () => {
     expect(screen.getByText(/cloudy/)).toBeInTheDocument();
     await retype(user, screen.getByLabelText('Amount of salt'), '-2');
     expect(screen.getByLabelText('Amount of salt')).toHaveAccessibleDescription(expect.stringContaining('The amount of salt cannot be negative.'));
+  });
+});
+
+describe('SugarCalculator', () => {
+  it('weighs sugar and gives its share of the syrup (USDA FoodData Central SR Legacy, 1 cup granulated = 200 g; from memory)', async () => {
+    const user = userEvent.setup();
+    render(<SugarCalculator />);
+    expect(screen.getByTestId('sugar-grams')).toHaveTextContent('400 g');
+    // USDA Guide 6 bread-and-butter pickles: 4 1/2 cups sugar in 4 cups vinegar (from memory).
+    await retype(user, screen.getByLabelText('Amount of sugar'), '4 1/2');
+    await retype(user, screen.getByLabelText(/Vinegar and water/), '946');
+    expect(screen.getByTestId('sugar-grams')).toHaveTextContent('900 g');
+    expect(screen.getByText(/Sugar in the syrup: 48.8% by weight/)).toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Kind of sugar'), 'brown-packed');
+    expect(screen.getByTestId('sugar-grams')).toHaveTextContent('990 g');
+    await retype(user, screen.getByLabelText('Amount of sugar'), 'lots');
+    expect(screen.getByLabelText('Amount of sugar')).toHaveAccessibleDescription(expect.stringContaining('amount of sugar'));
   });
 });
 

@@ -6,4 +6,5 @@ export { HeadspaceCalculator } from './headspace-calculator';
 export { PressureCalculator } from './pressure-calculator';
 export { ProcessingTimeCalculator } from './processing-time-calculator';
 export { SaltCalculator } from './salt-calculator';
+export { SugarCalculator } from './sugar-calculator';
 export { UnitConverter } from './unit-converter';

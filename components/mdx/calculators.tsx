@@ -29,6 +29,7 @@ function slot<P extends object>(Calculator: ComponentType<P>, name: string) {
 
 const Brine = dynamic(() => import('@/components/calculators/brine-calculator').then((m) => m.BrineCalculator), { loading: CalculatorLoading });
 const Salt = dynamic(() => import('@/components/calculators/salt-calculator').then((m) => m.SaltCalculator), { loading: CalculatorLoading });
+const Sugar = dynamic(() => import('@/components/calculators/sugar-calculator').then((m) => m.SugarCalculator), { loading: CalculatorLoading });
 const Headspace = dynamic(() => import('@/components/calculators/headspace-calculator').then((m) => m.HeadspaceCalculator), { loading: CalculatorLoading });
 const ProcessingTime = dynamic(() => import('@/components/calculators/processing-time-calculator').then((m) => m.ProcessingTimeCalculator), { loading: CalculatorLoading });
 const Pressure = dynamic(() => import('@/components/calculators/pressure-calculator').then((m) => m.PressureCalculator), { loading: CalculatorLoading });
@@ -41,6 +42,7 @@ type Props<T extends keyof typeof import('@/components/calculators')> = Componen
 
 export const BrineCalculator = slot<Props<'BrineCalculator'>>(Brine, 'Brine acidity calculator');
 export const SaltCalculator = slot<Props<'SaltCalculator'>>(Salt, 'Salt calculator');
+export const SugarCalculator = slot<Props<'SugarCalculator'>>(Sugar, 'Sugar calculator');
 export const HeadspaceCalculator = slot<Props<'HeadspaceCalculator'>>(Headspace, 'Headspace checker');
 export const ProcessingTimeCalculator = slot<Props<'ProcessingTimeCalculator'>>(ProcessingTime, 'Processing time calculator');
 export const PressureCalculator = slot<Props<'PressureCalculator'>>(Pressure, 'Pressure canner calculator');

@@ -3,6 +3,7 @@
 export const CALCULATOR_NAMES = [
   'BrineCalculator',
   'SaltCalculator',
+  'SugarCalculator',
   'HeadspaceCalculator',
   'ProcessingTimeCalculator',
   'PressureCalculator',

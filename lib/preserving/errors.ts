@@ -114,6 +114,8 @@ export const RULES = {
   produceG: { param: 'produceG', label: 'the produce in grams' },
   produceWaterPct: { param: 'produceWaterPct', label: 'the water in the produce in %', max: 100 },
   amount: { param: 'amount', label: 'the amount of salt' },
+  sugarAmount: { param: 'amount', label: 'the amount of sugar' },
+  liquidMl: { param: 'liquidMl', label: 'the vinegar and water in mL' },
   brinePct: { param: 'brinePct', label: 'the brine strength in %', max: 26 },
   psig: { param: 'psig', label: 'the gauge pressure in psi', max: 20 },
   processedMinutes: { param: 'processedMinutes', label: 'the minutes processed' },

@@ -6,6 +6,7 @@ export * from './boiling';
 export * from './headspace';
 export * from './acidity';
 export * from './salt';
+export * from './sugar';
 export * from './crisping';
 export * from './batch';
 export * from './units';

@@ -1,5 +1,5 @@
 import { PreservingError, checkChoice, checkNumber, RULES } from './errors';
-import { convert, isUnit, unitKind, type Unit } from './units';
+import { gramsOf, type Unit } from './units';
 
 export const SALT_KINDS = ['canning', 'table', 'kosher-flake', 'kosher-coarse', 'sea-fine'] as const;
 export type SaltKind = (typeof SALT_KINDS)[number];
@@ -61,10 +61,7 @@ export function saltToGrams({ salt, amount, unit, waterMl }: SaltToGramsInput): 
   const kind = checkChoice(salt, SALT_KINDS, 'salt', 'a kind of salt');
   const info = SALTS[kind];
   const value = checkNumber(amount, RULES.amount);
-  if (!isUnit(unit) || (unitKind(unit) !== 'volume' && unitKind(unit) !== 'mass')) {
-    throw new PreservingError('invalid', 'Choose a unit for the salt: a volume (tsp, tbsp, cup, mL…) or a weight (g, kg, oz, lb).', 'unit');
-  }
-  const grams = unitKind(unit) === 'mass' ? convert(value, unit, 'g') : convert(value, unit, 'tsp') * info.gPerTsp;
+  const grams = gramsOf(value, unit, info.gPerTsp * 48, 'the salt');
   const result: SaltToGramsResult = { grams, suitable: info.suitable, why: info.why, gPerTsp: info.gPerTsp };
   if (waterMl !== undefined) {
     const water = checkNumber(waterMl, RULES.waterMl);

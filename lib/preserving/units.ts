@@ -101,3 +101,14 @@ export const mlPer = (unit: Exclude<Unit, 'g' | 'kg' | 'oz' | 'lb' | 'F' | 'C' |
 export const JAR_ML = { 'half-pint': GALLON_ML / 16, pint: GALLON_ML / 8, quart: GALLON_ML / 4 } as const;
 /** Pint-jar equivalents of each jar size. */
 export const JAR_PINTS = { 'half-pint': 0.5, pint: 1, quart: 2 } as const;
+
+/**
+ * Grams of a dry ingredient given by volume (at a stated grams per US cup) or by weight. `what`
+ * names the ingredient in the message when the unit is neither, e.g. 'the sugar'.
+ */
+export function gramsOf(value: number, unit: Unit | string, gramsPerCup: number, what: string): number {
+  if (!isUnit(unit) || (unitKind(unit) !== 'volume' && unitKind(unit) !== 'mass')) {
+    throw new PreservingError('invalid', `Choose a unit for ${what}: a volume (tsp, tbsp, cup, mL…) or a weight (g, kg, oz, lb).`, 'unit');
+  }
+  return unitKind(unit) === 'mass' ? convert(value, unit, 'g') : convert(value, unit, 'cup') * gramsPerCup;
+}

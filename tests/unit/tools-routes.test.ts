@@ -8,6 +8,7 @@ import { GET as headspace } from '@/app/api/tools/headspace/route';
 import { GET as pressure } from '@/app/api/tools/pressure/route';
 import { GET as processingTime } from '@/app/api/tools/processing-time/route';
 import { GET as salt } from '@/app/api/tools/salt/route';
+import { GET as sugar } from '@/app/api/tools/sugar/route';
 import { LOCAL_GUIDANCE, mlPer } from '@/lib/preserving';
 
 type Handler = (request: Request, context: unknown) => Promise<Response>;
@@ -137,6 +138,24 @@ describe('GET /api/tools/brine', () => {
     await expect400(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 'five', waterMl: 500 }, 'vinegarAcidityPct');
     await expect400(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, produceG: -4 }, 'produceG');
     await expect400(brine, 'brine', { vinegarMl: 0, vinegarAcidityPct: 5, waterMl: 0 }, 'vinegarMl');
+  });
+});
+
+describe('GET /api/tools/sugar', () => {
+  it('answers grams and the syrup share by weight (USDA FoodData Central SR Legacy, 1 cup granulated = 200 g; from memory)', async () => {
+    const { body } = await call(sugar, 'sugar', { sugar: 'granulated', amount: 2, unit: 'cup', liquidMl: 400 });
+    expect(body).toMatchObject({ grams: 400, gPerCup: 200, why: expect.any(String) });
+    expect(body.syrupPct as number).toBeCloseTo(50, 9);
+    const plain = (await call(sugar, 'sugar', { sugar: 'brown-packed', amount: 100, unit: 'g' })).body;
+    expect(plain).toMatchObject({ grams: 100 });
+    expect(plain).not.toHaveProperty('syrupPct');
+  });
+
+  it('answers 400 naming the parameter', async () => {
+    await expect400(sugar, 'sugar', { sugar: 'maple', amount: 1, unit: 'cup' }, 'sugar');
+    await expect400(sugar, 'sugar', { sugar: 'granulated', amount: 'lots', unit: 'cup' }, 'amount');
+    await expect400(sugar, 'sugar', { sugar: 'granulated', amount: 1, unit: 'm' }, 'unit');
+    await expect400(sugar, 'sugar', { sugar: 'granulated', amount: 1, unit: 'cup', liquidMl: -5 }, 'liquidMl');
   });
 });
 
