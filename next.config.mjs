@@ -1,3 +1,41 @@
+// `next dev` runs with NODE_ENV=development; `next build` and `next start` with production.
+const isDev = process.env.NODE_ENV === 'development';
+
+// One static Content-Security-Policy for every page and route (no per-request nonce, so the public
+// pages stay prerendered). Next's inline bootstrap scripts (self.__next_f.push(...)) therefore need
+// 'unsafe-inline' in script-src; 'unsafe-eval' only in development, where React's dev tooling needs it.
+// React `style` attributes (chart bars, photo zoom) need 'unsafe-inline' in style-src.
+const contentSecurityPolicy = [
+  "default-src 'self'",
+  `script-src 'self' 'unsafe-inline'${isDev ? " 'unsafe-eval'" : ''}`,
+  "style-src 'self' 'unsafe-inline'",
+  "img-src 'self' data: blob:",
+  "font-src 'self' data:",
+  `connect-src 'self'${isDev ? ' ws: wss:' : ''}`,
+  "media-src 'self'",
+  "object-src 'none'",
+  "base-uri 'self'",
+  "form-action 'self'",
+  "frame-ancestors 'none'",
+  "frame-src 'none'",
+  "worker-src 'self'",
+  "manifest-src 'self'",
+].join('; ');
+
+export const securityHeaders = [
+  { key: 'Content-Security-Policy', value: contentSecurityPolicy },
+  { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
+  { key: 'X-Content-Type-Options', value: 'nosniff' },
+  { key: 'X-Frame-Options', value: 'DENY' },
+  { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=(), payment=(), usb=()' },
+  { key: 'Cross-Origin-Opener-Policy', value: 'same-origin' },
+  { key: 'Cross-Origin-Resource-Policy', value: 'same-origin' },
+];
+
+// Browsers ignore Strict-Transport-Security on plain http, and the demo and tests serve plain http
+// on 127.0.0.1; behind a TLS-terminating proxy (which sets X-Forwarded-Proto: https) it is sent.
+const httpsOnlyHeaders = [{ key: 'Strict-Transport-Security', value: 'max-age=31536000; includeSubDomains' }];
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize and its driver load modules dynamically; the bundler must leave them to Node.
@@ -7,6 +45,12 @@ const nextConfig = {
   poweredByHeader: false,
   experimental: {
     authInterrupts: true,
+  },
+  async headers() {
+    return [
+      { source: '/:path*', headers: securityHeaders },
+      { source: '/:path*', has: [{ type: 'header', key: 'x-forwarded-proto', value: 'https' }], headers: httpsOnlyHeaders },
+    ];
   },
 };
 

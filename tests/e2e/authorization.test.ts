@@ -1,0 +1,92 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { discoverRoutes } from '../support/app-routes';
+import { createAuthorizationFixtures, FIXTURE_PASSWORD } from './support/authorization-fixtures';
+import { MATRIX, rowKey, SUBJECTS, type Fixtures, type PageRow, type RouteRow, type Subject } from './support/authorization-matrix';
+import { send, signInHttp, type Jar } from './support/http';
+import { securityHeaderProblems } from './support/security-headers';
+
+function discoveredKeys(): string[] {
+  return discoverRoutes().flatMap((r) => {
+    if (r.kind === 'page') return [`page ${r.pattern}`];
+    if (r.kind === 'route') return r.methods.map((m) => `route ${m} ${r.pattern}`);
+    return r.actions.map((a) => `action ${r.pattern} ${a}`);
+  });
+}
+
+describe('the authorization matrix covers app/', () => {
+  it('lists every discovered page, route method and server action, and nothing that is gone', () => {
+    const discovered = new Set(discoveredKeys());
+    const listed = new Set(MATRIX.map(rowKey));
+    expect(discovered.size).toBeGreaterThan(50);
+    expect([...discovered].filter((k) => !listed.has(k)), 'in app/ but not in tests/e2e/support/authorization-matrix.ts').toEqual([]);
+    expect([...listed].filter((k) => !discovered.has(k)), 'in the matrix but no longer in app/').toEqual([]);
+  });
+
+  it('gives every row an answer for each of the six people, and requests at least one column', () => {
+    for (const row of MATRIX) {
+      expect(row.expect, rowKey(row)).toHaveLength(SUBJECTS.length);
+      expect(row.expect.some((e) => e !== 'n/a'), rowKey(row)).toBe(true);
+    }
+  });
+});
+
+describe('the authorization matrix against the running app', () => {
+  let fixtures: Fixtures;
+  const jars = {} as Record<Subject, Jar | undefined>;
+
+  beforeAll(async () => {
+    const people = await createAuthorizationFixtures();
+    fixtures = people.fixtures;
+    jars.visitor = undefined;
+    jars.own = (await signInHttp(people.emails.a, FIXTURE_PASSWORD)).jar;
+    jars.other = jars.own; // A again: the probes point this column at B's records
+    jars.instructor = (await signInHttp('instructor@cedarhollow.example', 'demo-instructor-pass')).jar;
+    jars.coordinator = (await signInHttp('coordinator@cedarhollow.example', 'demo-coordinator-pass')).jar;
+    jars.admin = (await signInHttp('admin@cedarhollow.example', 'demo-admin-pass')).jar;
+  });
+
+  type Outcome = { key: string; subject: Subject; path: string; expected: string; got: string };
+
+  async function walk(row: PageRow | RouteRow): Promise<{ outcomes: Outcome[]; headerProblems: string[] }> {
+    const outcomes: Outcome[] = [];
+    const headerProblems: string[] = [];
+    for (const [i, subject] of SUBJECTS.entries()) {
+      const expected = row.expect[i];
+      if (expected === 'n/a') continue;
+      const request = row.probe(fixtures, subject);
+      const method = row.kind === 'route' ? row.method : 'GET';
+      // Each person from an address of their own, so throttles keyed by address stay apart.
+      const headers = { 'x-forwarded-for': `198.51.100.${i + 10}`, ...(request.headers ?? {}) };
+      const response = await send(request.path, { method, body: request.body, headers, jar: jars[subject] });
+      let got = String(response.status);
+      if (expected === 'signin') {
+        const location = response.headers.get('location') ?? '';
+        const target = new URL(location, 'http://x');
+        got = [302, 303, 307, 308].includes(response.status) && target.pathname === '/signin' && target.searchParams.get('callbackUrl') ? 'signin' : `${response.status} ${location}`;
+      }
+      const body = await response.text();
+      const wanted = row.kind === 'page' ? row.bodyIncludes?.[subject] : undefined;
+      if (wanted && got === String(expected) && !body.includes(wanted)) got = `${got} without “${wanted}”`;
+      outcomes.push({ key: rowKey(row), subject, path: request.path, expected: String(expected), got });
+      headerProblems.push(...securityHeaderProblems(response).map((p) => `${method} ${request.path} as ${subject}: ${p}`));
+    }
+    return { outcomes, headerProblems };
+  }
+
+  it('answers every page and route as the table says, for each person, with the security headers', async () => {
+    const outcomes: Outcome[] = [];
+    const headerProblems: string[] = [];
+    for (const row of MATRIX) {
+      if (row.kind === 'action') continue; // called with each role in tests/integration/server-actions-authz.test.ts
+      const result = await walk(row);
+      outcomes.push(...result.outcomes);
+      headerProblems.push(...result.headerProblems);
+    }
+    const wrong = outcomes.filter((o) => o.got !== o.expected).map((o) => `${o.key} as ${o.subject} (${o.path}): expected ${o.expected}, got ${o.got}`);
+    expect(wrong).toEqual([]);
+    expect(headerProblems).toEqual([]);
+    // The walk really asked: one request per requested cell.
+    const cells = MATRIX.filter((r) => r.kind !== 'action').reduce((n, r) => n + r.expect.filter((e) => e !== 'n/a').length, 0);
+    expect(outcomes).toHaveLength(cells);
+  }, 240_000);
+});

@@ -1,0 +1,232 @@
+// The authorization matrix: every page, route handler (each method) and server action under app/,
+// with the answer each kind of person must get. tests/e2e/authorization.test.ts walks the pages and
+// routes against the running production build with real sessions; the server actions are called
+// with each role in tests/integration/server-actions-authz.test.ts. Both fail when app/ has a page,
+// method or action that this table does not list, or when the table lists one that is gone.
+//
+// Columns (SUBJECTS), always in this order:
+//   visitor      signed out
+//   own          learner A on A's own data (A: active in the flagship course; refresher withdrawn)
+//   other        learner A on learner B's data (B: active in both courses), or on a course only B may use
+//   instructor   the demo instructor (teaches the workshop A and B are in)
+//   coordinator  the demo coordinator
+//   admin        the demo admin
+// Staff columns act on B's data, so "a learner's data, not theirs".
+//
+// Expected answers: an HTTP status; 'signin' = a redirect to /signin?callbackUrl=… (pages, signed out);
+// 'n/a' = the column has no meaning for this row (no one else's data in the request), not requested.
+// For writes, a role that passes the guard is sent a body that fails validation or names a missing
+// record, so the walk proves the guard without changing shared demo data: 400/404 in an allowed column
+// means "let through, then the input was refused", 401/403 means the guard stopped it.
+
+export const SUBJECTS = ['visitor', 'own', 'other', 'instructor', 'coordinator', 'admin'] as const;
+export type Subject = (typeof SUBJECTS)[number];
+export type Expected = number | 'signin' | 'n/a';
+/** One expected answer per subject, in SUBJECTS order. */
+export type Answers = [Expected, Expected, Expected, Expected, Expected, Expected];
+
+/** The ids the walk fills in, made by tests/e2e/support/authorization-fixtures.ts. */
+export type Fixtures = {
+  a: { enrollmentId: number; refresherEnrollmentId: number; attemptId: number; photoId: number; serial: string };
+  b: { enrollmentId: number; refresherEnrollmentId: number; attemptId: number; photoId: number; serial: string; certificateId: number };
+  workshopId: number;
+  /** A practical batch of a third learner waiting at the Tasting table (demo seed). */
+  practicalId: number;
+  /** A small real JPEG for the upload route. */
+  jpeg: Uint8Array;
+};
+
+export type Request = { path: string; body?: unknown; headers?: Record<string, string> };
+export type Probe = (fx: Fixtures, subject: Subject) => Request;
+
+export type PageRow = { kind: 'page'; pattern: string; probe: Probe; expect: Answers; bodyIncludes?: Partial<Record<Subject, string>> };
+export type RouteRow = { kind: 'route'; pattern: string; method: string; probe: Probe; expect: Answers };
+export type ActionExpected = 'pass' | 401 | 403 | 'n/a';
+export type ActionRow = { kind: 'action'; pattern: string; action: string; expect: [ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected] };
+export type MatrixRow = PageRow | RouteRow | ActionRow;
+
+/** A's resource in the `own` column, B's in every other one. */
+const ab = <T>(subject: Subject, own: T, theirs: T) => (subject === 'own' ? own : theirs);
+const at = (path: string): Probe => () => ({ path });
+
+const FLAGSHIP = 'pickling-and-canning';
+const REFRESHER = 'volunteer-refresher';
+const S = 'signin' as const;
+const NA = 'n/a' as const;
+
+// Answer patterns that repeat.
+const PUBLIC: Answers = [200, 200, NA, 200, 200, 200];
+const COORDINATOR_PAGE: Answers = [S, 403, NA, 403, 200, 200];
+const INSTRUCTOR_PAGE: Answers = [S, 403, NA, 200, 200, 200];
+const LEARNER_PAGE: Answers = [S, 200, NA, 403, 403, 403];
+const COORDINATOR_READ: Answers = [401, 403, NA, 403, 200, 200];
+const COORDINATOR_WRITE: Answers = [401, 403, NA, 403, 400, 400];
+const LEARNER_WRITE: Answers = [401, 400, NA, 403, 403, 403];
+
+const pages: PageRow[] = [
+  { kind: 'page', pattern: '/', probe: at('/'), expect: PUBLIC },
+  { kind: 'page', pattern: '/admin/users', probe: at('/admin/users'), expect: [S, 403, NA, 403, 403, 200] },
+  { kind: 'page', pattern: '/bench', probe: at('/bench'), expect: PUBLIC },
+  // Another learner's enrollment number in the address shows nothing of theirs.
+  { kind: 'page', pattern: '/checkout/cancel', probe: (fx, s) => ({ path: `/checkout/cancel?enrollment=${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }), expect: [S, 200, 200, 403, 403, 403] },
+  {
+    kind: 'page',
+    pattern: '/checkout/success',
+    probe: (fx, s) => ({ path: `/checkout/success?enrollment=${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }),
+    expect: [S, 200, 200, 403, 403, 403],
+    bodyIncludes: { other: 'We could not find that checkout' },
+  },
+  { kind: 'page', pattern: '/confirm-email', probe: at('/confirm-email?token=not-a-token'), expect: PUBLIC },
+  { kind: 'page', pattern: '/courses', probe: at('/courses'), expect: PUBLIC },
+  { kind: 'page', pattern: '/courses/[course]', probe: at(`/courses/${FLAGSHIP}`), expect: PUBLIC },
+  { kind: 'page', pattern: '/desk', probe: at('/desk'), expect: COORDINATOR_PAGE },
+  { kind: 'page', pattern: '/desk/payments', probe: at('/desk/payments'), expect: COORDINATOR_PAGE },
+  { kind: 'page', pattern: '/desk/reports', probe: at('/desk/reports'), expect: COORDINATOR_PAGE },
+  { kind: 'page', pattern: '/desk/waivers', probe: at('/desk/waivers'), expect: COORDINATOR_PAGE },
+  { kind: 'page', pattern: '/desk/workshops', probe: at('/desk/workshops'), expect: COORDINATOR_PAGE },
+  { kind: 'page', pattern: '/desk/workshops/[id]', probe: (fx) => ({ path: `/desk/workshops/${fx.workshopId}` }), expect: COORDINATOR_PAGE },
+  // Members-only lessons: A reads the flagship's; the refresher's belong to learners enrolled in it (B).
+  {
+    kind: 'page',
+    pattern: '/learn/[course]/[lesson]/members',
+    probe: (_fx, s) => ({ path: s === 'other' ? `/learn/${REFRESHER}/acid-and-ph-review/members` : `/learn/${FLAGSHIP}/processing/members` }),
+    expect: [S, 200, 403, 200, 200, 200],
+  },
+  // The same members-only lessons at their public address (proxy.ts rewrites them to …/members).
+  {
+    kind: 'page',
+    pattern: '/learn/[course]/[lesson]',
+    probe: (_fx, s) => ({ path: s === 'other' ? `/learn/${REFRESHER}/time-and-altitude-review` : `/learn/${FLAGSHIP}/processing` }),
+    expect: [S, 200, 403, 200, 200, 200],
+  },
+  // A preview lesson: a static page for everyone.
+  { kind: 'page', pattern: '/learn/[course]/[lesson]', probe: at(`/learn/${FLAGSHIP}/acidity`), expect: PUBLIC },
+  {
+    kind: 'page',
+    pattern: '/learn/[course]/practical',
+    probe: (_fx, s) => ({ path: `/learn/${s === 'other' ? REFRESHER : FLAGSHIP}/practical` }),
+    expect: [S, 200, 200, 403, 403, 403],
+    bodyIncludes: { other: 'The practical is for learners with an active enrollment' },
+  },
+  { kind: 'page', pattern: '/pantry', probe: at('/pantry'), expect: LEARNER_PAGE },
+  {
+    kind: 'page',
+    pattern: '/quiz/[quiz]',
+    probe: (_fx, s) => ({ path: s === 'other' ? `/quiz/${REFRESHER}--quiz` : `/quiz/${FLAGSHIP}--processing` }),
+    expect: [S, 200, 200, 403, 403, 403],
+    bodyIncludes: { other: 'Quizzes are for learners enrolled in this course.' },
+  },
+  { kind: 'page', pattern: '/register', probe: at('/register'), expect: PUBLIC },
+  { kind: 'page', pattern: '/signin', probe: at('/signin'), expect: PUBLIC },
+  { kind: 'page', pattern: '/tasting-table', probe: at('/tasting-table'), expect: INSTRUCTOR_PAGE },
+  { kind: 'page', pattern: '/tasting-table/questions', probe: at('/tasting-table/questions'), expect: INSTRUCTOR_PAGE },
+  { kind: 'page', pattern: '/tasting-table/submissions/[id]', probe: (fx) => ({ path: `/tasting-table/submissions/${fx.practicalId}` }), expect: [S, 403, 403, 200, 200, 200] },
+  { kind: 'page', pattern: '/tasting-table/workshops', probe: at('/tasting-table/workshops'), expect: INSTRUCTOR_PAGE },
+  { kind: 'page', pattern: '/verify', probe: at('/verify'), expect: PUBLIC },
+  // Public by design: anyone holding a serial may check it.
+  { kind: 'page', pattern: '/verify/[serial]', probe: (fx, s) => ({ path: `/verify/${ab(s, fx.a.serial, fx.b.serial)}` }), expect: [200, 200, 200, 200, 200, 200] },
+];
+
+const tool = (name: string, query: string): RouteRow => ({ kind: 'route', pattern: `/api/tools/${name}`, method: 'GET', probe: at(`/api/tools/${name}?${query}`), expect: PUBLIC });
+
+const routes: RouteRow[] = [
+  // Staff may read an attempt (question results, reviews); another learner may not.
+  { kind: 'route', pattern: '/api/attempts/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/attempts/${ab(s, fx.a.attemptId, fx.b.attemptId)}` }), expect: [401, 200, 403, 200, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/attempts/[id]/submit',
+    method: 'POST',
+    probe: (fx, s) => ({ path: `/api/attempts/${ab(s, fx.a.attemptId, fx.b.attemptId)}/submit`, body: { answers: {} } }),
+    expect: [401, 200, 403, 403, 403, 403],
+  },
+  { kind: 'route', pattern: '/api/auth/[...nextauth]', method: 'GET', probe: at('/api/auth/session'), expect: PUBLIC },
+  // Signing out needs next-auth's CSRF token; a bare POST is sent back to the sign-out page.
+  { kind: 'route', pattern: '/api/auth/[...nextauth]', method: 'POST', probe: () => ({ path: '/api/auth/signout', body: '', headers: { 'content-type': 'application/x-www-form-urlencoded' } }), expect: [302, 302, NA, 302, 302, 302] },
+  // The PDF: its owner and the desk; to anyone else the serial does not exist.
+  { kind: 'route', pattern: '/api/certificates/[serial]/pdf', method: 'GET', probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}/pdf` }), expect: [401, 200, 404, 404, 200, 200] },
+  { kind: 'route', pattern: '/api/certificates/[serial]', method: 'GET', probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}` }), expect: [200, 200, 200, 200, 200, 200] },
+  // A's refresher enrollment is withdrawn (not complete: 409); B's is not A's to claim (404).
+  {
+    kind: 'route',
+    pattern: '/api/certificates/refresher',
+    method: 'POST',
+    probe: (fx, s) => ({ path: '/api/certificates/refresher', body: { enrollmentId: ab(s, fx.a.refresherEnrollmentId, fx.b.refresherEnrollmentId) } }),
+    expect: [401, 409, 404, 403, 403, 403],
+  },
+  { kind: 'route', pattern: '/api/courses/[course]/workshops', method: 'GET', probe: at(`/api/courses/${FLAGSHIP}/workshops`), expect: PUBLIC },
+  { kind: 'route', pattern: '/api/desk/certificates/[id]/revoke', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/revoke`, body: {} }), expect: COORDINATOR_WRITE },
+  // An enrollment that does not exist: answered per id (200, not_found), nothing issued.
+  { kind: 'route', pattern: '/api/desk/certificates', method: 'POST', probe: () => ({ path: '/api/desk/certificates', body: { enrollmentIds: [2_000_000_000] } }), expect: COORDINATOR_READ },
+  { kind: 'route', pattern: '/api/desk/enrollments', method: 'GET', probe: at('/api/desk/enrollments'), expect: COORDINATOR_READ },
+  { kind: 'route', pattern: '/api/desk/options', method: 'GET', probe: at('/api/desk/options'), expect: COORDINATOR_READ },
+  { kind: 'route', pattern: '/api/desk/roster', method: 'GET', probe: at('/api/desk/roster'), expect: COORDINATOR_READ },
+  // The workshop's instructor and the desk mark attendance; a learner not even their own.
+  {
+    kind: 'route',
+    pattern: '/api/enrollments/[id]/attendance',
+    method: 'POST',
+    probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/attendance`, body: { attended: false } }),
+    expect: [401, 403, 403, 200, 200, 200],
+  },
+  { kind: 'route', pattern: '/api/enrollments/[id]/refund', method: 'POST', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/refund`, body: {} }), expect: [401, 403, 403, 403, 400, 400] },
+  // Someone else's enrollment is answered as missing (its existence is not revealed).
+  { kind: 'route', pattern: '/api/enrollments/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }), expect: [401, 200, 404, 404, 200, 200] },
+  { kind: 'route', pattern: '/api/enrollments', method: 'POST', probe: () => ({ path: '/api/enrollments', body: {} }), expect: LEARNER_WRITE },
+  { kind: 'route', pattern: '/api/health', method: 'GET', probe: at('/api/health'), expect: PUBLIC },
+  { kind: 'route', pattern: '/api/pantry', method: 'GET', probe: at('/api/pantry'), expect: [401, 200, NA, 403, 403, 403] },
+  { kind: 'route', pattern: '/api/photos/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/photos/${ab(s, fx.a.photoId, fx.b.photoId)}?size=thumb` }), expect: [401, 200, 403, 200, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/photos',
+    method: 'POST',
+    probe: (fx) => {
+      const form = new FormData();
+      form.set('course', FLAGSHIP);
+      form.set('photo', new Blob([fx.jpeg as BlobPart], { type: 'image/jpeg' }), 'batch.jpg');
+      return { path: '/api/photos', body: form };
+    },
+    expect: [401, 201, NA, 403, 403, 403],
+  },
+  { kind: 'route', pattern: '/api/practicals/[id]/review', method: 'POST', probe: (fx) => ({ path: `/api/practicals/${fx.practicalId}/review`, body: {} }), expect: [401, 403, NA, 400, 400, 400] },
+  { kind: 'route', pattern: '/api/practicals', method: 'POST', probe: () => ({ path: '/api/practicals', body: {} }), expect: LEARNER_WRITE },
+  { kind: 'route', pattern: '/api/progress', method: 'GET', probe: at(`/api/progress?course=${FLAGSHIP}`), expect: [401, 200, NA, 403, 403, 403] },
+  { kind: 'route', pattern: '/api/progress', method: 'POST', probe: () => ({ path: '/api/progress', body: { courseSlug: FLAGSHIP, lessonSlug: 'acidity' } }), expect: [401, 201, NA, 403, 403, 403] },
+  // A starts a quiz of their course (201, once per walk); the refresher's are for learners enrolled in it.
+  {
+    kind: 'route',
+    pattern: '/api/quizzes/[quiz]/attempts',
+    method: 'POST',
+    probe: (_fx, s) => ({ path: `/api/quizzes/${s === 'other' ? `${REFRESHER}--quiz` : `${FLAGSHIP}--jars-packing-and-headspace`}/attempts`, body: {} }),
+    expect: [401, 201, 403, 403, 403, 403],
+  },
+  { kind: 'route', pattern: '/api/register', method: 'POST', probe: () => ({ path: '/api/register', body: {} }), expect: [400, 400, NA, 400, 400, 400] },
+  { kind: 'route', pattern: '/api/tasting-table/submissions', method: 'GET', probe: at('/api/tasting-table/submissions'), expect: [401, 403, NA, 200, 200, 200] },
+  tool('batch', 'product=fresh-pack-dill-pickles&jar=pint&jars=7'),
+  tool('boiling-point', 'altitudeFt=5000'),
+  tool('brine', 'vinegarMl=500&vinegarAcidityPct=5&waterMl=500'),
+  tool('convert', 'value=1&from=cup&to=mL'),
+  tool('crisping', 'agent=calcium-chloride&jar=pint&jars=7'),
+  tool('headspace', 'product=fresh-pack-dill-pickles&measuredIn=0.5'),
+  tool('pressure', 'gauge=weighted&altitudeFt=1500'),
+  tool('processing-time', 'product=fresh-pack-dill-pickles&jar=pint&altitudeFt=0'),
+  tool('salt', 'salt=canning&amount=1&unit=tbsp'),
+  tool('sugar', 'sugar=granulated&amount=1&unit=cup'),
+  { kind: 'route', pattern: '/api/waivers', method: 'GET', probe: at('/api/waivers'), expect: COORDINATOR_READ },
+  { kind: 'route', pattern: '/api/waivers', method: 'POST', probe: () => ({ path: '/api/waivers', body: {} }), expect: COORDINATOR_WRITE },
+  // Called by the payment service: the signature on the raw body is the only check, for everyone.
+  { kind: 'route', pattern: '/api/webhooks/stripe', method: 'POST', probe: () => ({ path: '/api/webhooks/stripe', body: '{}', headers: { 'content-type': 'application/json' } }), expect: [400, 400, NA, 400, 400, 400] },
+];
+
+const actions: ActionRow[] = [
+  { kind: 'action', pattern: '/admin/users', action: 'changeRoleAction', expect: [401, 403, NA, 403, 403, 'pass'] },
+  { kind: 'action', pattern: '/desk/workshops', action: 'saveWorkshopAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
+];
+
+export const MATRIX: MatrixRow[] = [...pages, ...routes, ...actions];
+
+/** The key a row and a discovered route share: "page /desk", "route POST /api/waivers", "action /desk/workshops saveWorkshopAction". */
+export function rowKey(row: MatrixRow): string {
+  if (row.kind === 'page') return `page ${row.pattern}`;
+  if (row.kind === 'route') return `route ${row.method} ${row.pattern}`;
+  return `action ${row.pattern} ${row.action}`;
+}

@@ -1,0 +1,91 @@
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { changeRoleAction } from '@/app/admin/users/actions';
+import { saveWorkshopAction } from '@/app/desk/workshops/actions';
+import type { SessionUser } from '@/lib/auth/users';
+import { AppError } from '@/lib/errors';
+import { db } from '@/models';
+import { discoverRoutes } from '../support/app-routes';
+import { MATRIX, SUBJECTS, type ActionExpected, type ActionRow, type Subject } from '../e2e/support/authorization-matrix';
+import { createCourses, createUser, resetDatabase } from '../helpers/db';
+import { actAs } from '../helpers/session';
+
+// Server actions are called as functions with each person signed in (actAs), against the rows of the
+// same authorization matrix the browser-less walk uses. Next's revalidatePath needs a request scope.
+vi.mock('next/cache', async (importOriginal) => ({ ...(await importOriginal<typeof import('next/cache')>()), revalidatePath: vi.fn() }));
+
+type People = Record<Exclude<Subject, 'visitor'>, SessionUser> & { target: SessionUser };
+
+/** One call per action, as the page would make it, for the signed-in person; returns what came back or the status it was refused with. */
+const CALLS: Record<string, (people: People) => Promise<unknown>> = {
+  // The admin page's role select: makes the target learner an instructor.
+  '/admin/users changeRoleAction': (people) => {
+    const form = new FormData();
+    form.set('role', 'instructor');
+    return changeRoleAction(people.target.id, {}, form);
+  },
+  // A new workshop with nothing filled in: the coordinator gets the field errors back.
+  '/desk/workshops saveWorkshopAction': () => saveWorkshopAction(null, {} as Parameters<typeof saveWorkshopAction>[1]),
+};
+
+async function outcome(call: () => Promise<unknown>): Promise<{ result: ActionExpected; value?: unknown }> {
+  try {
+    return { result: 'pass', value: await call() };
+  } catch (error) {
+    if (error instanceof AppError && (error.status === 401 || error.status === 403)) return { result: error.status as 401 | 403 };
+    throw error;
+  }
+}
+
+const actionRows = MATRIX.filter((r): r is ActionRow => r.kind === 'action');
+
+describe('server actions in the authorization matrix', () => {
+  let people: People;
+
+  beforeEach(async () => {
+    await resetDatabase();
+    await createCourses();
+    people = {
+      own: await createUser('learner'),
+      other: await createUser('learner'),
+      instructor: await createUser('instructor'),
+      coordinator: await createUser('coordinator'),
+      admin: await createUser('admin'),
+      target: await createUser('learner'),
+    };
+    actAs(null);
+  });
+
+  it('has a call for every server action in app/ (and the matrix lists each)', () => {
+    const discovered = discoverRoutes().flatMap((r) => (r.kind === 'action' ? r.actions.map((a) => `${r.pattern} ${a}`) : []));
+    expect(discovered.sort()).toEqual(Object.keys(CALLS).sort());
+    expect(actionRows.map((r) => `${r.pattern} ${r.action}`).sort()).toEqual(Object.keys(CALLS).sort());
+  });
+
+  for (const row of actionRows) {
+    it(`${row.pattern} ${row.action}: ${SUBJECTS.map((s, i) => `${s} ${row.expect[i]}`).join(', ')}`, async () => {
+      const got: Record<string, ActionExpected> = {};
+      const wanted: Record<string, ActionExpected> = {};
+      for (const [i, subject] of SUBJECTS.entries()) {
+        if (row.expect[i] === 'n/a') continue;
+        actAs(subject === 'visitor' ? null : people[subject]);
+        const { result, value } = await outcome(() => CALLS[`${row.pattern} ${row.action}`](people));
+        got[subject] = result;
+        wanted[subject] = row.expect[i];
+        // Let through means the action ran: it answers with its own state object.
+        if (result === 'pass') expect(value, `${row.action} as ${subject}`).toMatchObject({ message: expect.any(String) });
+      }
+      expect(got).toEqual(wanted);
+    });
+  }
+
+  it('changes nothing when the guard refuses, and the change when the admin asks', async () => {
+    for (const subject of ['own', 'instructor', 'coordinator'] as const) {
+      actAs(people[subject]);
+      await outcome(() => CALLS['/admin/users changeRoleAction'](people));
+    }
+    expect((await db().User.findByPk(people.target.id))?.role).toBe('learner');
+    actAs(people.admin);
+    expect(await CALLS['/admin/users changeRoleAction'](people)).toEqual({ ok: true, message: 'Role saved.' });
+    expect((await db().User.findByPk(people.target.id))?.role).toBe('instructor');
+  });
+});
