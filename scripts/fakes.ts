@@ -1,7 +1,9 @@
 // Starts both local fakes in one process (the demo and the browser tests run this):
 // the payment server the stripe SDK talks to, and the SMTP server with its mailbox page.
 // Ports and secrets come from the same variables the app reads (see lib/env.ts).
+import path from 'node:path';
 import { startFakePayments } from '../fakes/payments/server';
+import { startFakeS3, type FakeS3 } from '../fakes/s3/server';
 import { startFakeSmtp } from '../fakes/smtp/server';
 import { watchParent } from './watch-parent';
 
@@ -21,8 +23,22 @@ async function main() {
     log: (line) => console.log(`[fake-smtp] ${line}`),
   });
   console.log(`[fakes] payments on ${payments.url}; SMTP on 127.0.0.1:${smtp.smtpPort}; mailbox at ${smtp.webUrl}`);
+  // The S3-compatible store, when the app is configured to keep photos in a bucket on this machine.
+  let s3: FakeS3 | undefined;
+  const s3Endpoint = process.env.STORAGE_DRIVER === 's3' && process.env.S3_ENDPOINT ? new URL(process.env.S3_ENDPOINT) : null;
+  if (s3Endpoint && ['127.0.0.1', 'localhost'].includes(s3Endpoint.hostname)) {
+    s3 = await startFakeS3({
+      port: Number(s3Endpoint.port || 80),
+      root: process.env.FAKE_S3_ROOT ?? path.join(process.cwd(), '.data', 'fake-s3'),
+      accessKeyId: process.env.S3_ACCESS_KEY_ID ?? '',
+      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? '',
+      buckets: process.env.S3_BUCKET ? [process.env.S3_BUCKET] : [],
+      log: (line) => console.log(`[fake-s3] ${line}`),
+    });
+    console.log(`[fakes] S3-compatible store on ${s3.url}, bucket ${process.env.S3_BUCKET}`);
+  }
   const stop = () => {
-    void Promise.allSettled([payments.close(), smtp.close()]).then(() => process.exit(0));
+    void Promise.allSettled([payments.close(), smtp.close(), s3?.close()]).then(() => process.exit(0));
   };
   process.on('SIGTERM', stop);
   process.on('SIGINT', stop);

@@ -12,14 +12,14 @@ export const baseUrl = () => {
   return url;
 };
 
-/** A fresh headless Debian Chromium with an empty profile. */
-export async function openBrowser(): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+/** A fresh headless Debian Chromium with an empty profile (relative addresses go to `base`, the e2e app by default). */
+export async function openBrowser(base: string = baseUrl()): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-e2e-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-    baseURL: baseUrl(),
+    baseURL: base,
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {
