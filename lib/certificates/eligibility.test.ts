@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_REQUIREMENTS, requirementsFromContent } from './catalog';
+import { requirementsFromContent } from './catalog';
 import { checkEligibility, type CourseRequirements, type EnrollmentFacts } from './eligibility';
 
 const course: CourseRequirements = {
@@ -89,7 +89,10 @@ describe('checkEligibility', () => {
   });
 
   it('requires an earlier certificate for the refresher', () => {
-    const refresher = DEFAULT_REQUIREMENTS['volunteer-refresher'];
+    const refresher = requirementsFromContent({ slug: 'volunteer-refresher', finalExam: 'volunteer-refresher--quiz', workshopRequired: false }, [
+      { slug: 'acid-and-ph-review', quiz: 'volunteer-refresher--quiz' },
+      { slug: 'time-and-altitude-review', quiz: 'volunteer-refresher--quiz' },
+    ]);
     const facts: EnrollmentFacts = {
       ...done,
       lessonsRead: ['acid-and-ph-review', 'time-and-altitude-review'],

@@ -1,6 +1,6 @@
 import 'server-only';
 import { getCourse, getLessons } from '@/lib/content';
-import { DEFAULT_REQUIREMENTS, requirementsFromContent } from './catalog';
+import { requirementsFromContent } from './catalog';
 import type { CourseRequirements } from './eligibility';
 
 const EMPTY = (courseSlug: string): CourseRequirements => ({
@@ -14,8 +14,8 @@ const EMPTY = (courseSlug: string): CourseRequirements => ({
 
 /**
  * What a course requires for its certificate, read from its content (front matter `finalExam`,
- * `workshopRequired`, and every lesson with its `quiz`). When the content has no lessons for the
- * course, the shared course contract (catalog.ts) stands in.
+ * `workshopRequired`, and every lesson with its `quiz`). A course with no content files has no
+ * lesson, quiz or exam requirements: only the enrollment and fee checks apply to it.
  */
 export function requirementsForCourse(courseSlug: string): CourseRequirements {
   // Content changes with a deploy, not between requests; reading and checking every MDX file
@@ -33,6 +33,5 @@ const cache = new Map<string, { at: number; requirements: CourseRequirements }>(
 function readRequirements(courseSlug: string): CourseRequirements {
   const course = getCourse(courseSlug);
   const lessons = course ? getLessons(courseSlug) : [];
-  if (course && lessons.length > 0) return requirementsFromContent(course, lessons);
-  return DEFAULT_REQUIREMENTS[courseSlug] ?? EMPTY(courseSlug);
+  return course && lessons.length > 0 ? requirementsFromContent(course, lessons) : EMPTY(courseSlug);
 }
