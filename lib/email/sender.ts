@@ -2,7 +2,7 @@ import 'server-only';
 import crypto from 'node:crypto';
 import os from 'node:os';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { Op, QueryTypes } from 'sequelize';
+import { Op, QueryTypes, Transaction } from 'sequelize';
 import { getEnv } from '@/lib/env';
 import { db, type OutboxEmail } from '@/models';
 import type { OutgoingAttachment } from './outbox';
@@ -52,21 +52,54 @@ export function smtpTransport(): Transporter {
   return transportCache.transport;
 }
 
+const DUE = `((status = 'pending' AND nextAttemptAt <= :now) OR (status = 'sending' AND claimedAt < :stale))`;
+
 /**
- * Claims due rows for this sender. One UPDATE marks them with a claim token no other sender can
- * hold, so two senders running at once never take the same row; they then read back their own rows.
+ * Locks up to `limit` due rows that no other transaction holds, and answers their ids. A plain read
+ * picks candidates first; the locking read then walks the primary key over them (FORCE INDEX, so
+ * there is no sort) with SKIP LOCKED and stops at `limit`, so it locks only the rows it returns. (A
+ * locking read through the status index with a sort — the optimizer's choice for this WHERE — locks
+ * every due row it scans and leaves a second sender nothing.) The due condition is checked again
+ * under the lock, on the latest committed version of each row.
+ */
+export async function lockDueIds(transaction: Transaction, options: { limit: number; now: Date; staleClaimMs: number }): Promise<number[]> {
+  const { sequelize } = db();
+  const replacements = { now: options.now, stale: new Date(options.now.getTime() - options.staleClaimMs), limit: options.limit, candidates: options.limit * 4 };
+  const candidates = await sequelize.query<{ id: number }>(`SELECT id FROM outbox_emails WHERE ${DUE} ORDER BY id LIMIT :candidates`, { replacements, type: QueryTypes.SELECT, transaction });
+  if (!candidates.length) return [];
+  const locked = await sequelize.query<{ id: number }>(`SELECT id FROM outbox_emails FORCE INDEX (PRIMARY) WHERE id IN (:ids) AND ${DUE} ORDER BY id LIMIT :limit FOR UPDATE SKIP LOCKED`, {
+    replacements: { ...replacements, ids: candidates.map((r) => r.id) },
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  return locked.map((r) => r.id);
+}
+
+/**
+ * Claims due rows for this sender in one short READ COMMITTED transaction (no gap locks, so the
+ * app's inserts never wait for it): lockDueIds, then an UPDATE marks the rows with this sender's
+ * token. Two senders running at once never take the same row, and neither waits for the other.
  */
 export async function claimDue(token: string, options: Required<Pick<SenderOptions, 'batchSize' | 'staleClaimMs'>> & { now: Date }): Promise<OutboxEmail[]> {
   const { OutboxEmail, sequelize } = db();
-  return sequelize.transaction(async (transaction) => {
-    await sequelize.query(
-      `UPDATE outbox_emails SET status = 'sending', claimedBy = :token, claimedAt = :now, attempts = attempts + 1, updatedAt = :now
-       WHERE (status = 'pending' AND nextAttemptAt <= :now) OR (status = 'sending' AND claimedAt < :stale)
-       ORDER BY id LIMIT :limit`,
-      { replacements: { token, now: options.now, stale: new Date(options.now.getTime() - options.staleClaimMs), limit: options.batchSize }, type: QueryTypes.UPDATE, transaction },
-    );
-    return OutboxEmail.findAll({ where: { claimedBy: token, status: 'sending' }, order: [['id', 'ASC']], transaction });
+  return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+    const ids = await lockDueIds(transaction, { limit: options.batchSize, now: options.now, staleClaimMs: options.staleClaimMs });
+    if (!ids.length) return [];
+    await sequelize.query(`UPDATE outbox_emails SET status = 'sending', claimedBy = :token, claimedAt = :now, attempts = attempts + 1, updatedAt = :now WHERE id IN (:ids)`, {
+      replacements: { token, now: options.now, ids },
+      type: QueryTypes.UPDATE,
+      transaction,
+    });
+    return OutboxEmail.findAll({ where: { id: { [Op.in]: ids } }, order: [['id', 'ASC']], transaction });
   });
+}
+
+/**
+ * The Message-ID of an outbox row: the same on every attempt, so a message delivered twice (see
+ * sendDueEmails) is recognisable as one by the receiving side and by the tests.
+ */
+export function messageIdFor(row: Pick<OutboxEmail, 'id' | 'createdAt'>): string {
+  return `<outbox-${row.id}-${row.createdAt.getTime()}@brinewright.local>`;
 }
 
 function attachmentsOf(row: OutboxEmail) {
@@ -74,7 +107,14 @@ function attachmentsOf(row: OutboxEmail) {
   return list.map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') }));
 }
 
-/** One round: claim due rows, send each, mark it sent (or schedule the retry). */
+/**
+ * One round: claim due rows, send each, mark it sent (or schedule the retry).
+ *
+ * Delivery is at-least-once, not exactly-once: a row is marked sent only after the SMTP server has
+ * accepted it. If this process dies (or the database goes away) between the two, the row stays
+ * claimed; once its claim is older than `staleClaimMs` another round sends it again, with the same
+ * Message-ID. Nothing is ever lost, and a duplicate is possible only in that window.
+ */
 export async function sendDueEmails(options: SenderOptions = {}): Promise<RoundResult> {
   const now = options.now?.() ?? new Date();
   const token = `${os.hostname()}:${process.pid}:${crypto.randomBytes(6).toString('hex')}`;
@@ -85,6 +125,7 @@ export async function sendDueEmails(options: SenderOptions = {}): Promise<RoundR
   const from = getEnv().MAIL_FROM;
   const { OutboxEmail } = db();
   for (const row of rows) {
+    let smtpError: unknown = null;
     try {
       await transport.sendMail({
         from,
@@ -94,25 +135,31 @@ export async function sendDueEmails(options: SenderOptions = {}): Promise<RoundR
         html: row.htmlBody,
         attachments: attachmentsOf(row),
         headers: { 'X-Brinewright-Kind': row.kind, 'X-Brinewright-Outbox-Id': String(row.id) },
-        messageId: `<outbox-${row.id}-${row.createdAt.getTime()}@brinewright.local>`,
+        messageId: messageIdFor(row),
       });
+    } catch (error) {
+      smtpError = error;
+    }
+    if (smtpError === null) {
+      // Accepted by SMTP. A database failure here propagates: the row stays claimed and is sent
+      // again after staleClaimMs (the at-least-once window), never marked for a quick retry.
       await OutboxEmail.update({ status: 'sent', sentAt: new Date(), lastError: null, claimedBy: null }, { where: { id: row.id, claimedBy: token } });
       result.sent += 1;
-    } catch (error) {
-      const message = (error instanceof Error ? error.message : String(error)).slice(0, 1000);
-      const giveUp = row.attempts >= (options.maxAttempts ?? 20);
-      await OutboxEmail.update(
-        {
-          status: giveUp ? 'failed' : 'pending',
-          lastError: message,
-          claimedBy: null,
-          nextAttemptAt: new Date(now.getTime() + backoffMs(row.attempts, options.backoffBaseMs, options.maxBackoffMs)),
-        },
-        { where: { id: row.id, claimedBy: token } },
-      );
-      if (giveUp) result.failed += 1;
-      else result.retrying += 1;
+      continue;
     }
+    const message = (smtpError instanceof Error ? smtpError.message : String(smtpError)).slice(0, 1000);
+    const giveUp = row.attempts >= (options.maxAttempts ?? 20);
+    await OutboxEmail.update(
+      {
+        status: giveUp ? 'failed' : 'pending',
+        lastError: message,
+        claimedBy: null,
+        nextAttemptAt: new Date(now.getTime() + backoffMs(row.attempts, options.backoffBaseMs, options.maxBackoffMs)),
+      },
+      { where: { id: row.id, claimedBy: token } },
+    );
+    if (giveUp) result.failed += 1;
+    else result.retrying += 1;
   }
   return result;
 }
