@@ -82,10 +82,10 @@ wait_for "http://127.0.0.1:$PORT/api/health" 10
 cat <<MSG
 
   Brinewright cluster demo: http://localhost:$PORT  (nginx, round robin)
-    app server A   http://127.0.0.1:$APP_PORT_A
-    app server B   http://127.0.0.1:$APP_PORT_B
-    photo store    $S3_ENDPOINT  bucket $S3_BUCKET (local S3-compatible fake, files in .data/fake-s3)
-    nginx          config $NGINX_CONF, logs in $CLUSTER_DIR
+    app server A   http://127.0.0.1:$APP_PORT_A  (pid ${PIDS[2]})
+    app server B   http://127.0.0.1:$APP_PORT_B  (pid ${PIDS[3]})
+    photo store    $S3_ENDPOINT  bucket $S3_BUCKET (local S3-compatible fake, files in ${FAKE_S3_ROOT:-.data/fake-s3})
+    nginx          config $NGINX_CONF; access.log there names the app server that answered
   Demo accounts (demo only; never use these passwords anywhere real):
     learner      learner@cedarhollow.example       demo-learner-pass
     instructor   instructor@cedarhollow.example    demo-instructor-pass
@@ -93,7 +93,7 @@ cat <<MSG
     admin        admin@cedarhollow.example         demo-admin-pass
   Local mailbox (every e-mail the demo sends): $MAILBOX_URL
   Test cards on the local checkout page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
-  Stop one app server (kill its pid) and nginx sends everything to the other.
+  Stop one app server (kill PID) and nginx sends everything to the other.
   Stop with Ctrl-C; stop MariaDB with: npm run db:stop
 
 MSG

@@ -229,7 +229,8 @@ export async function startFakeS3(options: FakeS3Options): Promise<FakeS3> {
       const fail = (error: unknown) => {
         const e = error instanceof S3Error ? error : new S3Error(500, 'InternalError', 'We encountered an internal error. Please try again.');
         if (!(error instanceof S3Error)) log(`internal error: ${(error as Error).stack ?? error}`);
-        else log(`${req.method} ${req.url} → ${e.status} ${e.code}`);
+        // A missing key is an ordinary answer (the app asks before it knows); refusals and faults are logged.
+        else if (e.status !== 404) log(`${req.method} ${req.url} → ${e.status} ${e.code}`);
         const xml = `<?xml version="1.0" encoding="UTF-8"?>\n<Error><Code>${e.code}</Code><Message>${xmlEscape(e.message)}</Message><Resource>${xmlEscape(req.url ?? '')}</Resource></Error>`;
         if (res.headersSent) return res.destroy();
         // HEAD answers carry no body; the SDK reads the status alone.
