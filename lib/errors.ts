@@ -47,7 +47,8 @@ export class AppError extends Error {
   }
 
   toJSON() {
-    return { error: this.type, message: this.message, ...(this.fields ? { fields: this.fields } : {}), ...(this.extra ?? {}) };
+    // The last guard against a message that quotes a huge input.
+    return { error: this.type, message: this.message.length > 600 ? clipText(this.message, 600) : this.message, ...(this.fields ? { fields: this.fields } : {}), ...(this.extra ?? {}) };
   }
 
   toResponse(init: ResponseInit = {}): Response {
@@ -55,12 +56,23 @@ export class AppError extends Error {
   }
 }
 
+/**
+ * Text that may echo the user's input, made fit for a message: control and format characters and
+ * lone surrogates become "�", and anything beyond `max` characters ends in "…".
+ */
+export function clipText(text: string, max = 120): string {
+  const clean = text.replace(/[\p{Cc}\p{Cs}\p{Cf}]/gu, '\uFFFD');
+  const chars = Array.from(clean);
+  return chars.length > max ? chars.slice(0, max - 1).join('') + '…' : clean;
+}
+
 /** Field name → messages, from a zod error; the root of the input is called "body". */
 export function fieldErrors(error: ZodError): Record<string, string[]> {
   const fields: Record<string, string[]> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.join('.') : 'body';
-    (fields[key] ??= []).push(issue.message);
+  // Names and messages can quote the input (unknown keys, record keys): kept short and printable.
+  for (const issue of error.issues.slice(0, 50)) {
+    const key = issue.path.length ? clipText(issue.path.map(String).join('.'), 80) : 'body';
+    (fields[key] ??= []).push(clipText(issue.message, 200));
   }
   return fields;
 }
@@ -99,6 +111,15 @@ export function errorResponse(error: unknown): Response {
   if (isDatabaseDown(error)) return new AppError('unavailable').toResponse({ headers: { 'Retry-After': '5' } });
   console.error('[brinewright] unexpected error', error);
   return Response.json({ error: 'internal', message: 'Something went wrong on our side. Please try again.' }, { status: 500 });
+}
+
+/** Percent-decodes a path parameter once more when it can; a stray "%" (URIError) leaves it as it is. */
+export function decodeParam(value: string): string {
+  try {
+    return decodeURIComponent(value);
+  } catch {
+    return value;
+  }
 }
 
 /** Reads a JSON body; a malformed one is a 400, not a 500. */

@@ -15,11 +15,20 @@ export type WebhookOutcome = { duplicate: boolean; handled: boolean; type: strin
 /** Verifies the signature on the raw body; a missing or wrong one is a 400 and nothing is read. */
 export function verifyEvent(rawBody: string, signature: string | null): Stripe.Event {
   if (!signature) throw new AppError('bad_request', 'The Stripe-Signature header is missing.');
+  let event: Stripe.Event;
   try {
-    return stripe().webhooks.constructEvent(rawBody, signature, getEnv().STRIPE_WEBHOOK_SECRET);
+    event = stripe().webhooks.constructEvent(rawBody, signature, getEnv().STRIPE_WEBHOOK_SECRET);
   } catch {
     throw new AppError('bad_request', 'The webhook signature does not match.');
   }
+  // A signed body that is not an event (no id or type, no data.object, or longer than the
+  // payment_events columns) is refused before anything is stored.
+  const e = event as unknown as { id?: unknown; type?: unknown; data?: { object?: unknown } | null };
+  const object = e && typeof e === 'object' && e.data && typeof e.data === 'object' ? e.data.object : undefined;
+  if (typeof e?.id !== 'string' || !e.id || e.id.length > 255 || typeof e.type !== 'string' || !e.type || e.type.length > 100 || !object || typeof object !== 'object' || Array.isArray(object)) {
+    throw new AppError('bad_request', 'The webhook body is not an event: it needs an id, a type and data.object.');
+  }
+  return event;
 }
 
 /**

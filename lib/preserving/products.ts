@@ -156,10 +156,16 @@ export const PRODUCTS: Record<ProductId, Product> = {
 
 export const isProductId = (value: unknown): value is ProductId => typeof value === 'string' && (PRODUCT_IDS as readonly string[]).includes(value);
 
+/** An unknown id as quoted back in a message: printable, at most 40 characters. */
+const shown = (id: string) => {
+  const chars = Array.from(id.replace(/[\p{Cc}\p{Cs}\p{Cf}]/gu, '\uFFFD'));
+  return chars.length > 40 ? chars.slice(0, 39).join('') + '…' : chars.join('');
+};
+
 /** The product, or PreservingError not-found (HTTP 404). */
 export function getProduct(id: string): Product {
   if (!isProductId(id)) {
-    throw new PreservingError('not-found', `There is no product called "${String(id)}". Choose one of: ${PRODUCT_IDS.join(', ')}.`, 'product');
+    throw new PreservingError('not-found', `There is no product called "${shown(String(id))}". Choose one of: ${PRODUCT_IDS.join(', ')}.`, 'product');
   }
   return PRODUCTS[id];
 }

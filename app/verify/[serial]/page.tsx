@@ -5,13 +5,13 @@ import { SerialForm } from '@/components/certificates/serial-form';
 import { VerificationResult } from '@/components/certificates/verification-result';
 import { clientAddress } from '@/lib/auth/options';
 import { verifyForAddress, type Verification } from '@/lib/certificates/lookup';
-import { AppError } from '@/lib/errors';
+import { AppError, decodeParam } from '@/lib/errors';
 
 export const metadata: Metadata = { title: 'Certificate check', robots: { index: false } };
 export const dynamic = 'force-dynamic';
 
 export default async function VerifySerialPage({ params }: { params: Promise<{ serial: string }> }) {
-  const raw = decodeURIComponent((await params).serial).slice(0, 40);
+  const raw = decodeParam((await params).serial).slice(0, 40);
   let result: Verification | null = null;
   let throttled = false;
   try {

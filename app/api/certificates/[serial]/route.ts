@@ -1,7 +1,7 @@
 import { clientAddress } from '@/lib/auth/options';
 import { verifyForAddress } from '@/lib/certificates/lookup';
 import { SerialParamSchema } from '@/lib/certificates/schemas';
-import { AppError, parseOrThrow, route } from '@/lib/errors';
+import { AppError, decodeParam, parseOrThrow, route } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';
 
@@ -12,7 +12,7 @@ export const dynamic = 'force-dynamic';
  * 429 with Retry-After when the address checks too often.
  */
 export const GET = route<{ params: Promise<{ serial: string }> }>(async (request, { params }) => {
-  const serial = parseOrThrow(SerialParamSchema, decodeURIComponent((await params).serial), 'serial');
+  const serial = parseOrThrow(SerialParamSchema, decodeParam((await params).serial), 'serial');
   const address = clientAddress(request.headers);
   try {
     const result = await verifyForAddress(serial, address);

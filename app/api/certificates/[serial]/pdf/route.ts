@@ -1,14 +1,14 @@
 import { requireRole } from '@/lib/auth/guard';
 import { certificatePdfFor } from '@/lib/certificates/lookup';
 import { SerialParamSchema } from '@/lib/certificates/schemas';
-import { parseOrThrow, route } from '@/lib/errors';
+import { decodeParam, parseOrThrow, route } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';
 
 /** GET /api/certificates/:serial/pdf — the certificate PDF for its owner, a coordinator or an admin. */
 export const GET = route<{ params: Promise<{ serial: string }> }>(async (_request, { params }) => {
   const viewer = await requireRole();
-  const serial = parseOrThrow(SerialParamSchema, decodeURIComponent((await params).serial), 'serial');
+  const serial = parseOrThrow(SerialParamSchema, decodeParam((await params).serial), 'serial');
   const { serial: canonical, pdf } = await certificatePdfFor(serial, viewer);
   return new Response(Buffer.from(pdf), {
     headers: {

@@ -1,0 +1,281 @@
+// The bad-input sweep's table: for every route handler method under app/, who gets past its role
+// check (so the bad input reaches validation, not just 401/403) and how to generate bad path
+// parameters, queries and bodies for it. tests/integration/bad-input.test.ts fails when a route
+// handler discovered from app/ has no row here.
+import fs from 'node:fs';
+import path from 'node:path';
+import fc from 'fast-check';
+import { CRISPING_AGENTS, GAUGES, JAR_SIZES, PRODUCT_IDS, SALT_KINDS, SUGAR_KINDS } from '@/lib/preserving';
+import type { Role } from '@/lib/roles';
+import {
+  AVOID_IDS,
+  MISSING_ID,
+  badJsonBodies,
+  badQuery,
+  hugeString,
+  idParam,
+  idValue,
+  malformedJson,
+  nastyNumber,
+  nastyString,
+  requiredBad,
+  slugParam,
+  wrongContentType,
+  wrongValue,
+  type BadBody,
+  type FieldSpec,
+} from './arbitraries';
+
+export type Who = 'visitor' | Role;
+export const EVERYONE: Who[] = ['visitor', 'learner', 'instructor', 'coordinator', 'admin'];
+const SIGNED_IN: Who[] = ['learner', 'instructor', 'coordinator', 'admin'];
+const STAFF: Who[] = ['instructor', 'coordinator', 'admin'];
+const DESK: Who[] = ['coordinator', 'admin'];
+
+export type SweepSpec = {
+  /** Sessions that pass the route's role check; most requests use one of them. */
+  who: Who[];
+  params?: Record<string, fc.Arbitrary<string>>;
+  query?: fc.Arbitrary<[string, string][]>;
+  body?: fc.Arbitrary<BadBody>;
+  /** Extra request headers (client address, signatures, cookies). */
+  headers?: fc.Arbitrary<Record<string, string>>;
+  /**
+   * A read whose bad extras may still form a valid request (unknown query names are ignored):
+   * 2xx is fine here. Everywhere else every generated request is wrong somewhere and must get a 4xx.
+   */
+  mayAnswerOk?: boolean;
+  /** Handled by the test itself (next-auth's catch-all, the payment webhook): see the test file. */
+  special?: 'nextauth' | 'webhook' | 'photo-upload';
+};
+
+// ---- values that must be refused ----------------------------------------------------------------
+
+const isPositiveWhole = (v: unknown) => {
+  const n = Number(v);
+  return Number.isInteger(n) && n > 0;
+};
+/** Refused by z.number().int().positive() AND by z.coerce.number().int().positive(). */
+const badIdValue: fc.Arbitrary<unknown> = fc.oneof(
+  nastyString.filter((s) => !isPositiveWhole(s)),
+  nastyNumber.filter((n) => !isPositiveWhole(n)),
+  fc.constant(null),
+  fc.constantFrom({}, { id: MISSING_ID }, [], [MISSING_ID, MISSING_ID], [[]]),
+);
+const notString: fc.Arbitrary<unknown> = fc.oneof(nastyNumber, fc.boolean(), fc.constant(null), fc.constantFrom([], ['a'], {}, { a: 'b' }));
+const longerThan = (n: number) => fc.oneof(fc.constant('x'.repeat(n + 1)), hugeString.filter((s) => s.trim().length > n));
+const shortTrimmed = (n: number) => fc.oneof(fc.constantFrom('', ' ', '\t'), fc.string({ maxLength: n + 4 }).filter((s) => s.trim().length < n));
+const notMatching = (re: RegExp, transform: (s: string) => string = (s) => s) => nastyString.filter((s) => !re.test(transform(s)));
+const SLUG = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
+
+// ---- path parameters ------------------------------------------------------------------------------
+
+// Real quiz slugs (content/quizzes/*.json) would start a real attempt: the sweep never names one.
+const REAL_QUIZZES = new Set(fs.readdirSync(path.resolve(__dirname, '../../../content/quizzes')).map((f) => f.replace(/\.json$/, '')));
+const quizParam = slugParam(['pickling-and-canning--no-such-lesson', 'volunteer-refresher--nope', 'pickling-and-canning', 'a--b', '--', 'pickling-and-canning--acidity/../final-exam', 'PICKLING-AND-CANNING--ACIDITY']).filter(
+  (s) => !REAL_QUIZZES.has(s) && !REAL_QUIZZES.has(s.trim().toLowerCase()),
+);
+const serialParam = fc.oneof(nastyString, fc.stringMatching(/^[0-9A-Z]{16}$/), fc.stringMatching(/^[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}$/), fc.constantFrom('%', '%zz', '%E0%A4%A', 'a%2Fb', '0000-0000-0000-0000'));
+const courseParam = slugParam(['no-such-course', 'pickling-and-canning-x', 'volunteer']);
+
+// ---- bodies ----------------------------------------------------------------------------------------
+
+const answerValue = fc.oneof(fc.string({ minLength: 1, maxLength: 20 }), fc.boolean(), fc.array(fc.string({ minLength: 1, maxLength: 20 }), { maxLength: 3 }), fc.record({ value: fc.double({ noNaN: true, noDefaultInfinity: true }), unit: fc.constantFrom('g', 'mL', 'ft') }));
+const submitFields: Record<string, FieldSpec> = {
+  answers: {
+    ok: fc.dictionary(fc.string({ minLength: 1, maxLength: 12 }), answerValue, { maxKeys: 4 }),
+    bad: requiredBad(
+      fc.oneof(nastyString, nastyNumber, fc.boolean(), fc.constant(null), fc.array(answerValue)),
+      fc.constantFrom({ q1: 5 }, { q1: '' }, { q1: 'x'.repeat(21) }, { '': 'a' }, { q1: { value: 'a', unit: 'g' } }, { q1: { value: 1, unit: 'furlong' } }, { q1: { value: 1, unit: 'g', extra: 1 } }, { q1: Array(13).fill('a') }, { ['k'.repeat(121)]: 'a' }, { q1: null }),
+    ),
+  },
+};
+
+const reasonFields = (min: number, max: number, optional: boolean): Record<string, FieldSpec> => ({
+  reason: {
+    ok: fc.string({ minLength: min + 1, maxLength: Math.min(max, 60) }),
+    bad: optional ? fc.oneof(notString.filter((v) => v !== undefined), longerThan(max)) : requiredBad(notString, shortTrimmed(min), longerThan(max)),
+  },
+});
+
+const criterion = fc.record({ verdict: fc.constantFrom('met', 'not_met'), comment: fc.string({ maxLength: 20 }) });
+const reviewFields: Record<string, FieldSpec> = {
+  decision: { ok: fc.constantFrom('approved', 'changes_requested'), bad: requiredBad(notString, nastyString.filter((s) => !['approved', 'changes_requested'].includes(s))) },
+  rubric: {
+    ok: fc.record(Object.fromEntries(['rims-and-lids', 'headspace', 'liquid-covers', 'no-siphoning', 'colour-texture', 'labelled'].map((id) => [id, criterion]))),
+    bad: requiredBad(fc.oneof(nastyString, nastyNumber, fc.constant(null), fc.constantFrom([], {}, { headspace: { verdict: 'maybe' } }, { 'rims-and-lids': 'met' }))),
+  },
+  comment: { ok: fc.string({ maxLength: 40 }), bad: fc.oneof(notString, longerThan(2000)) },
+};
+
+const GOOD_PRACTICAL = {
+  product: 'fresh-pack-dill-pickles',
+  recipeTitle: 'Quick fresh-pack dill pickles',
+  recipeSource: 'A tested recipe book, page 12',
+  jar: 'pint',
+  jars: 7,
+  pack: 'raw',
+  vinegarAcidityPct: 5,
+  vinegarMl: 1420,
+  waterMl: 1420,
+  headspaceIn: 0.5,
+  method: 'boiling-water',
+  altitudeFt: 800,
+  minutes: 10,
+  batchDate: '2026-11-20',
+  sealedJars: 7,
+  unsealedJars: 0,
+  notes: '',
+  photoIds: [MISSING_ID, MISSING_ID - 1],
+};
+const practicalBadField: fc.Arbitrary<[string, unknown]> = fc.oneof(
+  fc.tuple(fc.constant('product'), fc.oneof(notString, nastyString)),
+  fc.tuple(fc.constantFrom('jars', 'sealedJars', 'altitudeFt', 'minutes'), fc.oneof(nastyString, fc.constantFrom(-1, 1.5, 1e99, 31, 14_001, null))),
+  fc.tuple(fc.constantFrom('vinegarAcidityPct', 'vinegarMl', 'waterMl', 'headspaceIn'), fc.oneof(nastyString, fc.constantFrom(-1, 1e99, -1e99, null, 20_001))),
+  fc.tuple(fc.constant('batchDate'), fc.oneof(notString, nastyString, fc.constantFrom('2999-01-01', '1999-12-31', '2026-02-30', '2026-13-01'))),
+  fc.tuple(fc.constant('photoIds'), fc.oneof(notString, fc.constantFrom([], [MISSING_ID], [MISSING_ID, MISSING_ID], Array(7).fill(0).map((_, i) => MISSING_ID - i), [-1, 0], ['1', '2']))),
+  fc.tuple(fc.constantFrom('recipeTitle', 'recipeSource', 'notes'), fc.oneof(notString.filter((v) => v !== undefined), fc.constant('x'.repeat(2_001)), fc.constant(''))),
+  fc.tuple(fc.constantFrom('jar', 'pack', 'method'), fc.oneof(notString, nastyString)),
+);
+const practicalFields: Record<string, FieldSpec> = {
+  course: { ok: fc.constantFrom('pickling-and-canning', 'volunteer-refresher'), bad: requiredBad(notString, notMatching(/^[a-z0-9-]{1,80}$/)) },
+  practical: {
+    ok: fc.constant(GOOD_PRACTICAL),
+    bad: requiredBad(
+      fc.oneof(nastyString, nastyNumber, fc.constant(null), fc.constant([])),
+      fc.array(practicalBadField, { minLength: 1, maxLength: 3 }).map((bad) => ({ ...GOOD_PRACTICAL, ...Object.fromEntries(bad) })),
+      fc.constant({ ...GOOD_PRACTICAL, sealedJars: 3, unsealedJars: 1 }),
+    ),
+  },
+};
+
+const slugField: FieldSpec = {
+  ok: fc.constantFrom('pickling-and-canning', 'acidity', 'why-preserving-is-a-safety-job'),
+  bad: requiredBad(notString, fc.constantFrom('', ' ', 'Acidity', 'a b', 'a--b', '-a', 'a-', 'a_b', '../x', 'x'.repeat(121), '\u202Eacidity'), notMatching(SLUG, (s) => s.trim())),
+};
+
+const registerFields: Record<string, FieldSpec> = {
+  name: { ok: fc.constantFrom('Juniper Vale', 'Ada', '𝔘𝔫𝔦'), bad: requiredBad(notString, shortTrimmed(1), longerThan(120)) },
+  email: {
+    ok: fc.constantFrom('new.person@test.example', 'X@Example.org'),
+    bad: requiredBad(notString, nastyString.filter((s) => !s.includes('@') || s.trim().length > 254), fc.constantFrom('a@', '@b', 'a@b', 'a b@c.d', 'a@b..c', `${'x'.repeat(250)}@example.org`)),
+  },
+  password: { ok: fc.constant('a long pass phrase'), bad: requiredBad(notString, fc.string({ maxLength: 9 }), fc.constant('p'.repeat(201))) },
+};
+
+const WAIVER = /^[A-Z0-9-]{4,40}$/;
+const waiverCodeBad = fc.oneof(
+  nastyNumber,
+  fc.boolean(),
+  fc.constantFrom({}, [], ['CODE']),
+  nastyString.filter((s) => s !== '' && !WAIVER.test(s.trim().toUpperCase())),
+);
+const waiverFields: Record<string, FieldSpec> = {
+  code: { ok: fc.constantFrom('', 'SPRING-2027', 'cedar-volunteer'), bad: waiverCodeBad },
+  courseId: { ok: fc.constantFrom('', null, 1, '2'), bad: requiredBad(badIdValue.filter((v) => v !== null && v !== '')) },
+  maxUses: { ok: fc.constantFrom(1, 10, '25', 1000), bad: requiredBad(fc.constantFrom(0, -1, 1001, 1.5, 'abc', null, {}, '1e99', 'NaN', '')) },
+  expiresOn: { ok: fc.constantFrom('2027-06-30', '2027-01-01'), bad: requiredBad(notString, notMatching(/^\d{4}-\d{2}-\d{2}$/)) },
+  note: { ok: fc.constantFrom('Volunteers', '', '🥒'), bad: fc.oneof(notString.filter((v) => v !== undefined), longerThan(300)) },
+};
+
+const enrollFields: Record<string, FieldSpec> = {
+  workshopId: { ok: fc.constantFrom(MISSING_ID, String(MISSING_ID)), bad: requiredBad(badIdValue) },
+  waiverCode: { ok: fc.constantFrom('', null, 'CEDAR-VOLUNTEER'), bad: waiverCodeBad },
+};
+
+const idsField = (max: number): FieldSpec => ({
+  ok: fc.array(fc.constant(MISSING_ID), { minLength: 1, maxLength: 3 }),
+  bad: requiredBad(
+    fc.oneof(nastyString, nastyNumber, fc.boolean(), fc.constant(null), fc.constant({})),
+    fc.constant([]),
+    fc.constant(Array(max + 1).fill(MISSING_ID)),
+    fc.array(badIdValue, { minLength: 1, maxLength: 3 }),
+    fc.constantFrom([String(MISSING_ID)], [MISSING_ID, 'x'], [1.5], [true]),
+  ),
+});
+
+const attendanceFields: Record<string, FieldSpec> = {
+  attended: { ok: fc.boolean(), bad: requiredBad(fc.oneof(nastyString, nastyNumber, fc.constant(null), fc.constantFrom([], {}, 'true', 1, 0))) },
+};
+
+/** A body for a route that reads none: anything at all. */
+const anyBody: fc.Arbitrary<BadBody> = fc.oneof(
+  malformedJson.map((body): BadBody => ({ contentType: 'application/json', body, kind: 'ignored malformed JSON' })),
+  fc.tuple(wrongContentType, nastyString).map(([contentType, body]): BadBody => ({ contentType, body, kind: 'ignored body' })),
+  fc.constant<BadBody>({ contentType: null, body: null, kind: 'no body' }),
+);
+
+// ---- queries ---------------------------------------------------------------------------------------
+
+const num = fc.constantFrom('0', '1', '5', '1000', '7000', '0.5');
+const toolQuery = (names: string[], ok: Record<string, fc.Arbitrary<string>> = {}) =>
+  badQuery(names, { ...Object.fromEntries(names.map((n) => [n, num])), ...ok });
+const product = fc.constantFrom(...PRODUCT_IDS, 'no-such-product');
+const jar = fc.constantFrom(...JAR_SIZES, 'gallon');
+const unit = fc.constantFrom('cup', 'tbsp', 'mL', 'g', 'lb', 'F', 'C', 'ft', 'furlong');
+
+const clientAddress = fc.record({ 'x-forwarded-for': fc.oneof(fc.ipV4(), fc.ipV6(), fc.constantFrom('unknown', ' ', 'x'.repeat(300), '1.1.1.1, 2.2.2.2')) }, { requiredKeys: [] });
+
+const tool = (names: string[], ok: Record<string, fc.Arbitrary<string>> = {}): SweepSpec => ({ who: EVERYONE, query: toolQuery(names, ok), mayAnswerOk: true });
+
+/** Key: `${file}#${method}`, as discoverRoutes() names them. */
+export const SWEEP: Record<string, SweepSpec> = {
+  'app/api/attempts/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam } },
+  'app/api/attempts/[id]/submit/route.ts#POST': { who: ['learner'], params: { id: idParam }, body: badJsonBodies(submitFields) },
+  'app/api/auth/[...nextauth]/route.ts#GET': { who: EVERYONE, special: 'nextauth', mayAnswerOk: true },
+  'app/api/auth/[...nextauth]/route.ts#POST': { who: EVERYONE, special: 'nextauth', mayAnswerOk: true },
+  'app/api/certificates/[serial]/pdf/route.ts#GET': { who: SIGNED_IN, params: { serial: serialParam } },
+  'app/api/certificates/[serial]/route.ts#GET': { who: EVERYONE, params: { serial: serialParam }, headers: clientAddress },
+  'app/api/certificates/refresher/route.ts#POST': { who: ['learner'], body: badJsonBodies({ enrollmentId: { ok: fc.constant(MISSING_ID), bad: requiredBad(badIdValue, fc.constant(String(MISSING_ID))) } }) },
+  'app/api/courses/[course]/workshops/route.ts#GET': { who: EVERYONE, params: { course: courseParam } },
+  'app/api/desk/certificates/[id]/revoke/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(5, 500, false)) },
+  'app/api/desk/certificates/route.ts#POST': { who: DESK, body: badJsonBodies({ enrollmentIds: idsField(100) }) },
+  'app/api/desk/enrollments/route.ts#GET': {
+    who: DESK,
+    query: badQuery(['course', 'workshop', 'status', 'eligible', 'q', 'page', 'pageSize'], { status: fc.constantFrom('active', 'completed', 'nope'), page: num, pageSize: num }),
+    mayAnswerOk: true,
+  },
+  'app/api/desk/options/route.ts#GET': { who: DESK, query: badQuery([]), mayAnswerOk: true },
+  'app/api/desk/roster/route.ts#GET': {
+    who: DESK,
+    query: badQuery(['ids', 'course', 'workshop', 'status', 'eligible'], { ids: fc.constantFrom(String(MISSING_ID), `${MISSING_ID},${MISSING_ID}`, '1,,2', ',', Array(5001).fill(MISSING_ID).join(',')) }),
+    mayAnswerOk: true,
+  },
+  'app/api/enrollments/[id]/attendance/route.ts#POST': { who: STAFF, params: { id: idParam }, body: badJsonBodies(attendanceFields) },
+  'app/api/enrollments/[id]/refund/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(0, 300, true)) },
+  'app/api/enrollments/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam } },
+  'app/api/enrollments/route.ts#POST': { who: ['learner'], body: badJsonBodies(enrollFields) },
+  'app/api/health/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
+  'app/api/pantry/route.ts#GET': { who: ['learner'], query: badQuery([]), mayAnswerOk: true },
+  'app/api/photos/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam }, query: badQuery(['size'], { size: fc.constantFrom('thumb', 'full') }) },
+  'app/api/photos/route.ts#POST': { who: ['learner'], special: 'photo-upload' },
+  'app/api/practicals/[id]/review/route.ts#POST': { who: STAFF, params: { id: idParam }, body: badJsonBodies(reviewFields) },
+  'app/api/practicals/route.ts#POST': { who: ['learner'], body: badJsonBodies(practicalFields) },
+  'app/api/progress/route.ts#GET': { who: ['learner'], query: badQuery(['course'], { course: fc.constantFrom('pickling-and-canning', 'no-such-course') }), mayAnswerOk: true },
+  'app/api/progress/route.ts#POST': { who: ['learner'], body: badJsonBodies({ courseSlug: slugField, lessonSlug: slugField }) },
+  'app/api/quizzes/[quiz]/attempts/route.ts#POST': { who: ['learner'], params: { quiz: quizParam }, body: anyBody },
+  'app/api/register/route.ts#POST': { who: EVERYONE, body: badJsonBodies(registerFields) },
+  'app/api/tasting-table/submissions/route.ts#GET': {
+    who: STAFF,
+    query: badQuery(['page', 'sort', 'status', 'workshop', 'flagged', 'olderThanDays'], { page: num, sort: fc.constantFrom('oldest', 'flags', 'x'), status: fc.constantFrom('all', 'approved', 'x'), flagged: fc.constantFrom('yes', 'any') }),
+    mayAnswerOk: true,
+  },
+  'app/api/tools/batch/route.ts#GET': tool(['product', 'jar', 'jars'], { product, jar }),
+  'app/api/tools/boiling-point/route.ts#GET': tool(['altitudeFt']),
+  'app/api/tools/brine/route.ts#GET': tool(['vinegarMl', 'vinegarAcidityPct', 'waterMl', 'otherMl', 'produceG', 'produceWaterPct']),
+  'app/api/tools/convert/route.ts#GET': tool(['value', 'from', 'to'], { from: unit, to: unit }),
+  'app/api/tools/crisping/route.ts#GET': tool(['agent', 'jar', 'jars'], { agent: fc.constantFrom(...CRISPING_AGENTS, 'alum'), jar }),
+  'app/api/tools/headspace/route.ts#GET': tool(['product', 'measuredIn'], { product }),
+  'app/api/tools/pressure/route.ts#GET': tool(['gauge', 'altitudeFt'], { gauge: fc.constantFrom(...GAUGES, 'digital') }),
+  'app/api/tools/processing-time/route.ts#GET': tool(['product', 'jar', 'altitudeFt'], { product, jar }),
+  'app/api/tools/sugar/route.ts#GET': tool(['sugar', 'amount', 'unit', 'liquidMl'], { sugar: fc.constantFrom(...SUGAR_KINDS, 'maple'), unit }),
+  'app/api/tools/salt/route.ts#GET': tool(['salt', 'amount', 'unit', 'waterMl'], { salt: fc.constantFrom(...SALT_KINDS, 'rock'), unit }),
+  'app/api/waivers/route.ts#GET': { who: DESK, query: badQuery([]), mayAnswerOk: true },
+  'app/api/waivers/route.ts#POST': { who: DESK, body: badJsonBodies(waiverFields) },
+  'app/api/webhooks/stripe/route.ts#POST': { who: EVERYONE, special: 'webhook' },
+};
+
+// Ids 1..50 are the fixture's rows (users, courses, one enrollment): generated values never name them.
+for (let i = 1; i <= 50; i++) AVOID_IDS.add(i);
+
+export { idValue, wrongValue };
