@@ -42,7 +42,8 @@ if [ "${SKIP_BUILD:-0}" != "1" ] || [ ! -f "${NEXT_DIST_DIR:-.next}/BUILD_ID" ];
   "$ROOT/node_modules/.bin/next" build
 fi
 
-read -r NGINX NGINX_CONF < <("$ROOT/node_modules/.bin/tsx" scripts/cluster/nginx.ts "$CLUSTER_DIR" "$PORT" "127.0.0.1:$APP_PORT_A" "127.0.0.1:$APP_PORT_B")
+NGINX_SETUP="$("$ROOT/node_modules/.bin/tsx" scripts/cluster/nginx.ts "$CLUSTER_DIR" "$PORT" "127.0.0.1:$APP_PORT_A" "127.0.0.1:$APP_PORT_B")"
+read -r NGINX NGINX_CONF <<<"$NGINX_SETUP"
 
 PIDS=()
 stop_all() { for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done; wait 2>/dev/null || true; }

@@ -250,7 +250,7 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
     expect(fake.counts.PutObject).toBe(2); // the photo and its thumbnail, nothing else
     expect(fake.counts.GetObject).toBeGreaterThanOrEqual(2);
     expect(fake.counts.refused ?? 0).toBe(0);
-  });
+  }, 180_000); // two freshly started servers and axe: room for a loaded machine
 
   it('sessions are JWTs: the cookie made through nginx is a session on both servers, and no table holds sessions', async () => {
     // next-auth 4 keeps the session in an encrypted JWT (JWE compact form: five parts).
