@@ -13,17 +13,10 @@ FAKE_S3_PORT="${FAKE_S3_PORT:-9310}"
 CLUSTER_DIR="$ROOT/.data/cluster"
 
 "$ROOT/scripts/db.sh" start
-export DATABASE_URL="${DATABASE_URL:-$("$ROOT/scripts/db.sh" url brinewright)}"
-# One secret for every app server: sessions are JWTs signed with it, so any server reads any session.
-export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(local_secret)}"
-# The public address is nginx's, never an app server's own port.
-export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"
-export APP_URL="${APP_URL:-http://localhost:$PORT}"
-export STRIPE_API_HOST="${STRIPE_API_HOST:-127.0.0.1}" STRIPE_API_PORT="${STRIPE_API_PORT:-12111}" STRIPE_API_PROTOCOL="${STRIPE_API_PROTOCOL:-http}"
-export SMTP_HOST="${SMTP_HOST:-127.0.0.1}" SMTP_PORT="${SMTP_PORT:-2525}" FAKE_MAILBOX_PORT="${FAKE_MAILBOX_PORT:-2580}"
-export MAILBOX_URL="${MAILBOX_URL:-http://127.0.0.1:$FAKE_MAILBOX_PORT}"
-# Webhooks go through the load balancer too: either server may take them.
-export FAKE_PAYMENTS_WEBHOOK_URL="${FAKE_PAYMENTS_WEBHOOK_URL:-http://127.0.0.1:$PORT/api/webhooks/stripe}"
+# One NEXTAUTH_SECRET for every app server: sessions are JWTs signed with it, so any server reads
+# any session. NEXTAUTH_URL/APP_URL are nginx's address, never an app server's own port; webhooks
+# from the payment fake go through nginx too, so either server may take them.
+demo_env "$PORT"
 # Photos in one bucket both servers reach (the fake keeps it under .data/fake-s3).
 if [ ! -s "$ROOT/.data/fake-s3-secret" ]; then
   node -e "process.stdout.write(require('crypto').randomBytes(24).toString('hex'))" >"$ROOT/.data/fake-s3-secret"
@@ -87,13 +80,7 @@ cat <<MSG
     app server B   http://127.0.0.1:$APP_PORT_B  (pid ${PIDS[3]})
     photo store    $S3_ENDPOINT  bucket $S3_BUCKET (local S3-compatible fake, files in ${FAKE_S3_ROOT:-.data/fake-s3})
     nginx          config $NGINX_CONF; access.log there names the app server that answered
-  Demo accounts (demo only; never use these passwords anywhere real):
-    learner      learner@cedarhollow.example       demo-learner-pass
-    instructor   instructor@cedarhollow.example    demo-instructor-pass
-    coordinator  coordinator@cedarhollow.example   demo-coordinator-pass
-    admin        admin@cedarhollow.example         demo-admin-pass
-  Local mailbox (every e-mail the demo sends): $MAILBOX_URL
-  Test cards on the local checkout page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
+$(demo_accounts)
   Stop one app server (kill PID) and nginx sends everything to the other.
   Stop with Ctrl-C; stop MariaDB with: npm run db:stop
 

@@ -20,3 +20,30 @@ ensure_chromium() {
   apt-get update -qq
   apt-get install -y -qq chromium >/dev/null
 }
+
+# The demo's environment for a public address on PORT ($1): database, secret, addresses and the
+# local fakes. Used by demo-cluster.sh (demo.sh sets the same values inline).
+demo_env() {
+  local port="$1"
+  export DATABASE_URL="${DATABASE_URL:-$("$ROOT/scripts/db.sh" url brinewright)}"
+  export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(local_secret)}"
+  export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$port}"
+  export APP_URL="${APP_URL:-http://localhost:$port}"
+  export STRIPE_API_HOST="${STRIPE_API_HOST:-127.0.0.1}" STRIPE_API_PORT="${STRIPE_API_PORT:-12111}" STRIPE_API_PROTOCOL="${STRIPE_API_PROTOCOL:-http}"
+  export SMTP_HOST="${SMTP_HOST:-127.0.0.1}" SMTP_PORT="${SMTP_PORT:-2525}" FAKE_MAILBOX_PORT="${FAKE_MAILBOX_PORT:-2580}"
+  export MAILBOX_URL="${MAILBOX_URL:-http://127.0.0.1:$FAKE_MAILBOX_PORT}"
+  export FAKE_PAYMENTS_WEBHOOK_URL="${FAKE_PAYMENTS_WEBHOOK_URL:-http://127.0.0.1:$port/api/webhooks/stripe}"
+}
+
+# The demo accounts, the mailbox and the test cards, as the demo banners print them.
+demo_accounts() {
+  cat <<MSG
+  Demo accounts (demo only; never use these passwords anywhere real):
+    learner      learner@cedarhollow.example       demo-learner-pass
+    instructor   instructor@cedarhollow.example    demo-instructor-pass
+    coordinator  coordinator@cedarhollow.example   demo-coordinator-pass
+    admin        admin@cedarhollow.example         demo-admin-pass
+  Local mailbox (every e-mail the demo sends): $MAILBOX_URL
+  Test cards on the local checkout page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
+MSG
+}
