@@ -1,4 +1,6 @@
 import fs from 'node:fs';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { CreateBucketCommand, HeadBucketCommand, S3Client } from '@aws-sdk/client-s3';
@@ -129,6 +131,35 @@ describe('the S3 driver against the fake', () => {
   it('fails when the access key is unknown, or the bucket does not exist', async () => {
     await expect(s3Driver({ ...s3Options, accessKeyId: 'SOMEONEELSESKEY00000' }).get('photos/11/a.jpg')).rejects.toMatchObject({ name: 'InvalidAccessKeyId' });
     await expect(s3Driver({ ...s3Options, bucket: 'no-such-bucket' }).put('photos/11/a.jpg', jpegLike(1, 5), 'image/jpeg')).rejects.toMatchObject({ name: 'NoSuchBucket' });
+  });
+
+  it('answers 503 (AppError unavailable) when the store is not there, without hanging', async () => {
+    const closed = http.createServer();
+    await new Promise<void>((resolve) => closed.listen(0, '127.0.0.1', () => resolve()));
+    const { port } = closed.address() as AddressInfo;
+    await new Promise<void>((resolve) => closed.close(() => resolve()));
+    const storage = s3Driver({ ...s3Options, endpoint: `http://127.0.0.1:${port}` });
+    const started = Date.now();
+    await expect(storage.put('photos/13/down.jpg', jpegLike(1, 5), 'image/jpeg')).rejects.toMatchObject({ name: 'AppError', status: 503 });
+    await expect(storage.get('photos/13/down.jpg')).rejects.toMatchObject({ name: 'AppError', status: 503, message: expect.stringMatching(/photo store cannot be reached/) });
+    expect(Date.now() - started).toBeLessThan(10_000);
+  });
+
+  it('answers 503 when the store keeps answering 5xx, after the SDK has retried', async () => {
+    let calls = 0;
+    const failing = http.createServer((req, res) => {
+      calls++;
+      req.resume();
+      res.writeHead(503, { 'content-type': 'application/xml' }).end('<?xml version="1.0" encoding="UTF-8"?><Error><Code>SlowDown</Code><Message>Please reduce your request rate.</Message></Error>');
+    });
+    await new Promise<void>((resolve) => failing.listen(0, '127.0.0.1', () => resolve()));
+    try {
+      const storage = s3Driver({ ...s3Options, endpoint: `http://127.0.0.1:${(failing.address() as AddressInfo).port}` });
+      await expect(storage.get('photos/13/slow.jpg')).rejects.toMatchObject({ name: 'AppError', status: 503 });
+      expect(calls).toBe(3); // maxAttempts
+    } finally {
+      await new Promise<void>((resolve) => failing.close(() => resolve()));
+    }
   });
 
   it('refuses unsigned requests', async () => {
