@@ -2,9 +2,12 @@
 // app (production build on a loopback port, its own database), then the same load against a bare
 // node:http handler doing the app's one INSERT (the quiz_answers rows) through a mariadb pool of
 // the same size. Prints requests/s, p95 and the ratio. Goals: >= 0.5x the bare handler, p95 < 100 ms.
+// BENCH_CPU_PROF=<folder>: run the app under `node --cpu-prof` and write its profile there
+// (summarise with `tsx scripts/cpu-profile-summary.ts <folder>`).
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import http from 'node:http';
+import os from 'node:os';
 import path from 'node:path';
 import * as mariadb from 'mariadb';
 import { createRequire } from 'node:module';
@@ -25,6 +28,7 @@ const BARE_PORT = APP_PORT + 1;
 const DIST_DIR = process.env.BENCH_DIST_DIR ?? '.next-bench';
 const POOL_MAX = Number(process.env.DB_POOL_MAX ?? 10);
 const ATTEMPTS = Number(process.env.BENCH_ATTEMPTS ?? 40_000);
+const CPU_PROF = process.env.BENCH_CPU_PROF ? path.resolve(process.env.BENCH_CPU_PROF) : undefined;
 const QUIZ = 'pickling-and-canning--acidity';
 const LEARNER = { email: 'learner@cedarhollow.example', password: 'demo-learner-pass' };
 
@@ -99,7 +103,7 @@ async function sessionCookie(base: string): Promise<string> {
 
 type Run = { rps: number; p95: number; p50: number; requests: number; non2xx: number; errors: number };
 
-function load(url: string, next: () => { path: string; body: string }, headers: Record<string, string>): Promise<Run> {
+function load(url: string, next: () => { path: string; body?: string }, headers: Record<string, string>, method: 'POST' | 'GET' = 'POST'): Promise<Run> {
   return new Promise((resolve, reject) => {
     const latencies: number[] = [];
     let non2xx = 0;
@@ -110,10 +114,10 @@ function load(url: string, next: () => { path: string; body: string }, headers: 
         duration: DURATION_S,
         requests: [
           {
-            method: 'POST',
+            method,
             setupRequest: (req: Record<string, unknown>) => {
               const n = next();
-              return { ...req, path: n.path, body: n.body, headers: { ...headers, 'content-type': 'application/json' } };
+              return { ...req, path: n.path, ...(n.body === undefined ? {} : { body: n.body }), headers: { ...headers, ...(n.body === undefined ? {} : { 'content-type': 'application/json' }) } };
             },
           },
         ],
@@ -138,6 +142,7 @@ function load(url: string, next: () => { path: string; body: string }, headers: 
 }
 
 async function main() {
+  const loadBefore = os.loadavg();
   console.log(`[bench] preparing the bench database and ${ATTEMPTS} open attempts…`);
   const { bodies, userCourseId, questionIds } = await prepareDatabase();
   const base = `http://127.0.0.1:${APP_PORT}`;
@@ -151,7 +156,12 @@ async function main() {
   let bare: http.Server | undefined;
   let pool: mariadb.Pool | undefined;
   try {
-    app = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(APP_PORT), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
+    const startArgs = ['start', '-p', String(APP_PORT), '-H', '127.0.0.1'];
+    if (CPU_PROF) fs.mkdirSync(CPU_PROF, { recursive: true });
+    // node refuses --cpu-prof in NODE_OPTIONS: run next's CLI under node with the flag instead.
+    app = CPU_PROF
+      ? spawn(process.execPath, ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`, path.join(root, 'node_modules/next/dist/bin/next'), ...startArgs], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] })
+      : spawn(path.join(root, 'node_modules/.bin/next'), startArgs, { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
     await waitForOk(`${base}/api/health`, 60_000);
     const cookie = await sessionCookie(base);
 
@@ -172,6 +182,15 @@ async function main() {
       return { path: `/api/attempts/${b.id}/submit`, body: b.body };
     }, { cookie });
     const graded = cursor - firstMeasured;
+    if (CPU_PROF) await stopApp(app);
+
+    // The framework's floor, for the reading of the ratio: the app's health route, which does one
+    // `SELECT 1` through the same pool and nothing else (no session, no body), under the same load.
+    let floorRun: Run | undefined;
+    if (!CPU_PROF && process.env.BENCH_FLOOR !== '0') {
+      console.log(`[bench] floor: GET /api/health through the app (one SELECT 1), same load`);
+      floorRun = await load(base, () => ({ path: '/api/health' }), {}, 'GET');
+    }
 
     // Check: every measured submission was a real grading (one stored result per attempt).
     const check = await mariadb.createConnection(poolConfig(1));
@@ -212,12 +231,24 @@ async function main() {
     console.log('');
     console.log(`app  (graded submissions): ${fmt(appRun)}; ${graded} attempts handed out, ${Number(n)} attempts graded and passed in the database`);
     console.log(`bare (one INSERT)        : ${fmt(bareRun)}`);
+    if (floorRun) console.log(`floor (app, GET /api/health, one SELECT 1): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
+    const la = (l: number[]) => l.map((x) => x.toFixed(2)).join(' ');
+    console.log(`load average (1, 5, 15 min): ${la(loadBefore)} before, ${la(os.loadavg())} after (2-core machine: above 2 the figures are noisy)`);
     console.log(`ratio app/bare           : ${ratio.toFixed(2)}x  (goal >= 0.5x: ${ratio >= 0.5 ? 'met' : 'not met'}); app p95 ${appRun.p95.toFixed(1)} ms (goal < 100 ms: ${appRun.p95 < 100 ? 'met' : 'not met'})`);
   } finally {
     app?.kill('SIGTERM');
     await new Promise<void>((r) => (bare ? bare.close(() => r()) : r()));
     await pool?.end();
   }
+}
+
+/** Stops the app and waits for it to exit, so that a CPU profile is written before the bare run. */
+async function stopApp(app: ChildProcess): Promise<void> {
+  if (app.exitCode !== null) return;
+  const exited = new Promise<void>((r) => app.once('exit', () => r()));
+  app.kill('SIGTERM');
+  await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
+  console.log(`[bench] CPU profile written to ${CPU_PROF}`);
 }
 
 function poolConfig(connectionLimit: number): mariadb.PoolConfig {

@@ -1,17 +1,21 @@
 import 'server-only';
-import { getServerSession } from 'next-auth';
+import { cookies } from 'next/headers';
 import { forbidden, redirect } from 'next/navigation';
+import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
-import { roleAllows, ROLES, type Role } from '@/lib/roles';
-import { authOptions } from './options';
+import { roleAllows, type Role } from '@/lib/roles';
+import { userFromCookies, usesSecureCookies } from './session';
 import type { SessionUser } from './users';
 
-/** The signed-in user, or null. */
+/**
+ * The signed-in user, or null: next-auth's session cookie decoded with next-auth's own `decode`
+ * (lib/auth/session.ts), without running the NextAuth handler on every request.
+ */
 export async function getCurrentUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions());
-  const user = session?.user;
-  if (!user || typeof user.id !== 'number' || !ROLES.includes(user.role)) return null;
-  return user;
+  // cookies() first: it marks the page dynamic before the configuration is read (no prerendering).
+  const jar = (await cookies()).getAll();
+  const env = getEnv();
+  return userFromCookies(jar, { secret: env.NEXTAUTH_SECRET, secure: usesSecureCookies(env.NEXTAUTH_URL) });
 }
 
 /**

@@ -1,15 +1,21 @@
 import { afterAll, vi } from 'vitest';
 import type { SessionUser } from '../../lib/auth/users';
 
-// Route handlers read the session through next-auth's getServerSession; tests choose who is signed in
-// with actAs() from tests/helpers/session.ts.
-vi.mock('next-auth', async (importOriginal) => {
-  const original = await importOriginal<typeof import('next-auth')>();
+// Route handlers read the session from next-auth's session cookie (lib/auth/guard.ts); tests choose
+// who is signed in with actAs() from tests/helpers/session.ts. The mocked cookie store carries a real
+// token, encrypted with next-auth's own `encode` and the test secret, so the guard's decoding runs too.
+vi.mock('next/headers', async (importOriginal) => {
+  const original = await importOriginal<typeof import('next/headers')>();
+  const { encode } = await import('next-auth/jwt');
+  const { sessionCookieName, usesSecureCookies } = await import('../../lib/auth/session');
   return {
     ...original,
-    getServerSession: vi.fn(async () => {
+    cookies: vi.fn(async () => {
       const user = (globalThis as { __testUser?: SessionUser | null }).__testUser;
-      return user ? { user, expires: new Date(Date.now() + 3_600_000).toISOString() } : null;
+      const list = user
+        ? [{ name: sessionCookieName(usesSecureCookies(process.env.NEXTAUTH_URL)), value: await encode({ token: { uid: user.id, role: user.role, email: user.email, name: user.name, sub: String(user.id) }, secret: process.env.NEXTAUTH_SECRET!, maxAge: 3600 }) }]
+        : [];
+      return { getAll: () => list, get: (name: string) => list.find((c) => c.name === name), has: (name: string) => list.some((c) => c.name === name), size: list.length };
     }),
   };
 });

@@ -1,0 +1,73 @@
+import { encode } from 'next-auth/jwt';
+import { describe, expect, it } from 'vitest';
+import { sessionCookieName, sessionTokenFrom, userFromCookies, usesSecureCookies } from './session';
+
+const secret = 'unit-test-secret-0123456789abcdef';
+const claims = { uid: 42, role: 'instructor' as const, email: 'ada@cedarhollow.example', name: 'Ada Fenwick', sub: '42' };
+
+describe('session cookie name', () => {
+  it('is prefixed with __Secure- exactly when the app is served over https (next-auth default cookies)', () => {
+    expect(usesSecureCookies('https://brinewright.example')).toBe(true);
+    expect(usesSecureCookies('http://localhost:3000')).toBe(false);
+    expect(usesSecureCookies(undefined)).toBe(false);
+    expect(sessionCookieName(true)).toBe('__Secure-next-auth.session-token');
+    expect(sessionCookieName(false)).toBe('next-auth.session-token');
+  });
+
+  it('joins chunked cookies in the order of their numeric suffix and ignores other cookies', () => {
+    const cookies = [
+      { name: 'next-auth.session-token.1', value: 'BBB' },
+      { name: 'next-auth.csrf-token', value: 'csrf' },
+      { name: 'next-auth.session-token.0', value: 'AAA' },
+      { name: 'next-auth.session-token.10', value: 'DDD' },
+      { name: 'next-auth.session-token.2', value: 'CCC' },
+    ];
+    expect(sessionTokenFrom(cookies, false)).toBe('AAABBBCCCDDD');
+    expect(sessionTokenFrom(cookies, true)).toBe('');
+  });
+});
+
+describe('userFromCookies', () => {
+  it('returns the user a token made by next-auth encode names, with the role from the token', async () => {
+    const token = await encode({ token: claims, secret, maxAge: 60 });
+    const user = await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false });
+    expect(user).toEqual({ id: 42, role: 'instructor', email: 'ada@cedarhollow.example', name: 'Ada Fenwick' });
+  });
+
+  it('reads a token split over two cookie chunks', async () => {
+    const token = await encode({ token: claims, secret, maxAge: 60 });
+    const half = Math.floor(token.length / 2);
+    const cookies = [
+      { name: '__Secure-next-auth.session-token.1', value: token.slice(half) },
+      { name: '__Secure-next-auth.session-token.0', value: token.slice(0, half) },
+    ];
+    expect((await userFromCookies(cookies, { secret, secure: true }))?.id).toBe(42);
+    // The same cookies under the wrong name (an http app) are not a session.
+    expect(await userFromCookies(cookies, { secret, secure: false })).toBeNull();
+  });
+
+  it('refuses a token encrypted with another secret, a tampered token and garbage', async () => {
+    const other = await encode({ token: claims, secret: 'another-secret-0123456789abcdef', maxAge: 60 });
+    expect(await userFromCookies([{ name: 'next-auth.session-token', value: other }], { secret, secure: false })).toBeNull();
+    const good = await encode({ token: claims, secret, maxAge: 60 });
+    const parts = good.split('.');
+    parts[3] = parts[3].slice(0, -2) + (parts[3].endsWith('AA') ? 'BB' : 'AA');
+    expect(await userFromCookies([{ name: 'next-auth.session-token', value: parts.join('.') }], { secret, secure: false })).toBeNull();
+    expect(await userFromCookies([{ name: 'next-auth.session-token', value: 'not-a-token' }], { secret, secure: false })).toBeNull();
+    expect(await userFromCookies([], { secret, secure: false })).toBeNull();
+  });
+
+  it('refuses an expired token (past exp and next-auth’s 15 s clock tolerance) but accepts one inside the tolerance', async () => {
+    const expired = await encode({ token: claims, secret, maxAge: -20 });
+    expect(await userFromCookies([{ name: 'next-auth.session-token', value: expired }], { secret, secure: false })).toBeNull();
+    const justExpired = await encode({ token: claims, secret, maxAge: -5 });
+    expect((await userFromCookies([{ name: 'next-auth.session-token', value: justExpired }], { secret, secure: false }))?.id).toBe(42);
+  });
+
+  it('refuses claims without a numeric user id or with an unknown role', async () => {
+    for (const bad of [{ ...claims, uid: '42' }, { ...claims, role: 'superuser' }, { email: 'x@y.example' }]) {
+      const token = await encode({ token: bad as never, secret, maxAge: 60 });
+      expect(await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false })).toBeNull();
+    }
+  });
+});

@@ -1,0 +1,56 @@
+import 'server-only';
+import { decode } from 'next-auth/jwt';
+import { ROLES } from '@/lib/roles';
+import type { SessionUser } from './users';
+
+// Reads the signed-in user straight from next-auth's session cookie, with next-auth's own `decode`
+// (the same secret, cookie name and expiry check as its session route), instead of running the whole
+// NextAuth handler through getServerSession on every request (which also re-encrypts a fresh token
+// each call, only to throw it away in a route handler). Nothing is written: the rolling refresh of
+// the cookie stays with /api/auth/session, which the browser's SessionProvider calls.
+
+export type CookieLike = { name: string; value: string };
+
+/** next-auth's session cookie name: `__Secure-` prefixed when the app's address is https. */
+export function sessionCookieName(secure: boolean): string {
+  return `${secure ? '__Secure-' : ''}next-auth.session-token`;
+}
+
+/** Whether next-auth uses secure cookies for this address (its rule: NEXTAUTH_URL starts with https://). */
+export function usesSecureCookies(nextAuthUrl: string | undefined): boolean {
+  return (nextAuthUrl ?? '').startsWith('https://');
+}
+
+/**
+ * The session token from the cookies: next-auth splits a long token into `name.0`, `name.1`, …;
+ * like its SessionStore, every cookie whose name starts with the session cookie's name is taken,
+ * ordered by the numeric suffix, and joined.
+ */
+export function sessionTokenFrom(cookies: readonly CookieLike[], secure: boolean): string {
+  const name = sessionCookieName(secure);
+  const parts = cookies.filter((c) => c.name.startsWith(name));
+  const suffix = (n: string) => parseInt(n.split('.').pop() ?? '0', 10);
+  return parts
+    .sort((a, b) => suffix(a.name) - suffix(b.name))
+    .map((c) => c.value)
+    .join('');
+}
+
+/**
+ * The user the session cookie names, or null: no cookie, a token that does not decrypt with the
+ * secret, an expired token (jose checks `exp`, with next-auth's 15 s clock tolerance), or claims
+ * that are not a user of a known role. The role is the one in the token: a role changed in the
+ * database applies from the user's next sign-in (at most the session's 8 hours later).
+ */
+export async function userFromCookies(cookies: readonly CookieLike[], options: { secret: string; secure: boolean }): Promise<SessionUser | null> {
+  const token = sessionTokenFrom(cookies, options.secure);
+  if (!token) return null;
+  let claims: Awaited<ReturnType<typeof decode>>;
+  try {
+    claims = await decode({ token, secret: options.secret });
+  } catch {
+    return null;
+  }
+  if (!claims || typeof claims.uid !== 'number' || !ROLES.includes(claims.role)) return null;
+  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', role: claims.role };
+}

@@ -1,0 +1,26 @@
+'use strict';
+
+// Indexes for the Tasting table (lib/practicals/data.ts). Its page query first picks the ids of one
+// page from `practicals` alone and only then joins the learner, course and workshop of those rows;
+// these two indexes let that first step and the per-status counts read the index only (no row
+// reads, no sort of whole rows), for every filter and sort the table offers:
+// - (status, flagCount DESC, submittedAt): a status tab sorted by flags (most flags first, then
+//   oldest), and the counts per status;
+// - (flagCount DESC, submittedAt, status): "flagged"/"not flagged" with any sort, the flags sort on
+//   all statuses, and the counts under those filters. It takes the place of the ascending
+//   (flagCount, submittedAt) index, which it makes redundant.
+// Descending index parts need MariaDB 10.8 or later (the project runs 10.11).
+/** @type {import('sequelize-cli').Migration} */
+module.exports = {
+  async up(queryInterface) {
+    await queryInterface.addIndex('practicals', ['status', { name: 'flagCount', order: 'DESC' }, 'submittedAt'], { name: 'practicals_tasting_status' });
+    await queryInterface.addIndex('practicals', [{ name: 'flagCount', order: 'DESC' }, 'submittedAt', 'status'], { name: 'practicals_tasting_flags' });
+    await queryInterface.removeIndex('practicals', 'practicals_flag_count_submitted_at');
+  },
+
+  async down(queryInterface) {
+    await queryInterface.addIndex('practicals', ['flagCount', 'submittedAt'], { name: 'practicals_flag_count_submitted_at' });
+    await queryInterface.removeIndex('practicals', 'practicals_tasting_flags');
+    await queryInterface.removeIndex('practicals', 'practicals_tasting_status');
+  },
+};
