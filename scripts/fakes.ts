@@ -1,5 +1,6 @@
 // Starts both local fakes in one process (the demo and the browser tests run this):
-// the payment server the stripe SDK talks to, and the SMTP server with its mailbox page.
+// the payment server the stripe SDK talks to, and the SMTP server with its mailbox page; with
+// STORAGE_DRIVER=s3 and a loopback S3_ENDPOINT (npm run demo:cluster) also the S3-compatible store.
 // Ports and secrets come from the same variables the app reads (see lib/env.ts).
 import path from 'node:path';
 import { startFakePayments } from '../fakes/payments/server';
