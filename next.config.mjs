@@ -43,6 +43,14 @@ const nextConfig = {
   // Lets a second build (tests, a helper's branch of work) live beside the demo's.
   distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
+  // Lessons share one address, /learn/<course>/<lesson>. The public preview lessons are the only
+  // params app/learn/[course]/[lesson] prerenders (dynamicParams = false); any other lesson falls
+  // through to this fallback rewrite and is rendered per request behind the enrollment check in
+  // app/learn/[course]/[lesson]/members (unknown lessons answer 404 there). A rewrite in the
+  // router costs far less than running a proxy (middleware) on every lesson request.
+  async rewrites() {
+    return { fallback: [{ source: '/learn/:course/:lesson', destination: '/learn/:course/:lesson/members' }] };
+  },
   experimental: {
     authInterrupts: true,
   },

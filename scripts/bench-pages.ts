@@ -2,17 +2,29 @@
 // Brine bench, served by the app (`next start`) and, as the yardstick, by nginx serving the same
 // HTML saved to files. Also prints the first-load JS of a lesson page against a bare page.
 //
-// Bounded: 50 connections (BENCH_CONNECTIONS), 10 s per run (BENCH_SECONDS), four runs plus a
-// short warm-up of the app. Both servers listen on 127.0.0.1 only and are stopped at the end.
+// With BENCH_TARGET containing `cluster` (the default is `direct,cluster`) it also measures the
+// deployment path: the same pages through nginx as a reverse proxy in front of the app, once with
+// the proxy alone and once with the short micro-cache for anonymous GETs of public pages that
+// scripts/cluster/nginx.conf uses. Those figures are nginx's cache, not the app: they are printed
+// and reported apart from the app's own.
 //
-// Environment: BENCH_APP_PORT (3121), BENCH_NGINX_PORT (3122), BENCH_DIST_DIR (.next-bench),
-// BENCH_BUILD=1 to rebuild even when a build exists, BENCH_LESSON (/learn/pickling-and-canning/acidity).
+// Bounded: 50 connections (BENCH_CONNECTIONS), 10 s per run (BENCH_SECONDS), four runs (eight with
+// the cluster target) plus a short warm-up of the app. Every server listens on 127.0.0.1 only and
+// is stopped at the end. Neither the app nor nginx compresses here: autocannon sends no
+// Accept-Encoding, so both serve the same uncompressed bytes.
+//
+// Environment: BENCH_APP_PORT (3121), BENCH_NGINX_PORT (3122; the proxy takes a free port),
+// BENCH_DIST_DIR (.next-bench), BENCH_BUILD=1 to rebuild even when a build exists, BENCH_LESSON
+// (/learn/pickling-and-canning/acidity), BENCH_TARGET (direct,cluster). Results also go to
+// bench-results/pages.json (or $BENCH_RESULTS_FILE) for `npm run bench`.
 import { execFileSync, spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import net from 'node:net';
 import zlib from 'node:zlib';
 import { waitForOk } from '../lib/migrator';
+import { ratioFigure, writeBenchResults, type BenchFigure } from './bench-results';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: object) => AutocannonInstance;
@@ -26,6 +38,7 @@ const seconds = Number(process.env.BENCH_SECONDS ?? 10);
 const connections = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const distDir = process.env.BENCH_DIST_DIR ?? '.next-bench';
 const lessonPath = process.env.BENCH_LESSON ?? '/learn/pickling-and-canning/acidity';
+const targets = (process.env.BENCH_TARGET ?? 'direct,cluster').split(',').map((t) => t.trim());
 const appUrl = `http://127.0.0.1:${appPort}`;
 const nginxUrl = `http://127.0.0.1:${nginxPort}`;
 
@@ -74,7 +87,69 @@ function ensureNginx(): string {
   return '/usr/sbin/nginx';
 }
 
-function startNginx(nginx: string, dir: string) {
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.once('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as net.AddressInfo;
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+/**
+ * The reverse proxy of the deployment (scripts/cluster/nginx.conf) in front of the one app server:
+ * `/plain/…` passes every request through, `/` adds the micro-cache (anonymous GETs of public
+ * pages for a few seconds; never a request with a session cookie or an Authorization header,
+ * never a router (RSC) request, never a response with Set-Cookie or a private / no-store
+ * Cache-Control, never /api except the public /api/tools).
+ */
+function proxyServer(dir: string, proxyPort: number) {
+  return `
+  proxy_cache_path ${dir}/cache levels=1:2 keys_zone=brinewright_pages:10m max_size=100m inactive=1m use_temp_path=off;
+  map $http_cookie $brinewright_has_session { default 0; "~*next-auth\.session-token" 1; }
+  map $upstream_http_cache_control $brinewright_private { default 0; "~*(private|no-store|no-cache)" 1; }
+  upstream brinewright_bench_app { server 127.0.0.1:${appPort}; keepalive 32; }
+  server {
+    listen 127.0.0.1:${proxyPort};
+    proxy_http_version 1.1;
+    proxy_set_header Connection "";
+    proxy_set_header Host $http_host;
+    location /plain/ {
+      rewrite ^/plain(/.*)$ $1 break;
+      proxy_pass http://brinewright_bench_app;
+    }
+    location /api/ { proxy_pass http://brinewright_bench_app; }
+    location / {
+      proxy_pass http://brinewright_bench_app;
+      proxy_cache brinewright_pages;
+      proxy_cache_methods GET HEAD;
+      proxy_cache_key $scheme$http_host$request_uri$http_accept_encoding;
+      proxy_ignore_headers Cache-Control Expires;
+      proxy_cache_valid 200 5s;
+      proxy_cache_bypass $brinewright_has_session $http_authorization $http_rsc $http_next_router_prefetch $http_next_router_state_tree;
+      proxy_no_cache $brinewright_has_session $http_authorization $http_rsc $http_next_router_prefetch $http_next_router_state_tree $upstream_http_set_cookie $brinewright_private;
+      proxy_cache_lock on;
+      proxy_cache_use_stale updating;
+      proxy_cache_background_update on;
+      add_header X-Cache $upstream_cache_status always;
+    }
+    location /api/tools/ {
+      proxy_pass http://brinewright_bench_app;
+      proxy_cache brinewright_pages;
+      proxy_cache_key $scheme$http_host$request_uri$http_accept_encoding;
+      proxy_ignore_headers Cache-Control Expires;
+      proxy_cache_valid 200 5s;
+      proxy_cache_bypass $brinewright_has_session $http_authorization;
+      proxy_no_cache $brinewright_has_session $http_authorization $upstream_http_set_cookie $brinewright_private;
+      add_header X-Cache $upstream_cache_status always;
+    }
+  }
+`;
+}
+
+function startNginx(nginx: string, dir: string, proxyPort: number | null) {
   const conf = path.join(dir, 'nginx.conf');
   fs.writeFileSync(
     conf,
@@ -98,7 +173,7 @@ http {
     root ${dir}/www;
     location / { try_files $uri =404; }
   }
-}
+${proxyPort ? proxyServer(dir, proxyPort) : ''}}
 `,
   );
   const child = spawn(nginx, ['-c', conf, '-p', dir], { stdio: ['ignore', 'inherit', 'inherit'] });
@@ -176,8 +251,11 @@ async function main() {
     if (!response.ok) throw new Error(`${page.path} answered ${response.status}`);
     fs.writeFileSync(path.join(dir, 'www', page.file), await response.text());
   }
-  startNginx(nginx, dir);
+  const proxyPort = targets.includes('cluster') ? await freePort() : null;
+  const proxyUrl = `http://127.0.0.1:${proxyPort}`;
+  startNginx(nginx, dir, proxyPort);
   await waitForOk(`${nginxUrl}/lesson.html`, 10_000);
+  if (proxyPort) await waitForOk(`${proxyUrl}${lessonPath}`, 10_000);
 
   log('first-load JS (every <script src> and script preload in the HTML, sizes as served and gzip -9)');
   const bare = await firstLoadJs('/');
@@ -191,6 +269,7 @@ async function main() {
   }
 
   const load1 = () => os.loadavg().map((n) => n.toFixed(1)).join(' ');
+  const loadBefore = os.loadavg();
   log(`load average before the runs: ${load1()} on ${os.availableParallelism()} cores (other work on the machine lowers the app's figures far more than nginx's)`);
   log(`warming the app up (2 s per page)`);
   for (const page of pages) await load('warm-up', appUrl + page.path, 2);
@@ -202,19 +281,63 @@ async function main() {
     log(`${page.name}: nginx, ${connections} connections, ${seconds} s`);
     results.push(await load(`${page.name} nginx`, `${nginxUrl}/${page.file}`));
   }
+  if (proxyPort) {
+    for (const page of pages) {
+      log(`${page.name}: through the nginx reverse proxy, no cache, ${connections} connections, ${seconds} s`);
+      results.push(await load(`${page.name} via-proxy`, `${proxyUrl}/plain${page.path}`));
+      log(`${page.name}: through nginx with the micro-cache, ${connections} connections, ${seconds} s`);
+      results.push(await load(`${page.name} microcache`, `${proxyUrl}${page.path}`));
+    }
+  }
 
   log(`load average after the runs: ${load1()}`);
   log('');
-  log(`${'run'.padEnd(14)} ${'req/s'.padStart(9)} ${'p50 ms'.padStart(8)} ${'p95 ms'.padStart(8)} ${'requests'.padStart(9)} ${'not 2xx'.padStart(8)}`);
+  log(`${'run'.padEnd(18)} ${'req/s'.padStart(9)} ${'p50 ms'.padStart(8)} ${'p95 ms'.padStart(8)} ${'requests'.padStart(9)} ${'not 2xx'.padStart(8)}`);
   for (const r of results) {
-    log(`${r.label.padEnd(14)} ${r.rps.toFixed(0).padStart(9)} ${r.p50.toFixed(0).padStart(8)} ${r.p95.toFixed(0).padStart(8)} ${String(r.total).padStart(9)} ${String(r.bad).padStart(8)}`);
+    log(`${r.label.padEnd(18)} ${r.rps.toFixed(0).padStart(9)} ${r.p50.toFixed(0).padStart(8)} ${r.p95.toFixed(0).padStart(8)} ${String(r.total).padStart(9)} ${String(r.bad).padStart(8)}`);
   }
+  const figures: BenchFigure[] = [];
+  const find = (label: string) => results.find((r) => r.label === label);
   for (const page of pages) {
-    const appRun = results.find((r) => r.label === `${page.name} app`)!;
-    const nginxRun = results.find((r) => r.label === `${page.name} nginx`)!;
+    const appRun = find(`${page.name} app`)!;
+    const nginxRun = find(`${page.name} nginx`)!;
     const ratio = appRun.rps / nginxRun.rps;
     log(`${page.name}: app/nginx requests per second = ${ratio.toFixed(2)}× (goal ≥ 0.50×) ${ratio >= 0.5 ? 'met' : 'NOT met'}`);
+    const anchor = { name: 'nginx serving the same HTML from a file', value: nginxRun.rps };
+    figures.push({ ...ratioFigure(`${page.path}: the app alone (next start), req/s`, appRun.rps, 'req/s', anchor, 0.5) });
+    figures.push({ name: `${page.path}: the app alone, p95`, value: appRun.p95, unit: 'ms', anchor: { name: 'nginx, p95', value: nginxRun.p95, unit: 'ms' } });
   }
+  for (const page of pages) {
+    const nginxRun = find(`${page.name} nginx`)!;
+    const anchor = { name: 'nginx serving the same HTML from a file', value: nginxRun.rps };
+    const via = find(`${page.name} via-proxy`);
+    const cached = find(`${page.name} microcache`);
+    if (via) {
+      const ratio = via.rps / nginxRun.rps;
+      log(`${page.name}: through the nginx proxy (no cache)/nginx file = ${ratio.toFixed(2)}× — still the app's own speed, plus a hop`);
+      figures.push({ name: `${page.path}: app through the nginx reverse proxy, no cache, req/s`, value: via.rps, unit: 'req/s', anchor, ratio, goal: 'for comparison' });
+    }
+    if (cached) {
+      const ratio = cached.rps / nginxRun.rps;
+      log(`${page.name}: through nginx with the 5 s micro-cache/nginx file = ${ratio.toFixed(2)}× — nginx's cache answering, NOT the app's own figure`);
+      figures.push({ name: `${page.path}: deployment path, nginx micro-cache (5 s) in front of the app, req/s — nginx's cache, not the app`, value: cached.rps, unit: 'req/s', anchor, ratio, goal: '≥ 0.5× (deployment path)', met: ratio >= 0.5 });
+    }
+  }
+  const lessonJs = rows[1][1];
+  const benchJs = rows[2][1];
+  figures.push(ratioFigure(`first-load JS of ${lessonPath} (gzip)`, lessonJs.gzip / 1024, 'kB', { name: 'a bare page of the app (/)', value: bare.gzip / 1024 }, 1.3, false));
+  figures.push(ratioFigure('first-load JS of /bench (gzip)', benchJs.gzip / 1024, 'kB', { name: 'a bare page of the app (/)', value: bare.gzip / 1024 }, 1.3, false));
+  const file = writeBenchResults({
+    bench: 'pages',
+    loadAverage: { before: loadBefore, after: os.loadavg() },
+    figures,
+    notes: [
+      `${connections} connections, ${seconds} s a run, autocannon on the same machine (it takes CPU from both servers); no Accept-Encoding, so neither side compresses.`,
+      `HTML sizes: ${pages.map((p) => `${p.path} ${kb(fs.statSync(path.join(dir, 'www', p.file)).size)}`).join(', ')}.`,
+      ...results.map((r) => `${r.label}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(0)} ms, p95 ${r.p95.toFixed(0)} ms, ${r.total} requests, ${r.bad} not 2xx`),
+    ],
+  });
+  log(`results: ${path.relative(root, file)}`);
   stopAll();
   fs.rmSync(dir, { recursive: true, force: true });
 }

@@ -17,7 +17,7 @@
 // 'n/a' = the column has no meaning for this row (no one else's data in the request), not requested.
 // For writes, a role that passes the guard is sent a body that fails validation or names a missing
 // record, so the walk proves the guard without changing shared demo data: 400/404 in an allowed column
-// means "let through, then the input was refused", 401/403 means the guard stopped it.
+// (or 409: nothing to do) means "let through, then refused on its merits", 401/403 means the guard stopped it.
 
 export const SUBJECTS = ['visitor', 'own', 'other', 'instructor', 'coordinator', 'admin'] as const;
 export type Subject = (typeof SUBJECTS)[number];
@@ -168,7 +168,8 @@ const routes: RouteRow[] = [
     probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/attendance`, body: { attended: false } }),
     expect: [401, 403, 403, 200, 200, 200],
   },
-  { kind: 'route', pattern: '/api/enrollments/[id]/refund', method: 'POST', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/refund`, body: {} }), expect: [401, 403, 403, 403, 400, 400] },
+  // The fixtures' enrollments have no payment, so the desk is let through and told there is nothing to refund (409).
+  { kind: 'route', pattern: '/api/enrollments/[id]/refund', method: 'POST', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/refund`, body: {} }), expect: [401, 403, 403, 403, 409, 409] },
   // Someone else's enrollment is answered as missing (its existence is not revealed).
   { kind: 'route', pattern: '/api/enrollments/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }), expect: [401, 200, 404, 404, 200, 200] },
   { kind: 'route', pattern: '/api/enrollments', method: 'POST', probe: () => ({ path: '/api/enrollments', body: {} }), expect: LEARNER_WRITE },

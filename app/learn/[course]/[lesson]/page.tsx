@@ -1,8 +1,9 @@
 import { LessonView, lessonMetadata, type LessonPageProps } from '@/components/lessons/lesson-view';
 import { getCourses, getLessons } from '@/lib/content';
 
-// Public preview lessons: static pages generated at build time. Members-only lessons never reach
-// this page; proxy.ts rewrites them to ./members, which checks the session and the enrollment.
+// Public preview lessons: static pages generated at build time, served from the cache. Members-only
+// lessons are not among the params, so they fall through to the fallback rewrite in next.config.mjs
+// (to ./members, which checks the session and the enrollment) without changing the address.
 export const dynamicParams = false;
 
 export function generateStaticParams() {

@@ -1,7 +1,7 @@
 import { LessonView, lessonMetadata, type LessonPageProps } from '@/components/lessons/lesson-view';
 
 // Members-only lessons, rendered per request (./layout.tsx has checked access); the URL the
-// learner sees stays /learn/<course>/<lesson> (proxy.ts rewrites to here).
+// learner sees stays /learn/<course>/<lesson> (next.config.mjs rewrites to here).
 export const generateMetadata = lessonMetadata;
 
 export default async function MembersLessonPage({ params }: LessonPageProps) {
