@@ -4,7 +4,7 @@
 // the same size. Prints requests/s, p95 and the ratio. Goals: >= 0.5x the bare handler, p95 < 100 ms.
 // BENCH_CPU_PROF=<folder>: run the app under `node --cpu-prof` and write its profile there
 // (summarise with `tsx scripts/cpu-profile-summary.ts <folder>`).
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import http from 'node:http';
 import os from 'node:os';
@@ -16,6 +16,7 @@ import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { COMPUTE_FNS } from '../lib/quiz/compute';
 import { drawQuestions, rightAnswer, type Answers } from '../lib/quiz/grading';
 import { parseBankFile, resolveBanks } from '../lib/quiz/resolve';
+import { cpuMsOfTree, startNext, stopAndWait } from './bench-support';
 
 const root = path.resolve(__dirname, '..');
 // autocannon ships no type declarations; the part used here is typed loosely.
@@ -101,7 +102,7 @@ async function sessionCookie(base: string): Promise<string> {
   return session;
 }
 
-type Run = { rps: number; p95: number; p50: number; requests: number; non2xx: number; errors: number };
+type Run = { rps: number; p95: number; p50: number; requests: number; non2xx: number; errors: number; cpuMsPerRequest?: number };
 
 function load(url: string, next: () => { path: string; body?: string }, headers: Record<string, string>, method: 'POST' | 'GET' = 'POST'): Promise<Run> {
   return new Promise((resolve, reject) => {
@@ -156,12 +157,7 @@ async function main() {
   let bare: http.Server | undefined;
   let pool: mariadb.Pool | undefined;
   try {
-    const startArgs = ['start', '-p', String(APP_PORT), '-H', '127.0.0.1'];
-    if (CPU_PROF) fs.mkdirSync(CPU_PROF, { recursive: true });
-    // node refuses --cpu-prof in NODE_OPTIONS: run next's CLI under node with the flag instead.
-    app = CPU_PROF
-      ? spawn(process.execPath, ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`, path.join(root, 'node_modules/next/dist/bin/next'), ...startArgs], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] })
-      : spawn(path.join(root, 'node_modules/.bin/next'), startArgs, { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
+    app = startNext(APP_PORT, env, CPU_PROF);
     await waitForOk(`${base}/api/health`, 60_000);
     const cookie = await sessionCookie(base);
 
@@ -176,20 +172,27 @@ async function main() {
     }
     const firstMeasured = cursor;
     console.log(`[bench] app: POST /api/attempts/:id/submit, ${CONNECTIONS} connections, ${DURATION_S} s`);
+    const cpuBefore = cpuMsOfTree(app.pid!);
     const appRun = await load(base, () => {
       if (cursor >= bodies.length) throw new Error(`ran out of open attempts (${bodies.length}); raise BENCH_ATTEMPTS`);
       const b = bodies[cursor++];
       return { path: `/api/attempts/${b.id}/submit`, body: b.body };
     }, { cookie });
     const graded = cursor - firstMeasured;
-    if (CPU_PROF) await stopApp(app);
+    appRun.cpuMsPerRequest = (cpuMsOfTree(app.pid!) - cpuBefore) / appRun.requests;
+    if (CPU_PROF) {
+      await stopAndWait(app);
+      console.log(`[bench] CPU profile written to ${CPU_PROF}`);
+    }
 
     // The framework's floor, for the reading of the ratio: the app's health route, which does one
     // `SELECT 1` through the same pool and nothing else (no session, no body), under the same load.
     let floorRun: Run | undefined;
     if (!CPU_PROF && process.env.BENCH_FLOOR !== '0') {
       console.log(`[bench] floor: GET /api/health through the app (one SELECT 1), same load`);
+      const floorCpu = cpuMsOfTree(app.pid!);
       floorRun = await load(base, () => ({ path: '/api/health' }), {}, 'GET');
+      floorRun.cpuMsPerRequest = (cpuMsOfTree(app.pid!) - floorCpu) / floorRun.requests;
     }
 
     // Check: every measured submission was a real grading (one stored result per attempt).
@@ -227,7 +230,7 @@ async function main() {
     const bareRun = await load(`http://127.0.0.1:${BARE_PORT}`, () => ({ path: '/submit', body: bodies[k++ % bodies.length].body }), {});
 
     const ratio = appRun.rps / bareRun.rps;
-    const fmt = (r: Run) => `${r.rps.toFixed(1)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, ${r.requests} requests, ${r.non2xx} non-2xx, ${r.errors} errors`;
+    const fmt = (r: Run) => `${r.rps.toFixed(1)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, ${r.requests} requests, ${r.non2xx} non-2xx, ${r.errors} errors${r.cpuMsPerRequest === undefined ? '' : `; server CPU ${r.cpuMsPerRequest.toFixed(2)} ms per request`}`;
     console.log('');
     console.log(`app  (graded submissions): ${fmt(appRun)}; ${graded} attempts handed out, ${Number(n)} attempts graded and passed in the database`);
     console.log(`bare (one INSERT)        : ${fmt(bareRun)}`);
@@ -240,15 +243,6 @@ async function main() {
     await new Promise<void>((r) => (bare ? bare.close(() => r()) : r()));
     await pool?.end();
   }
-}
-
-/** Stops the app and waits for it to exit, so that a CPU profile is written before the bare run. */
-async function stopApp(app: ChildProcess): Promise<void> {
-  if (app.exitCode !== null) return;
-  const exited = new Promise<void>((r) => app.once('exit', () => r()));
-  app.kill('SIGTERM');
-  await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
-  console.log(`[bench] CPU profile written to ${CPU_PROF}`);
 }
 
 function poolConfig(connectionLimit: number): mariadb.PoolConfig {

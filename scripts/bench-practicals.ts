@@ -12,7 +12,7 @@
  * (no photo), BENCH_KEEP_DB=1 to keep the seeded database for EXPLAIN, BENCH_CPU_PROF=<folder> to
  * run the app under `node --cpu-prof` (summarise with scripts/cpu-profile-summary.ts).
  */
-import { execFileSync, spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { execFileSync, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -20,6 +20,7 @@ import sharp from 'sharp';
 import { createSequelize } from '../lib/db';
 import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { MAX_PHOTO_BYTES, processPhoto } from '../lib/practicals/images';
+import { cpuMsOfTree, startNext, stopAndWait } from './bench-support';
 
 // autocannon ships no type declarations; only the parts used here are typed.
 type CannonResult = { requests: { total: number; average: number }; non2xx: number; errors: number; timeouts: number };
@@ -206,12 +207,7 @@ async function main() {
   }
   const photosRoot = path.join(root, '.data', 'photos');
   const before = new Set(fs.existsSync(photosRoot) ? (fs.readdirSync(photosRoot, { recursive: true }) as string[]) : []);
-  const startArgs = ['start', '-p', String(port), '-H', '127.0.0.1'];
-  if (cpuProf) fs.mkdirSync(cpuProf, { recursive: true });
-  // node refuses --cpu-prof in NODE_OPTIONS: run next's CLI under node with the flag instead.
-  let app: ChildProcess | undefined = cpuProf
-    ? spawn(process.execPath, ['--cpu-prof', `--cpu-prof-dir=${cpuProf}`, path.join(root, 'node_modules/next/dist/bin/next'), ...startArgs], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] })
-    : spawn(path.join(root, 'node_modules/.bin/next'), startArgs, { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
+  let app: ChildProcess | undefined = startNext(port, env, cpuProf);
   try {
     await waitForOk(`${base}/api/health`, 60_000);
 
@@ -265,7 +261,9 @@ async function main() {
         instance.on('response', (_client, _status, _bytes, responseTime) => latencies.push(responseTime));
       });
     await load(3); // warm-up
+    const cpuBefore = cpuMsOfTree(app.pid!);
     const { latencies, result } = await load(seconds);
+    const cpuMsPerRequest = (cpuMsOfTree(app.pid!) - cpuBefore) / latencies.length;
     latencies.sort((a, b) => a - b);
     const table = {
       connections: 20,
@@ -280,16 +278,15 @@ async function main() {
       p99: percentile(latencies, 99),
       max: latencies[latencies.length - 1],
       serverPeakRssMb: serverPeakRssMb(app.pid!),
+      cpuMsPerRequest,
     };
     results.tastingTable = table;
     console.log(
-      `[bench] GET /api/tasting-table/submissions, ${seeded} submissions, 20 connections, ${seconds} s: ${table.requests} requests (${table.rps.toFixed(0)}/s), non-2xx ${table.non2xx}, errors ${table.errors}; latency p50 ${table.p50.toFixed(1)} ms, p95 ${table.p95.toFixed(1)} ms, p99 ${table.p99.toFixed(1)} ms, max ${table.max.toFixed(1)} ms`,
+      `[bench] GET /api/tasting-table/submissions, ${seeded} submissions, 20 connections, ${seconds} s: ${table.requests} requests (${table.rps.toFixed(0)}/s), non-2xx ${table.non2xx}, errors ${table.errors}; latency p50 ${table.p50.toFixed(1)} ms, p95 ${table.p95.toFixed(1)} ms, p99 ${table.p99.toFixed(1)} ms, max ${table.max.toFixed(1)} ms; server CPU ${cpuMsPerRequest.toFixed(2)} ms per request`,
     );
   } finally {
-    if (app && cpuProf && app.exitCode === null) {
-      const exited = new Promise<void>((r) => app!.once('exit', () => r()));
-      app.kill('SIGTERM');
-      await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
+    if (app && cpuProf) {
+      await stopAndWait(app);
       console.log(`[bench] CPU profile written to ${cpuProf}`);
     }
     app?.kill('SIGTERM');

@@ -215,10 +215,15 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
     const grade = gradeAttempt(bank.questions, drawn, counted, passMarkPct, convertUnits);
     const stored: StoredAnswers = { given: counted, grade, ...(late ? { late: true } : {}) };
 
-    await sequelize.query('UPDATE quiz_attempts SET answers = :answers, scorePct = :score, passed = :passed, submittedAt = :now, updatedAt = :now WHERE id = :id', {
-      replacements: { answers: JSON.stringify(stored), score: grade.scorePct, passed: grade.passed, now, id: row.id },
-      transaction,
-    });
+    // The result on the attempt and one multi-row INSERT of the answers, sent together on the
+    // transaction's connection (the driver pipelines them: one wait instead of two); the row lock
+    // taken above makes them the only writers of this attempt. Either failing rolls back both.
+    const writes: Promise<unknown>[] = [
+      sequelize.query('UPDATE quiz_attempts SET answers = :answers, scorePct = :score, passed = :passed, submittedAt = :now, updatedAt = :now WHERE id = :id', {
+        replacements: { answers: JSON.stringify(stored), score: grade.scorePct, passed: grade.passed, now, id: row.id },
+        transaction,
+      }),
+    ];
     if (grade.results.length) {
       // The workshop the answers count towards: that of the learner's current enrollment in the course.
       const workshopId = row.workshopId ?? null;
@@ -228,11 +233,17 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
         values.push('(?, ?, ?, ?, ?, ?, ?, ?)');
         replacements.push(row.id, row.courseId, workshopId, row.quizSlug, r.id, r.correct, r.response?.slice(0, 200) ?? null, now);
       }
-      await sequelize.query(`INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${values.join(', ')}`, {
-        replacements,
-        transaction,
-      });
+      writes.push(
+        sequelize.query(`INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${values.join(', ')}`, {
+          replacements,
+          transaction,
+        }),
+      );
     }
+    // allSettled, then throw: the transaction must not roll back while the other write is still in flight.
+    const settled = await Promise.allSettled(writes);
+    const failed = settled.find((r): r is PromiseRejectedResult => r.status === 'rejected');
+    if (failed) throw failed.reason;
     const updated: AttemptRow = { ...row, answers: stored, scorePct: grade.scorePct, passed: grade.passed, submittedAt: now };
     return { row: updated, bank, passMarkPct, graded: true, late };
   });
