@@ -21,10 +21,10 @@ import { execFileSync, spawn, spawnSync, type ChildProcess } from 'node:child_pr
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import net from 'node:net';
 import zlib from 'node:zlib';
 import { waitForOk } from '../lib/migrator';
 import { ratioFigure, writeBenchResults, type BenchFigure } from './bench-results';
+import { freePort } from './cluster/nginx';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: object) => AutocannonInstance;
@@ -85,17 +85,6 @@ function ensureNginx(): string {
   log("nginx is missing: installing Debian's nginx package");
   execFileSync('apt-get', ['install', '-y', '-qq', 'nginx'], { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
   return '/usr/sbin/nginx';
-}
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as net.AddressInfo;
-      server.close(() => resolve(port));
-    });
-  });
 }
 
 /**
