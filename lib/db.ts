@@ -17,11 +17,18 @@ export function createSequelize(databaseUrl: string, options: { poolMax?: number
     port: Number(url.port || 3306),
     logging: options.logging ? console.log : false,
     timezone: '+00:00',
-    pool: { max: options.poolMax ?? 10, min: 0, acquire: 10_000, idle: 10_000 },
+    // What these mean when the database goes away (tests/e2e/db-restart.test.ts holds them):
+    // - A stopped server refuses the connection at once: the query fails in milliseconds and the
+    //   route answers 503 (lib/errors.ts). Sequelize does not retry connection errors.
+    // - A server that accepts TCP but does not answer (starting up, overloaded) is given up after
+    //   connectTimeout, so no request waits longer than that for a new connection.
+    // - When every connection is busy, a request waits at most `acquire` for one, then gets a 503.
+    // - Connections broken by a restart fail their `validate` check and are dropped (checked every
+    //   `evict` ms and on acquire); new ones are made as soon as the server answers again, so the
+    //   same process recovers without a restart.
+    pool: { max: options.poolMax ?? 10, min: 0, acquire: 5_000, idle: 10_000, evict: 1_000 },
     dialectOptions: {
       connectTimeout: 3_000,
-      // A dead server must give a quick failure, not a request that hangs.
-      acquireTimeout: 3_000,
     },
     define: { underscored: false },
   });

@@ -101,7 +101,8 @@ async function checkoutOrRelease({ enrollment, course, workshop, user }: { enrol
     const sessions = await Payment.count({ where: { enrollmentId: enrollment.id } });
     if (sessions === 0) {
       await sequelize.transaction((transaction) => transitionEnrollment(enrollment.id, 'withdrawn', { transaction, actorId: user.id, reason: 'checkout-unavailable' })).catch(() => undefined);
+      throw new AppError('unavailable', 'Card payments are not available right now, so your seat was not kept. Please try again in a few minutes.');
     }
-    throw new AppError('unavailable', 'Card payments are not available right now, so your seat was not kept. Please try again in a few minutes.');
+    throw new AppError('unavailable', 'Card payments are not available right now. Your seat is held while your checkout is open; please try again in a few minutes.');
   }
 }

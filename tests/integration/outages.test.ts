@@ -181,6 +181,11 @@ describe('SMTP and the payment service stopped and started during enrollments', 
         expect(a.body.error).toBe('unavailable');
         expect(a.body.message).toMatch(/payments are not available right now/i);
       }
+      // Those without a checkout lose the seat they were about to take; learner 9 keeps the one
+      // its open (and meanwhile paid) checkout holds, and is told so.
+      expect(down[0].body.message).toMatch(/seat was not kept/);
+      expect(down[1].body.message).toMatch(/seat was not kept/);
+      expect(down[2].body.message).toMatch(/seat is held while your checkout is open/);
       expect(down[3].body.message).toMatch(/payment service cannot be reached.*nothing was refunded/i);
       // No seat was kept for the two who could not reach checkout; the waiver took one.
       expect(await seatsLeft()).toBe(seatsBefore - 1);
