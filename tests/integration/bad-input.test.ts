@@ -20,7 +20,7 @@ import { createCourses, createUser, resetDatabase } from '../helpers/db';
 import { actAs } from '../helpers/session';
 import { discoverRoutes } from '../support/app-routes';
 import type { BadBody } from '../support/bad-input/arbitraries';
-import { changedTables, fingerprint } from '../support/bad-input/fingerprint';
+import { changedTables, fingerprint, tableNames } from '../support/bad-input/fingerprint';
 import { EVERYONE, SWEEP, type SweepSpec, type Who } from '../support/bad-input/routes';
 import { encode, nextAuthRequests, photoRequests, webhookRequests, type NextAuthContext, type RawRequest } from '../support/bad-input/special';
 import { useTemporaryStorage } from './practical-fixtures';
@@ -199,6 +199,28 @@ describe('bad-input sweep', () => {
     expect(stale, 'rows in tests/support/bad-input/routes.ts for handlers that no longer exist').toEqual([]);
   });
 
+  it('notices a write in any table, and excludes only tables that exist', async () => {
+    const tables = await tableNames();
+    for (const { table } of Object.values(MAY_WRITE).flat()) expect(tables).toContain(table);
+    const before = await fingerprint();
+    const row = await db().AuditLog.create({ actorId: null, action: 'sweep.self-check', subjectType: 'test', subjectId: '1', data: {} });
+    expect(changedTables(before, await fingerprint())).toEqual([expect.stringMatching(/^audit_logs: /)]);
+    await row.destroy();
+    expect(changedTables(before, await fingerprint())).toEqual([]);
+  });
+
+  it('keeps the url of a failed sign-in (the sign-in form reads its error code) beside the message', async () => {
+    const { POST } = (await import('@/app/api/auth/[...nextauth]/route')) as unknown as { POST: Handler };
+    const body = `csrfToken=${encode(nextAuth.csrfToken)}&email=${encode(users.instructor!.email)}&password=wrong-password-1&callbackUrl=%2Fpantry&json=true`;
+    const request = new NextRequest('http://localhost:3000/api/auth/callback/credentials', { method: 'POST', headers: { cookie: nextAuth.csrfCookie, 'content-type': 'application/x-www-form-urlencoded' }, body });
+    current = request;
+    const response = await POST(request, { params: Promise.resolve({ nextauth: ['callback', 'credentials'] }) });
+    expect(response.status).toBe(401);
+    const answer = await response.json();
+    expect(new URL(answer.url).searchParams.get('error')).toBe('CredentialsSignin');
+    expect(answer).toMatchObject({ error: 'unauthorized', message: 'That e-mail address and password do not match an account.' });
+  });
+
   for (const target of targets) {
     const spec = SWEEP[target.key];
     if (!spec) continue; // failed by the coverage test above
@@ -208,13 +230,16 @@ describe('bad-input sweep', () => {
       expect(typeof handler).toBe('function');
       const exclude = (MAY_WRITE[target.key] ?? []).map((e) => e.table);
       const before = await fingerprint(exclude);
+      const beforeAll = await fingerprint();
       const statuses = new Map<number, number>();
+      const messages = new Map<string, number>();
       const property = fc.asyncProperty(requestsFor(target, spec), async (g) => {
         const response = await send(target, handler, g);
         statuses.set(response.status, (statuses.get(response.status) ?? 0) + 1);
         const what = describeRequest(target, g);
         if (response.status >= 500) throw new Error(`${response.status} for ${what}\n${(await response.text()).slice(0, 1_500)}`);
         if (response.status < 400 && !spec.mayAnswerOk) throw new Error(`bad input accepted with ${response.status}: ${what}\n${(await response.text()).slice(0, 500)}`);
+        if (process.env.BAD_INPUT_DEBUG && response.status >= 400) messages.set(`${response.status} ${(await response.clone().text()).slice(0, 120)}`, (messages.get(`${response.status} ${(await response.clone().text()).slice(0, 120)}`) ?? 0) + 1);
         if (response.status >= 400) {
           const reason = await unclearReason(response);
           if (reason) throw new Error(`${response.status} without a clear message (${reason}) for ${what}`);
@@ -228,6 +253,9 @@ describe('bad-input sweep', () => {
       }
       const after = await fingerprint(exclude);
       expect(changedTables(before, after), `tables written by bad requests to ${target.method} ${target.pattern}`).toEqual([]);
+      if (process.env.BAD_INPUT_DEBUG) console.log([...messages].sort((a, b) => b[1] - a[1]).slice(0, 12).map(([m, n]) => `${n}× ${m}`).join('\n'));
+      const allowed = changedTables(beforeAll, await fingerprint());
+      console.log(`[bad-input] ${target.method} ${target.pattern}: ${JSON.stringify(Object.fromEntries([...statuses].sort((a, b) => a[0] - b[0])))}${allowed.length ? `; allowed writes: ${allowed.join(', ')}` : ''}`);
 
       // The bad input must reach validation: most answers are not the role check's 401/403.
       const total = [...statuses.values()].reduce((a, b) => a + b, 0);

@@ -35,14 +35,18 @@ export function nextAuthRequests(ctx: NextAuthContext, method: 'GET' | 'POST'): 
     callbackUrl.map((v) => `next-auth.callback-url=${encode(v)}`),
     fc.tuple(nastyString, nastyString).map(([k, v]) => `${encode(k) || 'k'}=${encode(v)}`),
   );
-  const query = badQuery(['callbackUrl', 'error', 'csrf', 'json', 'nextauth'], { callbackUrl, error: fc.constantFrom('CredentialsSignin', 'Throttled', 'Configuration') });
+  const goodOrBadCallback = fc.oneof({ weight: 3, arbitrary: fc.constantFrom('/pantry', 'http://localhost:3000/desk') }, { weight: 1, arbitrary: callbackUrl });
+  const query = fc
+    .tuple(badQuery(['error', 'csrf', 'json', 'nextauth'], { error: fc.constantFrom('CredentialsSignin', 'Throttled', 'Configuration') }), fc.array(goodOrBadCallback, { maxLength: 2 }))
+    .map(([q, callbacks]) => [...q, ...callbacks.map((c): [string, string] => ['callbackUrl', c])]);
   const form = fc.record(
     {
       csrfToken: fc.oneof(fc.constant(ctx.csrfToken), nastyString),
       email: fc.oneof(nastyString, fc.constantFrom(ctx.knownEmail, ctx.knownEmail.toUpperCase(), 'nobody@test.example')),
       // Never the fixture's real password: a sign-in that succeeds is not bad input.
       password: fc.oneof(nastyString, fc.constantFrom('wrong-password-1', 'x'.repeat(201))).filter((p) => p !== 'test-password-123'),
-      callbackUrl,
+      // Mostly a good one, so that the rest of the form reaches next-auth's own checks.
+      callbackUrl: goodOrBadCallback,
       json: fc.oneof(fc.constant('true'), nastyString),
       redirect: nastyString,
     },
@@ -59,12 +63,26 @@ export function nextAuthRequests(ctx: NextAuthContext, method: 'GET' | 'POST'): 
           { weight: 1, arbitrary: fc.tuple(wrongContentType, formBody).map(([t, b]) => ({ body: b, contentType: t, kind: 'wrong type' })) },
           { weight: 1, arbitrary: hugeString.map((s) => ({ body: `csrfToken=${encode(s)}&email=${encode(s)}`, contentType: 'application/x-www-form-urlencoded', kind: 'huge form' })) },
         );
-  return fc.record({ action, query, cookies: fc.array(cookie, { maxLength: 3 }), body, origin: fc.option(headerValue) }).map(({ action, query, cookies, body, origin }) => ({
+  const anything = fc.record({ action, query, cookies: fc.array(cookie, { maxLength: 3 }), body, origin: fc.option(headerValue) }).map(({ action, query, cookies, body, origin }) => ({
     params: { nextauth: action },
     query,
     headers: { ...(cookies.length ? { cookie: cookies.join('; ') } : {}), ...(origin !== null ? { origin, 'x-forwarded-host': origin } : {}) },
     ...body,
   }));
+  if (method === 'GET') return anything;
+  // Sign-in attempts that pass the CSRF check, so bad e-mails and passwords reach authorize() and
+  // its zod schema (a well-formed wrong one is counted by the sign-in throttle, as it should be).
+  const signIn = fc
+    .record({ email: form.map((f) => f.email ?? ''), password: fc.oneof(nastyString, fc.constant('wrong-password-1')).filter((p) => p !== 'test-password-123'), json: fc.boolean() })
+    .map(({ email, password, json }): RawRequest => ({
+      params: { nextauth: ['callback', 'credentials'] },
+      query: [],
+      headers: { cookie: ctx.csrfCookie },
+      body: [`csrfToken=${encode(ctx.csrfToken)}`, `email=${encode(email)}`, `password=${encode(password)}`, 'callbackUrl=%2Fpantry', ...(json ? ['json=true'] : [])].join('&'),
+      contentType: 'application/x-www-form-urlencoded',
+      kind: 'sign-in attempt with a valid CSRF token',
+    }));
+  return fc.oneof({ weight: 4, arbitrary: anything }, { weight: 1, arbitrary: signIn });
 }
 
 // ---- payment webhook -----------------------------------------------------------------------------------
@@ -140,7 +158,7 @@ export function photoRequests(): fc.Arbitrary<RawRequest> {
   const fileName = fc.oneof(fc.constantFrom('IMG_0001.jpg', 'photo.png', '../../etc/passwd', 'a\u0000b.jpg', '\u202Egpj.exe', ''), nastyString);
   const fileType = fc.constantFrom('image/jpeg', 'image/png', 'image/heic', 'text/html', 'application/octet-stream', '', 'image/svg+xml');
   const form = fc
-    .record({ course: fc.option(course), file: fc.option(fc.tuple(garbageFile, fileName, fileType), { freq: 8 }), photoAsText: fc.option(nastyString, { freq: 6 }), extra: fc.array(fc.tuple(nastyString, nastyString), { maxLength: 2 }), second: fc.boolean() })
+    .record({ course: fc.option(course), file: fc.option(fc.tuple(garbageFile, fileName, fileType), { freq: 8 }), photoAsText: fc.oneof({ weight: 6, arbitrary: fc.constant(null) }, { weight: 1, arbitrary: nastyString }), extra: fc.array(fc.tuple(nastyString, nastyString), { maxLength: 2 }), second: fc.boolean() })
     .map(({ course, file, photoAsText, extra, second }): RawRequest => {
       const data = new FormData();
       if (course !== null) data.set('course', course);

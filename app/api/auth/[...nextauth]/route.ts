@@ -23,14 +23,23 @@ const TYPE_BY_STATUS: Record<number, ErrorType> = { 400: 'bad_request', 401: 'un
 async function withClearError(response: Response): Promise<Response> {
   if (response.status < 400 || response.status >= 500) return response;
   const text = await response.clone().text();
+  let body: { error?: unknown; message?: unknown; url?: unknown } | null = null;
   try {
-    const body = JSON.parse(text) as { error?: unknown; message?: unknown };
+    body = JSON.parse(text);
     if (typeof body?.error === 'string' && typeof body?.message === 'string') return response;
   } catch {
     /* not JSON: replaced below */
   }
-  const error = new AppError(TYPE_BY_STATUS[response.status] ?? 'bad_request', 'Sign-in does not accept that request. Use the sign-in form.');
-  const answer = error.toResponse({ status: response.status });
+  const type = TYPE_BY_STATUS[response.status] ?? 'bad_request';
+  let answer: Response;
+  if (body && typeof body.url === 'string') {
+    // A failed sign-in (json=true): the client reads `url` (its ?error= code), so it stays.
+    const code = URL.canParse(body.url) ? new URL(body.url).searchParams.get('error') : null;
+    const message = code === 'Throttled' ? 'Too many sign-in attempts. Please wait a few minutes and try again.' : 'That e-mail address and password do not match an account.';
+    answer = Response.json({ ...body, error: type, message }, { status: response.status });
+  } else {
+    answer = new AppError(type, 'Sign-in does not accept that request. Use the sign-in form.').toResponse({ status: response.status });
+  }
   for (const cookie of response.headers.getSetCookie()) answer.headers.append('set-cookie', cookie);
   return answer;
 }
@@ -48,6 +57,12 @@ async function handler(request: NextRequest, context: Context) {
     for (const name of CALLBACK_COOKIES) {
       const value = request.cookies.get(name)?.value;
       if (value && !isHttpUrl(value, base)) throw new AppError('bad_request', `${BAD_CALLBACK} Clear this site's cookies and sign in again.`, { fields: { callbackUrl: [BAD_CALLBACK] } });
+    }
+    // next-auth copies the error code into a Location header unencoded: a character beyond
+    // Latin-1 there makes the Response constructor throw.
+    const errorCodes = [...request.nextUrl.searchParams.getAll('error'), ...(params.nextauth?.[0] === 'error' && params.nextauth[1] ? [params.nextauth[1]] : [])];
+    if (errorCodes.some((code) => !/^[A-Za-z0-9_-]{0,64}$/.test(code))) {
+      throw new AppError('bad_request', 'That is not a sign-in error code Brinewright knows.', { fields: { error: ['letters, digits, - and _ only'] } });
     }
     // next-auth's GET callback of a credentials provider is its own 500 ("not supported").
     if (request.method === 'GET' && params.nextauth?.[0] === 'callback' && params.nextauth[1] === 'credentials') {
