@@ -17,6 +17,7 @@ import { COMPUTE_FNS } from '../lib/quiz/compute';
 import { drawQuestions, rightAnswer, type Answers } from '../lib/quiz/grading';
 import { parseBankFile, resolveBanks } from '../lib/quiz/resolve';
 import { cpuMsOfTree, startNext, stopAndWait } from './bench-support';
+import { ratioFigure, writeBenchResults } from './bench-results';
 
 const root = path.resolve(__dirname, '..');
 // autocannon ships no type declarations; the part used here is typed loosely.
@@ -238,6 +239,17 @@ async function main() {
     const la = (l: number[]) => l.map((x) => x.toFixed(2)).join(' ');
     console.log(`load average (1, 5, 15 min): ${la(loadBefore)} before, ${la(os.loadavg())} after (2-core machine: above 2 the figures are noisy)`);
     console.log(`ratio app/bare           : ${ratio.toFixed(2)}x  (goal >= 0.5x: ${ratio >= 0.5 ? 'met' : 'not met'}); app p95 ${appRun.p95.toFixed(1)} ms (goal < 100 ms: ${appRun.p95 < 100 ? 'met' : 'not met'})`);
+    // For `npm run bench` (scripts/bench.ts): the same figures as JSON.
+    writeBenchResults({
+      bench: 'grading',
+      loadAverage: { before: loadBefore, after: os.loadavg() },
+      figures: [
+        ratioFigure('graded quiz submissions, app, req/s', appRun.rps, 'req/s', { name: 'bare node:http doing one INSERT', value: bareRun.rps }, 0.5),
+        { name: 'graded quiz submissions, app, p95', value: appRun.p95, unit: 'ms', anchor: { name: 'bare handler, p95', value: bareRun.p95, unit: 'ms' }, goal: '< 100 ms', met: appRun.p95 < 100 },
+        ...(appRun.cpuMsPerRequest === undefined ? [] : [{ name: 'graded quiz submission, server CPU per request', value: appRun.cpuMsPerRequest, unit: 'ms', ...(bareRun.cpuMsPerRequest === undefined ? {} : { anchor: { name: 'bare handler', value: bareRun.cpuMsPerRequest, unit: 'ms' } }) }]),
+      ],
+      notes: [`app: ${fmt(appRun)}`, `bare: ${fmt(bareRun)}`, ...(floorRun ? [`floor (GET /api/health): ${fmt(floorRun)}`] : [])],
+    });
   } finally {
     app?.kill('SIGTERM');
     await new Promise<void>((r) => (bare ? bare.close(() => r()) : r()));
