@@ -180,80 +180,98 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
   });
 }
 
-/** The attempt, locked, with the workshop of the learner's current enrollment (one round trip). */
-async function lockedAttempt(id: number, transaction: Transaction): Promise<(AttemptRow & { workshopId: number | null }) | null> {
+/** The attempt with the workshop of the learner's current enrollment in its course (one statement). */
+async function attemptWithWorkshop(id: number): Promise<(AttemptRow & { workshopId: number | null }) | null> {
   const rows = await db().sequelize.query<AttemptRow & { workshopId: number | null }>(
     `SELECT qa.*, (SELECT e.workshopId FROM enrollments e WHERE e.userId = qa.userId AND e.courseId = qa.courseId AND e.status IN ('active', 'completed')
                     ORDER BY e.createdAt DESC LIMIT 1) AS workshopId
-       FROM quiz_attempts qa WHERE qa.id = :id FOR UPDATE`,
-    { replacements: { id }, type: QueryTypes.SELECT, transaction },
+       FROM quiz_attempts qa WHERE qa.id = :id`,
+    { replacements: { id }, type: QueryTypes.SELECT },
   );
   return rows[0] ?? null;
+}
+
+/**
+ * Stores a grade unless the attempt was graded meanwhile, in ONE statement: a MariaDB compound
+ * statement (BEGIN NOT ATOMIC … END, a single statement on the wire) holding a transaction that
+ * sets the result on the attempt only while it is still open (`submittedAt IS NULL`; a second
+ * submission waits on the row lock of the first and then finds it closed), inserts every answer row
+ * in one multi-row INSERT only if that UPDATE took, and commits. Any error rolls the whole
+ * transaction back (the EXIT HANDLER) and reaches the caller. Returns whether this call stored the grade.
+ */
+async function storeGradeOnce(row: AttemptRow & { workshopId: number | null }, stored: StoredAnswers, grade: Grade, now: Date): Promise<boolean> {
+  const replacements: unknown[] = [JSON.stringify(stored), grade.scorePct, grade.passed, now, now, row.id];
+  // The workshop the answers count towards: that of the learner's current enrollment in the course.
+  const answerRows = grade.results.map((r) => {
+    replacements.push(row.id, row.courseId, row.workshopId ?? null, row.quizSlug, r.id, r.correct, r.response?.slice(0, 200) ?? null, now);
+    return '(?, ?, ?, ?, ?, ?, ?, ?)';
+  });
+  const insert = answerRows.length
+    ? `INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${answerRows.join(', ')};`
+    : 'DO 0;';
+  const result = await db().sequelize.query(
+    `BEGIN NOT ATOMIC
+       DECLARE stored INT DEFAULT 0;
+       DECLARE EXIT HANDLER FOR SQLEXCEPTION BEGIN ROLLBACK; RESIGNAL; END;
+       START TRANSACTION;
+       UPDATE quiz_attempts SET answers = ?, scorePct = ?, passed = ?, submittedAt = ?, updatedAt = ? WHERE id = ? AND submittedAt IS NULL;
+       SET stored = ROW_COUNT();
+       IF stored = 1 THEN ${insert} END IF;
+       COMMIT;
+       SELECT stored;
+     END`,
+    { replacements, type: QueryTypes.RAW },
+  );
+  return Number(firstRow(result)?.stored) === 1;
+}
+
+/** The first row of the first result set in what the driver returns for a compound statement. */
+function firstRow(result: unknown): Record<string, unknown> | undefined {
+  const queue: unknown[] = [result];
+  while (queue.length) {
+    const item = queue.shift();
+    if (Array.isArray(item)) queue.push(...item);
+    else if (item && typeof item === 'object' && 'stored' in item) return item as Record<string, unknown>;
+  }
+  return undefined;
 }
 
 export type SubmitResult = { attempt: AttemptView; graded: boolean };
 
 /**
- * Grades an attempt once. A second submission (two tabs, a double click) waits on the row lock
- * and then returns the result already stored. Late answers (past the deadline and its grace)
- * are not counted: the attempt is closed with what arrived in time, i.e. nothing, and a 409 says so.
+ * Grades an attempt once: two statements, the read and the write (storeGradeOnce). A second
+ * submission (two tabs, a double click) that arrives after the first was stored reads the result and
+ * returns it; one that races the first loses at the write and returns the result the first stored.
+ * Late answers (past the deadline and its grace) are not counted: the attempt is closed with what
+ * arrived in time, i.e. nothing, and a 409 says so.
  */
 export async function submitAttempt(user: SessionUser, attemptId: number, answers: Answers, now = new Date()): Promise<SubmitResult> {
-  const { sequelize } = db();
-  const outcome = await sequelize.transaction(async (transaction) => {
-    const row = await lockedAttempt(attemptId, transaction);
-    if (!row) throw new AppError('not_found', 'There is no such attempt.');
-    if (row.userId !== user.id) throw new AppError('forbidden', 'This attempt belongs to another learner.');
-    const bank = requireBank(row.quizSlug);
-    const passMarkPct = passMarkFor(bank.course);
-    if (row.submittedAt) return { row, bank, passMarkPct, graded: false, late: false };
+  const row = await attemptWithWorkshop(attemptId);
+  if (!row) throw new AppError('not_found', 'There is no such attempt.');
+  if (row.userId !== user.id) throw new AppError('forbidden', 'This attempt belongs to another learner.');
+  const bank = requireBank(row.quizSlug);
+  const passMarkPct = passMarkFor(bank.course);
+  if (row.submittedAt) return { attempt: view(row, bank, passMarkPct, true), graded: false };
 
-    const drawn = drawnOf(row.drawn);
-    checkAnswers(bank.questions, drawn, answers);
-    const late = row.deadlineAt !== null && now.getTime() > new Date(row.deadlineAt).getTime() + DEADLINE_GRACE_MS;
-    const counted: Answers = late ? {} : answers;
-    const grade = gradeAttempt(bank.questions, drawn, counted, passMarkPct, convertUnits);
-    const stored: StoredAnswers = { given: counted, grade, ...(late ? { late: true } : {}) };
+  const drawn = drawnOf(row.drawn);
+  checkAnswers(bank.questions, drawn, answers);
+  const late = row.deadlineAt !== null && now.getTime() > new Date(row.deadlineAt).getTime() + DEADLINE_GRACE_MS;
+  const counted: Answers = late ? {} : answers;
+  const grade = gradeAttempt(bank.questions, drawn, counted, passMarkPct, convertUnits);
+  const stored: StoredAnswers = { given: counted, grade, ...(late ? { late: true } : {}) };
 
-    // The result on the attempt and one multi-row INSERT of the answers, sent together on the
-    // transaction's connection (the driver pipelines them: one wait instead of two); the row lock
-    // taken above makes them the only writers of this attempt. Either failing rolls back both.
-    const writes: Promise<unknown>[] = [
-      sequelize.query('UPDATE quiz_attempts SET answers = :answers, scorePct = :score, passed = :passed, submittedAt = :now, updatedAt = :now WHERE id = :id', {
-        replacements: { answers: JSON.stringify(stored), score: grade.scorePct, passed: grade.passed, now, id: row.id },
-        transaction,
-      }),
-    ];
-    if (grade.results.length) {
-      // The workshop the answers count towards: that of the learner's current enrollment in the course.
-      const workshopId = row.workshopId ?? null;
-      const values: string[] = [];
-      const replacements: unknown[] = [];
-      for (const r of grade.results) {
-        values.push('(?, ?, ?, ?, ?, ?, ?, ?)');
-        replacements.push(row.id, row.courseId, workshopId, row.quizSlug, r.id, r.correct, r.response?.slice(0, 200) ?? null, now);
-      }
-      writes.push(
-        sequelize.query(`INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${values.join(', ')}`, {
-          replacements,
-          transaction,
-        }),
-      );
-    }
-    // allSettled, then throw: the transaction must not roll back while the other write is still in flight.
-    const settled = await Promise.allSettled(writes);
-    const failed = settled.find((r): r is PromiseRejectedResult => r.status === 'rejected');
-    if (failed) throw failed.reason;
-    const updated: AttemptRow = { ...row, answers: stored, scorePct: grade.scorePct, passed: grade.passed, submittedAt: now };
-    return { row: updated, bank, passMarkPct, graded: true, late };
-  });
-  const attempt = view(outcome.row, outcome.bank, outcome.passMarkPct, true);
-  if (outcome.late) {
+  if (!(await storeGradeOnce(row, stored, grade, now))) {
+    const first = await attemptWithWorkshop(attemptId);
+    if (!first) throw new AppError('not_found', 'There is no such attempt.');
+    return { attempt: view(first, bank, passMarkPct, true), graded: false };
+  }
+  const attempt = view({ ...row, answers: stored, scorePct: grade.scorePct, passed: grade.passed, submittedAt: now }, bank, passMarkPct, true);
+  if (late) {
     throw new AppError('conflict', 'The time limit for this attempt ran out before the answers arrived, so they were not counted.', {
       extra: { deadlineAt: attempt.deadlineAt, attempt },
     });
   }
-  return { attempt, graded: outcome.graded };
+  return { attempt, graded: true };
 }
 
 /** An attempt for its owner, an instructor or a coordinator; the result only once submitted. */
