@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { AppError, errorResponse, isDatabaseDown, parseOrThrow, readJson } from './errors';
+import { AppError, clipText, decodeParam, errorResponse, isDatabaseDown, parseOrThrow, readJson } from './errors';
 
 describe('errors', () => {
   it('maps each error type to its status', async () => {
@@ -39,5 +39,29 @@ describe('errors', () => {
     await expect(readJson(bad)).rejects.toMatchObject({ status: 400 });
     const text = new Request('http://x/', { method: 'POST', headers: { 'content-type': 'text/plain' }, body: 'hi' });
     await expect(readJson(text)).rejects.toMatchObject({ status: 415 });
+  });
+
+  it('never quotes a huge or unprintable input back in full', () => {
+    expect(clipText('a\u0000b\uD800c\u202Ed')).toBe('a\uFFFDb\uFFFDc\uFFFDd');
+    expect(clipText('x'.repeat(500), 10)).toBe('x'.repeat(9) + '…');
+    expect(Array.from(clipText('🥒'.repeat(50), 10))).toHaveLength(10);
+    const huge = 'k'.repeat(100_000);
+    const error = (() => {
+      try {
+        parseOrThrow(z.object({ a: z.string() }).strict(), { a: 'ok', [huge]: 1 });
+      } catch (e) {
+        return e as AppError;
+      }
+    })()!;
+    const body = error.toJSON();
+    expect(body.message.length).toBeLessThanOrEqual(600);
+    expect(JSON.stringify(body).length).toBeLessThan(1_000);
+    expect(new AppError('bad_request', 'y'.repeat(5_000)).toJSON().message).toHaveLength(600);
+  });
+
+  it('decodes a path parameter once more without throwing on a stray %', () => {
+    expect(decodeParam('AB%2DCD')).toBe('AB-CD');
+    expect(decodeParam('%')).toBe('%');
+    expect(decodeParam('%E0%A4%A')).toBe('%E0%A4%A');
   });
 });
