@@ -1,5 +1,5 @@
 import { encode } from 'next-auth/jwt';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { sessionCookieName, sessionTokenFrom, userFromCookies, usesSecureCookies } from './session';
 
 const secret = 'unit-test-secret-0123456789abcdef';
@@ -68,6 +68,29 @@ describe('userFromCookies', () => {
     for (const bad of [{ ...claims, uid: '42' }, { ...claims, role: 'superuser' }, { email: 'x@y.example' }]) {
       const token = await encode({ token: bad as never, secret, maxAge: 60 });
       expect(await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false })).toBeNull();
+    }
+  });
+});
+
+describe('userFromCookies keeps decrypted tokens', () => {
+  it('refuses a remembered token once it expires, and a remembered token under another secret', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    try {
+      const start = new Date('2026-12-02T10:00:00Z');
+      vi.setSystemTime(start);
+      const token = await encode({ token: { ...claims, uid: 7 }, secret, maxAge: 60 });
+      const cookies = [{ name: 'next-auth.session-token', value: token }];
+      expect((await userFromCookies(cookies, { secret, secure: false }))?.id).toBe(7);
+      // Still inside exp + 15 s tolerance: accepted from memory.
+      vi.setSystemTime(new Date(start.getTime() + 70_000));
+      expect((await userFromCookies(cookies, { secret, secure: false }))?.id).toBe(7);
+      expect(await userFromCookies(cookies, { secret: 'another-secret-0123456789abcdef', secure: false })).toBeNull();
+      // Past exp + 15 s: refused, also when asked again with the right secret.
+      vi.setSystemTime(new Date(start.getTime() + 76_000));
+      expect(await userFromCookies(cookies, { secret, secure: false })).toBeNull();
+      expect(await userFromCookies(cookies, { secret, secure: false })).toBeNull();
+    } finally {
+      vi.useRealTimers();
     }
   });
 });

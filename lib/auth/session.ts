@@ -45,12 +45,41 @@ export function sessionTokenFrom(cookies: readonly CookieLike[], secure: boolean
 export async function userFromCookies(cookies: readonly CookieLike[], options: { secret: string; secure: boolean }): Promise<SessionUser | null> {
   const token = sessionTokenFrom(cookies, options.secure);
   if (!token) return null;
-  let claims: Awaited<ReturnType<typeof decode>>;
+  const claims = await decodeCached(token, options.secret);
+  if (!claims || typeof claims.uid !== 'number' || !ROLES.includes(claims.role)) return null;
+  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', role: claims.role };
+}
+
+type Claims = NonNullable<Awaited<ReturnType<typeof decode>>>;
+
+/** next-auth's clock tolerance when it checks `exp` (jwtDecrypt's clockTolerance in next-auth/jwt). */
+const CLOCK_TOLERANCE_S = 15;
+const MAX_CACHED = 1000;
+// Tokens this process has decrypted, with their claims: a browser sends the same token on every
+// request, and the key derivation and decryption were the costliest part of reading the session.
+// Only a token that decrypted with the secret gets here; its expiry is checked again on every use.
+const decoded = new Map<string, Claims>();
+let decodedFor = '';
+
+async function decodeCached(token: string, secret: string): Promise<Claims | null> {
+  if (decodedFor !== secret) {
+    decoded.clear();
+    decodedFor = secret;
+  }
+  const hit = decoded.get(token);
+  if (hit) {
+    if (typeof hit.exp === 'number' && hit.exp + CLOCK_TOLERANCE_S > Date.now() / 1000) return hit;
+    decoded.delete(token);
+    return null;
+  }
+  let claims: Claims | null;
   try {
-    claims = await decode({ token, secret: options.secret });
+    claims = await decode({ token, secret });
   } catch {
     return null;
   }
-  if (!claims || typeof claims.uid !== 'number' || !ROLES.includes(claims.role)) return null;
-  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', role: claims.role };
+  if (!claims) return null;
+  if (decoded.size >= MAX_CACHED) decoded.delete(decoded.keys().next().value!);
+  decoded.set(token, claims);
+  return claims;
 }
