@@ -222,7 +222,7 @@ describe('every calculator', () => {
       }
       expect(within(section).getByRole('status')).toHaveAttribute('aria-live', 'polite');
       expect(within(section).getByRole('link', { name: /^Lesson: / }).getAttribute('href')).toMatch(/^\/learn\/pickling-and-canning\//);
-      expect(section.textContent).toContain('⚠');
+      expect(section.querySelector('svg[data-icon="warning"]')).not.toBeNull();
       unmount();
     }
   });

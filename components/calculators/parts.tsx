@@ -3,6 +3,7 @@
 import { useId, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 import { PreservingError, parseNumber, type NumberRule } from '@/lib/preserving/errors';
+import { WarningIcon } from '@/components/ui/warning-icon';
 
 /** Reads typed text into numbers, noting a message per field instead of throwing. */
 export type Reader = {
@@ -85,7 +86,7 @@ export function CalculatorShell({ title, intro, headingLevel = 3, lesson, cautio
       </output>
       {caution ? (
         <p className="mt-3 text-sm text-honey-700">
-          <span aria-hidden="true">⚠ </span>
+          <WarningIcon />
           {caution}
         </p>
       ) : null}

@@ -1,5 +1,6 @@
 import { useId, type ComponentProps } from 'react';
 import { cn } from '@/lib/cn';
+import { WarningIcon } from './warning-icon';
 
 type TextFieldProps = ComponentProps<'input'> & {
   label: string;
@@ -48,7 +49,7 @@ export function FieldError({ id, message }: { id?: string; message?: string }) {
     <p id={id} className="min-h-0 text-sm font-medium text-beet-600" aria-live="polite">
       {message ? (
         <>
-          <span aria-hidden="true">⚠ </span>
+          <WarningIcon />
           {message}
         </>
       ) : null}
