@@ -1,9 +1,8 @@
 'use strict';
 
-// Indexes for the Tasting table (lib/practicals/data.ts). Its page query first picks the ids of one
-// page from `practicals` alone and only then joins the learner, course and workshop of those rows;
-// these two indexes let that first step and the per-status counts read the index only (no row
-// reads, no sort of whole rows), for every filter and sort the table offers:
+// Indexes for the Tasting table (lib/practicals/data.ts): its page query walks one of these in the
+// order of the sort and stops after the page, and its per-status counts read the index only (no row
+// reads, no sort of whole rows), for the filters and sorts the table offers:
 // - (status, flagCount DESC, submittedAt): a status tab sorted by flags (most flags first, then
 //   oldest), and the counts per status;
 // - (flagCount DESC, submittedAt, status): "flagged"/"not flagged" with any sort, the flags sort on

@@ -6,8 +6,9 @@ import { resetDatabase } from '../helpers/db';
 import { actAs } from '../helpers/session';
 import { catalog, enrolledLearner } from './practical-fixtures';
 
-// The Tasting table's page query picks a page of ids first and joins the rest afterwards; these
-// checks hold its order, paging and counts to what a plain sort of every row gives, for every sort.
+// The Tasting table's page query sorts on indexes (the status sort on the ENUM's declared order
+// rather than FIELD()); these checks hold its order, paging and counts to what a plain sort of
+// every row gives, for every sort.
 
 type Row = { id: number; status: string; flagCount: number; submittedAt: string; learnerName: string; workshopId: number | null };
 const get = async (query: string) => {
