@@ -33,7 +33,7 @@ export function CrispingCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
             ) : (
               <p className="text-xl font-bold" data-testid="crisping-dose">
                 {kitchen(r.limeCups)} cup{r.limeCups === 1 ? '' : 's'} of lime in {kitchen(r.waterGallons)} gallon{r.waterGallons === 1 ? '' : 's'} of water ({fmt(r.waterGallons * 3.785411784, 1)} L); soak{' '}
-                {r.soakHours[0]}–{r.soakHours[1]} hours, then rinse and soak 1 hour in fresh water {r.rinses} times
+                {r.soakHours[0]} to {r.soakHours[1]} hours, then rinse and soak 1 hour in fresh water {r.rinses} times
               </p>
             )}
             <ul className="list-disc space-y-1 pl-5 text-sm">

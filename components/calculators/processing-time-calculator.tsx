@@ -7,7 +7,7 @@ import { AltitudeField } from './altitude-field';
 import { ARITHMETIC_ONLY, CalculatorShell, LESSONS, ResultMessage, calculate, fmt } from './parts';
 import { JarSelect, ProductSelect, startProduct } from './product-fields';
 
-const band = (fromFt: number, toFt: number | null) => (fromFt === 6001 ? `above 6,000 ft (table used up to ${fmt(toFt ?? 10000, 0)} ft)` : `${fmt(fromFt, 0)}–${fmt(toFt ?? 0, 0)} ft`);
+const band = (fromFt: number, toFt: number | null) => (fromFt === 6001 ? `above 6,000 ft (table used up to ${fmt(toFt ?? 10000, 0)} ft)` : `${fmt(fromFt, 0)} to ${fmt(toFt ?? 0, 0)} ft`);
 
 /** Boiling-water processing minutes for a product, jar size and altitude, from its published table. */
 export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { defaultProduct?: string; headingLevel?: 2 | 3 }) {
@@ -32,7 +32,7 @@ export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { def
             <p className="text-sm">Altitude band: {band(r.altitudeBand.fromFt, r.altitudeBand.toFt)}</p>
             {r.lowTemperaturePasteurization ? (
               <p className="text-sm">
-                The guide also allows low-temperature pasteurization for this product: {r.lowTemperaturePasteurization.waterTempF[0]}–{r.lowTemperaturePasteurization.waterTempF[1]} °F (82–85 °C) water for{' '}
+                The guide also allows low-temperature pasteurization for this product: {r.lowTemperaturePasteurization.waterTempF[0]} to {r.lowTemperaturePasteurization.waterTempF[1]} °F (82 to 85 °C) water for{' '}
                 {r.lowTemperaturePasteurization.minutes} minutes, checked with a thermometer the whole time.
               </p>
             ) : null}

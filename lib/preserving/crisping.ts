@@ -15,7 +15,7 @@ export const CALCIUM_CHLORIDE_TSP: Partial<Record<JarSize, number>> = { pint: 0.
  * slices per gallon of soak). */
 export const LIME = { cupsPerGallon: 1, pintsPerGallon: 8, soakHours: [12, 24] as [number, number], rinses: 3 };
 
-const COMMON_CAUTION = 'A crisping agent only firms texture: it does not replace the tested recipe’s vinegar, salt or processing time.';
+const COMMON_CAUTION = "A crisping agent only firms texture: it does not replace the tested recipe's vinegar, salt or processing time.";
 
 export type CalciumChloridePlan = { agent: 'calcium-chloride'; perJarTsp: number; totalTsp: number; source: string; cautions: string[] };
 export type LimePlan = { agent: 'pickling-lime'; limeCups: number; waterGallons: number; soakHours: [number, number]; rinses: number; source: string; cautions: string[] };

@@ -18,8 +18,8 @@ describe('the Brine bench in the browser', () => {
     await page.getByRole('heading', { level: 1, name: 'Brine bench' }).waitFor();
     expect(await page.getByText('They never call a recipe safe.').count()).toBe(1);
     // Every calculator has a heading and a lesson link.
-    expect(await page.locator('[data-calculator]').count()).toBe(9);
-    expect(await page.getByRole('link', { name: /^Lesson: / }).count()).toBe(9);
+    expect(await page.locator('[data-calculator]').count()).toBe(10);
+    expect(await page.getByRole('link', { name: /^Lesson: / }).count()).toBe(10);
     expect(await seriousViolations(page)).toEqual([]);
 
     // Processing time: quick fresh-pack dill quarts at 7,000 ft → 25 minutes (USDA Complete Guide to
