@@ -121,6 +121,8 @@ describe('lessons in the browser', () => {
     const response = await page.goto(membersPath);
     expect(response?.status()).toBe(200);
     expect(page.url()).toMatch(new RegExp(`${membersPath}$`));
+    // Per-request page with a loading state: wait for the streamed lesson before counting.
+    await page.getByRole('heading', { level: 1, name: membersOnly.title }).waitFor();
     expect(await page.getByRole('heading', { level: 1, name: membersOnly.title }).count()).toBe(1);
     expect(await page.getByText(membersOnly.objectives[0]).count()).toBe(1);
     expect(await page.getByRole('link', { name: /Previous: lesson/ }).getAttribute('href')).toBe(`/learn/pickling-and-canning/${lessons[membersOnly.order - 2].slug}`);
