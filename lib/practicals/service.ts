@@ -45,9 +45,9 @@ export async function acceptPhoto(user: SessionUser, courseSlug: string, input: 
   const base = `${user.id}/${randomUUID()}`;
   const storageKey = `photos/${base}.jpg`;
   const thumbnailKey = `thumbs/${base}.jpg`;
-  await storage.put(storageKey, processed.image.data, processed.image.contentType);
-  await storage.put(thumbnailKey, processed.thumbnail.data, processed.thumbnail.contentType);
   try {
+    await storage.put(storageKey, processed.image.data, processed.image.contentType);
+    await storage.put(thumbnailKey, processed.thumbnail.data, processed.thumbnail.contentType);
     const row = await PracticalPhoto.create({
       userId: user.id,
       practicalId: null,
@@ -60,7 +60,7 @@ export async function acceptPhoto(user: SessionUser, courseSlug: string, input: 
     });
     return { id: row.id, receivedAs: processed.format, width: row.width, height: row.height, bytes: row.bytes, url: photoUrl(row.id), thumbnailUrl: photoUrl(row.id, 'thumb') };
   } catch (error) {
-    // Keep disk and database in step: no row, no files.
+    // Keep the store and the database in step: no row, no files (deleting a key never stored is a no-op).
     await Promise.allSettled([storage.delete(storageKey), storage.delete(thumbnailKey)]);
     throw error;
   }

@@ -2,7 +2,8 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as getPhoto } from '@/app/api/photos/[id]/route';
 import { POST as uploadPhoto } from '@/app/api/photos/route';
-import { getStorage } from '@/lib/storage';
+import { AppError } from '@/lib/errors';
+import { getStorage, setStorage } from '@/lib/storage';
 import { db } from '@/models';
 import { createUser, resetDatabase } from '../helpers/db';
 import { params } from '../helpers/request';
@@ -115,6 +116,29 @@ describe('POST /api/photos', () => {
     const response = await uploadPhoto(photoRequest(fake, 'x.jpg', 'image/jpeg'), {});
     expect(response.status).toBe(415);
     expect(await db().PracticalPhoto.count()).toBe(0);
+  });
+
+  it('leaves nothing behind when the store fails between the photo and its thumbnail', async () => {
+    const { learner } = await enrolledLearner(setting.flagship.id);
+    actAs(learner);
+    const real = getStorage();
+    // The photo is stored, then the store stops answering before the thumbnail is written.
+    setStorage({
+      name: 'fails-on-thumbnails',
+      put: (key, data, type) => (key.startsWith('thumbs/') ? Promise.reject(new AppError('unavailable', 'The photo store is not answering.')) : real.put(key, data, type)),
+      get: (key) => real.get(key),
+      delete: (key) => real.delete(key),
+    });
+    const filesBefore = storage.files();
+    try {
+      const response = await uploadPhoto(photoRequest(await makeJpeg(400, 300), 'jars.jpg', 'image/jpeg'), {});
+      expect(response.status).toBe(503);
+      expect((await response.json()).message).toMatch(/photo store/);
+    } finally {
+      setStorage(real);
+    }
+    expect(await db().PracticalPhoto.count()).toBe(0);
+    expect(storage.files()).toEqual(filesBefore);
   });
 
   it('answers an 11 MB file with 413 and stores nothing', async () => {
