@@ -28,12 +28,7 @@ export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
 # The SDK's notice about its future Node 22 requirement, once per process, says nothing about this demo.
 export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED="${AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED:-true}"
 
-"$ROOT/node_modules/.bin/tsx" scripts/migrate.ts up
-"$ROOT/node_modules/.bin/tsx" scripts/migrate.ts seed
-
-if [ "${SKIP_BUILD:-0}" != "1" ] || [ ! -f "${NEXT_DIST_DIR:-.next}/BUILD_ID" ]; then
-  "$ROOT/node_modules/.bin/next" build
-fi
+demo_prepare
 
 NGINX_SETUP="$("$ROOT/node_modules/.bin/tsx" scripts/cluster/nginx.ts "$CLUSTER_DIR" "$PORT" "127.0.0.1:$APP_PORT_A" "127.0.0.1:$APP_PORT_B")"
 read -r NGINX NGINX_CONF <<<"$NGINX_SETUP"

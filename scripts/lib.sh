@@ -22,7 +22,7 @@ ensure_chromium() {
 }
 
 # The demo's environment for a public address on PORT ($1): database, secret, addresses and the
-# local fakes. Used by demo-cluster.sh (demo.sh sets the same values inline).
+# local fakes (the payment server the stripe SDK talks to, the SMTP server with its mailbox page).
 demo_env() {
   local port="$1"
   export DATABASE_URL="${DATABASE_URL:-$("$ROOT/scripts/db.sh" url brinewright)}"
@@ -33,6 +33,15 @@ demo_env() {
   export SMTP_HOST="${SMTP_HOST:-127.0.0.1}" SMTP_PORT="${SMTP_PORT:-2525}" FAKE_MAILBOX_PORT="${FAKE_MAILBOX_PORT:-2580}"
   export MAILBOX_URL="${MAILBOX_URL:-http://127.0.0.1:$FAKE_MAILBOX_PORT}"
   export FAKE_PAYMENTS_WEBHOOK_URL="${FAKE_PAYMENTS_WEBHOOK_URL:-http://127.0.0.1:$port/api/webhooks/stripe}"
+}
+
+# Migrations, demo data and (unless SKIP_BUILD=1 finds one) a production build.
+demo_prepare() {
+  "$ROOT/node_modules/.bin/tsx" "$ROOT/scripts/migrate.ts" up
+  "$ROOT/node_modules/.bin/tsx" "$ROOT/scripts/migrate.ts" seed
+  if [ "${SKIP_BUILD:-0}" != "1" ] || [ ! -f "${NEXT_DIST_DIR:-.next}/BUILD_ID" ]; then
+    "$ROOT/node_modules/.bin/next" build
+  fi
 }
 
 # The demo accounts, the mailbox and the test cards, as the demo banners print them.

@@ -63,7 +63,7 @@ describe('PhotoUploader', () => {
 describe('PracticalForm', () => {
   it('shows the flag for a too-short process time as the learner types, and keeps what was typed when a photo fails', async () => {
     const user = userEvent.setup();
-    render(<PracticalForm courseSlug="pickling-and-canning" round={1} />);
+    render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
     const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });
     expect(within(live).getByText(/No flags/)).toBeInTheDocument();
     await user.selectOptions(screen.getByLabelText('Product'), 'fresh-pack-dill-pickles');
@@ -88,7 +88,7 @@ describe('PracticalForm', () => {
     const user = userEvent.setup();
     const fetchSpy = vi.fn();
     vi.stubGlobal('fetch', fetchSpy);
-    render(<PracticalForm courseSlug="pickling-and-canning" round={1} />);
+    render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
     await user.click(screen.getByRole('button', { name: 'Submit round 1 for review' }));
     expect(await screen.findByText('Name the tested recipe you followed.')).toBeInTheDocument();
     expect(screen.getByText(/Add at least 2 photos/)).toBeInTheDocument();

@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
 import { Select } from '@/components/ui/select';
 import { FieldError, TextField, fieldClasses } from '@/components/ui/text-field';
 import { cn } from '@/lib/cn';
@@ -26,7 +27,12 @@ const METHOD_OPTIONS = [{ value: '', label: 'Choose the method' }, ...PROCESSING
 type Result = { id: number; round: number; flags: Flag[] };
 
 /** The learner's practical batch: details, photos, and the automatic checks shown as they type. */
-export function PracticalForm({ courseSlug, round }: { courseSlug: string; round: number }) {
+/**
+ * The form for the next round, in its card. The page renders it in the same place whether or not
+ * a round may be submitted (`open`), so that after a submission the refreshed page (which no longer
+ * offers the form) keeps this component, and its confirmation with the flags, on screen.
+ */
+export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: string; round: number; open: boolean; title: string }) {
   const router = useRouter();
   const [serverError, setServerError] = useState<string | null>(null);
   const [result, setResult] = useState<Result | null>(null);
@@ -63,86 +69,89 @@ export function PracticalForm({ courseSlug, round }: { courseSlug: string; round
 
   if (result) {
     return (
-      <div className="space-y-4" data-testid="practical-submitted">
+      <Card className="space-y-4" data-testid="practical-submitted">
         <div role="status" className="rounded-jar border border-brine-300 bg-brine-50 p-4">
           <h2 className="text-lg font-bold">Round {result.round} is at the Tasting table</h2>
           <p className="text-sm text-ink-soft">An instructor will review your batch and photos. You will get an e-mail when it is reviewed.</p>
         </div>
         <FlagList flags={result.flags} title="Flags sent with your submission" />
-      </div>
+      </Card>
     );
   }
+  if (!open) return null;
 
   const num = { valueAsNumber: true } as const;
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-describedby="practical-form-intro">
-      <p id="practical-form-intro" className="text-sm text-ink-soft">
-        {round > 1 ? `This is round ${round}. ` : ''}Enter what you actually did. A flag does not stop you from submitting: it tells you and your instructor where
-        the batch differs from the published numbers.
-      </p>
-
-      <fieldset className="grid gap-4 md:grid-cols-2">
-        <legend className="mb-2 font-display text-lg font-bold">The recipe</legend>
-        <Select label="Product" options={PRODUCTS} error={errors.product?.message} {...register('product')} />
-        <Select label="Pack" options={PACK_OPTIONS} error={errors.pack?.message} {...register('pack')} />
-        <TextField label="Tested recipe followed" hint="Its title" error={errors.recipeTitle?.message} {...register('recipeTitle')} />
-        <TextField label="Where it is published" hint="Book and page, or the web address" error={errors.recipeSource?.message} {...register('recipeSource')} />
-      </fieldset>
-
-      <fieldset className="grid gap-4 md:grid-cols-3">
-        <legend className="mb-2 font-display text-lg font-bold">Jars and brine</legend>
-        <Select label="Jar size" options={JAR_OPTIONS} error={errors.jar?.message} {...register('jar')} />
-        <TextField label="Number of jars" type="number" inputMode="numeric" min={1} error={errors.jars?.message} {...register('jars', num)} />
-        <TextField label="Headspace measured" hint="Inches, e.g. 0.5 for ½ inch" type="number" step="0.0625" min={0} suffix="in" error={errors.headspaceIn?.message} {...register('headspaceIn', num)} />
-        <TextField label="Vinegar acidity" hint="From the label" type="number" step="0.1" min={0} suffix="%" error={errors.vinegarAcidityPct?.message} {...register('vinegarAcidityPct', num)} />
-        <TextField label="Vinegar used" hint="1 cup = 237 mL" type="number" step="any" min={0} suffix="mL" error={errors.vinegarMl?.message} {...register('vinegarMl', num)} />
-        <TextField label="Water used" hint="In the brine" type="number" step="any" min={0} suffix="mL" error={errors.waterMl?.message} {...register('waterMl', num)} />
-      </fieldset>
-
-      <fieldset className="grid gap-4 md:grid-cols-3">
-        <legend className="mb-2 font-display text-lg font-bold">Processing</legend>
-        <Select label="Processing method" options={METHOD_OPTIONS} error={errors.method?.message} {...register('method')} />
-        <TextField label="Altitude" hint="Of your kitchen, in feet" type="number" inputMode="numeric" min={0} suffix="ft" error={errors.altitudeFt?.message} {...register('altitudeFt', num)} />
-        <TextField label="Minutes processed" hint="Counted from the return to a full boil" type="number" inputMode="numeric" min={0} suffix="min" error={errors.minutes?.message} {...register('minutes', num)} />
-        <TextField label="Date put up" type="date" error={errors.batchDate?.message} {...register('batchDate')} />
-        <TextField label="Jars sealed" hint="After 12–24 hours" type="number" inputMode="numeric" min={0} error={errors.sealedJars?.message} {...register('sealedJars', num)} />
-        <TextField label="Jars not sealed" type="number" inputMode="numeric" min={0} error={errors.unsealedJars?.message} {...register('unsealedJars', num)} />
-      </fieldset>
-
-      <div className="space-y-1">
-        <label htmlFor="practical-notes" className="block text-sm font-semibold">
-          Notes
-        </label>
-        <textarea
-          id="practical-notes"
-          rows={4}
-          aria-describedby={errors.notes ? 'practical-notes-error' : undefined}
-          className={cn(fieldClasses, 'border-ink-faint/40')}
-          {...register('notes')}
-        />
-        <FieldError id="practical-notes-error" message={errors.notes?.message} />
-      </div>
-
-      <div>
-        <PhotoUploader
-          courseSlug={courseSlug}
-          onChange={(ids) => setValue('photoIds', ids, { shouldValidate: ids.length > 0 })}
-          describedBy={errors.photoIds ? 'practical-photos-error' : undefined}
-          invalid={Boolean(errors.photoIds)}
-        />
-        <FieldError id="practical-photos-error" message={errors.photoIds?.message} />
-      </div>
-
-      <FlagList flags={flags} live title="Automatic checks (as you type)" />
-
-      {serverError ? (
-        <p role="alert" className="rounded-lg border border-beet-500 bg-beet-50 px-4 py-2 text-sm text-beet-700">
-          {serverError}
+    <Card title={title}>
+      <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-describedby="practical-form-intro">
+        <p id="practical-form-intro" className="text-sm text-ink-soft">
+          {round > 1 ? `This is round ${round}. ` : ''}Enter what you actually did. A flag does not stop you from submitting: it tells you and your instructor where
+          the batch differs from the published numbers.
         </p>
-      ) : null}
-      <Button type="submit" pending={isSubmitting}>
-        Submit round {round} for review
-      </Button>
-    </form>
+
+        <fieldset className="grid gap-4 md:grid-cols-2">
+          <legend className="mb-2 font-display text-lg font-bold">The recipe</legend>
+          <Select label="Product" options={PRODUCTS} error={errors.product?.message} {...register('product')} />
+          <Select label="Pack" options={PACK_OPTIONS} error={errors.pack?.message} {...register('pack')} />
+          <TextField label="Tested recipe followed" hint="Its title" error={errors.recipeTitle?.message} {...register('recipeTitle')} />
+          <TextField label="Where it is published" hint="Book and page, or the web address" error={errors.recipeSource?.message} {...register('recipeSource')} />
+        </fieldset>
+
+        <fieldset className="grid gap-4 md:grid-cols-3">
+          <legend className="mb-2 font-display text-lg font-bold">Jars and brine</legend>
+          <Select label="Jar size" options={JAR_OPTIONS} error={errors.jar?.message} {...register('jar')} />
+          <TextField label="Number of jars" type="number" inputMode="numeric" min={1} error={errors.jars?.message} {...register('jars', num)} />
+          <TextField label="Headspace measured" hint="Inches, e.g. 0.5 for ½ inch" type="number" step="0.0625" min={0} suffix="in" error={errors.headspaceIn?.message} {...register('headspaceIn', num)} />
+          <TextField label="Vinegar acidity" hint="From the label" type="number" step="0.1" min={0} suffix="%" error={errors.vinegarAcidityPct?.message} {...register('vinegarAcidityPct', num)} />
+          <TextField label="Vinegar used" hint="1 cup = 237 mL" type="number" step="any" min={0} suffix="mL" error={errors.vinegarMl?.message} {...register('vinegarMl', num)} />
+          <TextField label="Water used" hint="In the brine" type="number" step="any" min={0} suffix="mL" error={errors.waterMl?.message} {...register('waterMl', num)} />
+        </fieldset>
+
+        <fieldset className="grid gap-4 md:grid-cols-3">
+          <legend className="mb-2 font-display text-lg font-bold">Processing</legend>
+          <Select label="Processing method" options={METHOD_OPTIONS} error={errors.method?.message} {...register('method')} />
+          <TextField label="Altitude" hint="Of your kitchen, in feet" type="number" inputMode="numeric" min={0} suffix="ft" error={errors.altitudeFt?.message} {...register('altitudeFt', num)} />
+          <TextField label="Minutes processed" hint="Counted from the return to a full boil" type="number" inputMode="numeric" min={0} suffix="min" error={errors.minutes?.message} {...register('minutes', num)} />
+          <TextField label="Date put up" type="date" error={errors.batchDate?.message} {...register('batchDate')} />
+          <TextField label="Jars sealed" hint="After 12–24 hours" type="number" inputMode="numeric" min={0} error={errors.sealedJars?.message} {...register('sealedJars', num)} />
+          <TextField label="Jars not sealed" type="number" inputMode="numeric" min={0} error={errors.unsealedJars?.message} {...register('unsealedJars', num)} />
+        </fieldset>
+
+        <div className="space-y-1">
+          <label htmlFor="practical-notes" className="block text-sm font-semibold">
+            Notes
+          </label>
+          <textarea
+            id="practical-notes"
+            rows={4}
+            aria-describedby={errors.notes ? 'practical-notes-error' : undefined}
+            className={cn(fieldClasses, 'border-ink-faint/40')}
+            {...register('notes')}
+          />
+          <FieldError id="practical-notes-error" message={errors.notes?.message} />
+        </div>
+
+        <div>
+          <PhotoUploader
+            courseSlug={courseSlug}
+            onChange={(ids) => setValue('photoIds', ids, { shouldValidate: ids.length > 0 })}
+            describedBy={errors.photoIds ? 'practical-photos-error' : undefined}
+            invalid={Boolean(errors.photoIds)}
+          />
+          <FieldError id="practical-photos-error" message={errors.photoIds?.message} />
+        </div>
+
+        <FlagList flags={flags} live title="Automatic checks (as you type)" />
+
+        {serverError ? (
+          <p role="alert" className="rounded-lg border border-beet-500 bg-beet-50 px-4 py-2 text-sm text-beet-700">
+            {serverError}
+          </p>
+        ) : null}
+        <Button type="submit" pending={isSubmitting}>
+          Submit round {round} for review
+        </Button>
+      </form>
+    </Card>
   );
 }

@@ -18,19 +18,6 @@ const EMPTY = (courseSlug: string): CourseRequirements => ({
  * lesson, quiz or exam requirements: only the enrollment and fee checks apply to it.
  */
 export function requirementsForCourse(courseSlug: string): CourseRequirements {
-  // Content changes with a deploy, not between requests; reading and checking every MDX file
-  // for each certificate of a bulk action would cost more than the certificate itself.
-  const cached = cache.get(courseSlug);
-  if (cached && Date.now() - cached.at < CACHE_MS) return cached.requirements;
-  const requirements = readRequirements(courseSlug);
-  cache.set(courseSlug, { at: Date.now(), requirements });
-  return requirements;
-}
-
-const CACHE_MS = 60_000;
-const cache = new Map<string, { at: number; requirements: CourseRequirements }>();
-
-function readRequirements(courseSlug: string): CourseRequirements {
   const course = getCourse(courseSlug);
   const lessons = course ? getLessons(courseSlug) : [];
   return course && lessons.length > 0 ? requirementsFromContent(course, lessons) : EMPTY(courseSlug);

@@ -9,9 +9,18 @@ export type { CourseContent, LessonContent, LessonSource } from './schema';
 /** The content folder of the app (content/ at the project root). */
 export const CONTENT_ROOT = path.join(process.cwd(), 'content');
 
+// In production the content is what was deployed with the build: read and validate it once per
+// process, so a request never walks the folder. Under `next dev` and in tests, read it on every
+// call (the loader still skips files whose mtime and size have not changed), so edits show at once.
+const READ_ONCE = process.env.NODE_ENV === 'production';
+let coursesOnce: readonly CourseContent[] | undefined;
+const lessonsOnce = new Map<string, readonly LessonContent[]>();
+
 /** Every course, flagship first. Throws ContentError (file and field) on a malformed file. */
-export function getCourses(): CourseContent[] {
-  return loadCourses(CONTENT_ROOT);
+export function getCourses(): readonly CourseContent[] {
+  if (!READ_ONCE) return loadCourses(CONTENT_ROOT);
+  coursesOnce ??= loadCourses(CONTENT_ROOT);
+  return coursesOnce;
 }
 
 export function getCourse(slug: string): CourseContent | null {
@@ -19,8 +28,14 @@ export function getCourse(slug: string): CourseContent | null {
 }
 
 /** The lessons of a course in order; an unknown course has none. */
-export function getLessons(courseSlug: string): LessonContent[] {
-  return loadLessons(CONTENT_ROOT, courseSlug);
+export function getLessons(courseSlug: string): readonly LessonContent[] {
+  if (!READ_ONCE) return loadLessons(CONTENT_ROOT, courseSlug);
+  let lessons = lessonsOnce.get(courseSlug);
+  if (!lessons) {
+    lessons = loadLessons(CONTENT_ROOT, courseSlug);
+    lessonsOnce.set(courseSlug, lessons);
+  }
+  return lessons;
 }
 
 export function getLesson(courseSlug: string, lessonSlug: string): LessonContent | null {

@@ -87,17 +87,9 @@ async function courseFor(slug: string, transaction?: Transaction) {
   return course;
 }
 
-// In production the content is fixed at build time: the pass mark is read once per course (the
-// content loader re-reads the folder and re-validates the front matter on every call, for `next dev`).
-const passMarks = new Map<string, number>();
-
 /** The pass mark from the course's front matter (default 80 %). */
 export function passMarkFor(courseSlug: string): number {
-  const known = passMarks.get(courseSlug);
-  if (known !== undefined) return known;
-  const mark = getCourse(courseSlug)?.passMarkPct ?? 80;
-  if (process.env.NODE_ENV === 'production') passMarks.set(courseSlug, mark);
-  return mark;
+  return getCourse(courseSlug)?.passMarkPct ?? 80;
 }
 
 function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: boolean): AttemptView {

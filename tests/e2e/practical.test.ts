@@ -64,6 +64,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     await page.getByRole('button', { name: 'Submit round 1 for review' }).click();
     await page.getByRole('heading', { name: 'Round 1 is at the Tasting table' }).waitFor();
     const sent = page.getByRole('region', { name: 'Flags sent with your submission' });
+    await sent.getByText(/Processed 10 min, shorter than the published 15 min/).waitFor();
     expect(await sent.getByText(/Processed 10 min, shorter than the published 15 min/).count()).toBe(1);
 
     // The page itself now shows the round waiting, with its flag, and no form.

@@ -52,11 +52,12 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
         </p>
       </aside>
       <PracticalStatus courseSlug={slug} latest={latest} />
-      {canSubmit ? (
-        <Card title={latest ? `Submit round ${latest.round + 1}` : 'Submit your batch'}>
-          <PracticalForm courseSlug={slug} round={(latest?.round ?? 0) + 1} />
-        </Card>
-      ) : null}
+      <PracticalForm
+        courseSlug={slug}
+        round={(latest?.round ?? 0) + 1}
+        open={canSubmit}
+        title={latest ? `Submit round ${latest.round + 1}` : 'Submit your batch'}
+      />
       <PracticalHistory rounds={rounds} />
     </div>
   );
