@@ -16,7 +16,8 @@ import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { COMPUTE_FNS } from '../lib/quiz/compute';
 import { drawQuestions, rightAnswer, type Answers } from '../lib/quiz/grading';
 import { parseBankFile, resolveBanks } from '../lib/quiz/resolve';
-import { cpuMsOfTree, startNext, stopAndWait } from './bench-support';
+import { startAppServer } from './app-server';
+import { cpuMsOfTree, stopAndWait } from './bench-support';
 import { ratioFigure, writeBenchResults } from './bench-results';
 
 const root = path.resolve(__dirname, '..');
@@ -158,7 +159,7 @@ async function main() {
   let bare: http.Server | undefined;
   let pool: mariadb.Pool | undefined;
   try {
-    app = startNext(APP_PORT, env, CPU_PROF);
+    app = startAppServer(APP_PORT, env, { cpuProfDir: CPU_PROF });
     await waitForOk(`${base}/api/health`, 60_000);
     const cookie = await sessionCookie(base);
 

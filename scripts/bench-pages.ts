@@ -1,5 +1,5 @@
 // npm run bench:pages — requests per second and p95 latency of a public lesson page and of the
-// Brine bench, served by the app (`next start`) and, as the yardstick, by nginx serving the same
+// Brine bench, served by the app (server.ts, what `npm start` runs) and, as the yardstick, by nginx serving the same
 // HTML saved to files. Also prints the first-load JS of a lesson page against a bare page.
 //
 // With BENCH_TARGET containing `cluster` (the default is `direct,cluster`) it also measures the
@@ -26,6 +26,7 @@ import { waitForOk } from '../lib/migrator';
 import { ratioFigure, writeBenchResults, type BenchFigure } from './bench-results';
 import { cpuMsOfTree } from './bench-support';
 import { freePort } from './cluster/nginx';
+import { startAppServer } from './app-server';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: object) => AutocannonInstance;
@@ -251,7 +252,7 @@ async function main() {
   fs.mkdirSync(path.join(dir, 'www'));
 
   log(`starting the app on ${appUrl}`);
-  const app = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(appPort), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
+  const app = startAppServer(appPort, env);
   children.push(app);
   measured.app = app.pid;
   await waitForOk(appUrl + lessonPath, 60_000);
@@ -325,7 +326,7 @@ async function main() {
     const ratio = appRun.rps / nginxRun.rps;
     log(`${page.name}: app/nginx requests per second = ${ratio.toFixed(2)}× (goal ≥ 0.50×) ${ratio >= 0.5 ? 'met' : 'NOT met'}`);
     const anchor = { name: 'nginx serving the same HTML from a file', value: nginxRun.rps };
-    figures.push({ ...ratioFigure(`${page.path}: the app alone (next start), req/s`, appRun.rps, 'req/s', anchor, 0.5) });
+    figures.push({ ...ratioFigure(`${page.path}: the app alone (server.ts), req/s`, appRun.rps, 'req/s', anchor, 0.5) });
     const cpuRatio = nginxRun.nginxCpuMs / appRun.appCpuMs;
     // nginx's share of one core during its run: far below 1, the load generator (autocannon, one
     // JavaScript thread on the same machine) set the pace, and the req/s ratio says little.

@@ -20,7 +20,8 @@ import sharp from 'sharp';
 import { createSequelize } from '../lib/db';
 import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { MAX_PHOTO_BYTES, processPhoto } from '../lib/practicals/images';
-import { cpuMsOfTree, startNext, stopAndWait } from './bench-support';
+import { startAppServer } from './app-server';
+import { cpuMsOfTree, stopAndWait } from './bench-support';
 import { writeBenchResults } from './bench-results';
 
 // autocannon ships no type declarations; only the parts used here are typed.
@@ -97,7 +98,7 @@ async function signIn(base: string, email: string, password: string): Promise<st
 }
 
 function serverPeakRssMb(pid: number): number {
-  // The HTTP server is a child of `next start`; take the largest peak among the process and its children.
+  // The HTTP server is a child of the server process (or its workers); take the largest peak among the process and its children.
   const pids = [pid, ...run('bash', ['-c', `pgrep -P ${pid} || true`]).split('\n').filter(Boolean).map(Number)];
   let peak = 0;
   for (const p of pids) {
@@ -208,7 +209,7 @@ async function main() {
   }
   const photosRoot = path.join(root, '.data', 'photos');
   const before = new Set(fs.existsSync(photosRoot) ? (fs.readdirSync(photosRoot, { recursive: true }) as string[]) : []);
-  let app: ChildProcess | undefined = startNext(port, env, cpuProf);
+  let app: ChildProcess | undefined = startAppServer(port, env, { cpuProfDir: cpuProf });
   try {
     await waitForOk(`${base}/api/health`, 60_000);
 

@@ -6,7 +6,7 @@ import os from 'node:os';
 import path from 'node:path';
 
 export type BenchFigure = {
-  /** What was measured, e.g. "public lesson, app (next start)". */
+  /** What was measured, e.g. "public lesson, app (server.ts)". */
   name: string;
   value: number;
   /** req/s, ms, s, MB, … */

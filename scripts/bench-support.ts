@@ -1,19 +1,7 @@
-// Shared by the benchmarks that run the production server: starting it (optionally under
-// `node --cpu-prof`), stopping it so that a profile gets written, and the CPU time it used.
-import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
+// Shared by the benchmarks that run the production server (started with scripts/app-server.ts):
+// stopping it so that a CPU profile gets written, and the CPU time it used.
+import { execFileSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import path from 'node:path';
-
-const root = path.resolve(__dirname, '..');
-
-/** `next start` on 127.0.0.1:port; with cpuProfDir, under `node --cpu-prof` (node refuses that flag in NODE_OPTIONS). */
-export function startNext(port: number, env: NodeJS.ProcessEnv, cpuProfDir?: string): ChildProcess {
-  const args = ['start', '-p', String(port), '-H', '127.0.0.1'];
-  const stdio: ['ignore', 'ignore', 'inherit'] = ['ignore', 'ignore', 'inherit'];
-  if (!cpuProfDir) return spawn(path.join(root, 'node_modules/.bin/next'), args, { cwd: root, env, stdio });
-  fs.mkdirSync(cpuProfDir, { recursive: true });
-  return spawn(process.execPath, ['--cpu-prof', `--cpu-prof-dir=${cpuProfDir}`, path.join(root, 'node_modules/next/dist/bin/next'), ...args], { cwd: root, env, stdio });
-}
 
 /** Stops the server and waits (at most 15 s) for it to exit, so that a CPU profile is written. */
 export async function stopAndWait(app: ChildProcess): Promise<void> {

@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # npm run demo:cluster: the demo on TWO app servers behind nginx, sharing MariaDB and an
 # S3-compatible photo store (the local fake in fakes/s3). MariaDB, migrations, demo data, one
-# production build, the fakes, the worker, `next start` on two loopback ports, nginx on :3000.
+# production build, the fakes, the worker, the production server (server.ts) on two loopback ports, nginx on :3000.
 set -euo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 cd "$ROOT"
@@ -58,9 +58,9 @@ wait_for "http://127.0.0.1:$FAKE_S3_PORT/_fake/health" 30
 "$ROOT/node_modules/.bin/tsx" scripts/cluster/copy-photos-to-s3.ts
 "$ROOT/node_modules/.bin/tsx" --conditions=react-server scripts/worker.ts &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/next" start -p "$APP_PORT_A" -H 127.0.0.1 &
+"$ROOT/node_modules/.bin/tsx" server.ts --port "$APP_PORT_A" --hostname 127.0.0.1 &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/next" start -p "$APP_PORT_B" -H 127.0.0.1 &
+"$ROOT/node_modules/.bin/tsx" server.ts --port "$APP_PORT_B" --hostname 127.0.0.1 &
 PIDS+=($!)
 "$NGINX" -c "$NGINX_CONF" -p "$CLUSTER_DIR" &
 PIDS+=($!)

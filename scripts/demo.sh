@@ -25,6 +25,6 @@ trap 'exit 130' INT TERM
 PIDS+=($!)
 "$ROOT/node_modules/.bin/tsx" --conditions=react-server scripts/worker.ts &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/next" start -p "$PORT" &
+"$ROOT/node_modules/.bin/tsx" server.ts --port "$PORT" &
 PIDS+=($!)
 wait "${PIDS[2]}"

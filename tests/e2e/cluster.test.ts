@@ -13,8 +13,9 @@ import { createSequelize } from '../../lib/db';
 import { waitForOk } from '../../lib/migrator';
 import { ensureNginx, freePort, writeNginxConfig } from '../../scripts/cluster/nginx';
 import { openBrowser, seriousViolations, signIn } from './support/browser';
+import { startAppServer } from '../../scripts/app-server';
 
-// Two `next start` app servers (the e2e build) behind nginx, sharing the e2e database and an
+// Two app servers (server.ts) (the e2e build) behind nginx, sharing the e2e database and an
 // S3-compatible bucket (fakes/s3). A learner signs in and uploads a practical photo through nginx;
 // each app server, asked on its own port, serves the same bytes, so whichever did not take the
 // upload serves the other's photo. Then what must not live in one process: sessions (JWTs),
@@ -150,7 +151,7 @@ beforeAll(async () => {
     AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
   };
   for (const [name, port] of [['A', portA], ['B', portB]] as const) {
-    const child = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] });
+    const child = startAppServer(port, env);
     apps.push({ name, url: `http://127.0.0.1:${port}`, child });
   }
   const bin = ensureNginx();

@@ -2,7 +2,7 @@
 //
 // This test starts everything it needs beside the browser tests' own server: a MariaDB of its own
 // (scripts/db.sh with its own port and data folder under .data/, never the shared server), the demo
-// seed, and a `next start` of the browser tests' production build (E2E_DIST_DIR) on a free port.
+// seed, and the production server (server.ts) of the browser tests' production build (E2E_DIST_DIR) on a free port.
 // Learners start and submit quiz attempts for 60 s at bounded concurrency; 20 s in, MariaDB is
 // killed (SIGKILL, the harshest stop: no chance to finish anything), kept down for 10 s and started
 // again. Then it checks:
@@ -10,7 +10,7 @@
 // - while the database was down every answer was a 503 with a clear JSON message, and fast;
 // - the app answered 2xx again within 5 s of the database answering, without being restarted.
 // Expected run time: about 100 s (plus the shared build of the browser tests).
-import { execFile, spawn, type ChildProcess } from 'node:child_process';
+import { execFile, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
@@ -20,6 +20,7 @@ import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createSequelize } from '../../lib/db';
 import { rebuildDatabase, waitForOk } from '../../lib/migrator';
+import { startAppServer } from '../../scripts/app-server';
 
 const root = path.resolve(__dirname, '../..');
 const run = promisify(execFile);
@@ -175,9 +176,9 @@ beforeAll(async () => {
   appUrl = `http://127.0.0.1:${port}`;
   const distDir = process.env.E2E_DIST_DIR ?? '.next-e2e';
   if (!fs.existsSync(path.join(root, distDir, 'BUILD_ID'))) throw new Error(`no production build in ${distDir}: the e2e global setup makes it`);
-  app = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], {
-    cwd: root,
-    env: {
+  app = startAppServer(
+    port,
+    {
       ...process.env,
       NODE_ENV: 'production',
       NEXT_TELEMETRY_DISABLED: '1',
@@ -187,8 +188,8 @@ beforeAll(async () => {
       APP_URL: appUrl,
       NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? 'e2e-secret-0123456789abcdef',
     },
-    stdio: ['ignore', 'ignore', 'pipe'],
-  });
+    { stdio: ['ignore', 'ignore', 'pipe'] },
+  );
   app.stderr!.on('data', (c) => process.stderr.write(`[db-restart app] ${c}`));
   await waitForOk(`${appUrl}/api/health`, 60_000);
 }, 240_000);

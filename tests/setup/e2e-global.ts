@@ -3,6 +3,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { rebuildDatabase, waitForOk } from '../../lib/migrator';
+import { startAppServer } from '../../scripts/app-server';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 let server: ChildProcess | undefined;
@@ -55,7 +56,7 @@ export default async function setup() {
     const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });
     if (build.status !== 0) throw new Error('next build failed for the browser tests');
   }
-  server = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-p', String(port), '-H', '127.0.0.1'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] });
+  server = startAppServer(port, env, { stdio: ['ignore', 'inherit', 'inherit'] });
   await waitForOk(`${baseUrl}/api/health`, 60_000);
   process.env.E2E_BASE_URL = baseUrl;
 
