@@ -64,27 +64,36 @@ export async function fetchTastingTable(query: TastingTableQuery, now = new Date
     replacements.before = new Date(now.getTime() - query.olderThanDays * 86_400_000);
   }
   // The workshop filter is the only one that needs the enrollment; leave the join out otherwise.
-  const join = query.workshop ? 'JOIN enrollments e ON e.id = p.enrollmentId' : '';
-  const countsSql = `SELECT p.status, COUNT(*) AS n FROM practicals p ${join} ${where.length ? `WHERE ${where.join(' AND ')}` : ''} GROUP BY p.status`;
+  // With it, the walk starts at that workshop's enrollments (their workshop index) and goes on to
+  // their practicals: STRAIGHT_JOIN keeps that order. On fresh statistics (right after a bulk load)
+  // MariaDB 10.11 was seen choosing the other order, reading the workshop's enrollments again for
+  // every practical: 626 ms instead of 2 ms for one page.
+  const from = query.workshop ? 'enrollments e STRAIGHT_JOIN practicals p ON p.enrollmentId = e.id' : 'practicals p';
+  const countsSql = `SELECT p.status, COUNT(*) AS n FROM ${from} ${where.length ? `WHERE ${where.join(' AND ')}` : ''} GROUP BY p.status`;
   const statusWhere = query.status === 'all' ? where : [...where, 'p.status = :status'];
   if (query.status !== 'all') replacements.status = query.status;
   const whereSql = statusWhere.length ? `WHERE ${statusWhere.join(' AND ')}` : '';
   const offset = (query.page - 1) * TASTING_PAGE_SIZE;
 
+  // The page is found first by id alone (a "deferred join"): that walk reads only the index of the
+  // sort and the tables a filter or the sort needs, so a far page (OFFSET in the thousands) or the
+  // learner sort does not join and read every row it skips; the rest is joined for the page's rows.
+  const pageJoin = query.sort === 'learner' ? 'JOIN users u ON u.id = p.userId' : '';
   const [rows, countRows] = await Promise.all([
     sequelize.query<TastingRow>(
       `SELECT p.id, p.round, p.status, p.flagCount, p.submittedAt,
               JSON_UNQUOTE(JSON_EXTRACT(p.details, '$.product')) AS product,
               u.name AS learnerName, c.slug AS courseSlug,
               w.id AS workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace
-         FROM practicals p
+         FROM (SELECT p.id FROM ${from} ${pageJoin} ${whereSql}
+                ORDER BY ${ORDER[query.sort]}
+                LIMIT ${TASTING_PAGE_SIZE} OFFSET ${offset}) page
+         JOIN practicals p ON p.id = page.id
          JOIN users u ON u.id = p.userId
          JOIN enrollments e ON e.id = p.enrollmentId
          JOIN courses c ON c.id = e.courseId
          LEFT JOIN workshops w ON w.id = e.workshopId
-         ${whereSql}
-        ORDER BY ${ORDER[query.sort]}
-        LIMIT ${TASTING_PAGE_SIZE} OFFSET ${offset}`,
+        ORDER BY ${ORDER[query.sort]}`,
       { replacements, type: QueryTypes.SELECT },
     ),
     sequelize.query<{ status: PracticalStatus; n: number | string }>(countsSql, { replacements, type: QueryTypes.SELECT }),
