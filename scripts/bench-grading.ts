@@ -2,6 +2,9 @@
 // app (production build on a loopback port, its own database), then the same load against a bare
 // node:http handler doing the app's one INSERT (the quiz_answers rows) through a mariadb pool of
 // the same size. Prints requests/s, p95 and the ratio. Goals: >= 0.5x the bare handler, p95 < 100 ms.
+// Two floors under the same load, for reading the ratio: the app's health route (one SELECT 1, no
+// session) and a calculator route (no session, no database), which is what Next itself costs.
+// WEB_CONCURRENCY=<n> runs the app as n processes (server.ts); the bare handler stays one process.
 // BENCH_CPU_PROF=<folder>: run the app under `node --cpu-prof` and write its profile there
 // (summarise with `tsx scripts/cpu-profile-summary.ts <folder>`).
 import { spawnSync, type ChildProcess } from 'node:child_process';
@@ -33,6 +36,8 @@ const POOL_MAX = Number(process.env.DB_POOL_MAX ?? 10);
 const ATTEMPTS = Number(process.env.BENCH_ATTEMPTS ?? 40_000);
 const CPU_PROF = process.env.BENCH_CPU_PROF ? path.resolve(process.env.BENCH_CPU_PROF) : undefined;
 const QUIZ = 'pickling-and-canning--acidity';
+const TOOL_PATH = '/api/tools/convert?value=1&from=cup&to=mL';
+const WORKERS = Number(process.env.WEB_CONCURRENCY ?? 1);
 const LEARNER = { email: 'learner@cedarhollow.example', password: 'demo-learner-pass' };
 
 const dbUrl = process.env.BENCH_DATABASE_URL;
@@ -190,11 +195,18 @@ async function main() {
     // The framework's floor, for the reading of the ratio: the app's health route, which does one
     // `SELECT 1` through the same pool and nothing else (no session, no body), under the same load.
     let floorRun: Run | undefined;
+    let toolRun: Run | undefined;
     if (!CPU_PROF && process.env.BENCH_FLOOR !== '0') {
       console.log(`[bench] floor: GET /api/health through the app (one SELECT 1), same load`);
       const floorCpu = cpuMsOfTree(app.pid!);
       floorRun = await load(base, () => ({ path: '/api/health' }), {}, 'GET');
       floorRun.cpuMsPerRequest = (cpuMsOfTree(app.pid!) - floorCpu) / floorRun.requests;
+      // And Next's own floor: a route handler that reads no session and no database (a calculator
+      // route: parse the query with zod, one multiplication, a small JSON answer).
+      console.log(`[bench] framework floor: GET ${TOOL_PATH} (no session, no database), same load`);
+      const toolCpu = cpuMsOfTree(app.pid!);
+      toolRun = await load(base, () => ({ path: TOOL_PATH }), {}, 'GET');
+      toolRun.cpuMsPerRequest = (cpuMsOfTree(app.pid!) - toolCpu) / toolRun.requests;
     }
 
     // Check: every measured submission was a real grading (one stored result per attempt).
@@ -237,6 +249,8 @@ async function main() {
     console.log(`app  (graded submissions): ${fmt(appRun)}; ${graded} attempts handed out, ${Number(n)} attempts graded and passed in the database`);
     console.log(`bare (one INSERT)        : ${fmt(bareRun)}`);
     if (floorRun) console.log(`floor (app, GET /api/health, one SELECT 1): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
+    if (toolRun) console.log(`framework floor (app, GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
+    console.log(`app processes: ${WORKERS} (WEB_CONCURRENCY)`);
     const la = (l: number[]) => l.map((x) => x.toFixed(2)).join(' ');
     console.log(`load average (1, 5, 15 min): ${la(loadBefore)} before, ${la(os.loadavg())} after (2-core machine: above 2 the figures are noisy)`);
     console.log(`ratio app/bare           : ${ratio.toFixed(2)}x  (goal >= 0.5x: ${ratio >= 0.5 ? 'met' : 'not met'}); app p95 ${appRun.p95.toFixed(1)} ms (goal < 100 ms: ${appRun.p95 < 100 ? 'met' : 'not met'})`);
@@ -249,7 +263,12 @@ async function main() {
         { name: 'graded quiz submissions, app, p95', value: appRun.p95, unit: 'ms', anchor: { name: 'bare handler, p95', value: bareRun.p95, unit: 'ms' }, goal: '< 100 ms', met: appRun.p95 < 100 },
         ...(appRun.cpuMsPerRequest === undefined ? [] : [{ name: 'graded quiz submission, server CPU per request', value: appRun.cpuMsPerRequest, unit: 'ms', ...(bareRun.cpuMsPerRequest === undefined ? {} : { anchor: { name: 'bare handler', value: bareRun.cpuMsPerRequest, unit: 'ms' } }) }]),
       ],
-      notes: [`app: ${fmt(appRun)}`, `bare: ${fmt(bareRun)}`, ...(floorRun ? [`floor (GET /api/health): ${fmt(floorRun)}`] : [])],
+      notes: [
+        `app (${WORKERS} process${WORKERS === 1 ? '' : 'es'}, WEB_CONCURRENCY): ${fmt(appRun)}`,
+        `bare: ${fmt(bareRun)}`,
+        ...(floorRun ? [`floor (GET /api/health): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`] : []),
+        ...(toolRun ? [`framework floor (GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`] : []),
+      ],
     });
   } finally {
     app?.kill('SIGTERM');
