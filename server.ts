@@ -1,9 +1,12 @@
-// The production server (`npm start`): Next's request handler behind node:http, with two things
+// The production server (`npm start`): Next's request handler behind node:http, with three things
 // `next start` does not do.
 //
 // - Static pages from memory (lib/server/static-pages.ts): the pages `next build` prerendered once
 //   are answered with the status, headers and bytes Next gave for the same kind of request,
 //   recorded from Next on the first such request. Everything else goes to Next unchanged.
+// - The client's address: unless TRUST_PROXY=true, X-Forwarded-For becomes the connection's own
+//   address before Next reads it (lib/server/client-address.ts), so a client reaching the server
+//   directly cannot pick its address for the per-address throttles.
 // - Several processes: WEB_CONCURRENCY workers (node:cluster, default 1) share the port. Nothing
 //   the app keeps in a process may be needed by another: sessions are tokens, throttles and jobs
 //   live in MariaDB, photos in the storage driver (the same rule as two servers behind nginx).
@@ -16,6 +19,8 @@ import fs from 'node:fs';
 import http from 'node:http';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
+import { getEnv } from './lib/env';
+import { applyClientAddress } from './lib/server/client-address';
 import { RECORD_HEADER, StaticPageCache, recordable, recordingHeaders, sendRecorded, staticPagePaths, variantFor } from './lib/server/static-pages';
 
 Object.assign(process.env, { NODE_ENV: process.env.NODE_ENV ?? 'production' });
@@ -27,9 +32,9 @@ if (process.env.NODE_ENV !== 'production') {
 const { values } = parseArgs({ options: { port: { type: 'string', short: 'p' }, hostname: { type: 'string', short: 'H' } } });
 const port = Number(values.port ?? process.env.PORT ?? 3000);
 const hostname = values.hostname ?? process.env.HOSTNAME ?? undefined;
-const workers = Number(process.env.WEB_CONCURRENCY ?? 1);
 if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`server.ts: the port must be a number from 0 to 65535 (got ${values.port ?? process.env.PORT})`);
-if (!Number.isInteger(workers) || workers < 1 || workers > 64) throw new Error(`server.ts: WEB_CONCURRENCY must be a whole number from 1 to 64 (got ${process.env.WEB_CONCURRENCY})`);
+// The whole configuration is checked here, before any worker starts (lib/env.ts names what is wrong).
+const { WEB_CONCURRENCY: workers, TRUST_PROXY: trustProxy } = getEnv();
 
 const root = __dirname;
 const log = (message: string) => process.stdout.write(`[server${cluster.isWorker ? ` ${cluster.worker?.id}` : ''}] ${message}\n`);
@@ -83,6 +88,7 @@ async function serve() {
   };
 
   const server = http.createServer((req, res) => {
+    applyClientAddress(req.headers, req.socket.remoteAddress, trustProxy);
     const hit = variantFor(req.method, req.url, req.headers, cache.pages);
     if (hit) {
       const page = cache.get(hit.path, hit.variant);

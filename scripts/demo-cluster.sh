@@ -22,6 +22,8 @@ if [ ! -s "$ROOT/.data/fake-s3-secret" ]; then
   node -e "process.stdout.write(require('crypto').randomBytes(24).toString('hex'))" >"$ROOT/.data/fake-s3-secret"
 fi
 export STORAGE_DRIVER=s3
+# The app servers sit behind nginx, which overwrites X-Forwarded-For with the client's address.
+export TRUST_PROXY=true
 export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$FAKE_S3_PORT}" S3_REGION="${S3_REGION:-us-east-1}" S3_BUCKET="${S3_BUCKET:-brinewright-photos}"
 export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-BRINEWRIGHTDEMOKEY01}" S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-$(cat "$ROOT/.data/fake-s3-secret")}"
 export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"

@@ -133,6 +133,8 @@ beforeAll(async () => {
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? 'e2e-secret-0123456789abcdef',
     NEXTAUTH_URL: nginxUrl,
     APP_URL: nginxUrl,
+    // Behind nginx, which overwrites X-Forwarded-For with the address it saw.
+    TRUST_PROXY: 'true',
     // The fakes the e2e global setup started.
     STRIPE_API_HOST: '127.0.0.1',
     STRIPE_API_PORT: String(e2ePort + 1),
