@@ -1,5 +1,5 @@
-// Starts the production server (server.ts, what `npm start` runs) as a child process: the one way
-// the demo's helpers, the benchmarks and the browser tests run the app.
+// Starts and stops the production server (server.ts, what `npm start` runs) as a child process:
+// the one way the benchmarks and the browser tests run the app.
 import { spawn, type ChildProcess, type StdioOptions } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -22,4 +22,12 @@ export function startAppServer(port: number, env: NodeJS.ProcessEnv, options: Ap
   fs.mkdirSync(options.cpuProfDir, { recursive: true });
   // node refuses --cpu-prof in NODE_OPTIONS; with several workers each writes its own profile.
   return spawn(process.execPath, ['--cpu-prof', `--cpu-prof-dir=${options.cpuProfDir}`, '--import', 'tsx', ...serverArgs], { cwd: root, env, stdio });
+}
+
+/** Stops the server and waits for it to exit (at most 15 s), so that a CPU profile gets written. */
+export async function stopAppServer(app: ChildProcess | undefined): Promise<void> {
+  if (!app || app.exitCode !== null || app.signalCode !== null) return;
+  const exited = new Promise<void>((r) => app.once('exit', () => r()));
+  app.kill('SIGTERM');
+  await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
 }

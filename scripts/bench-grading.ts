@@ -19,8 +19,8 @@ import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { COMPUTE_FNS } from '../lib/quiz/compute';
 import { drawQuestions, rightAnswer, type Answers } from '../lib/quiz/grading';
 import { parseBankFile, resolveBanks } from '../lib/quiz/resolve';
-import { startAppServer } from './app-server';
-import { cpuMsOfTree, stopAndWait } from './bench-support';
+import { startAppServer, stopAppServer } from './app-server';
+import { cpuMsOfTree } from './bench-support';
 import { ratioFigure, writeBenchResults } from './bench-results';
 
 const root = path.resolve(__dirname, '..');
@@ -188,7 +188,7 @@ async function main() {
     const graded = cursor - firstMeasured;
     appRun.cpuMsPerRequest = (cpuMsOfTree(app.pid!) - cpuBefore) / appRun.requests;
     if (CPU_PROF) {
-      await stopAndWait(app);
+      await stopAppServer(app);
       console.log(`[bench] CPU profile written to ${CPU_PROF}`);
     }
 

@@ -20,8 +20,8 @@ import sharp from 'sharp';
 import { createSequelize } from '../lib/db';
 import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { MAX_PHOTO_BYTES, processPhoto } from '../lib/practicals/images';
-import { startAppServer } from './app-server';
-import { cpuMsOfTree, stopAndWait } from './bench-support';
+import { startAppServer, stopAppServer } from './app-server';
+import { cpuMsOfTree } from './bench-support';
 import { writeBenchResults } from './bench-results';
 
 // autocannon ships no type declarations; only the parts used here are typed.
@@ -288,7 +288,7 @@ async function main() {
     );
   } finally {
     if (app && cpuProf) {
-      await stopAndWait(app);
+      await stopAppServer(app);
       console.log(`[bench] CPU profile written to ${cpuProf}`);
     }
     app?.kill('SIGTERM');

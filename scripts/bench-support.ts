@@ -1,15 +1,7 @@
-// Shared by the benchmarks that run the production server (started with scripts/app-server.ts):
-// stopping it so that a CPU profile gets written, and the CPU time it used.
-import { execFileSync, type ChildProcess } from 'node:child_process';
+// Shared by the benchmarks that run the production server (started and stopped with
+// scripts/app-server.ts): the CPU time it used.
+import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
-
-/** Stops the server and waits (at most 15 s) for it to exit, so that a CPU profile is written. */
-export async function stopAndWait(app: ChildProcess): Promise<void> {
-  if (app.exitCode !== null || app.signalCode !== null) return;
-  const exited = new Promise<void>((r) => app.once('exit', () => r()));
-  app.kill('SIGTERM');
-  await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
-}
 
 /**
  * CPU time (user + system, ms) used so far by a process and its descendants, from /proc. Divided

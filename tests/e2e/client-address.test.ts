@@ -11,7 +11,7 @@ import type { Sequelize } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createSequelize } from '../../lib/db';
 import { waitForOk } from '../../lib/migrator';
-import { startAppServer } from '../../scripts/app-server';
+import { startAppServer, stopAppServer } from '../../scripts/app-server';
 import { freePort } from '../../scripts/cluster/nginx';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -50,11 +50,7 @@ beforeAll(async () => {
 }, 120_000);
 
 afterAll(async () => {
-  if (app && app.exitCode === null) {
-    const exited = new Promise((r) => app!.once('exit', r));
-    app.kill('SIGTERM');
-    await exited;
-  }
+  await stopAppServer(app);
   if (sequelize) {
     await clearBuckets();
     await sequelize.close();

@@ -20,7 +20,7 @@ import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createSequelize } from '../../lib/db';
 import { rebuildDatabase, waitForOk } from '../../lib/migrator';
-import { startAppServer } from '../../scripts/app-server';
+import { startAppServer, stopAppServer } from '../../scripts/app-server';
 
 const root = path.resolve(__dirname, '../..');
 const run = promisify(execFile);
@@ -195,11 +195,7 @@ beforeAll(async () => {
 }, 240_000);
 
 afterAll(async () => {
-  if (app && app.exitCode === null) {
-    const exited = new Promise((r) => app!.once('exit', r));
-    app.kill('SIGTERM');
-    await exited;
-  }
+  await stopAppServer(app);
   if (dataDir && fs.existsSync(pidFile())) {
     try {
       await killDb('SIGTERM');
