@@ -1,16 +1,19 @@
 // npm run worker: the background jobs the app needs beside the app server (server.ts):
 // - the outbox sender (claims due e-mail rows, sends them over SMTP, retries with backoff),
 // - the day-before workshop reminders,
-// - releasing seats of checkouts that expired while their webhook never arrived.
+// - releasing seats of checkouts that expired while their webhook never arrived,
+// - removing uploaded photos that never became part of a submission (after a week).
 // Run with the react-server condition so the app's server-only modules load outside Next.
 import { queueWorkshopReminders } from '../lib/email/reminders';
 import { outboxBacklog, sendDueEmails } from '../lib/email/sender';
 import { releaseStaleCheckouts } from '../lib/payments/reconcile';
+import { LOOSE_PHOTO_DAYS, pruneLoosePhotos } from '../lib/practicals/service';
 import { watchParent } from './watch-parent';
 
 const POLL_MS = Number(process.env.WORKER_POLL_MS ?? 1000);
 const REMINDER_EVERY_MS = Number(process.env.WORKER_REMINDER_MS ?? 5 * 60_000);
 const RECONCILE_EVERY_MS = Number(process.env.WORKER_RECONCILE_MS ?? 60_000);
+const PRUNE_EVERY_MS = Number(process.env.WORKER_PRUNE_MS ?? 60 * 60_000);
 
 let stopping = false;
 // Sleeps end early when the worker is asked to stop, so it never lingers for a long interval.
@@ -54,6 +57,10 @@ async function main() {
     every(RECONCILE_EVERY_MS, 'checkouts', async () => {
       const n = await releaseStaleCheckouts();
       return n ? `checkouts: released ${n} seat(s) of expired checkouts` : null;
+    }),
+    every(PRUNE_EVERY_MS, 'photos', async () => {
+      const n = await pruneLoosePhotos();
+      return n ? `photos: removed ${n} uploaded more than ${LOOSE_PHOTO_DAYS} days ago and never submitted` : null;
     }),
   ]);
   const g = globalThis as { __brinewrightSequelize?: { close: () => Promise<void> } };

@@ -17,6 +17,8 @@ import { PhotoRejected, processPhoto } from './images';
 
 // A learner may keep only so many uploaded photos that are not yet part of a submission.
 const MAX_LOOSE_PHOTOS = 30;
+// How long an uploaded photo may wait to become part of a submission before the worker removes it.
+export const LOOSE_PHOTO_DAYS = 7;
 
 async function requireEnrollment(user: SessionUser, courseSlug: string) {
   const enrollment = await findActiveEnrollment(user.id, courseSlug);
@@ -64,6 +66,32 @@ export async function acceptPhoto(user: SessionUser, courseSlug: string, input: 
     await Promise.allSettled([storage.delete(storageKey), storage.delete(thumbnailKey)]);
     throw error;
   }
+}
+
+/**
+ * Removes photos that were uploaded but never became part of a submission within LOOSE_PHOTO_DAYS
+ * (a form left half done): at most `limit` a run, oldest first. The row goes first, and only while
+ * it is still loose (a submission taking the photo at that moment locks the row and keeps it; a
+ * learner who submits a removed photo is asked to upload it again), then its two objects. A crash
+ * between the two leaves objects without a row (space, never a broken photo). Returns how many went.
+ */
+export async function pruneLoosePhotos(options: { now?: Date; limit?: number } = {}): Promise<number> {
+  const { PracticalPhoto } = db();
+  const before = new Date((options.now ?? new Date()).getTime() - LOOSE_PHOTO_DAYS * 86_400_000);
+  const loose = await PracticalPhoto.findAll({
+    where: { practicalId: null, createdAt: { [Op.lt]: before } },
+    attributes: ['id', 'storageKey', 'thumbnailKey'],
+    order: [['id', 'ASC']],
+    limit: options.limit ?? 200,
+  });
+  const storage = getStorage();
+  let pruned = 0;
+  for (const photo of loose) {
+    if (!(await PracticalPhoto.destroy({ where: { id: photo.id, practicalId: null } }))) continue;
+    await Promise.all([storage.delete(photo.storageKey), storage.delete(photo.thumbnailKey)]);
+    pruned += 1;
+  }
+  return pruned;
 }
 
 /** The stored bytes of a photo for a viewer allowed to see it: its owner, instructors and coordinators. */

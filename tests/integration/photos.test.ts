@@ -8,7 +8,8 @@ import { db } from '@/models';
 import { createUser, resetDatabase } from '../helpers/db';
 import { params } from '../helpers/request';
 import { actAs } from '../helpers/session';
-import { catalog, enrolledLearner, makeJpeg, photoRequest, useTemporaryStorage } from './practical-fixtures';
+import { LOOSE_PHOTO_DAYS, pruneLoosePhotos, submitPractical } from '@/lib/practicals/service';
+import { catalog, enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, useTemporaryStorage } from './practical-fixtures';
 
 const GPS_IFD_TAG = 0x8825; // TIFF/EXIF 2.3: the pointer to the GPS sub-IFD, written in IFD0
 
@@ -218,5 +219,43 @@ describe('GET /api/photos/[id]', () => {
     const missing = String(uploaded.photo.id + 1000);
     expect((await getPhoto(new Request(`http://localhost:3000/api/photos/${missing}`), params({ id: missing }))).status).toBe(404);
     expect((await getPhoto(new Request('http://localhost:3000/api/photos/../x'), params({ id: '../x' }))).status).toBe(404);
+  });
+});
+
+describe('photos never submitted (the worker’s pruneLoosePhotos)', () => {
+  it('removes rows and objects of photos loose for more than LOOSE_PHOTO_DAYS; submitted and recent ones stay', async () => {
+    const { learner } = await enrolledLearner(setting.flagship.id);
+    actAs(learner);
+    const ids: number[] = [];
+    for (let i = 0; i < 5; i++) {
+      const uploaded = await (await uploadPhoto(photoRequest(await makeJpeg(320, 240), `jar-${i}.jpg`, 'image/jpeg'), {})).json();
+      ids.push(uploaded.photo.id);
+    }
+    const [oldA, oldB, submittedA, submittedB, recent] = ids;
+    await submitPractical(learner, 'pickling-and-canning', GOOD_BATCH([submittedA, submittedB]));
+    const now = new Date();
+    const daysAgo = (d: number) => new Date(now.getTime() - d * 86_400_000);
+    const { PracticalPhoto } = db();
+    await PracticalPhoto.update({ createdAt: daysAgo(LOOSE_PHOTO_DAYS + 1) }, { where: { id: [oldA, oldB, submittedA, submittedB] }, silent: true });
+    await PracticalPhoto.update({ createdAt: daysAgo(LOOSE_PHOTO_DAYS - 1) }, { where: { id: recent }, silent: true });
+    const keysOf = async (id: number) => {
+      const row = await PracticalPhoto.findByPk(id);
+      return [row!.storageKey, row!.thumbnailKey];
+    };
+    const goneKeys = [...(await keysOf(oldA)), ...(await keysOf(oldB))];
+    const keptKeys = [...(await keysOf(submittedA)), ...(await keysOf(submittedB)), ...(await keysOf(recent))];
+    // The folder is shared with the other tests of this file: count what this one changes.
+    const filesBefore = storage.files().length;
+
+    expect(await pruneLoosePhotos({ now })).toBe(2);
+    const left = (await PracticalPhoto.findAll({ where: { id: ids } })).map((p) => p.id).sort((a, b) => a - b);
+    expect(left).toEqual([submittedA, submittedB, recent].sort((a, b) => a - b));
+    for (const key of goneKeys) expect(await getStorage().get(key), key).toBeNull();
+    for (const key of keptKeys) expect(await getStorage().get(key), key).not.toBeNull();
+    expect(storage.files()).toHaveLength(filesBefore - 4);
+    // Nothing is left to remove; a day later the recent one is still inside its week.
+    expect(await pruneLoosePhotos({ now })).toBe(0);
+    expect(await pruneLoosePhotos({ now: new Date(now.getTime() + 0.5 * 86_400_000) })).toBe(0);
+    expect(await pruneLoosePhotos({ now: new Date(now.getTime() + 1.5 * 86_400_000) })).toBe(1);
   });
 });
