@@ -1,7 +1,7 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { HIT_HEADER, RECORD_HEADER, StaticPageCache, notModified, recordable, recordingHeaders, sendRecorded, staticPagePaths, variantFor, type RecordedPage } from './static-pages';
+import { HIT_HEADER, RECORD_HEADER, StaticPageCache, acceptedEncoding, notModified, recordable, recordingHeaders, sendRecorded, staticPagePaths, variantFor, type RecordedPage } from './static-pages';
 
 // The shape of `next build`'s prerender-manifest.json entries (as written by Next 16.4 here).
 const bypass = [{ type: 'header', key: 'next-action' }];
@@ -25,10 +25,14 @@ describe('which pages and which requests', () => {
     expect(staticPagePaths({})).toEqual([]);
   });
 
-  it('a plain page load of a static page has a variant per encoding and per https', () => {
+  it('a plain page load of a static page has a variant per encoding (gzip or none) and per https', () => {
     expect(variantFor('GET', '/bench', {}, pages)).toEqual({ path: '/bench', variant: 'http ' });
-    expect(variantFor('HEAD', '/bench', { 'accept-encoding': 'gzip, deflate, br' }, pages)).toEqual({ path: '/bench', variant: 'http gzip, deflate, br' });
+    expect(variantFor('HEAD', '/bench', { 'accept-encoding': 'gzip, deflate, br' }, pages)).toEqual({ path: '/bench', variant: 'http gzip' });
     expect(variantFor('GET', '/bench', { 'accept-encoding': ' GZIP ', 'x-forwarded-proto': 'https' }, pages)?.variant).toBe('https gzip');
+    // Whatever a client writes, a page has at most these four variants.
+    expect(variantFor('GET', '/bench', { 'accept-encoding': 'br;q=1, zstd, foo, gzip;q=0.2' }, pages)?.variant).toBe('http gzip');
+    expect(variantFor('GET', '/bench', { 'accept-encoding': 'br' }, pages)?.variant).toBe('http ');
+    expect(variantFor('GET', '/bench', { 'accept-encoding': 'gzip;q=0, identity;q=0' }, pages)).toBeNull();
     // A session cookie does not change a prerendered page: Next answers it the same way.
     expect(variantFor('GET', '/bench', { cookie: 'next-auth.session-token=abc' }, pages)?.variant).toBe('http ');
   });
@@ -45,9 +49,25 @@ describe('which pages and which requests', () => {
     expect(variantFor('GET', '/bench', { cookie: 'a=1; __prerender_bypass=xyz' }, pages)).toBeNull();
   });
 
+  it('Accept-Encoding as RFC 9110 §12.5.3 reads it, choosing between gzip and no coding', () => {
+    expect(acceptedEncoding(undefined)).toBe('');
+    expect(acceptedEncoding('  ')).toBe('');
+    expect(acceptedEncoding('gzip, deflate, br, zstd')).toBe('gzip'); // what browsers send
+    expect(acceptedEncoding('GZip;Q=0.5')).toBe('gzip');
+    expect(acceptedEncoding('x-gzip')).toBe('gzip');
+    expect(acceptedEncoding('*')).toBe('gzip');
+    expect(acceptedEncoding('deflate')).toBe(''); // gzip not accepted: uncompressed, always acceptable
+    expect(acceptedEncoding('gzip;q=0')).toBe('');
+    expect(acceptedEncoding('gzip;q=0.1, identity;q=1')).toBe(''); // the client prefers no coding
+    expect(acceptedEncoding('*;q=0')).toBeNull(); // neither: Next answers
+    expect(acceptedEncoding('identity;q=0')).toBeNull();
+    expect(acceptedEncoding('identity;q=0, *;q=0.3')).toBe('gzip');
+    expect(acceptedEncoding('gzip;q=abc')).toBe('');
+  });
+
   it('a recording asks Next with the variant’s own headers and marks itself', () => {
     expect(recordingHeaders('http ')).toEqual({ [RECORD_HEADER]: '1' });
-    expect(recordingHeaders('https gzip, br')).toEqual({ [RECORD_HEADER]: '1', 'x-forwarded-proto': 'https', 'accept-encoding': 'gzip, br' });
+    expect(recordingHeaders('https gzip')).toEqual({ [RECORD_HEADER]: '1', 'x-forwarded-proto': 'https', 'accept-encoding': 'gzip' });
   });
 });
 
@@ -78,8 +98,8 @@ describe('what is kept', () => {
     expect(notModified('"abc"', undefined)).toBe(false);
   });
 
-  it('keeps a bounded number of variants per page and records each once at a time', () => {
-    const cache = new StaticPageCache(['/bench'], 2);
+  it('records each variant once at a time, and again after a failed recording', () => {
+    const cache = new StaticPageCache(['/bench']);
     const page = recordable(200, next, Buffer.from('abc'))!;
     expect(cache.shouldRecord('/bench', 'http ')).toBe(true);
     expect(cache.shouldRecord('/bench', 'http ')).toBe(false); // one recording at a time
@@ -89,7 +109,8 @@ describe('what is kept', () => {
     expect(cache.get('/bench', 'http ')).toBe(page);
     expect(cache.shouldRecord('/bench', 'http gzip')).toBe(true);
     cache.finish('/bench', 'http gzip', page);
-    expect(cache.shouldRecord('/bench', 'http br')).toBe(false); // full
+    expect(cache.get('/bench', 'http gzip')).toBe(page);
+    expect(cache.get('/bench', 'https gzip')).toBeUndefined();
     expect(cache.size).toBe(2);
   });
 });

@@ -5,9 +5,11 @@
 // gzips the page again for every browser; this answers in a few hundredths of that.
 //
 // Only plain page loads take this path: GET or HEAD, no query string, no router (RSC) or server
-// action header, no draft-mode cookie. A variant is kept per Accept-Encoding value (Next decides
-// the encoding when it is recorded) and per X-Forwarded-Proto https (which adds HSTS). Anything
-// else, and every request before its variant is recorded, goes to Next unchanged.
+// action header, no draft-mode cookie. At most four variants of a page are kept: gzip or not (what
+// the client accepts, read from Accept-Encoding as RFC 9110 §12.5.3 says; Next's own answer to
+// `Accept-Encoding: gzip` or to none is recorded), each with or without X-Forwarded-Proto https
+// (which adds HSTS). Anything else, and every request before its variant is recorded, goes to Next
+// unchanged.
 //
 // Pure decisions (which pages, which requests, the 304) are functions here with unit tests;
 // server.ts wires them to node:http.
@@ -56,9 +58,36 @@ export function variantFor(method: string | undefined, url: string | undefined, 
     if (name === 'rsc' || name.startsWith('next-') || name.startsWith('x-next') || name.startsWith('x-prerender') || name.startsWith('x-middleware') || name === RECORD_HEADER) return null;
   }
   if (typeof headers.cookie === 'string' && headers.cookie.includes('__prerender_bypass')) return null;
-  const encoding = (headers['accept-encoding'] ?? '').toString().trim().toLowerCase();
+  const encoding = acceptedEncoding(typeof headers['accept-encoding'] === 'string' ? headers['accept-encoding'] : undefined);
+  if (encoding === null) return null;
   const https = headers['x-forwarded-proto'] === 'https';
   return { path: url, variant: `${https ? 'https' : 'http'} ${encoding}` };
+}
+
+/**
+ * 'gzip' when the client accepts gzip at least as much as an uncompressed answer, '' for an
+ * uncompressed answer, null when it accepts neither (Next answers those). No header, or an empty
+ * one, means uncompressed, as Next's compression does. Codings other than gzip and identity are
+ * never chosen: a client that prefers br or deflate but accepts gzip gets gzip, which it accepts.
+ */
+export function acceptedEncoding(header: string | undefined): 'gzip' | '' | null {
+  if (!header || !header.trim()) return '';
+  const q: Record<string, number> = {};
+  for (const part of header.split(',')) {
+    const [name, ...params] = part.trim().toLowerCase().split(';');
+    if (!name) continue;
+    const qParam = params.map((p) => p.trim()).find((p) => p.startsWith('q='));
+    const value = qParam === undefined ? 1 : Number(qParam.slice(2));
+    q[name.trim()] = Number.isFinite(value) ? Math.min(Math.max(value, 0), 1) : 0;
+  }
+  const gzip = q.gzip ?? q['x-gzip'] ?? q['*'] ?? 0;
+  // Unnamed, no coding weighs as the lowest weight the client gave (as the negotiator in Next's
+  // compression reckons it), so `gzip;q=0.5` alone still means gzip.
+  const lowest = Math.min(1, ...Object.values(q).filter((v) => v > 0));
+  const identity = q.identity ?? (q['*'] === 0 ? 0 : lowest);
+  if (gzip > 0 && gzip >= identity) return 'gzip';
+  if (identity > 0) return '';
+  return gzip > 0 ? 'gzip' : null;
 }
 
 /** The headers to send with a recorded variant: its request's Accept-Encoding and X-Forwarded-Proto. */
@@ -66,9 +95,8 @@ export function recordingHeaders(variant: string): Record<string, string> {
   const space = variant.indexOf(' ');
   const headers: Record<string, string> = { [RECORD_HEADER]: '1' };
   if (variant.slice(0, space) === 'https') headers['x-forwarded-proto'] = 'https';
-  const encoding = variant.slice(space + 1);
-  // Node's client sends no Accept-Encoding of its own, so an empty value stays absent.
-  if (encoding) headers['accept-encoding'] = encoding;
+  // Node's client sends no Accept-Encoding of its own, so the uncompressed variant asks with none.
+  if (variant.slice(space + 1) === 'gzip') headers['accept-encoding'] = 'gzip';
   return headers;
 }
 
@@ -117,16 +145,13 @@ export function notModified(ifNoneMatch: string | string[] | undefined, etag: st
   return ifNoneMatch.split(',').some((tag) => strip(tag) === want);
 }
 
-/**
- * The memory of recorded pages: per path, at most `maxVariants` variants (a few Accept-Encoding
- * values are common; a client sending new ones each time only ever reaches Next).
- */
+/** The memory of recorded pages: per path, its (at most four) variants. */
 export class StaticPageCache {
   readonly pages: ReadonlySet<string>;
   private readonly recorded = new Map<string, Map<string, RecordedPage>>();
   private readonly pending = new Set<string>();
 
-  constructor(paths: Iterable<string>, private readonly maxVariants = 6) {
+  constructor(paths: Iterable<string>) {
     this.pages = new Set(paths);
   }
 
@@ -134,11 +159,10 @@ export class StaticPageCache {
     return this.recorded.get(path)?.get(variant);
   }
 
-  /** Whether a miss for this variant should start a recording (none running, room left). */
+  /** Whether a miss for this variant should start a recording (none running for it). */
   shouldRecord(path: string, variant: string): boolean {
     const key = `${path}\n${variant}`;
     if (this.pending.has(key)) return false;
-    if ((this.recorded.get(path)?.size ?? 0) >= this.maxVariants) return false;
     this.pending.add(key);
     return true;
   }
@@ -149,7 +173,7 @@ export class StaticPageCache {
     if (!page) return;
     let variants = this.recorded.get(path);
     if (!variants) this.recorded.set(path, (variants = new Map()));
-    if (variants.size < this.maxVariants) variants.set(variant, page);
+    variants.set(variant, page);
   }
 
   get size(): number {
