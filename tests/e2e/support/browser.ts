@@ -36,6 +36,10 @@ export type AxeViolation = { id: string; impact: string | null; help: string; no
 
 /** Runs axe-core in the page and returns the serious and critical violations. */
 export async function seriousViolations(page: Page): Promise<AxeViolation[]> {
+  // After a client-side navigation Next sets the new document title once the page's metadata has
+  // streamed in, which can be a moment after its content shows. Wait for a title (at most 5 s);
+  // a page without one is still reported by axe below.
+  await page.waitForFunction(() => document.title.trim() !== '', undefined, { timeout: 5_000 }).catch(() => undefined);
   await page.addScriptTag({ content: AXE_SOURCE });
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: AxeViolation[] }> } }).axe;
