@@ -5,8 +5,8 @@ import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
+import { SubmitButton } from '@/components/ui/submit-button';
 import { PASSWORD_MIN, RegisterSchema, type RegisterInput } from '@/lib/validations/user';
 
 export function RegisterForm() {
@@ -49,9 +49,9 @@ export function RegisterForm() {
         error={formState.errors.password?.message}
         {...register('password')}
       />
-      <Button type="submit" pending={formState.isSubmitting} className="w-full">
+      <SubmitButton pending={formState.isSubmitting} className="w-full">
         Create my account
-      </Button>
+      </SubmitButton>
     </form>
   );
 }

@@ -5,7 +5,7 @@ import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Button } from '@/components/ui/button';
+import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
 import { SignInSchema, type SignInInput } from '@/lib/validations/user';
 
@@ -42,9 +42,9 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl?: string
       </div>
       <TextField label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register('email')} />
       <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
-      <Button type="submit" pending={formState.isSubmitting} className="w-full">
+      <SubmitButton pending={formState.isSubmitting} className="w-full">
         Sign in
-      </Button>
+      </SubmitButton>
     </form>
   );
 }

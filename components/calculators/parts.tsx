@@ -3,6 +3,7 @@
 import { useId, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 import { PreservingError, parseNumber, type NumberRule } from '@/lib/preserving/errors';
+import { useHydrated } from '@/components/ui/use-hydrated';
 import { WarningIcon } from '@/components/ui/warning-icon';
 
 /** Reads typed text into numbers, noting a message per field instead of throwing. */
@@ -71,6 +72,8 @@ type ShellProps = {
 /** The frame every calculator shares: heading, short intro, inputs, a live result, caution and lesson link. */
 export function CalculatorShell({ title, intro, headingLevel = 3, lesson, caution, children, result, className }: ShellProps) {
   const headingId = useId();
+  // Until hydration the fields take no typing (see useHydrated): the result below comes from state.
+  const hydrated = useHydrated();
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
   return (
     <section aria-labelledby={headingId} className={cn('not-prose my-6 rounded-jar border border-brine-100 bg-white p-5 shadow-shelf', className)} data-calculator>
@@ -78,8 +81,10 @@ export function CalculatorShell({ title, intro, headingLevel = 3, lesson, cautio
         {title}
       </Heading>
       <p className="mt-1 text-sm text-ink-soft">{intro}</p>
-      <form className="mt-4 grid gap-4 sm:grid-cols-2" onSubmit={(event) => event.preventDefault()} noValidate>
-        {children}
+      <form className="mt-4" onSubmit={(event) => event.preventDefault()} noValidate>
+        <fieldset disabled={!hydrated} className="m-0 grid min-w-0 gap-4 border-0 p-0 sm:grid-cols-2">
+          {children}
+        </fieldset>
       </form>
       <output aria-live="polite" className="mt-4 block rounded-lg bg-brine-50 p-4 text-ink">
         {result}

@@ -5,8 +5,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { Button } from '@/components/ui/button';
 import { Select } from '@/components/ui/select';
+import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { WaiverSchema, type WaiverInput } from '@/lib/validations/waiver';
@@ -46,9 +46,9 @@ export function WaiverForm({ courses, defaultExpiry }: { courses: { id: number; 
       <TextField label="Last day it works" type="date" hint="The code stops working after this day (UTC)." error={err('expiresOn')} {...register('expiresOn')} />
       <TextField label="Note" hint="For whom, or why (optional)." className="sm:col-span-2" error={err('note')} {...register('note')} />
       <div className="flex items-center gap-3 sm:col-span-2">
-        <Button type="submit" pending={formState.isSubmitting}>
+        <SubmitButton pending={formState.isSubmitting}>
           Create code
-        </Button>
+        </SubmitButton>
         <p role="status" aria-live="polite" className="text-sm font-medium text-beet-600">
           {message}
         </p>

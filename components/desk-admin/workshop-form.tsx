@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import type { SaveState } from '@/app/desk/workshops/actions';
-import { Button } from '@/components/ui/button';
 import { Select } from '@/components/ui/select';
+import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { WORKSHOP_TIME_ZONES, WorkshopSchema, type WorkshopInput } from '@/lib/validations/workshop';
@@ -68,9 +68,9 @@ export function WorkshopForm({ workshopId, defaults, courses, instructors, save 
         </label>
       </div>
       <div className="flex items-center gap-3 sm:col-span-2">
-        <Button type="submit" pending={formState.isSubmitting}>
+        <SubmitButton pending={formState.isSubmitting}>
           {workshopId ? 'Save changes' : 'Add workshop'}
-        </Button>
+        </SubmitButton>
         <p role="status" aria-live="polite" className="text-sm font-medium text-beet-600">
           {message}
         </p>

@@ -4,11 +4,10 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
-import { FieldError } from '@/components/ui/text-field';
-import { fieldClasses } from '@/components/ui/text-field';
+import { SubmitButton } from '@/components/ui/submit-button';
+import { TextArea } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { RevokeSchema, type RevokeInput } from '@/lib/certificates/schemas';
-import { cn } from '@/lib/cn';
 import { FetchError, postJson } from './fetcher';
 
 type Target = { certificateId: number; serial: string; learnerName: string };
@@ -38,27 +37,14 @@ export function RevokeDialog({ target, onClose, onDone }: { target: Target | nul
           <p className="text-sm">
             Revoke <strong>{target.serial}</strong> of {target.learnerName}? Its verification page will show it as revoked. The learner is told by e-mail.
           </p>
-          <div className="space-y-1">
-            <label htmlFor="revoke-reason" className="block text-sm font-semibold">
-              Reason
-            </label>
-            <textarea
-              id="revoke-reason"
-              rows={3}
-              aria-invalid={error ? true : undefined}
-              aria-describedby={error ? 'revoke-reason-error' : undefined}
-              className={cn(fieldClasses, error ? 'border-beet-500' : 'border-ink-faint/40')}
-              {...form.register('reason')}
-            />
-            <FieldError id="revoke-reason-error" message={error} />
-          </div>
+          <TextArea label="Reason" id="revoke-reason" rows={3} error={error} {...form.register('reason')} />
           <div className="flex justify-end gap-2">
             <Button variant="secondary" onClick={onClose}>
               Cancel
             </Button>
-            <Button type="submit" variant="danger" pending={form.formState.isSubmitting}>
+            <SubmitButton variant="danger" pending={form.formState.isSubmitting}>
               Revoke
-            </Button>
+            </SubmitButton>
           </div>
         </form>
       ) : null}

@@ -4,11 +4,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Select } from '@/components/ui/select';
-import { FieldError, TextField, fieldClasses } from '@/components/ui/text-field';
-import { cn } from '@/lib/cn';
+import { FormAlert } from '@/components/ui/form-alert';
+import { SubmitButton } from '@/components/ui/submit-button';
+import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
 import { checkPractical, type Flag } from '@/lib/practicals/checks';
 import { JAR_SIZES, PRODUCT_OPTIONS } from '@/lib/preserving/products';
 import { PROCESSING_METHOD_LABELS, PROCESSING_METHODS, practicalFormSchema, type PracticalForm as FormValues, type PracticalFormInput } from '@/lib/validations/practical';
@@ -117,19 +117,7 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
           <TextField label="Jars not sealed" type="number" inputMode="numeric" min={0} error={errors.unsealedJars?.message} {...register('unsealedJars', num)} />
         </fieldset>
 
-        <div className="space-y-1">
-          <label htmlFor="practical-notes" className="block text-sm font-semibold">
-            Notes
-          </label>
-          <textarea
-            id="practical-notes"
-            rows={4}
-            aria-describedby={errors.notes ? 'practical-notes-error' : undefined}
-            className={cn(fieldClasses, 'border-ink-faint/40')}
-            {...register('notes')}
-          />
-          <FieldError id="practical-notes-error" message={errors.notes?.message} />
-        </div>
+        <TextArea label="Notes" id="practical-notes" error={errors.notes?.message} {...register('notes')} />
 
         <div>
           <PhotoUploader
@@ -143,14 +131,10 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
 
         <FlagList flags={flags} live title="Automatic checks (as you type)" />
 
-        {serverError ? (
-          <p role="alert" className="rounded-lg border border-beet-500 bg-beet-50 px-4 py-2 text-sm text-beet-700">
-            {serverError}
-          </p>
-        ) : null}
-        <Button type="submit" pending={isSubmitting}>
+        <FormAlert message={serverError} />
+        <SubmitButton pending={isSubmitting}>
           Submit round {round} for review
-        </Button>
+        </SubmitButton>
       </form>
     </Card>
   );

@@ -5,6 +5,7 @@ import { useForm } from 'react-hook-form';
 import { fetchJson, HttpError } from '@/components/progress/fetch-json';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { SubmitButton } from '@/components/ui/submit-button';
 import { SubmitSchema } from '@/lib/quiz/grading';
 import { Countdown } from './countdown';
 import { QuestionField } from './question-field';
@@ -140,9 +141,9 @@ export function QuizRunner({ intro }: { intro: Intro }) {
         </p>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" pending={form.formState.isSubmitting}>
+        <SubmitButton pending={form.formState.isSubmitting}>
           Submit answers
-        </Button>
+        </SubmitButton>
         {answered < attempt.questions.length ? <p className="text-sm text-ink-soft">Unanswered questions count as wrong.</p> : null}
       </div>
     </form>

@@ -4,10 +4,10 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { Button } from '@/components/ui/button';
-import { FieldError, fieldClasses } from '@/components/ui/text-field';
+import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { cn } from '@/lib/cn';
+import { FormAlert } from '@/components/ui/form-alert';
+import { SubmitButton } from '@/components/ui/submit-button';
 import { RUBRIC_CRITERIA, reviewSchema, type ReviewInput } from '@/lib/validations/practical';
 
 type FormInput = import('zod').input<typeof reviewSchema>;
@@ -61,17 +61,13 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
                 </label>
               </div>
               <FieldError id={`${c.id}-verdict-error`} message={verdictError} />
-              <label htmlFor={`${c.id}-comment`} className="mt-2 block text-sm">
-                Comment on {c.label.toLowerCase()}
-              </label>
-              <input
+              <TextField
+                label={`Comment on ${c.label.toLowerCase()}`}
                 id={`${c.id}-comment`}
-                className={cn(fieldClasses, commentError ? 'border-beet-500' : 'border-ink-faint/40')}
-                aria-invalid={commentError ? true : undefined}
-                aria-describedby={commentError ? `${c.id}-comment-error` : undefined}
+                className="mt-2"
+                error={commentError}
                 {...register(`rubric.${c.id}.comment`)}
               />
-              <FieldError id={`${c.id}-comment-error`} message={commentError} />
             </fieldset>
           );
         })}
@@ -88,29 +84,17 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
         <FieldError id="decision-error" message={errors.decision?.message} />
       </fieldset>
 
-      <div className="space-y-1">
-        <label htmlFor="review-comment" className="block text-sm font-semibold">
-          {decision === 'changes_requested' ? 'What to change (required)' : 'Comment for the learner'}
-        </label>
-        <textarea
-          id="review-comment"
-          rows={4}
-          className={cn(fieldClasses, errors.comment ? 'border-beet-500' : 'border-ink-faint/40')}
-          aria-invalid={errors.comment ? true : undefined}
-          aria-describedby={errors.comment ? 'review-comment-error' : undefined}
-          {...register('comment')}
-        />
-        <FieldError id="review-comment-error" message={errors.comment?.message} />
-      </div>
+      <TextArea
+        label={decision === 'changes_requested' ? 'What to change (required)' : 'Comment for the learner'}
+        id="review-comment"
+        error={errors.comment?.message}
+        {...register('comment')}
+      />
 
-      {serverError ? (
-        <p role="alert" className="rounded-lg border border-beet-500 bg-beet-50 px-4 py-2 text-sm text-beet-700">
-          {serverError}
-        </p>
-      ) : null}
-      <Button type="submit" pending={isSubmitting}>
+      <FormAlert message={serverError} />
+      <SubmitButton pending={isSubmitting}>
         Save the review
-      </Button>
+      </SubmitButton>
     </form>
   );
 }

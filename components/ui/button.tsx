@@ -19,7 +19,7 @@ export function buttonClasses(variant: Variant = 'primary', size: Size = 'md', c
   return cn(base, variants[variant], sizes[size], className);
 }
 
-type ButtonProps = ComponentProps<'button'> & { variant?: Variant; size?: Size; pending?: boolean };
+export type ButtonProps = ComponentProps<'button'> & { variant?: Variant; size?: Size; pending?: boolean };
 
 export function Button({ variant = 'primary', size = 'md', pending = false, className, children, disabled, type = 'button', ...rest }: ButtonProps) {
   return (

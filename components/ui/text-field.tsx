@@ -1,4 +1,4 @@
-import { useId, type ComponentProps } from 'react';
+import { useId, type ComponentProps, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 import { WarningIcon } from './warning-icon';
 
@@ -13,8 +13,8 @@ type TextFieldProps = ComponentProps<'input'> & {
 export const fieldClasses =
   'block w-full rounded-lg border bg-white px-3 py-2 text-ink shadow-inner placeholder:text-ink-faint focus:border-brine-600 focus:outline-2 focus:outline-offset-0 focus:outline-brine-300 disabled:bg-paper-deep';
 
-/** A labelled input whose hint and error are tied to it for screen readers. */
-export function TextField({ label, hint, error, suffix, id, className, ...rest }: TextFieldProps) {
+/** The label, hint and error around a field, with the ids that tie them to it for screen readers. */
+function Field({ label, hint, error, id, className, children }: { label: string; hint?: string; error?: string; id?: string; className?: string; children: (aria: FieldAria) => ReactNode }) {
   const autoId = useId();
   const inputId = id ?? autoId;
   const hintId = hint ? `${inputId}-hint` : undefined;
@@ -29,18 +29,41 @@ export function TextField({ label, hint, error, suffix, id, className, ...rest }
           {hint}
         </p>
       ) : null}
-      <div className="flex items-center gap-2">
-        <input
-          id={inputId}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={[hintId, errorId].filter(Boolean).join(' ') || undefined}
-          className={cn(fieldClasses, error ? 'border-beet-500' : 'border-ink-faint/40')}
-          {...rest}
-        />
-        {suffix ? <span className="shrink-0 text-sm text-ink-soft">{suffix}</span> : null}
-      </div>
+      {children({
+        id: inputId,
+        'aria-invalid': error ? true : undefined,
+        'aria-describedby': [hintId, errorId].filter(Boolean).join(' ') || undefined,
+        className: cn(fieldClasses, error ? 'border-beet-500' : 'border-ink-faint/40'),
+      })}
       <FieldError id={errorId} message={error} />
     </div>
+  );
+}
+
+type FieldAria = { id: string; 'aria-invalid': true | undefined; 'aria-describedby': string | undefined; className: string };
+
+/** A labelled input whose hint and error are tied to it for screen readers. */
+export function TextField({ label, hint, error, suffix, id, className, ...rest }: TextFieldProps) {
+  return (
+    <Field label={label} hint={hint} error={error} id={id} className={className}>
+      {(aria) => (
+        <div className="flex items-center gap-2">
+          <input {...aria} {...rest} />
+          {suffix ? <span className="shrink-0 text-sm text-ink-soft">{suffix}</span> : null}
+        </div>
+      )}
+    </Field>
+  );
+}
+
+type TextAreaProps = ComponentProps<'textarea'> & { label: string; hint?: string; error?: string };
+
+/** A labelled multi-line field, tied to its hint and error like TextField. */
+export function TextArea({ label, hint, error, id, className, rows = 4, ...rest }: TextAreaProps) {
+  return (
+    <Field label={label} hint={hint} error={error} id={id} className={className}>
+      {(aria) => <textarea rows={rows} {...aria} {...rest} />}
+    </Field>
   );
 }
 
