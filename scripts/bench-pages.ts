@@ -25,7 +25,7 @@ import zlib from 'node:zlib';
 import { waitForOk } from '../lib/migrator';
 import { ratioFigure, writeBenchResults, type BenchFigure } from './bench-results';
 import { cpuMsOfTree } from './bench-support';
-import { freePort } from './cluster/nginx';
+import { ensureNginx, freePort } from './cluster/nginx';
 import { startAppServer } from './app-server';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
@@ -79,14 +79,6 @@ function ensureBuild(env: NodeJS.ProcessEnv) {
   log(`building into ${distDir}`);
   const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });
   if (build.status !== 0) throw new Error('next build failed');
-}
-
-function ensureNginx(): string {
-  const found = ['/usr/sbin/nginx', '/usr/bin/nginx'].find((p) => fs.existsSync(p));
-  if (found) return found;
-  log("nginx is missing: installing Debian's nginx package");
-  execFileSync('apt-get', ['install', '-y', '-qq', 'nginx'], { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
-  return '/usr/sbin/nginx';
 }
 
 /**

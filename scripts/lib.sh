@@ -13,12 +13,23 @@ local_secret() {
   cat "$file"
 }
 
-ensure_chromium() {
-  if [ -x "${CHROMIUM_PATH:-/usr/bin/chromium}" ]; then return 0; fi
-  echo "[setup] Chromium is missing: installing Debian's chromium package for the browser tests" >&2
+# A Debian package the tests need, installed once when its program is missing: ensure_package
+# <program path> <package> <what for>. Installing inside a test would eat that test's time limit.
+ensure_package() {
+  if [ -x "$1" ]; then return 0; fi
+  echo "[setup] $1 is missing: installing Debian's $2 package for $3" >&2
   export DEBIAN_FRONTEND=noninteractive
-  apt-get update -qq
-  apt-get install -y -qq chromium >/dev/null
+  if [ -z "${APT_UPDATED:-}" ]; then apt-get update -qq; APT_UPDATED=1; fi
+  apt-get install -y -qq "$2" >/dev/null
+}
+
+ensure_chromium() {
+  ensure_package "${CHROMIUM_PATH:-/usr/bin/chromium}" chromium "the browser tests"
+}
+
+ensure_nginx() {
+  if [ -x /usr/bin/nginx ]; then return 0; fi
+  ensure_package /usr/sbin/nginx nginx "the load balancer tests and the page benchmark"
 }
 
 # The demo's environment for a public address on PORT ($1): database, secret, addresses and the

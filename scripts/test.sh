@@ -5,6 +5,7 @@ source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 cd "$ROOT"
 
 ensure_chromium
+ensure_nginx
 "$ROOT/scripts/db.sh" start
 
 export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(local_secret)}"

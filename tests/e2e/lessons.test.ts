@@ -49,7 +49,7 @@ describe('lessons in the browser', () => {
     const { page } = browser;
     const response = await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
     expect(response?.status()).toBe(200);
-    await page.waitForLoadState('networkidle');
+    await browser.network.quiet();
     expect(await page.getByRole('heading', { level: 1, name: preview.title }).count()).toBe(1);
     const toc = page.getByRole('navigation', { name: 'On this page' });
     expect(await toc.getByRole('link').count()).toBeGreaterThan(2);
@@ -126,7 +126,7 @@ describe('lessons in the browser', () => {
     expect(await page.getByRole('heading', { level: 1, name: membersOnly.title }).count()).toBe(1);
     expect(await page.getByText(membersOnly.objectives[0]).count()).toBe(1);
     expect(await page.getByRole('link', { name: /Previous: lesson/ }).getAttribute('href')).toBe(`/learn/pickling-and-canning/${lessons[membersOnly.order - 2].slug}`);
-    await page.waitForLoadState('networkidle');
+    await browser.network.quiet();
     expect(await seriousViolations(page)).toEqual([]);
   });
 });

@@ -151,7 +151,7 @@ describe('the content security policy in the browser', () => {
     const csp = await watchCsp(page);
     const seen: Record<string, Violation[]> = {};
     const check = async (label: string) => {
-      await page.waitForLoadState('networkidle');
+      await browser.network.quiet();
       seen[label] = await csp.violations();
       expect(await seriousViolations(page), label).toEqual([]);
     };

@@ -39,7 +39,9 @@ describe('the load balancer configuration (scripts/cluster/nginx.conf)', () => {
     expect(() => renderNginxConfig(setup, 'listen @@PORT@@; @@OTHER@@')).toThrow(/@@OTHER@@/);
   });
 
-  it('is a configuration nginx itself accepts (nginx -t)', async () => {
+  // npm test installs nginx before the tests start (scripts/test.sh); run alone on a machine without
+  // it, ensureNginx installs it here, which takes longer than a unit test's usual limit.
+  it('is a configuration nginx itself accepts (nginx -t)', { timeout: 180_000 }, async () => {
     const conf = writeNginxConfig({ ...setup, port: await freePort() });
     const check = spawnSync(ensureNginx(), ['-t', '-c', conf, '-p', dir, '-e', path.join(dir, 'error.log')], { encoding: 'utf8' });
     expect(check.stderr).toContain('test is successful');

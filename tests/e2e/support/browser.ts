@@ -13,7 +13,9 @@ export const baseUrl = () => {
 };
 
 /** A fresh headless Debian Chromium with an empty profile (relative addresses go to `base`, the e2e app by default). */
-export async function openBrowser(base: string = baseUrl()): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
+export async function openBrowser(
+  base: string = baseUrl(),
+): Promise<{ context: BrowserContext; page: Page; network: ReturnType<typeof watchNetwork>; close: () => Promise<void> }> {
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-e2e-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -25,6 +27,7 @@ export async function openBrowser(base: string = baseUrl()): Promise<{ context: 
   return {
     context,
     page,
+    network: watchNetwork(page),
     close: async () => {
       await context.close();
       fs.rmSync(profile, { recursive: true, force: true });
@@ -56,4 +59,42 @@ export async function signIn(page: Page, email: string, password: string) {
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByTestId('signed-in-as').waitFor();
+}
+
+/**
+ * Follows the page's requests so a test can wait for its network to go quiet, and, when it does
+ * not, name the requests still open (Playwright's `networkidle` only says that it timed out).
+ * Start it before the first navigation it should cover (openBrowser starts one as `network`).
+ * E2E_LOG_REQUESTS=1 prints each request and how long it took.
+ */
+export function watchNetwork(page: Page) {
+  const open = new Map<object, { url: string; since: number }>();
+  let lastChange = Date.now();
+  page.on('request', (request) => {
+    open.set(request, { url: `${request.method()} ${request.url()}`, since: Date.now() });
+    if (process.env.E2E_LOG_REQUESTS) console.log('[req]', request.method(), request.url());
+    lastChange = Date.now();
+  });
+  const done = (request: object) => {
+    if (process.env.E2E_LOG_REQUESTS) { const r = open.get(request); if (r) console.log('[done]', r.url, Date.now() - r.since, 'ms'); }
+    open.delete(request);
+    lastChange = Date.now();
+  };
+  page.on('requestfinished', done);
+  page.on('requestfailed', done);
+  return {
+    /** Resolves once no request has been open for `quietMs`; after `timeoutMs` fails naming the open ones. */
+    async quiet({ quietMs = 500, timeoutMs = 30_000 } = {}) {
+      const start = Date.now();
+      for (;;) {
+        if (open.size === 0 && Date.now() - lastChange >= quietMs) return;
+        if (Date.now() - start > timeoutMs) {
+          const now = Date.now();
+          const list = [...open.values()].map((r) => `${r.url} (open ${now - r.since} ms)`);
+          throw new Error(`the page's network did not go quiet in ${timeoutMs} ms; open: ${list.join(', ') || 'none (requests kept starting)'}`);
+        }
+        await new Promise((resolve) => setTimeout(resolve, 100));
+      }
+    },
+  };
 }
