@@ -5,17 +5,23 @@ import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { roleAllows, type Role } from '@/lib/roles';
 import { userFromCookies, usesSecureCookies } from './session';
-import type { SessionUser } from './users';
+import { currentRole, type SessionUser } from './users';
 
 /**
  * The signed-in user, or null: next-auth's session cookie decoded with next-auth's own `decode`
- * (lib/auth/session.ts), without running the NextAuth handler on every request.
+ * (lib/auth/session.ts), without running the NextAuth handler on every request. The role is the
+ * one the database holds now, not the one written into the token at sign-in: a role an admin
+ * changes applies from the user's next request, and an account that no longer exists is signed out.
+ * That is one primary-key read per check.
  */
 export async function getCurrentUser(): Promise<SessionUser | null> {
   // cookies() first: it marks the page dynamic before the configuration is read (no prerendering).
   const jar = (await cookies()).getAll();
   const env = getEnv();
-  return userFromCookies(jar, { secret: env.NEXTAUTH_SECRET, secure: usesSecureCookies(env.NEXTAUTH_URL) });
+  const fromToken = await userFromCookies(jar, { secret: env.NEXTAUTH_SECRET, secure: usesSecureCookies(env.NEXTAUTH_URL) });
+  if (!fromToken) return null;
+  const role = await currentRole(fromToken.id);
+  return role ? { ...fromToken, role } : null;
 }
 
 /**

@@ -3,7 +3,7 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { getEnv } from '@/lib/env';
 import { SignInSchema } from '@/lib/validations/user';
-import { ThrottledError, verifyCredentials } from './users';
+import { ThrottledError, currentRole, verifyCredentials } from './users';
 
 type HeaderBag = Record<string, string | string[] | undefined> | Headers | undefined;
 
@@ -48,6 +48,10 @@ export function authOptions(): NextAuthOptions {
         if (user) {
           token.uid = Number(user.id);
           token.role = user.role;
+        } else if (typeof token.uid === 'number') {
+          // The browser's session (its menus) follows a role an admin changed; the server's checks
+          // read the role from the database on every request anyway (lib/auth/guard.ts).
+          token.role = (await currentRole(token.uid)) ?? token.role;
         }
         return token;
       },

@@ -39,8 +39,8 @@ export function sessionTokenFrom(cookies: readonly CookieLike[], secure: boolean
 /**
  * The user the session cookie names, or null: no cookie, a token that does not decrypt with the
  * secret, an expired token (jose checks `exp`, with next-auth's 15 s clock tolerance), or claims
- * that are not a user of a known role. The role is the one in the token: a role changed in the
- * database applies from the user's next sign-in (at most the session's 8 hours later).
+ * that are not a user of a known role. The role is the one in the token, written at sign-in;
+ * getCurrentUser (lib/auth/guard.ts) replaces it with the role the database holds now.
  */
 export async function userFromCookies(cookies: readonly CookieLike[], options: { secret: string; secure: boolean }): Promise<SessionUser | null> {
   const token = sessionTokenFrom(cookies, options.secure);

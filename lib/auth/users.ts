@@ -60,3 +60,9 @@ export async function verifyCredentials(emailAddress: string, plain: string, add
   await clearAccount(emailAddress);
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 }
+
+/** The role a user has now, or null when there is no such user (one primary-key read). */
+export async function currentRole(userId: number): Promise<Role | null> {
+  const row = await db().User.findByPk(userId, { attributes: ['role'], raw: true });
+  return row?.role ?? null;
+}

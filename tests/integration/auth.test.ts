@@ -1,6 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { POST as register } from '@/app/api/register/route';
 import { requireRole } from '@/lib/auth/guard';
+import { authOptions } from '@/lib/auth/options';
 import { ThrottledError, verifyCredentials } from '@/lib/auth/users';
 import { changeRole } from '@/lib/users-admin';
 import { db } from '@/models';
@@ -93,5 +94,24 @@ describe('changeRole', () => {
     expect((await db().User.findByPk(learner.id))?.role).toBe('instructor');
     expect(await db().AuditLog.count({ where: { action: 'user.role_changed' } })).toBe(1);
     await expect(changeRole(admin.id, { userId: admin.id, role: 'learner' })).rejects.toMatchObject({ status: 409 });
+  });
+
+  it('applies from the next request of a session that is already signed in, and an account removed is signed out', async () => {
+    const admin = await createUser('admin');
+    const instructor = await createUser('instructor');
+    // The session token still says instructor (written at sign-in, as actAs encodes it).
+    actAs(instructor);
+    await expect(requireRole('instructor')).resolves.toMatchObject({ id: instructor.id, role: 'instructor' });
+    await changeRole(admin.id, { userId: instructor.id, role: 'learner' });
+    await expect(requireRole('instructor')).rejects.toMatchObject({ status: 403 });
+    await expect(requireRole()).resolves.toMatchObject({ id: instructor.id, role: 'learner' });
+    await changeRole(admin.id, { userId: instructor.id, role: 'coordinator' });
+    await expect(requireRole('coordinator')).resolves.toMatchObject({ role: 'coordinator' });
+    // The browser's session (/api/auth/session runs the jwt callback) follows as well.
+    const jwt = authOptions().callbacks!.jwt!;
+    const token = await jwt({ token: { uid: instructor.id, role: 'instructor', email: instructor.email, name: instructor.name }, user: undefined as never, account: null });
+    expect(token.role).toBe('coordinator');
+    await db().User.destroy({ where: { id: instructor.id } });
+    await expect(requireRole()).rejects.toMatchObject({ status: 401 });
   });
 });

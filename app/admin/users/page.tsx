@@ -12,6 +12,7 @@ export default async function UsersPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Users and roles</h1>
+      <p className="max-w-prose text-ink-soft">A new role applies at once: the next page the person opens uses it, without signing in again.</p>
       <Table caption={`${users.length} account${users.length === 1 ? '' : 's'}`}>
         <THead>
           <TR>
