@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import { Logo } from '@/components/logo';
+import { LinkPending } from '@/components/ui/link-pending';
 import { PUBLIC_NAV } from '@/lib/nav';
 import { UserNav } from './user-nav';
 
@@ -16,8 +17,9 @@ export function SiteHeader() {
         </Link>
         <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-x-4 gap-y-1">
           {PUBLIC_NAV.map((item) => (
-            <Link key={item.href} href={item.href} className="text-sm font-medium text-brine-50 no-underline hover:text-white hover:underline">
+            <Link key={item.href} href={item.href} className="relative text-sm font-medium text-brine-50 no-underline hover:text-white hover:underline">
               {item.label}
+              <LinkPending />
             </Link>
           ))}
         </nav>

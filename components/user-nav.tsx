@@ -2,6 +2,7 @@
 
 import Link from 'next/link';
 import { signOut, useSession } from 'next-auth/react';
+import { LinkPending } from '@/components/ui/link-pending';
 import { navFor } from '@/lib/nav';
 import { ROLE_LABELS } from '@/lib/roles';
 
@@ -24,8 +25,9 @@ export function UserNav() {
   return (
     <nav aria-label="Your pages" className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
       {navFor(user.role).map((item) => (
-        <Link key={item.href} href={item.href} className="font-semibold text-white no-underline hover:underline">
+        <Link key={item.href} href={item.href} className="relative font-semibold text-white no-underline hover:underline">
           {item.label}
+          <LinkPending />
         </Link>
       ))}
       <span className="text-brine-100" data-testid="signed-in-as">

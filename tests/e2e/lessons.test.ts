@@ -129,4 +129,31 @@ describe('lessons in the browser', () => {
     await browser.network.quiet();
     expect(await seriousViolations(page)).toEqual([]);
   });
+
+  it('shows that a header link was taken while its page is on the way (the learner is still signed in)', async () => {
+    const { page } = browser;
+    // Hold the Pantry's router requests for a moment, as a slow server would.
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(/\/pantry\?_rsc=/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    try {
+      const nav = page.getByRole('navigation', { name: 'Your pages' });
+      await nav.getByRole('link', { name: 'Pantry' }).click();
+      const bar = nav.locator('[data-link-pending]');
+      await bar.waitFor();
+      // Hidden for the first 150 ms, then visible (the CSS animation's delay).
+      await expect.poll(() => bar.evaluate((el) => Number(getComputedStyle(el).opacity))).toBeGreaterThan(0.3);
+      expect(page.url()).toMatch(new RegExp(`${membersPath}$`));
+      release();
+      await page.waitForURL('**/pantry');
+      await page.getByRole('heading', { level: 1 }).waitFor();
+      await bar.waitFor({ state: 'detached' });
+    } finally {
+      release();
+      await page.unroute(/\/pantry\?_rsc=/);
+    }
+  });
 });
