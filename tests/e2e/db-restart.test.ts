@@ -7,7 +7,8 @@
 // killed (SIGKILL, the harshest stop: no chance to finish anything), kept down for 10 s and started
 // again. Then it checks:
 // - every submission the app acknowledged with 2xx is in the database with its score and answers;
-// - while the database was down every answer was a 503 with a clear JSON message, and fast;
+// - while the database was stopped every answer was a 503 with a clear JSON message, and fast (once its
+//   restart has begun, 2xx answers are allowed too: the app may reach it before this test's probe does);
 // - the app answered 2xx again within 5 s of the database answering, without being restarted.
 // Expected run time: about 100 s (plus the shared build of the browser tests).
 import { execFile, type ChildProcess } from 'node:child_process';
@@ -115,7 +116,7 @@ function answersFor(questions: PublicQuestion[]) {
   return answers;
 }
 
-/** Tries a new connection every 50 ms until one succeeds; answers when it did. */
+/** Tries a new connection every 20 ms until one succeeds; answers when it did. */
 async function firstConnection(starting: Promise<unknown>): Promise<number> {
   let failed: unknown = null;
   starting.catch((error) => (failed = error));
@@ -123,12 +124,12 @@ async function firstConnection(starting: Promise<unknown>): Promise<number> {
   for (;;) {
     if (failed) throw failed;
     try {
-      const conn = await mariadb.createConnection({ host: url.hostname, port: Number(url.port), user: decodeURIComponent(url.username), password: decodeURIComponent(url.password), database: url.pathname.slice(1), connectTimeout: 1_000 });
+      const conn = await mariadb.createConnection({ host: url.hostname, port: Number(url.port), user: decodeURIComponent(url.username), password: decodeURIComponent(url.password), database: url.pathname.slice(1), connectTimeout: 250 });
       const at = Date.now();
       await conn.end();
       return at;
     } catch {
-      await new Promise((r) => setTimeout(r, 50));
+      await new Promise((r) => setTimeout(r, 20));
     }
   }
 }
@@ -289,12 +290,18 @@ describe('the database restarted during a load of quiz submissions', () => {
     const unexpected = calls.filter((c) => !ok(c) && c.status !== 503);
     // Answers given wholly while the database was down (from just after the kill until it answered again).
     const during = calls.filter((c) => c.startedAt >= killedAt + 200 && c.endedAt <= upAt);
-    const outageLatencies = during.map((c) => c.endedAt - c.startedAt);
+    // While the server is stopped every answer must be a 503. Once its restart has begun the app's pool can
+    // reach it before this test's probe does (seen in CI: a 2xx 0.8 s after the restart began, before the
+    // probe's first success), so answers that start after the restart may be 2xx as well as 503.
+    const stopped = during.filter((c) => c.endedAt <= restartAt);
+    const starting = during.filter((c) => c.startedAt >= restartAt);
+    const unavailable = during.filter((c) => c.status === 503);
+    const outageLatencies = unavailable.map((c) => c.endedAt - c.startedAt);
     const p50 = percentile(outageLatencies, 50);
     const p95 = percentile(outageLatencies, 95);
     const max = Math.max(...outageLatencies);
-    const firstOk = calls.filter((c) => ok(c) && c.endedAt >= upAt).sort((a, b) => a.endedAt - b.endedAt)[0];
-    const recoveryMs = firstOk ? firstOk.endedAt - upAt : Infinity;
+    const firstOk = calls.filter((c) => ok(c) && c.startedAt >= restartAt).sort((a, b) => a.endedAt - b.endedAt)[0];
+    const recoveryMs = firstOk ? Math.max(0, firstOk.endedAt - upAt) : Infinity;
     const afterRecovery = calls.filter((c) => c.startedAt >= upAt + RECOVERY_MS);
     const describe = (cs: Call[]) => {
       const l = cs.map((c) => c.endedAt - c.startedAt);
@@ -306,17 +313,19 @@ describe('the database restarted during a load of quiz submissions', () => {
       `[db-restart] ${calls.length} requests in ${LOAD_MS / 1000} s by ${LEARNERS} learners; ${acks.size} submissions acknowledged ` +
         `(${acked.filter((t) => t < killedAt).length} before the kill, ${acked.filter((t) => t > upAt).length} after the database answered again); ` +
         `killed at ${((killedAt - t0) / 1000).toFixed(1)} s, restart begun ${((restartAt - killedAt) / 1000).toFixed(1)} s later, answering ${((upAt - killedAt) / 1000).toFixed(1)} s after the kill; ` +
-        `${during.length} answers while down: ${during.filter((c) => c.status === 503).length} × 503, p50 ${p50} ms, p95 ${p95} ms, max ${max} ms ` +
-        `(server stopped: ${describe(during.filter((c) => c.endedAt <= restartAt))}; server starting: ${describe(during.filter((c) => c.startedAt >= restartAt))}); ` +
+        `${during.length} answers while down: ${unavailable.length} × 503, p50 ${p50} ms, p95 ${p95} ms, max ${max} ms ` +
+        `(server stopped: ${describe(stopped)}; server starting: ${describe(starting)}, ${starting.filter(ok).length} of them 2xx); ` +
         `(for comparison, 2xx answers before the kill: ${describe(calls.filter((c) => ok(c) && c.endedAt < killedAt))}); ` +
         `first 2xx ${recoveryMs} ms after the database answered; ${afterRecovery.length} requests from 5 s after that, ${afterRecovery.filter((c) => !ok(c)).length} not 2xx; ` +
         `${unexpected.length} answers other than 2xx/503`,
     );
 
     expect(unexpected.map((c) => ({ kind: c.kind, status: c.status, at: c.startedAt - t0, body: c.body }))).toEqual([]);
-    expect(during.length).toBeGreaterThan(20);
-    expect(during.filter((c) => c.status !== 503).map((c) => ({ status: c.status, at: c.startedAt - t0, took: c.endedAt - c.startedAt }))).toEqual([]);
-    for (const c of during) expect(c.body).toMatchObject({ error: 'unavailable', message: expect.stringMatching(/database/i) });
+    expect(stopped.length).toBeGreaterThan(20);
+    const late = (cs: Call[]) => cs.map((c) => ({ status: c.status, at: c.startedAt - t0, took: c.endedAt - c.startedAt }));
+    expect(late(stopped.filter((c) => c.status !== 503))).toEqual([]);
+    expect(late(during.filter((c) => c.status !== 503 && !(ok(c) && c.startedAt >= restartAt)))).toEqual([]);
+    for (const c of unavailable) expect(c.body).toMatchObject({ error: 'unavailable', message: expect.stringMatching(/database/i) });
     expect(p95).toBeLessThan(OUTAGE_P95_MS);
     expect(max).toBeLessThan(OUTAGE_MAX_MS);
     expect(recoveryMs).toBeLessThan(RECOVERY_MS);
