@@ -5,8 +5,8 @@ import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { TextField } from '@/components/ui/text-field';
 import { SubmitButton } from '@/components/ui/submit-button';
+import { TextField } from '@/components/ui/text-field';
 import { PASSWORD_MIN, RegisterSchema, type RegisterInput } from '@/lib/validations/user';
 
 export function RegisterForm() {

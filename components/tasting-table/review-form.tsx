@@ -4,13 +4,14 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
-import { useToast } from '@/components/ui/toast';
+import type { input } from 'zod';
 import { FormAlert } from '@/components/ui/form-alert';
 import { SubmitButton } from '@/components/ui/submit-button';
+import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
+import { useToast } from '@/components/ui/toast';
 import { RUBRIC_CRITERIA, reviewSchema, type ReviewInput } from '@/lib/validations/practical';
 
-type FormInput = import('zod').input<typeof reviewSchema>;
+type FormInput = input<typeof reviewSchema>;
 
 /** The rubric, criterion by criterion, and the decision on one round. */
 export function ReviewForm({ practicalId, round }: { practicalId: number; round: number }) {
