@@ -1,3 +1,5 @@
+import { membersLessonRoutes } from './lib/content/members-lesson-routes.mjs';
+
 // `next dev` runs with NODE_ENV=development; `next build` and `next start` with production.
 const isDev = process.env.NODE_ENV === 'development';
 
@@ -44,12 +46,21 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
   // Lessons share one address, /learn/<course>/<lesson>. The public preview lessons are the only
-  // params app/learn/[course]/[lesson] prerenders (dynamicParams = false); any other lesson falls
-  // through to this fallback rewrite and is rendered per request behind the enrollment check in
-  // app/learn/[course]/[lesson]/members (unknown lessons answer 404 there). A rewrite in the
-  // router costs far less than running a proxy (middleware) on every lesson request.
+  // params app/learn/[course]/[lesson] prerenders (dynamicParams = false, so unknown lessons answer
+  // 404 there). Every members-only lesson is rewritten, without changing the address, to
+  // app/learn/[course]/[lesson]/members, which checks the session and the enrollment and renders per
+  // request. The rewrite is an afterFiles one, listed lesson by lesson from the front matter: it is
+  // decided before the dynamic [lesson] route, so the router's own (RSC) requests reach the members
+  // page too. (A fallback rewrite reached it only for HTML: Next 16.4 first matched the prerendered
+  // route's 404 for the router's requests and failed them with a 500, "Expected RSC response".)
+  // A rewrite in the router costs far less than running a proxy (middleware) on every lesson request.
   async rewrites() {
-    return { fallback: [{ source: '/learn/:course/:lesson', destination: '/learn/:course/:lesson/members' }] };
+    return {
+      afterFiles: membersLessonRoutes().map(({ course, lessons }) => ({
+        source: `/learn/${course}/:lesson(${lessons.join('|')})`,
+        destination: `/learn/${course}/:lesson/members`,
+      })),
+    };
   },
   experimental: {
     authInterrupts: true,

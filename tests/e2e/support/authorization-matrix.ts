@@ -92,7 +92,7 @@ const pages: PageRow[] = [
     probe: (_fx, s) => ({ path: s === 'other' ? `/learn/${REFRESHER}/acid-and-ph-review/members` : `/learn/${FLAGSHIP}/processing/members` }),
     expect: [S, 200, 403, 200, 200, 200],
   },
-  // The same members-only lessons at their public address (proxy.ts rewrites them to …/members).
+  // The same members-only lessons at their public address (next.config.mjs rewrites them to …/members).
   {
     kind: 'page',
     pattern: '/learn/[course]/[lesson]',

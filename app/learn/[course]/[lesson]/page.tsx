@@ -2,8 +2,8 @@ import { LessonView, lessonMetadata, type LessonPageProps } from '@/components/l
 import { getCourses, getLessons } from '@/lib/content';
 
 // Public preview lessons: static pages generated at build time, served from the cache. Members-only
-// lessons are not among the params, so they fall through to the fallback rewrite in next.config.mjs
-// (to ./members, which checks the session and the enrollment) without changing the address.
+// lessons never reach this route: next.config.mjs rewrites each of them (to ./members, which checks
+// the session and the enrollment) without changing the address. Any other lesson answers 404 here.
 export const dynamicParams = false;
 
 export function generateStaticParams() {

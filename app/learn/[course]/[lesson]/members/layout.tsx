@@ -4,7 +4,7 @@ import { requirePageRole } from '@/lib/auth/guard';
 import { getLesson } from '@/lib/content';
 import { canReadMembersLesson } from '@/lib/content/access';
 
-// Members-only lessons (the fallback rewrite in next.config.mjs sends them here, keeping the address). The access check sits in
+// Members-only lessons (a rewrite in next.config.mjs sends them here, keeping the address). The access check sits in
 // this layout, above the page's loading boundary, so it runs before the response starts
 // streaming: a signed-out visitor gets a real redirect to the sign-in page, and a learner without
 // an enrollment a real 403 rendered by ../forbidden.tsx.
