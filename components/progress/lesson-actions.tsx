@@ -1,6 +1,7 @@
 'use client';
 
 import Link from 'next/link';
+import { useSession } from 'next-auth/react';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { Button, ButtonLink } from '@/components/ui/button';
@@ -13,17 +14,21 @@ type Progress = { courseSlug: string; read: Record<string, string>; passedQuizze
  * and the way to the lesson's quiz.
  */
 export function LessonActions({ courseSlug, lessonSlug, quizSlug }: { courseSlug: string; lessonSlug: string; quizSlug?: string | null }) {
-  const key = `/api/progress?course=${encodeURIComponent(courseSlug)}`;
-  const { data, error, isLoading, mutate } = useSWR<Progress, HttpError>(key, (url: string) => fetchJson<Progress>(url), {
+  // Progress is asked for once the session is known to be there: a visitor asks nothing (the answer
+  // could only be a 401, an error in every visitor's console on the public lessons).
+  const session = useSession();
+  const key = session.status === 'authenticated' ? `/api/progress?course=${encodeURIComponent(courseSlug)}` : null;
+  const { data, error, isLoading: progressLoading, mutate } = useSWR<Progress, HttpError>(key, (url: string) => fetchJson<Progress>(url), {
     shouldRetryOnError: false,
     revalidateOnFocus: false,
   });
   const [pending, setPending] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
 
+  const isLoading = session.status === 'loading' || progressLoading;
   const readAt = data?.read[lessonSlug];
   const quizPassed = quizSlug ? (data?.passedQuizzes ?? []).includes(quizSlug) : false;
-  const signedOut = error?.status === 401;
+  const signedOut = session.status === 'unauthenticated' || error?.status === 401;
   const notLearner = error?.status === 403;
 
   async function markRead() {

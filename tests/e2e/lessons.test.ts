@@ -156,4 +156,51 @@ describe('lessons in the browser', () => {
       await page.unroute(/\/pantry\?_rsc=/);
     }
   });
+
+  it('goes from the Pantry to a members-only lesson and on to the next one in the same document, through the router', async () => {
+    const { page } = browser;
+    await page.goto('/pantry');
+    await browser.network.quiet();
+    // The router's requests for the lessons, and a mark that only a full page load would wipe.
+    const routerAnswers: { url: string; status: number }[] = [];
+    const onResponse = (response: import('playwright-core').Response) => {
+      const url = new URL(response.url());
+      if (url.pathname.startsWith('/learn/') && url.searchParams.has('_rsc')) routerAnswers.push({ url: url.pathname, status: response.status() });
+    };
+    page.on('response', onResponse);
+    await page.evaluate(() => ((window as unknown as { sameDocument: boolean }).sameDocument = true));
+    try {
+      await page.locator(`a[href="${membersPath}"]`).first().click();
+      await page.waitForURL(`**${membersPath}`);
+      await page.getByRole('heading', { level: 1, name: membersOnly.title }).waitFor();
+      const next = lessons[membersOnly.order];
+      await page.getByRole('link', { name: /Next: lesson/ }).click();
+      await page.waitForURL(`**/learn/pickling-and-canning/${next.slug}`);
+      await page.getByRole('heading', { level: 1, name: next.title }).waitFor();
+      expect(await page.evaluate(() => (window as unknown as { sameDocument?: boolean }).sameDocument)).toBe(true);
+      await browser.network.quiet();
+      // Both lessons came as router answers (prefetches included), and none failed: before the
+      // rewrite was an afterFiles one, Next answered these with a 500 and the browser reloaded the page.
+      expect(routerAnswers.filter((a) => a.status !== 200)).toEqual([]);
+      expect(routerAnswers.map((a) => a.url)).toEqual(expect.arrayContaining([membersPath, `/learn/pickling-and-canning/${next.slug}`]));
+    } finally {
+      page.off('response', onResponse);
+    }
+  });
+
+  it('asks a visitor on a public lesson nothing about progress, and offers to sign in', async () => {
+    const { context } = browser;
+    await context.clearCookies();
+    const page = await context.newPage();
+    const failed: string[] = [];
+    page.on('response', (response) => {
+      if (response.status() >= 400) failed.push(`${response.status()} ${response.url()}`);
+    });
+    await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
+    const actions = page.getByTestId('lesson-actions');
+    await actions.getByText('to keep track of the lessons you read').waitFor();
+    expect(await actions.getByRole('link', { name: 'Sign in' }).getAttribute('href')).toBe(`/signin?callbackUrl=${encodeURIComponent(`/learn/pickling-and-canning/${preview.slug}`)}`);
+    expect(failed).toEqual([]);
+    await page.close();
+  });
 });
