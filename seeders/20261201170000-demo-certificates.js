@@ -37,6 +37,18 @@ const addMonths = (date, months) => {
   return d;
 };
 
+// The approved practical of both learners, every field as the practical form stores it
+// (lib/validations/practical.ts): seven pints of quick fresh-pack dill pickles at 5,200 ft, processed
+// 15 minutes, the time the USDA Complete Guide to Home Canning (2015), Guide 6, gives for pints at
+// 1,001-6,000 ft, so no flag. The brine is that recipe's solution (6 cups of 5 % vinegar to 8 cups of
+// water) in the amount seven pints take: 1,420 mL and 1,893 mL.
+const approvedBatch = (submittedAt) => ({
+  product: 'fresh-pack-dill-pickles', recipeTitle: 'Quick fresh-pack dill pickles', recipeSource: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6',
+  jar: 'pint', jars: 7, pack: 'raw', vinegarAcidityPct: 5, vinegarMl: 1420, waterMl: 1893, headspaceIn: 0.5, method: 'boiling-water', altitudeFt: 5200, minutes: 15,
+  batchDate: new Date(submittedAt.getTime() - 2 * DAY).toISOString().slice(0, 10), sealedJars: 7, unsealedJars: 0,
+  notes: 'Cucumbers picked the morning of the batch; blossom ends trimmed.',
+});
+
 /** @type {import('sequelize-cli').Migration} */
 module.exports = {
   async up(queryInterface) {
@@ -87,7 +99,7 @@ module.exports = {
     }
     for (const [enrollment, user, when] of [[inesEnrollment, ines, recent], [wrenEnrollment, wren, longAgo]]) {
       await queryInterface.bulkInsert('practicals', [
-        { enrollmentId: enrollment.id, userId: user.id, round: 1, status: 'approved', details: JSON.stringify({ product: 'fresh-pack-dill-pickles', jar: 'pint', jars: 7, altitudeFt: 5200, processingMinutes: 20 }), flags: '[]', submittedAt: when, createdAt: when, updatedAt: when },
+        { enrollmentId: enrollment.id, userId: user.id, round: 1, status: 'approved', details: JSON.stringify(approvedBatch(when)), flags: '[]', submittedAt: when, createdAt: when, updatedAt: when },
       ]);
     }
     const [[coordinator]] = await q("SELECT id FROM users WHERE email = 'coordinator@cedarhollow.example'");

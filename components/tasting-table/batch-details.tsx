@@ -6,27 +6,29 @@ import { PROCESSING_METHOD_LABELS, type PracticalDetails } from '@/lib/validatio
 // Details are stored JSON: rows written by older code or seeders may lack fields, so each value is optional.
 const n = (v: unknown, digits = 2) => (typeof v === 'number' && Number.isFinite(v) ? String(Number(v.toFixed(digits))) : '—');
 const t = (v: unknown) => (typeof v === 'string' && v ? v : '—');
+/** A value put together from parts: one dash when none of its parts was given, not one per part. */
+const joined = (parts: string[], text: string) => (parts.every((p) => p === '—') ? '—' : text);
 
 /** The learner's batch beside what the published tables give for it. */
 export function BatchDetails({ details, expected }: { details: Partial<PracticalDetails>; expected: Expectations }) {
   const processing = expected.processing;
   const rows: { label: string; value: string; expected?: string }[] = [
     { label: 'Product', value: (details.product && PRODUCTS[details.product]?.name) || t(details.product) },
-    { label: 'Tested recipe', value: `${t(details.recipeTitle)} — ${t(details.recipeSource)}` },
+    { label: 'Tested recipe', value: joined([t(details.recipeTitle), t(details.recipeSource)], `${t(details.recipeTitle)}, ${t(details.recipeSource)}`) },
     { label: 'Pack', value: details.pack ? `${details.pack} pack` : '—', expected: expected.pack ? `${expected.pack} pack` : undefined },
-    { label: 'Jars', value: `${n(details.jars, 0)} × ${t(details.jar)}` },
-    { label: 'Vinegar', value: `${n(details.vinegarMl, 0)} mL at ${n(details.vinegarAcidityPct)} % acidity`, expected: 'at least 5 % acidity' },
+    { label: 'Jars', value: joined([n(details.jars, 0), t(details.jar)], `${n(details.jars, 0)} × ${t(details.jar)}`) },
+    { label: 'Vinegar', value: joined([n(details.vinegarMl, 0), n(details.vinegarAcidityPct)], `${n(details.vinegarMl, 0)} mL at ${n(details.vinegarAcidityPct)} % acidity`), expected: 'at least 5 % acidity' },
     {
       label: 'Water',
-      value: `${n(details.waterMl, 0)} mL`,
+      value: joined([n(details.waterMl, 0)], `${n(details.waterMl, 0)} mL`),
       expected: expected.brine ? `brine ≈ ${n(expected.brine.aceticAcidPct)} % acetic acid, estimated pH ${n(expected.brine.estimatedPh)} (liquid alone)` : undefined,
     },
-    { label: 'Headspace measured', value: `${n(details.headspaceIn, 3)} in`, expected: expected.headspace ? `${n(expected.headspace.recommendedIn, 3)} in` : undefined },
+    { label: 'Headspace measured', value: joined([n(details.headspaceIn, 3)], `${n(details.headspaceIn, 3)} in`), expected: expected.headspace ? `${n(expected.headspace.recommendedIn, 3)} in` : undefined },
     { label: 'Method', value: (details.method && PROCESSING_METHOD_LABELS[details.method]) || t(details.method) },
     { label: 'Altitude', value: typeof details.altitudeFt === 'number' ? `${details.altitudeFt.toLocaleString('en-US')} ft` : '—' },
     {
       label: 'Minutes processed',
-      value: `${n(details.minutes, 0)} min`,
+      value: joined([n(details.minutes, 0)], `${n(details.minutes, 0)} min`),
       expected: !processing
         ? undefined
         : 'unavailable' in processing
@@ -36,7 +38,7 @@ export function BatchDetails({ details, expected }: { details: Partial<Practical
             : `${processing.minutes} min in boiling water for ${processing.altitudeBand.toFt === null ? `above ${processing.altitudeBand.fromFt.toLocaleString('en-US')}` : `${processing.altitudeBand.fromFt.toLocaleString('en-US')}–${processing.altitudeBand.toFt.toLocaleString('en-US')}`} ft`,
     },
     { label: 'Date put up', value: t(details.batchDate) },
-    { label: 'Seals', value: `${n(details.sealedJars, 0)} sealed, ${n(details.unsealedJars, 0)} not sealed`, expected: 'every jar sealed' },
+    { label: 'Seals', value: joined([n(details.sealedJars, 0), n(details.unsealedJars, 0)], `${n(details.sealedJars, 0)} sealed, ${n(details.unsealedJars, 0)} not sealed`), expected: 'every jar sealed' },
     { label: 'Notes', value: details.notes || '—' },
   ];
   return (
@@ -47,8 +49,8 @@ export function BatchDetails({ details, expected }: { details: Partial<Practical
       <THead>
         <tr>
           <TH className="w-1/4 whitespace-normal">Item</TH>
-          <TH>Learner entered</TH>
-          <TH>Published for this batch</TH>
+          <TH className="whitespace-normal">Learner entered</TH>
+          <TH className="whitespace-normal">Published for this batch</TH>
         </tr>
       </THead>
       <TBody>
