@@ -59,7 +59,7 @@ export function PantryShelves() {
             </div>
             <Badge tone={STATUS[shelf.status][1]}>{STATUS[shelf.status][0]}</Badge>
           </div>
-          <ul className="flex flex-wrap items-end gap-x-4 gap-y-6 border-b-8 border-copper-700/70 pb-1" aria-label={`Lessons of ${shelf.title}`}>
+          <ul className="flex flex-wrap items-start gap-x-4 gap-y-6 border-b-8 border-copper-700/70 pb-1" aria-label={`Lessons of ${shelf.title}`}>
             {shelf.jars.map((jar) => (
               <li key={jar.lessonSlug} className="flex w-24 flex-col items-center text-center" data-lesson={jar.lessonSlug} data-fill={jar.fill}>
                 <Link href={`/learn/${shelf.courseSlug}/${jar.lessonSlug}`} className="rounded-lg focus-visible:outline-2 focus-visible:outline-copper-500">

@@ -51,7 +51,7 @@ export function submissionsKey(f: Filters): string {
 function age(iso: string, now: number): string {
   const days = Math.floor((now - new Date(iso).getTime()) / 86_400_000);
   if (days <= 0) return 'today';
-  return days === 1 ? '1 day' : `${days} days`;
+  return days === 1 ? '1 day' : `${days.toLocaleString('en-US')} days`;
 }
 
 const productName = (id: string | null) => (id && id in PRODUCTS ? PRODUCTS[id as keyof typeof PRODUCTS].name : (id ?? '—'));
@@ -81,7 +81,7 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
             className="rounded-full focus-visible:outline-2 focus-visible:outline-copper-500"
           >
             <Badge tone={PRACTICAL_STATUS_TONE[s]} className={filters.status === s ? 'ring-2' : undefined}>
-              {PRACTICAL_STATUS_LABEL[s]}: <span data-testid={`count-${s}`}>{data ? data.counts[s] : '…'}</span>
+              {PRACTICAL_STATUS_LABEL[s]}:<span className="ms-1" data-testid={`count-${s}`}>{data ? data.counts[s] : '…'}</span>
             </Badge>
           </button>
         ))}
@@ -113,7 +113,7 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
             <TH>{sortHeader('Status', 'status')}</TH>
             <TH>{sortHeader('Flags', 'flags')}</TH>
             <TH>Workshop</TH>
-            <TH>{sortHeader('Waiting', 'oldest')}</TH>
+            <TH>{sortHeader('Age', 'oldest')}</TH>
           </tr>
         </THead>
         <TBody>
@@ -132,9 +132,9 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
                 <TD>{productName(row.product)}</TD>
                 <TD>{row.round}</TD>
                 <TD>
-                  <Badge tone={PRACTICAL_STATUS_TONE[row.status]}>{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
+                  <Badge tone={PRACTICAL_STATUS_TONE[row.status]} className="whitespace-nowrap">{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
                 </TD>
-                <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
+                <TD>{row.flagCount ? <Badge tone="honey" className="whitespace-nowrap">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
                 <TD>{row.workshopPlace ? `${new Date(row.workshopStartsAt!).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${row.workshopPlace.split(',')[0]}` : 'Self-paced'}</TD>
                 <TD>
                   <time dateTime={row.submittedAt}>{age(row.submittedAt, now)}</time>
