@@ -24,7 +24,10 @@ function umzugFor(sequelize: Sequelize, folder: 'migrations' | 'seeders', tableN
       },
     },
     context: sequelize.getQueryInterface(),
-    storage: new SequelizeStorage({ sequelize, tableName }),
+    // Each storage needs its own model name: umzug's default ("SequelizeMeta") is shared, so the
+    // second storage made on one Sequelize instance replaced the first one's model, and
+    // `npm run db:reset` reverted the migrations against the seeders' table (reverting nothing).
+    storage: new SequelizeStorage({ sequelize, tableName, modelName: tableName }),
     logger: undefined,
   });
 }
