@@ -56,7 +56,7 @@ export function BatchDetails({ details, expected }: { details: Partial<Practical
       <TBody>
         {rows.map((row) => (
           <TR key={row.label}>
-            <TH scope="row" className="font-semibold whitespace-normal">
+            <TH scope="row" className="align-top font-semibold whitespace-normal">
               {row.label}
             </TH>
             <TD className="whitespace-pre-wrap">{row.value}</TD>
