@@ -48,6 +48,10 @@ export async function LessonView({ courseSlug, lessonSlug }: { courseSlug: strin
             {lesson.preview ? <Badge tone="copper">Free preview</Badge> : null}
           </p>
         </header>
+        {/* On narrow screens the contents come after the title, not above it; the side column holds them on wide ones. */}
+        <div className="lg:hidden" data-no-print>
+          <TableOfContents entries={toc} className="rounded-jar border border-brine-100 bg-white p-4" />
+        </div>
         <Objectives objectives={lesson.objectives} />
         <div data-lesson-body>{content}</div>
         <SourcesList sources={lesson.sources} />
@@ -56,9 +60,9 @@ export async function LessonView({ courseSlug, lessonSlug }: { courseSlug: strin
         </div>
         <LessonPager courseSlug={course.slug} previous={previous} next={next} />
       </article>
-      <aside className="order-first lg:order-none">
+      <aside className="hidden lg:block">
         <div className="lg:sticky lg:top-6">
-          <TableOfContents entries={toc} className="rounded-jar border border-brine-100 bg-white p-4 lg:border-0 lg:bg-transparent lg:p-0" />
+          <TableOfContents entries={toc} />
         </div>
       </aside>
     </div>

@@ -11,8 +11,10 @@ export function TableOfContents({ entries, className }: { entries: TocEntry[]; c
     else groups.push({ entry, children: [] });
   }
   return (
-    <nav aria-labelledby="toc-heading" data-lesson-nav className={cn('text-sm', className)}>
-      <h2 id="toc-heading" className="mb-2 font-display text-sm font-bold tracking-wide text-brine-800 uppercase">
+    // Named by aria-label rather than by the heading's id: a lesson page renders it twice (after the
+    // title on narrow screens, in the side column on wide ones), and an id must be unique.
+    <nav aria-label="On this page" data-lesson-nav className={cn('text-sm', className)}>
+      <h2 className="mb-2 font-display text-sm font-bold tracking-wide text-brine-800 uppercase">
         On this page
       </h2>
       <ol className="space-y-1.5 border-l border-brine-100">

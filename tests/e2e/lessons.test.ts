@@ -76,6 +76,26 @@ describe('lessons in the browser', () => {
     expect(await seriousViolations(page)).toEqual([]);
   });
 
+  it('on a phone-sized screen puts the contents after the lesson title, with one navigation by that name', async () => {
+    const page = await browser.context.newPage();
+    try {
+      await page.setViewportSize({ width: 390, height: 844 });
+      await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
+      const title = page.getByRole('heading', { level: 1, name: preview.title });
+      const toc = page.getByRole('navigation', { name: 'On this page' });
+      expect(await toc.count()).toBe(1);
+      const [titleBox, tocBox] = [await title.boundingBox(), await toc.boundingBox()];
+      expect(tocBox!.y).toBeGreaterThan(titleBox!.y + titleBox!.height);
+      expect(await seriousViolations(page)).toEqual([]);
+      await page.setViewportSize({ width: 1280, height: 800 });
+      expect(await toc.count()).toBe(1);
+      // On a wide screen the side column holds them, level with the top of the lesson.
+      expect((await toc.boundingBox())!.y).toBeLessThan((await title.boundingBox())!.y + 200);
+    } finally {
+      await page.close();
+    }
+  });
+
   it('prints a lesson as a handout: no site header, no navigation, a note where the calculator was', async () => {
     const { page } = browser;
     await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
