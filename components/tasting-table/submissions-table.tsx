@@ -1,7 +1,8 @@
 'use client';
 
 import Link from 'next/link';
-import { useState } from 'react';
+import { useSearchParams } from 'next/navigation';
+import { useEffect, useState } from 'react';
 import useSWR from 'swr';
 import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from '@/components/practicals/practical-status';
 import { Badge } from '@/components/ui/badge';
@@ -10,7 +11,7 @@ import { Select } from '@/components/ui/select';
 import { EmptyRow, Table, TBody, TD, TH, THead, TR } from '@/components/ui/table';
 import type { TastingTablePage, WorkshopOption } from '@/lib/practicals/data';
 import { PRODUCTS } from '@/lib/preserving/products';
-import type { TastingSort } from '@/lib/validations/practical';
+import { tastingTableQuerySchema, type TastingSort } from '@/lib/validations/practical';
 import { jsonFetcher } from './fetcher';
 
 type Filters = { page: number; sort: TastingSort; status: string; workshop: string; flagged: string; olderThanDays: string };
@@ -40,6 +41,36 @@ const SORT_OPTIONS: { value: TastingSort; label: string }[] = [
   { value: 'status', label: 'Status' },
 ];
 
+const DEFAULT_FILTERS: Filters = { page: 1, sort: 'oldest', status: 'all', workshop: '', flagged: 'any', olderThanDays: '' };
+const offered = (options: { value: string }[], value: string, fallback: string) => (options.some((o) => o.value === value) ? value : fallback);
+
+/**
+ * The filters a page address asks for, read with the data route's own schema; a value the form
+ * does not offer (an unknown workshop, an age that is not a choice) falls back to the default.
+ */
+export function filtersFromSearch(params: URLSearchParams | null, workshops: WorkshopOption[]): Filters {
+  const parsed = tastingTableQuerySchema.safeParse(Object.fromEntries(params ?? []));
+  if (!parsed.success) return DEFAULT_FILTERS;
+  const q = parsed.data;
+  return {
+    page: q.page,
+    sort: q.sort,
+    status: q.status,
+    workshop: q.workshop && workshops.some((w) => w.id === q.workshop) ? String(q.workshop) : '',
+    flagged: q.flagged,
+    olderThanDays: offered(AGE_OPTIONS, q.olderThanDays === undefined ? '' : String(q.olderThanDays), ''),
+  };
+}
+
+/** The page's own query string for a set of filters: only what differs from the defaults. */
+export function searchFromFilters(f: Filters): string {
+  const q = new URLSearchParams();
+  for (const key of ['status', 'workshop', 'flagged', 'olderThanDays', 'sort', 'page'] as const) {
+    if (String(f[key]) !== String(DEFAULT_FILTERS[key])) q.set(key, String(f[key]));
+  }
+  return q.toString();
+}
+
 /** The data route's URL for a set of filters (exported for tests and prefetching). */
 export function submissionsKey(f: Filters): string {
   const q = new URLSearchParams({ page: String(f.page), sort: f.sort, status: f.status, flagged: f.flagged });
@@ -58,7 +89,15 @@ const productName = (id: string | null) => (id && id in PRODUCTS ? PRODUCTS[id a
 
 /** The queue of practical submissions: server-paginated, sortable and filterable, fetched with SWR. */
 export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] }) {
-  const [filters, setFilters] = useState<Filters>({ page: 1, sort: 'oldest', status: 'all', workshop: '', flagged: 'any', olderThanDays: '' });
+  // The filters live in the address too, so a reload, a shared link or the browser's back button
+  // from a submission brings the same view back.
+  const searchParams = useSearchParams();
+  const [filters, setFilters] = useState<Filters>(() => filtersFromSearch(searchParams, workshops));
+  useEffect(() => {
+    const search = searchFromFilters(filters);
+    const url = `${window.location.pathname}${search ? `?${search}` : ''}`;
+    if (url !== `${window.location.pathname}${window.location.search}`) window.history.replaceState(null, '', url);
+  }, [filters]);
   const { data, error, isLoading, isValidating, mutate } = useSWR<TastingTablePage>(submissionsKey(filters), jsonFetcher, { keepPreviousData: true });
   const set = (change: Partial<Filters>) => setFilters((f) => ({ ...f, page: 1, ...change }));
   const [now] = useState(() => Date.now());

@@ -89,6 +89,14 @@ describe('practical batch from the learner to the Tasting table', () => {
     expect(await page.getByTestId('submission-row').filter({ hasText: 'Lena Marsh' }).count()).toBe(1);
     expect(await seriousViolations(page)).toEqual([]);
 
+    // The filter is in the address, so the browser's back button from the submission keeps it.
+    await page.waitForURL(/\/tasting-table\?flagged=yes$/);
+    await row.getByRole('link', { name: 'Maren Osei' }).click();
+    await page.getByRole('heading', { name: 'Maren Osei, round 1' }).waitFor();
+    await page.goBack();
+    await page.waitForURL(/\/tasting-table\?flagged=yes$/);
+    await expect.poll(() => page.getByLabel('Flags').inputValue()).toBe('yes');
+    await row.waitFor();
     await row.getByRole('link', { name: 'Maren Osei' }).click();
     await page.getByRole('heading', { name: 'Maren Osei, round 1' }).waitFor();
     expect(await page.getByRole('region', { name: 'Automatic flags' }).getByText(/shorter than the published 15 min/).count()).toBe(1);
