@@ -2,7 +2,8 @@
 
 // Demo data only: two invented Cedar Hollow learners whose practical batches wait at the Tasting
 // table, each with two generated photos (plain colour fields, no real pictures) and the flags the
-// automatic checks give for their numbers (lib/practicals/checks.ts).
+// automatic checks give for their numbers (lib/practicals/checks.ts; tests/unit/demo-seed-flags.test.ts
+// checks that they still agree).
 const fs = require('node:fs');
 const path = require('node:path');
 const bcrypt = require('bcryptjs');
@@ -24,9 +25,14 @@ const LEARNERS = [
     },
     flags: [
       {
+        check: 'processing-time',
+        message: 'Processed 35 min, shorter than the published 40 min for a pint of Pickled beets at 3,001–6,000 ft. Time starts when the water returns to a full boil.',
+        expected: '40 min', actual: '35 min', source: `${GUIDE6}, "Pickled beets", recommended process time table (four altitude bands)`,
+      },
+      {
         check: 'headspace',
         message: 'Headspace 0.25 in is less than the recommended 0.5 in. Too little headspace: food and liquid can bubble out while the jar is processed, and food left on the rim can keep the lid from sealing.',
-        expected: '0.5 in', actual: '0.25 in', source: `${GUIDE6}, "Pickled beets", recommended process time table (from memory, not confirmed here)`,
+        expected: '0.5 in', actual: '0.25 in', source: `${GUIDE6}, "Pickled beets", recommended process time table (four altitude bands)`,
       },
     ],
   },
@@ -103,3 +109,6 @@ module.exports = {
     await queryInterface.bulkDelete('users', { id: ids });
   },
 };
+
+// For tests/unit/demo-seed-flags.test.ts (the migrator reads only up and down).
+module.exports.DEMO_BATCHES = LEARNERS;

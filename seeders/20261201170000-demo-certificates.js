@@ -128,3 +128,6 @@ module.exports = {
     await queryInterface.bulkDelete('users', { id: ids });
   },
 };
+
+// For tests/unit/demo-seed-flags.test.ts (the migrator reads only up and down).
+module.exports.approvedBatch = approvedBatch;
