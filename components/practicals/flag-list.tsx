@@ -17,11 +17,14 @@ export function FlagList({
   title = 'Automatic checks',
   live = false,
   level = 'h2',
+  notChecked = [],
   className,
 }: {
   flags: Flag[];
   title?: string;
   live?: boolean;
+  /** Labels of the fields the checks need that are still empty (the form as it is being filled in). */
+  notChecked?: readonly string[];
   level?: 'h2' | 'h3' | 'h4';
   className?: string;
 }) {
@@ -30,7 +33,9 @@ export function FlagList({
     <section aria-label={title} className={cn('rounded-jar border p-4', flags.length ? 'border-honey-500/60 bg-honey-50' : 'border-brine-100 bg-brine-50', className)}>
       <Heading className="text-base font-bold">{title}</Heading>
       <div aria-live={live ? 'polite' : undefined}>
-        {flags.length === 0 ? (
+        {flags.length === 0 && notChecked.length > 0 ? (
+          <p className="mt-1 text-sm text-ink-soft">No flags so far.</p>
+        ) : flags.length === 0 ? (
           <p className="mt-1 text-sm text-ink-soft">No flags: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested recipe.</p>
         ) : (
           <ul className="mt-2 space-y-2" data-testid="flags">
@@ -46,6 +51,11 @@ export function FlagList({
             ))}
           </ul>
         )}
+        {notChecked.length > 0 ? (
+          <p className="mt-2 text-sm text-ink-soft" data-testid="not-checked">
+            Not checked yet, until you enter them: {notChecked.join(', ')}.
+          </p>
+        ) : null}
       </div>
     </section>
   );

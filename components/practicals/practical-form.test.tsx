@@ -65,7 +65,10 @@ describe('PracticalForm', () => {
     const user = userEvent.setup();
     render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
     const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });
-    expect(within(live).getByText(/No flags/)).toBeInTheDocument();
+    // Nothing entered yet: no all-clear, and the box names what it has not checked.
+    expect(within(live).getByText('No flags so far.')).toBeInTheDocument();
+    expect(within(live).queryByText(/match the published tables/)).toBeNull();
+    expect(within(live).getByTestId('not-checked').textContent).toMatch(/^Not checked yet, until you enter them: Product, Pack, Jar size, Headspace measured, Vinegar used, Water used, Processing method, Altitude, Minutes processed, Jars not sealed\.$/);
     await user.selectOptions(screen.getByLabelText('Product'), 'fresh-pack-dill-pickles');
     await user.selectOptions(screen.getByLabelText('Jar size'), 'quart');
     await user.selectOptions(screen.getByLabelText('Processing method'), 'boiling-water');

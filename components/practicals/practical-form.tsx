@@ -26,6 +26,21 @@ const METHOD_OPTIONS = [{ value: '', label: 'Choose the method' }, ...PROCESSING
 
 type Result = { id: number; round: number; flags: Flag[] };
 
+/** The form fields lib/practicals/checks.ts reads, with their labels. */
+const CHECKED_FIELDS = [
+  ['product', 'Product'],
+  ['pack', 'Pack'],
+  ['jar', 'Jar size'],
+  ['headspaceIn', 'Headspace measured'],
+  ['vinegarAcidityPct', 'Vinegar acidity'],
+  ['vinegarMl', 'Vinegar used'],
+  ['waterMl', 'Water used'],
+  ['method', 'Processing method'],
+  ['altitudeFt', 'Altitude'],
+  ['minutes', 'Minutes processed'],
+  ['unsealedJars', 'Jars not sealed'],
+] as const;
+
 /** The learner's practical batch: details, photos, and the automatic checks shown as they type. */
 /**
  * The form for the next round, in its card. The page renders it in the same place whether or not
@@ -51,6 +66,12 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
   const values = useWatch({ control });
   // The same checks the server runs on submit, on whatever is entered so far.
   const flags = useMemo(() => checkPractical(values as Parameters<typeof checkPractical>[0]), [values]);
+  // The fields the checks read that are still empty: until they are entered, "no flags" means
+  // "nothing checked yet", and the box says which ones.
+  const notChecked = CHECKED_FIELDS.filter(([name]) => {
+    const v = (values as Record<string, unknown>)[name];
+    return v === undefined || v === null || v === '' || (typeof v === 'number' && Number.isNaN(v));
+  }).map(([, label]) => label);
 
   const onSubmit = async (form: FormValues) => {
     setServerError(null);
@@ -129,7 +150,7 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
           <FieldError id="practical-photos-error" message={errors.photoIds?.message} />
         </div>
 
-        <FlagList flags={flags} live title="Automatic checks (as you type)" />
+        <FlagList flags={flags} live notChecked={notChecked} title="Automatic checks (as you type)" />
 
         <FormAlert message={serverError} />
         <SubmitButton pending={isSubmitting}>
