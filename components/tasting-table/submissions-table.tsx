@@ -12,6 +12,7 @@ import { EmptyRow, Table, TBody, TD, TH, THead, TR } from '@/components/ui/table
 import type { TastingTablePage, WorkshopOption } from '@/lib/practicals/data';
 import { PRODUCTS } from '@/lib/preserving/products';
 import { tastingTableQuerySchema, type TastingSort } from '@/lib/validations/practical';
+import { rememberTableView } from './back-to-table';
 import { jsonFetcher } from './fetcher';
 
 type Filters = { page: number; sort: TastingSort; status: string; workshop: string; flagged: string; olderThanDays: string };
@@ -97,6 +98,7 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
     const search = searchFromFilters(filters);
     const url = `${window.location.pathname}${search ? `?${search}` : ''}`;
     if (url !== `${window.location.pathname}${window.location.search}`) window.history.replaceState(null, '', url);
+    rememberTableView(search);
   }, [filters]);
   const { data, error, isLoading, isValidating, mutate } = useSWR<TastingTablePage>(submissionsKey(filters), jsonFetcher, { keepPreviousData: true });
   const set = (change: Partial<Filters>) => setFilters((f) => ({ ...f, page: 1, ...change }));

@@ -99,6 +99,8 @@ describe('practical batch from the learner to the Tasting table', () => {
     await row.waitFor();
     await row.getByRole('link', { name: 'Maren Osei' }).click();
     await page.getByRole('heading', { name: 'Maren Osei, round 1' }).waitFor();
+    // And the page's own link back returns to the same view.
+    await expect.poll(() => page.getByRole('link', { name: '← All submissions' }).getAttribute('href')).toBe('/tasting-table?flagged=yes');
     expect(await page.getByRole('region', { name: 'Automatic flags' }).getByText(/shorter than the published 15 min/).count()).toBe(1);
     // The photo comes through the checked route and is shown.
     await expect.poll(() => page.locator('[data-testid="photo-viewer"] img').first().evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(900);

@@ -4,6 +4,7 @@ import { notFound } from 'next/navigation';
 import { FlagList } from '@/components/practicals/flag-list';
 import { ReviewSummary } from '@/components/practicals/practical-history';
 import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from '@/components/practicals/practical-status';
+import { BackToTable } from '@/components/tasting-table/back-to-table';
 import { BatchDetails } from '@/components/tasting-table/batch-details';
 import { PhotoViewer } from '@/components/tasting-table/photo-viewer';
 import { ReviewForm } from '@/components/tasting-table/review-form';
@@ -29,7 +30,7 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
   return (
     <div className="space-y-6">
       <p className="text-sm">
-        <Link href="/tasting-table">← All submissions</Link>
+        <BackToTable />
       </p>
       <header className="space-y-1">
         <h1 className="text-3xl font-bold">
