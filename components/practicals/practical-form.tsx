@@ -9,7 +9,7 @@ import { Select } from '@/components/ui/select';
 import { FormAlert } from '@/components/ui/form-alert';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
-import { checkPractical, type Flag } from '@/lib/practicals/checks';
+import { CHECK_INPUTS, checkPractical, type CheckInput, type Flag } from '@/lib/practicals/checks';
 import { JAR_SIZES, PRODUCT_OPTIONS } from '@/lib/preserving/products';
 import { PROCESSING_METHOD_LABELS, PROCESSING_METHODS, practicalFormSchema, type PracticalForm as FormValues, type PracticalFormInput } from '@/lib/validations/practical';
 import { FlagList } from './flag-list';
@@ -26,20 +26,20 @@ const METHOD_OPTIONS = [{ value: '', label: 'Choose the method' }, ...PROCESSING
 
 type Result = { id: number; round: number; flags: Flag[] };
 
-/** The form fields lib/practicals/checks.ts reads, with their labels. */
-const CHECKED_FIELDS = [
-  ['product', 'Product'],
-  ['pack', 'Pack'],
-  ['jar', 'Jar size'],
-  ['headspaceIn', 'Headspace measured'],
-  ['vinegarAcidityPct', 'Vinegar acidity'],
-  ['vinegarMl', 'Vinegar used'],
-  ['waterMl', 'Water used'],
-  ['method', 'Processing method'],
-  ['altitudeFt', 'Altitude'],
-  ['minutes', 'Minutes processed'],
-  ['unsealedJars', 'Jars not sealed'],
-] as const;
+/** The form's label of each field the automatic checks read. */
+const CHECK_INPUT_LABELS: Record<CheckInput, string> = {
+  product: 'Product',
+  pack: 'Pack',
+  jar: 'Jar size',
+  headspaceIn: 'Headspace measured',
+  vinegarAcidityPct: 'Vinegar acidity',
+  vinegarMl: 'Vinegar used',
+  waterMl: 'Water used',
+  method: 'Processing method',
+  altitudeFt: 'Altitude',
+  minutes: 'Minutes processed',
+  unsealedJars: 'Jars not sealed',
+};
 
 /** The learner's practical batch: details, photos, and the automatic checks shown as they type. */
 /**
@@ -68,10 +68,10 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
   const flags = useMemo(() => checkPractical(values as Parameters<typeof checkPractical>[0]), [values]);
   // The fields the checks read that are still empty: until they are entered, "no flags" means
   // "nothing checked yet", and the box says which ones.
-  const notChecked = CHECKED_FIELDS.filter(([name]) => {
+  const notChecked = CHECK_INPUTS.filter((name) => {
     const v = (values as Record<string, unknown>)[name];
     return v === undefined || v === null || v === '' || (typeof v === 'number' && Number.isNaN(v));
-  }).map(([, label]) => label);
+  }).map((name) => CHECK_INPUT_LABELS[name]);
 
   const onSubmit = async (form: FormValues) => {
     setServerError(null);

@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { useSyncExternalStore } from 'react';
+import { useHydrated } from '@/components/ui/use-hydrated';
 
 /** Where the Tasting table keeps the query string of the view last shown in this tab. */
 export const LAST_VIEW_KEY = 'brinewright:tasting-table-view';
@@ -24,10 +24,7 @@ function lastView(): string {
 
 /** "All submissions": back to the Tasting table with the filters it last showed in this tab. */
 export function BackToTable() {
-  const search = useSyncExternalStore(
-    () => () => undefined,
-    lastView,
-    () => '',
-  );
+  // The server's HTML (and hydration) link to the unfiltered table; the tab's last view after that.
+  const search = useHydrated() ? lastView() : '';
   return <Link href={`/tasting-table${search ? `?${search}` : ''}`}>← All submissions</Link>;
 }

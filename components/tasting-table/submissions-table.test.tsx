@@ -12,6 +12,13 @@ const workshops = [
   { id: 4, label: 'Dec 1, 2026 · Cedar Hollow Grange Hall' },
   { id: 9, label: 'Nov 11, 2026 · Cedar Hollow Grange Hall' },
 ];
+/** The table with an SWR cache of its own, so no test sees another's answers. */
+const renderTable = () =>
+  render(
+    <SWRConfig value={{ provider: () => new Map(), dedupingInterval: 0 }}>
+      <SubmissionsTable workshops={workshops} />
+    </SWRConfig>,
+  );
 const emptyPage = { rows: [], page: 1, pageSize: 20, total: 0, pageCount: 1, counts: { submitted: 0, changes_requested: 0, approved: 0 } };
 
 describe('the Tasting table filters in the address', () => {
@@ -42,11 +49,7 @@ describe('the Tasting table filters in the address', () => {
   it('opens on the view the address names and writes each change back into it', async () => {
     search.params = new URLSearchParams('status=approved&page=2');
     window.history.replaceState(null, '', '/tasting-table?status=approved&page=2');
-    render(
-      <SWRConfig value={{ provider: () => new Map(), dedupingInterval: 0 }}>
-        <SubmissionsTable workshops={workshops} />
-      </SWRConfig>,
-    );
+    renderTable();
     expect(screen.getByLabelText('Status')).toHaveValue('approved');
     await waitFor(() => expect(requested.some((u) => u.includes('status=approved') && u.includes('page=2'))).toBe(true));
 
@@ -56,5 +59,25 @@ describe('the Tasting table filters in the address', () => {
     await waitFor(() => expect(requested.at(-1)).toContain('flagged=yes'));
     await userEvent.selectOptions(screen.getByLabelText('Status'), 'all');
     await waitFor(() => expect(window.location.search).toBe('?flagged=yes'));
+  });
+
+  it('says so when the address asks for a page past the last one, and goes back to page 1', async () => {
+    // The data route answers an empty page 99 of a list that has 4 submissions on 1 page.
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string) => {
+        requested.push(url);
+        const page = Number(new URL(url, 'http://x').searchParams.get('page'));
+        return new Response(JSON.stringify({ ...emptyPage, page, total: 4, counts: { submitted: 4, changes_requested: 0, approved: 0 } }), { status: 200, headers: { 'content-type': 'application/json' } });
+      }),
+    );
+    search.params = new URLSearchParams('page=99');
+    window.history.replaceState(null, '', '/tasting-table?page=99');
+    renderTable();
+    expect(await screen.findByText(/Page 99 is past the last page \(1\)\./)).toBeInTheDocument();
+    expect(screen.queryByText('No submissions match these filters.')).toBeNull();
+    await userEvent.click(screen.getByRole('button', { name: 'Go to page 1' }));
+    await waitFor(() => expect(window.location.search).toBe(''));
+    await waitFor(() => expect(requested.at(-1)).toContain('page=1'));
   });
 });

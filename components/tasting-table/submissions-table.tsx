@@ -160,6 +160,14 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
         <TBody>
           {!data && isLoading ? (
             <EmptyRow colSpan={7}>Loading submissions…</EmptyRow>
+          ) : data && data.rows.length === 0 && data.total > 0 ? (
+            // An address (or a list that shrank) asking for a page past the last one.
+            <EmptyRow colSpan={7}>
+              Page {filters.page} is past the last page ({data.pageCount}).{' '}
+              <button type="button" className="font-semibold underline" onClick={() => setFilters((f) => ({ ...f, page: 1 }))}>
+                Go to page 1
+              </button>
+            </EmptyRow>
           ) : data && data.rows.length === 0 ? (
             <EmptyRow colSpan={7}>No submissions match these filters.</EmptyRow>
           ) : (
@@ -173,9 +181,9 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
                 <TD>{productName(row.product)}</TD>
                 <TD>{row.round}</TD>
                 <TD>
-                  <Badge tone={PRACTICAL_STATUS_TONE[row.status]} className="whitespace-nowrap">{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
+                  <Badge tone={PRACTICAL_STATUS_TONE[row.status]}>{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
                 </TD>
-                <TD>{row.flagCount ? <Badge tone="honey" className="whitespace-nowrap">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
+                <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
                 <TD>{row.workshopPlace ? `${new Date(row.workshopStartsAt!).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${row.workshopPlace.split(',')[0]}` : 'Self-paced'}</TD>
                 <TD>
                   <time dateTime={row.submittedAt}>{age(row.submittedAt, now)}</time>

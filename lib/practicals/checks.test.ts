@@ -1,6 +1,8 @@
+import fs from 'node:fs';
+import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { PracticalDetails } from '@/lib/validations/practical';
-import { checkPractical, computeExpectations, MIN_BRINE_ACETIC_ACID_PCT } from './checks';
+import { CHECK_INPUTS, checkPractical, computeExpectations, MIN_BRINE_ACETIC_ACID_PCT } from './checks';
 
 // A batch that follows the USDA quick fresh-pack dill recipe at sea level: the values below are
 // from USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6, "Quick fresh-pack dill
@@ -28,6 +30,15 @@ const good: PracticalDetails = {
 };
 
 const checks = (overrides: Partial<PracticalDetails>) => checkPractical({ ...good, ...overrides }).map((f) => f.check);
+
+describe('CHECK_INPUTS', () => {
+  it('names exactly the fields checkPractical reads (the practical form lists the empty ones)', () => {
+    const source = fs.readFileSync(path.join(__dirname, 'checks.ts'), 'utf8');
+    const body = source.slice(source.indexOf('export function checkPractical('));
+    const read = new Set([...body.matchAll(/\binput\.(\w+)/g)].map((m) => m[1]));
+    expect([...read].sort()).toEqual([...CHECK_INPUTS].sort());
+  });
+});
 
 describe('checkPractical', () => {
   it('raises no flag for a batch that follows the published recipe and table', () => {

@@ -88,6 +88,10 @@ export function computeExpectations(input: Input): Expectations {
   return out;
 }
 
+/** The batch fields checkPractical reads (a check whose fields are empty is skipped, not passed). */
+export const CHECK_INPUTS = ['product', 'pack', 'jar', 'headspaceIn', 'vinegarAcidityPct', 'vinegarMl', 'waterMl', 'method', 'altitudeFt', 'minutes', 'unsealedJars'] as const satisfies readonly (keyof PracticalDetails)[];
+export type CheckInput = (typeof CHECK_INPUTS)[number];
+
 /** Every failed check for the batch; checks whose inputs are missing are skipped, so the form can call it as the learner types. */
 export function checkPractical(input: Input): Flag[] {
   const flags: Flag[] = [];

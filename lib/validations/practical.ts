@@ -17,8 +17,8 @@ export const MAX_PHOTOS = 6;
 const number = (label: string, min: number, max: number, unit = '') =>
   z
     .number({ error: `Enter the ${label} as a number.` })
-    .min(min, `The ${label} must be at least ${min}${unit}.`)
-    .max(max, `The ${label} must be at most ${max}${unit}.`);
+    .min(min, `The ${label} must be at least ${min.toLocaleString('en-US')}${unit}.`)
+    .max(max, `The ${label} must be at most ${max.toLocaleString('en-US')}${unit}.`);
 const whole = (label: string, min: number, max: number, unit = '') => number(label, min, max, unit).int(`Enter the ${label} as a whole number.`);
 
 
