@@ -51,6 +51,11 @@ export function BatchPlanner({ defaultProduct, headingLevel }: { defaultProduct?
                 );
               })}
             </ul>
+            {r.sterilizeJars ? (
+              <p className="text-sm font-medium text-beet-700" data-testid="batch-sterilize">
+                {r.sterilizeJars.message} <span className="block text-xs font-normal text-ink-soft">Source: {r.sterilizeJars.source}</span>
+              </p>
+            ) : null}
             <p className="text-xs text-ink-soft">Scaled from: {r.source}</p>
           </div>
         ) : (
