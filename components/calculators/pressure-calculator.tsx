@@ -27,7 +27,7 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       intro="Low-acid foods need a pressure canner. The pressure rises with altitude; the tested recipe's minutes stay the same."
       headingLevel={headingLevel}
       lesson={LESSONS.processing}
-      caution="Have a dial gauge tested for accuracy every year, vent the canner 10 minutes before pressurizing, and let it depressurize on its own (USDA Complete Guide to Home Canning, Guide 1, from memory)."
+      caution="Have a dial gauge tested for accuracy every year, vent the canner 10 minutes before pressurizing, and let it depressurize on its own (USDA Complete Guide to Home Canning, Guide 1, 'Using pressure canners'; Pacific Northwest Extension PNW 421)."
       result={
         r ? (
           <div className="space-y-1">

@@ -24,7 +24,7 @@ export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { def
       intro="Minutes in a boiling-water canner from the product's published table. Water boils cooler as you go up, so the time rises."
       headingLevel={headingLevel}
       lesson={LESSONS.processing}
-      caution={`Start timing when the water over the jars returns to a full rolling boil, with at least 1 inch of water above the lids. ${ARITHMETIC_ONLY}`}
+      caution={`Start timing when the water over the jars returns to a full rolling boil, with at least 1 inch of water above the lids (USDA Complete Guide to Home Canning, Guide 1). ${ARITHMETIC_ONLY}`}
       result={
         r ? (
           <div className="space-y-1">
@@ -40,7 +40,7 @@ export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { def
             {r.lowTemperaturePasteurization ? (
               <p className="text-sm">
                 The guide also allows low-temperature pasteurization for this product: {r.lowTemperaturePasteurization.waterTempF[0]} to {r.lowTemperaturePasteurization.waterTempF[1]} °F (82 to 85 °C) water for{' '}
-                {r.lowTemperaturePasteurization.minutes} minutes, checked with a thermometer the whole time.
+                {r.lowTemperaturePasteurization.minutes} minutes, checked with a thermometer the whole time (USDA Complete Guide to Home Canning, Guide 6).
               </p>
             ) : null}
             <p className="text-xs text-ink-soft">Source: {r.source}</p>
