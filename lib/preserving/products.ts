@@ -146,8 +146,9 @@ export const PRODUCTS: Record<ProductId, Product> = {
     times: { pint: [5, 10, 15] },
     source: `${GUIDE6}, "Pickled dilly beans", recommended process time table`,
     confidence: 'secondary',
-    // Equal parts vinegar and water in both published versions (Guide 6: 4 cups each; So Easy to
-    // Preserve, 6th ed., as reproduced by University of Minnesota Extension: 2 1/2 cups each).
+    // Equal parts vinegar and water: So Easy to Preserve, 6th ed., as reproduced by University of
+    // Minnesota Extension (2 1/2 cups each, read there); Guide 6's own version has 4 cups each (from
+    // memory, also on secondary pages). The batch planner scales the same recipe.
     testedLiquid: liquid({ vinegarCups: 2.5, waterCups: 2.5, saltCups: 0.25, source: 'So Easy to Preserve, 6th ed. (University of Georgia Extension, 2014), "Pickled dilly beans": 2 1/2 cups white vinegar (5 %), 2 1/2 cups water, as reproduced by University of Minnesota Extension', confidence: 'secondary' }),
   },
   'pickled-beets': {
