@@ -5,7 +5,13 @@ import { loadStandings } from '@/lib/certificates/facts';
 import { requirementsForCourse } from '@/lib/certificates/requirements';
 import { getChanges, getLessons } from '@/lib/content';
 import { publishedBy } from '@/lib/content/changes';
+import { getBank } from '@/lib/quiz/bank';
+import { questionPool } from '@/lib/quiz/attempts';
 import { db } from '@/models';
+import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
+import { params } from '../helpers/request';
+import { actAs } from '../helpers/session';
+import { drawnOf, enroll } from './quiz-support';
 import { createCourses, createUser, resetDatabase } from '../helpers/db';
 import { eligibleEnrollment } from './certificate-fixtures';
 
@@ -54,6 +60,28 @@ describe('requirements in force when the enrollment began', () => {
     expect(newerStanding.eligibility.eligible).toBe(false);
     expect(newerStanding.eligibility.missing).toEqual(['lessons', 'quizzes']);
     expect(newerStanding.eligibility.checks.find((c) => c.key === 'lessons')!.missing).toEqual([NEW_LESSON]);
+  });
+});
+
+describe('the final exam of an enrollment begun before the fermenting lesson', () => {
+  it('draws no question of that lesson\'s quiz; a new enrollment\'s exam may', async () => {
+    const exam = getBank(`${FLAGSHIP}--final-exam`)!;
+    const lessonQuiz = getBank(`${FLAGSHIP}--${NEW_LESSON}`)!;
+    const newIds = new Set(lessonQuiz.questions.map((q) => q.id));
+    expect(questionPool(exam, 2)).toHaveLength(exam.questions.length);
+    expect(questionPool(exam, 1)).toHaveLength(exam.questions.length - lessonQuiz.questions.length);
+    expect(questionPool(exam, 1).some((q) => newIds.has(q.id))).toBe(false);
+    // The lesson's own quiz stays open to anyone enrolled, whatever the version.
+    expect(questionPool(lessonQuiz, 1)).toHaveLength(lessonQuiz.questions.length);
+
+    const older = await createUser('learner');
+    await enroll(older.id, courses.flagship.id);
+    actAs(older);
+    const response = await start(new Request('http://localhost/x', { method: 'POST' }), params({ quiz: exam.slug }));
+    expect(response.status).toBe(201);
+    const { drawn } = await drawnOf((await response.json()).attempt.id);
+    expect(drawn.questions).toHaveLength(exam.draw);
+    expect(drawn.questions.filter((d) => newIds.has(d.id))).toEqual([]);
   });
 });
 
