@@ -80,6 +80,7 @@ const pages: PageRow[] = [
   { kind: 'page', pattern: '/confirm-email', probe: at('/confirm-email?token=not-a-token'), expect: PUBLIC },
   { kind: 'page', pattern: '/courses', probe: at('/courses'), expect: PUBLIC },
   { kind: 'page', pattern: '/courses/[course]', probe: at(`/courses/${FLAGSHIP}`), expect: PUBLIC },
+  { kind: 'page', pattern: '/courses/[course]/changes', probe: at(`/courses/${FLAGSHIP}/changes`), expect: PUBLIC },
   { kind: 'page', pattern: '/desk', probe: at('/desk'), expect: COORDINATOR_PAGE },
   { kind: 'page', pattern: '/desk/payments', probe: at('/desk/payments'), expect: COORDINATOR_PAGE },
   { kind: 'page', pattern: '/desk/reports', probe: at('/desk/reports'), expect: COORDINATOR_PAGE },
