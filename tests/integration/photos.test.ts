@@ -183,7 +183,7 @@ describe('POST /api/photos', () => {
 });
 
 describe('GET /api/photos/[id]', () => {
-  it('serves a photo to its owner, instructors and coordinators, and 403 to another learner', async () => {
+  it('serves a photo to its owner, to staff once it is part of a submission, and 403 to another learner', async () => {
     const { learner } = await enrolledLearner(setting.flagship.id);
     const { learner: other } = await enrolledLearner(setting.flagship.id);
     actAs(learner);
@@ -201,12 +201,20 @@ describe('GET /api/photos/[id]', () => {
     // Never enlarged: a 300 px photo keeps a 300 px thumbnail.
     expect(await sharp(thumb).metadata()).toMatchObject({ width: 300, height: 200 });
 
-    actAs(setting.instructor);
-    expect((await get()).status).toBe(200);
-    actAs(await createUser('coordinator'));
-    expect((await get()).status).toBe(200);
-    actAs(await createUser('admin'));
-    expect((await get()).status).toBe(200);
+    // A loose upload (not yet in a submission) is the learner's own draft: staff are refused.
+    const staff = [setting.instructor, await createUser('coordinator'), await createUser('admin')];
+    for (const person of staff) {
+      actAs(person);
+      const loose = await get();
+      expect(loose.status, person.role).toBe(403);
+      expect((await loose.json()).message).toMatch(/not part of a submission/);
+    }
+    // Once it belongs to a submission, every instructor and coordinator may see it.
+    await submitPractical(learner, 'pickling-and-canning', GOOD_BATCH([Number(id)]));
+    for (const person of staff) {
+      actAs(person);
+      expect((await get()).status, person.role).toBe(200);
+    }
 
     actAs(other);
     const refused = await get();

@@ -166,7 +166,7 @@ describe('the review flow', () => {
   });
 
   it('leaves no review, e-mail or status change behind when the e-mail cannot be written', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(setting.flagship.id, 'active', setting.workshop.id);
     const { practical } = await (await post({ photoIds: await upload(learner) })).json();
     actAs(setting.instructor);
     // Shrinking the outbox's address column makes the e-mail insert fail inside the review's transaction.

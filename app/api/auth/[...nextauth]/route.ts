@@ -1,6 +1,8 @@
 import NextAuth from 'next-auth';
 import type { NextRequest } from 'next/server';
 import { checkNextAuthRequest, withClearError } from '@/lib/auth/nextauth-request';
+import { asTooManyAttempts } from '@/lib/auth/sign-in-answer';
+import { signInRefusal } from '@/lib/auth/sign-in-throttle';
 import { authOptions } from '@/lib/auth/options';
 import { errorResponse } from '@/lib/errors';
 
@@ -12,7 +14,10 @@ async function handler(request: NextRequest, context: Context) {
   try {
     const params = await context.params;
     await checkNextAuthRequest(request, params);
-    return await withClearError(await NextAuth(authOptions())(request, { params }));
+    // A sign-in refused by the throttle answers 429 with Retry-After (authorize() leaves the seconds here).
+    const refusals: number[] = [];
+    const response = await signInRefusal.run(refusals, () => NextAuth(authOptions())(request, { params }));
+    return await asTooManyAttempts(await withClearError(response), refusals);
   } catch (error) {
     return errorResponse(error);
   }
