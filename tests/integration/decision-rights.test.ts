@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { GET as getPhoto } from '@/app/api/photos/[id]/route';
 import { POST as uploadPhoto } from '@/app/api/photos/route';
 import { DELETE as release, POST as claim } from '@/app/api/practicals/[id]/claim/route';
@@ -8,23 +8,12 @@ import { REFUSAL } from '@/lib/practicals/decision-rights';
 import { acceptPhoto, decisionRightFor, submitPractical } from '@/lib/practicals/service';
 import { RUBRIC_CRITERIA } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createUser, resetDatabase } from '../helpers/db';
+import { createUser } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
 import { actAs } from '../helpers/session';
-import { catalog, enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, useTemporaryStorage, type SessionUser } from './practical-fixtures';
+import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting, type SessionUser } from './practical-fixtures';
 
-let storage: ReturnType<typeof useTemporaryStorage>;
-let setting: Awaited<ReturnType<typeof catalog>>;
-
-beforeAll(() => {
-  storage = useTemporaryStorage();
-});
-afterAll(() => storage.cleanup());
-beforeEach(async () => {
-  await resetDatabase();
-  actAs(null);
-  setting = await catalog();
-});
+const fixture = practicalSetting();
 
 const rubric = Object.fromEntries(RUBRIC_CRITERIA.map((c) => [c.id, { verdict: 'met', comment: '' }]));
 const approve = (viewer: SessionUser, id: number) => {
@@ -41,10 +30,10 @@ const releaseAs = (viewer: SessionUser, id: number) => {
 };
 
 /** A learner in the setting's workshop (or self-paced) with one waiting round; returns its id and photo ids. */
-async function waitingRound(workshopId: number | null = setting.workshop.id, learner?: SessionUser) {
+async function waitingRound(workshopId: number | null = fixture.current.workshop.id, learner?: SessionUser) {
   const enrolled = learner
-    ? { learner, enrollment: await db().Enrollment.create({ userId: learner.id, courseId: setting.flagship.id, workshopId, runKey: workshopId ? String(workshopId) : 'self-paced', status: 'active', feeCents: 4500 }) }
-    : await enrolledLearner(setting.flagship.id, 'active', workshopId);
+    ? { learner, enrollment: await db().Enrollment.create({ userId: learner.id, courseId: fixture.current.flagship.id, workshopId, runKey: workshopId ? String(workshopId) : 'self-paced', status: 'active', feeCents: 4500 }) }
+    : await enrolledLearner(fixture.current.flagship.id, 'active', workshopId);
   // Through the service, not the learner-only routes: the account may hold a staff role as well.
   const photoIds = [];
   for (let i = 0; i < 2; i++) photoIds.push((await acceptPhoto(enrolled.learner, 'pickling-and-canning', await makeJpeg(240 + i, 180))).id);
@@ -100,20 +89,20 @@ describe('who may decide on a practical', () => {
 
   it('the workshop instructor and a coordinator decide without claiming; a self-paced round needs a claim from any instructor', async () => {
     const own = await waitingRound();
-    expect((await approve(setting.instructor, own.practicalId)).status).toBe(201);
+    expect((await approve(fixture.current.instructor, own.practicalId)).status).toBe(201);
     const other = await waitingRound();
     expect((await approve(await createUser('coordinator'), other.practicalId)).status).toBe(201);
     const selfPaced = await waitingRound(null);
-    expect((await approve(setting.instructor, selfPaced.practicalId)).status).toBe(403);
-    expect((await claimAs(setting.instructor, selfPaced.practicalId)).status).toBe(201);
-    expect((await approve(setting.instructor, selfPaced.practicalId)).status).toBe(201);
+    expect((await approve(fixture.current.instructor, selfPaced.practicalId)).status).toBe(403);
+    expect((await claimAs(fixture.current.instructor, selfPaced.practicalId)).status).toBe(201);
+    expect((await approve(fixture.current.instructor, selfPaced.practicalId)).status).toBe(201);
   });
 
   it('nobody decides on or claims their own practical, whatever their role', async () => {
     // An account that teaches and also takes the course: its own round waits for someone else.
     const teacher = await createUser('coordinator');
-    await db().Workshop.update({ instructorId: teacher.id }, { where: { id: setting.workshop.id } });
-    const { practicalId } = await waitingRound(setting.workshop.id, teacher);
+    await db().Workshop.update({ instructorId: teacher.id }, { where: { id: fixture.current.workshop.id } });
+    const { practicalId } = await waitingRound(fixture.current.workshop.id, teacher);
     const refused = await approve(teacher, practicalId);
     expect(refused.status).toBe(403);
     expect((await refused.json()).message).toBe(REFUSAL.own);
@@ -129,7 +118,7 @@ describe('who may decide on a practical', () => {
     expect(missing.status).toBe(404);
     expect((await missing.json()).message).toMatch(/no such submission/);
     const { practicalId } = await waitingRound();
-    expect((await approve(setting.instructor, practicalId)).status).toBe(201);
+    expect((await approve(fixture.current.instructor, practicalId)).status).toBe(201);
     const decided = await claimAs(instructor, practicalId);
     expect(decided.status).toBe(409);
     expect((await decided.json()).message).toMatch(/already been reviewed/);
@@ -140,7 +129,7 @@ describe('who may decide on a practical', () => {
 
 describe('loose photos', () => {
   it('are readable only by their owner until they are part of a submission', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id, 'active', setting.workshop.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id, 'active', fixture.current.workshop.id);
     actAs(learner);
     const loose = (await (await uploadPhoto(photoRequest(await makeJpeg(200, 150), 'draft.jpg', 'image/jpeg'), {})).json()).photo.id as number;
     const read = (viewer: SessionUser, id: number) => {
@@ -148,7 +137,7 @@ describe('loose photos', () => {
       return getPhoto(new Request(`http://localhost:3000/api/photos/${id}`), params({ id: String(id) }));
     };
     expect((await read(learner, loose)).status).toBe(200);
-    for (const viewer of [setting.instructor, await createUser('coordinator'), await createUser('admin')]) {
+    for (const viewer of [fixture.current.instructor, await createUser('coordinator'), await createUser('admin')]) {
       const answer = await read(viewer, loose);
       expect(answer.status, viewer.role).toBe(403);
       expect(answer.headers.get('content-type')).toMatch(/json/);
