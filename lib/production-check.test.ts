@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { parseEnv } from './env';
 import { DEMO_SECRETS, demoSettings, isLoopback, refuseDemoSettings } from './production-check';
@@ -24,7 +25,7 @@ describe('demoSettings', () => {
   it('names each secret equal to a value kept in the repository', () => {
     for (const [name, values] of Object.entries(DEMO_SECRETS)) {
       for (const value of values!) {
-        const extra = name === 'S3_SECRET_ACCESS_KEY' ? { STORAGE_DRIVER: 's3', S3_BUCKET: 'photos', S3_ACCESS_KEY_ID: 'AKIAPROGRAM' } : {};
+        const extra = name.startsWith('S3_') ? { STORAGE_DRIVER: 's3', S3_BUCKET: 'photos', S3_ACCESS_KEY_ID: 'AKIAPROGRAM', S3_SECRET_ACCESS_KEY: 'program-s3-secret' } : {};
         const problems = demoSettings(parseEnv({ ...real, ...extra, [name]: value }));
         expect(problems, `${name}=${value}`).toHaveLength(1);
         expect(problems[0]).toMatch(new RegExp(`^${name} is a demo or test value`));
@@ -68,5 +69,21 @@ describe('isLoopback', () => {
   it('knows this machine by name and address', () => {
     for (const host of ['localhost', '127.0.0.1', '127.8.9.10', '::1', '[::1]']) expect(isLoopback(host), host).toBe(true);
     for (const host of ['smtp.example.org', '10.0.0.1', '128.0.0.1', 'localhost.example.org']) expect(isLoopback(host), host).toBe(false);
+  });
+});
+
+describe('DEMO_SECRETS', () => {
+  it('lists every payment key, webhook secret and S3 test key written in the repository', () => {
+    // git grep over the tracked files: each literal that looks like one of these is a value anyone can read.
+    const grep = (pattern: string) =>
+      execFileSync('git', ['grep', '-hoE', pattern, '--', 'lib', 'tests', 'scripts', 'fakes', 'seeders', ':!lib/production-check.test.ts'], { encoding: 'utf8' }).split('\n').filter(Boolean);
+    const found = [
+      ...grep("'(sk_test_[A-Za-z0-9_]+|whsec_[A-Za-z0-9_]+|BRINEWRIGHT[A-Z0-9]*KEY[0-9A-Z]*)'").map((s) => s.slice(1, -1)),
+      // S3 secrets in tests: `const SECRET = '…'` and `secretAccessKey: '…'`.
+      ...grep("(const SECRET = |secretAccessKey: )'[^']{12,}'").map((s) => s.slice(s.indexOf("'") + 1, -1)),
+    ];
+    const listed = new Set(Object.values(DEMO_SECRETS).flat());
+    expect(found.length).toBeGreaterThan(5);
+    expect([...new Set(found)].filter((value) => !listed.has(value))).toEqual([]);
   });
 });

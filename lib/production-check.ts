@@ -2,10 +2,12 @@ import { EnvError, type Env } from './env';
 
 // Secrets written in this repository (defaults, demo scripts, tests): anyone can read them, so a
 // production server must never run with one.
-export const DEMO_SECRETS: Partial<Record<'STRIPE_SECRET_KEY' | 'STRIPE_WEBHOOK_SECRET' | 'S3_SECRET_ACCESS_KEY' | 'NEXTAUTH_SECRET', readonly string[]>> = {
+export const DEMO_SECRETS: Partial<Record<'STRIPE_SECRET_KEY' | 'STRIPE_WEBHOOK_SECRET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'NEXTAUTH_SECRET', readonly string[]>> = {
   STRIPE_SECRET_KEY: ['sk_test_brinewright_local', 'sk_test_integration_h4', 'sk_test_sweep', 'sk_test_signer', 'sk_test_fake_signer'],
   STRIPE_WEBHOOK_SECRET: ['whsec_brinewright_local_signing_secret', 'whsec_integration_test_secret_h4', 'whsec_someone_else'],
-  S3_SECRET_ACCESS_KEY: ['signature-test-secret-0123456789abcdef', 'not-the-secret-at-all-0000', 'another-secret-entirely-000000'],
+  // The demo's S3 secret is made per checkout (.data/fake-s3-secret); its key id is fixed.
+  S3_ACCESS_KEY_ID: ['BRINEWRIGHTDEMOKEY01', 'BRINEWRIGHTTESTKEY01', 'BRINEWRIGHTSIGKEY001', 'BRINEWRIGHTINTKEY001', 'BRINEWRIGHTE2EKEY001', 'SOMEONEELSE000000000'],
+  S3_SECRET_ACCESS_KEY: ['signature-test-secret-0123456789abcdef', 'brinewright-test-secret-0123456789abcdef', 'integration-s3-secret-0123456789abcdef', 'not-the-secret-at-all-0000', 'another-secret-entirely-000000'],
   NEXTAUTH_SECRET: ['e2e-secret-0123456789abcdef', 'integration-tests-secret-0123456789', 'bench-secret-0123456789abcdef', 'not-used-by-migrations'],
 };
 
