@@ -1,4 +1,6 @@
 import { ZodError, type z } from 'zod';
+import { getEnv } from '@/lib/env';
+import { CROSS_SITE_MESSAGE, isCrossSite } from '@/lib/server/same-origin';
 
 export type ErrorType = 'bad_request' | 'unauthorized' | 'forbidden' | 'not_found' | 'conflict' | 'unprocessable' | 'rate_limit' | 'too_large' | 'unsupported_media' | 'unavailable';
 
@@ -122,25 +124,27 @@ export function decodeParam(value: string): string {
   }
 }
 
-/** Reads a JSON body; a malformed one is a 400, not a 500. */
-export async function readJson(request: Request): Promise<unknown> {
-  const type = request.headers.get('content-type') ?? '';
-  if (!type.toLowerCase().includes('application/json')) {
-    throw new AppError('unsupported_media', 'Send the request body as JSON (Content-Type: application/json).');
-  }
-  try {
-    return await request.json();
-  } catch {
-    throw new AppError('bad_request', 'The request body is not valid JSON.', { fields: { body: ['not valid JSON'] } });
-  }
-}
-
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wraps a route handler so every thrown error gets its one JSON answer. */
+/** The origins the app is served from (APP_URL, NEXTAUTH_URL), for the cross-site check. */
+export function appOrigins(): string[] {
+  const env = getEnv();
+  return [env.APP_URL, env.NEXTAUTH_URL].filter((url): url is string => Boolean(url)).map((url) => new URL(url).origin);
+}
+
+/** Throws AppError 403 for a request from another site's page that would change something. */
+export function refuseCrossSite(request: Request): void {
+  if (isCrossSite(request, appOrigins)) throw new AppError('forbidden', CROSS_SITE_MESSAGE);
+}
+
+/**
+ * Wraps a route handler so every thrown error gets its one JSON answer, after refusing writes sent
+ * from another site's page (SameSite=Lax cookies still ride along on some of them).
+ */
 export function route<C = unknown>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
     try {
+      refuseCrossSite(request);
       return await handler(request, context);
     } catch (error) {
       // Next's own control-flow errors (redirect, notFound) must pass through.

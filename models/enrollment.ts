@@ -19,6 +19,8 @@ export class Enrollment extends Model<InferAttributes<Enrollment>, InferCreation
   declare runKey: string;
   declare status: CreationOptional<EnrollmentStatus>;
   declare feeCents: number;
+  /** The course content version the enrollment began under; its requirements are that version's. */
+  declare contentVersion: CreationOptional<number>;
   declare attendedAt: CreationOptional<Date | null>;
   declare completedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -31,6 +33,7 @@ export class Enrollment extends Model<InferAttributes<Enrollment>, InferCreation
         runKey: { type: DataTypes.STRING(40), allowNull: false },
         status: { type: DataTypes.ENUM(...ENROLLMENT_STATUSES), allowNull: false, defaultValue: 'awaiting_payment' },
         feeCents: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        contentVersion: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 1 },
         attendedAt: { type: DataTypes.DATE, allowNull: true },
         completedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,

@@ -2,8 +2,10 @@
 // - the outbox sender (claims due e-mail rows, sends them over SMTP, retries with backoff),
 // - the day-before workshop reminders,
 // - releasing seats of checkouts that expired while their webhook never arrived,
-// - removing uploaded photos that never became part of a submission (after a week).
+// - removing uploaded photos that never became part of a submission (after a week),
+// - e-mailing certificate holders once per published "what changed" entry (content/changes/).
 // Run with the react-server condition so the app's server-only modules load outside Next.
+import { queueChangeNotices } from '../lib/changes/notices';
 import { queueWorkshopReminders } from '../lib/email/reminders';
 import { getEnv } from '../lib/env';
 import { refuseDemoSettings } from '../lib/production-check';
@@ -62,6 +64,10 @@ async function main() {
     every(RECONCILE_EVERY_MS, 'checkouts', async () => {
       const n = await releaseStaleCheckouts();
       return n ? `checkouts: released ${n} seat(s) of expired checkouts` : null;
+    }),
+    every(REMINDER_EVERY_MS, 'changes', async () => {
+      const r = await queueChangeNotices();
+      return r.changes ? `changes: announced ${r.changes} to ${r.emails} certificate holder(s)` : null;
     }),
     every(PRUNE_EVERY_MS, 'photos', async () => {
       // Throttle windows that ended a day ago count nothing any more.

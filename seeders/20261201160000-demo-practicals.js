@@ -52,6 +52,12 @@ const LEARNERS = [
         message: 'Processed 5 min, shorter than the published 10 min for a pint of Pickled dilly beans at 1,001–6,000 ft. Time starts when the water returns to a full boil.',
         expected: '10 min', actual: '5 min', source: `${GUIDE6}, "Pickled dilly beans", recommended process time table`,
       },
+      {
+        check: 'sterilized-jars',
+        message: 'Processed 5 min, under 10 minutes: the jars must be sterilised before filling (boil the empty jars 15 minutes at 5,200 ft). Say in the notes how the jars were sterilised.',
+        expected: 'jars boiled empty 15 min', actual: '5 min process',
+        source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 1, "Sterilization of empty jars": products processed less than 10 minutes go into sterile jars; boil empty jars 10 minutes below 1,000 ft and 1 more minute for each further 1,000 ft',
+      },
     ],
   },
 ];

@@ -10,7 +10,8 @@ const LEARNERS = [
   { email: 'ines@cedarhollow.example', name: 'Inés Alvarado', password: 'demo-ines-pass' },
   { email: 'wren@cedarhollow.example', name: 'Wren Castellanos', password: 'demo-wren-pass' },
 ];
-// Lesson slugs and quiz slugs of the flagship course (content/lessons/pickling-and-canning).
+// Lesson slugs and quiz slugs of the flagship course under content version 1, the version these
+// enrollments begin under (enrollments.contentVersion's default): the fermenting lesson came later.
 const LESSONS = [
   'why-preserving-is-a-safety-job',
   'acidity',

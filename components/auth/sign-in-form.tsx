@@ -7,17 +7,13 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
+import { callbackPath } from '@/lib/auth/callback-url';
 import { SignInSchema, type SignInInput } from '@/lib/validations/user';
 
 const MESSAGES: Record<string, string> = {
   CredentialsSignin: 'That e-mail address and password do not match an account.',
   Throttled: 'Too many sign-in attempts. Please wait 15 minutes and try again.',
 };
-
-/** Only same-site paths are followed after sign-in. */
-export function safeCallback(value: string | null | undefined): string {
-  return value && value.startsWith('/') && !value.startsWith('//') ? value : '/';
-}
 
 export function SignInForm({ callbackUrl, initialError }: { callbackUrl?: string; initialError?: string }) {
   const router = useRouter();
@@ -31,7 +27,7 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl?: string
       setFormError(MESSAGES[result?.error ?? ''] ?? MESSAGES.CredentialsSignin);
       return;
     }
-    router.push(safeCallback(callbackUrl));
+    router.push(callbackPath(callbackUrl, window.location.origin));
     router.refresh();
   });
 

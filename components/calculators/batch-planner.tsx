@@ -39,7 +39,7 @@ export function BatchPlanner({ defaultProduct, headingLevel }: { defaultProduct?
               {r.produceLb !== null ? `${fmt(r.produceLb, 2)} lb (${fmt(r.produceKg ?? 0, 2)} kg) of produce, ` : ''}
               {fmt(r.brineMl, 0)} mL ({fmt(r.brineMl / 236.5882365, 1)} cups) of brine
             </p>
-            <p className="text-sm text-ink-soft">The brine includes {r.extraPct}% extra for spills and topping up.</p>
+            <p className="text-sm text-ink-soft">The brine includes {r.extraPct}% extra for spills and topping up (common practice, not part of the tested recipe).</p>
             <ul className="list-disc space-y-0.5 pl-5 text-sm">
               {r.ingredients.map((i) => {
                 const [one, many] = UNIT_WORDS[i.unit];
@@ -51,6 +51,11 @@ export function BatchPlanner({ defaultProduct, headingLevel }: { defaultProduct?
                 );
               })}
             </ul>
+            {r.sterilizeJars ? (
+              <p className="text-sm font-medium text-beet-700" data-testid="batch-sterilize">
+                {r.sterilizeJars.message} <span className="block text-xs font-normal text-ink-soft">Source: {r.sterilizeJars.source}</span>
+              </p>
+            ) : null}
             <p className="text-xs text-ink-soft">Scaled from: {r.source}</p>
           </div>
         ) : (

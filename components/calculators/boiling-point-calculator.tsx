@@ -2,14 +2,15 @@
 
 import { useState } from 'react';
 import { boilingPoint } from '@/lib/preserving/boiling';
-import { RULES } from '@/lib/preserving/errors';
-import { AltitudeField } from './altitude-field';
+import { ALTITUDE_FIELDS, AltitudeField, readAltitudeFt } from './altitude-field';
+import type { AltitudeUnit } from '@/lib/preserving/units';
 import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt } from './parts';
 
 /** The boiling point of water at an altitude, and why that changes the processing time. */
 export function BoilingPointCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
   const [altitude, setAltitude] = useState('5000');
-  const outcome = calculate((read) => boilingPoint({ altitudeFt: read.num(altitude, RULES.altitudeFt) }), ['altitudeFt']);
+  const [unit, setUnit] = useState<AltitudeUnit>('ft');
+  const outcome = calculate((read) => boilingPoint({ altitudeFt: readAltitudeFt(read, altitude, unit) }), ALTITUDE_FIELDS);
   const r = outcome.result;
   return (
     <CalculatorShell
@@ -25,7 +26,7 @@ export function BoilingPointCalculator({ headingLevel }: { headingLevel?: 2 | 3 
               {fmt(r.fahrenheit, 1)} °F ({fmt(r.celsius, 1)} °C)
             </p>
             <p className="text-sm">
-              Air pressure {fmt(r.pressurePa / 1000, 1)} kPa in the standard atmosphere; the weather moves it a little. That is {fmt(212 - r.fahrenheit, 1)} °F below
+              Air pressure {fmt(r.pressurePa / 1000, 1)} kPa in the standard atmosphere; the weather moves it a little. That is {fmt(Math.abs(212 - r.fahrenheit), 1)} °F {r.fahrenheit <= 212 ? 'below' : 'above'}
               212 °F, which is why the tested recipe adds minutes at your altitude.
             </p>
             <p className="text-xs text-ink-soft">Model: {r.source}</p>
@@ -35,7 +36,7 @@ export function BoilingPointCalculator({ headingLevel }: { headingLevel?: 2 | 3 
         )
       }
     >
-      <AltitudeField value={altitude} onChange={setAltitude} error={outcome.fieldErrors.altitudeFt} />
+      <AltitudeField value={altitude} onChange={setAltitude} unit={unit} onUnitChange={setUnit} error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM} />
     </CalculatorShell>
   );
 }

@@ -29,12 +29,18 @@ export function HeadspaceCalculator({ defaultProduct, headingLevel }: { defaultP
               Leave {kitchen(r.recommendedIn)} inch ({fmt(r.recommendedIn * 25.4, 1)} mm)
             </p>
             {r.verdict ? (
-              <p>
-                <strong className={r.verdict === 'ok' ? 'text-brine-800' : 'text-beet-700'}>{VERDICT[r.verdict]}.</strong> {r.why}
-              </p>
+              <>
+                <p>
+                  <strong className={r.verdict === 'ok' ? 'text-brine-800' : 'text-beet-700'}>{VERDICT[r.verdict]}.</strong> {r.why}
+                </p>
+                <p className="text-xs text-ink-soft">
+                  Verdict tolerance: ±{kitchen(r.toleranceIn ?? 0)} inch, {r.toleranceSource}.
+                </p>
+              </>
             ) : (
               <p className="text-sm text-ink-soft">Enter a measured headspace for a verdict.</p>
             )}
+            <p className="text-xs text-ink-soft">Source: {r.source}</p>
           </div>
         ) : (
           <ResultMessage outcome={outcome} />

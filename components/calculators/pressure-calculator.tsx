@@ -3,9 +3,9 @@
 import { useState } from 'react';
 import { Select } from '@/components/ui/select';
 import { cannerTemperature } from '@/lib/preserving/boiling';
-import { RULES } from '@/lib/preserving/errors';
 import { GAUGES, pressureForAltitude } from '@/lib/preserving/pressure';
-import { AltitudeField } from './altitude-field';
+import { ALTITUDE_FIELDS, AltitudeField, readAltitudeFt } from './altitude-field';
+import type { AltitudeUnit } from '@/lib/preserving/units';
 import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt } from './parts';
 
 const GAUGE_OPTIONS = GAUGES.map((g) => ({ value: g, label: g === 'weighted' ? 'Weighted gauge' : 'Dial gauge' }));
@@ -14,11 +14,12 @@ const GAUGE_OPTIONS = GAUGES.map((g) => ({ value: g, label: g === 'weighted' ? '
 export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
   const [gauge, setGauge] = useState('dial');
   const [altitude, setAltitude] = useState('0');
+  const [unit, setUnit] = useState<AltitudeUnit>('ft');
   const outcome = calculate((read) => {
-    const altitudeFt = read.num(altitude, RULES.altitudeFt);
+    const altitudeFt = readAltitudeFt(read, altitude, unit);
     const result = pressureForAltitude({ gauge, altitudeFt });
     return { ...result, steam: cannerTemperature({ psig: result.pounds, altitudeFt }) };
-  }, ['gauge', 'altitudeFt']);
+  }, ['gauge', ...ALTITUDE_FIELDS]);
   const r = outcome.result;
   return (
     <CalculatorShell
@@ -26,7 +27,7 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       intro="Low-acid foods need a pressure canner. The pressure rises with altitude; the tested recipe's minutes stay the same."
       headingLevel={headingLevel}
       lesson={LESSONS.processing}
-      caution="Have a dial gauge tested for accuracy every year, vent the canner 10 minutes before pressurizing, and let it depressurize on its own."
+      caution="Have a dial gauge tested for accuracy every year, vent the canner 10 minutes before pressurizing, and let it depressurize on its own (USDA Complete Guide to Home Canning, Guide 1, 'Using pressure canners'; Pacific Northwest Extension PNW 421)."
       result={
         r ? (
           <div className="space-y-1">
@@ -45,7 +46,7 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       }
     >
       <Select label="Gauge type" options={GAUGE_OPTIONS} value={gauge} onChange={(event) => setGauge(event.target.value)} error={outcome.fieldErrors.gauge} />
-      <AltitudeField value={altitude} onChange={setAltitude} error={outcome.fieldErrors.altitudeFt} />
+      <AltitudeField value={altitude} onChange={setAltitude} unit={unit} onUnitChange={setUnit} error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM} />
     </CalculatorShell>
   );
 }

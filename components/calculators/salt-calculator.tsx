@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Select } from '@/components/ui/select';
 import { TextField } from '@/components/ui/text-field';
 import { RULES } from '@/lib/preserving/errors';
-import { SALTS, SALT_KINDS, saltToGrams } from '@/lib/preserving/salt';
+import { BY_SPOON_NOTE, SALTS, SALT_KINDS, saltToGrams } from '@/lib/preserving/salt';
 import { convert } from '@/lib/preserving/units';
 import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt } from './parts';
 
@@ -41,10 +41,26 @@ export function SaltCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       result={
         r ? (
           <div className="space-y-2">
-            <p className="text-xl font-bold" data-testid="salt-grams">
-              {fmt(r.grams, 1)} g ({fmt(convert(r.grams, 'g', 'oz'), 2)} oz)
-            </p>
-            {r.brinePct !== undefined ? <p>Brine strength: {fmt(r.brinePct, 2)}% salt by weight</p> : null}
+            {r.byWeight || r.gramsRange[0] === r.gramsRange[1] ? (
+              <p className="text-xl font-bold" data-testid="salt-grams">
+                {fmt(r.grams, 1)} g ({fmt(convert(r.grams, 'g', 'oz'), 2)} oz){r.byWeight ? '' : ', approximately'}
+              </p>
+            ) : (
+              <p className="text-xl font-bold" data-testid="salt-grams">
+                about {fmt(r.gramsRange[0], 1)} to {fmt(r.gramsRange[1], 1)} g ({fmt(convert(r.gramsRange[0], 'g', 'oz'), 2)} to {fmt(convert(r.gramsRange[1], 'g', 'oz'), 2)} oz)
+              </p>
+            )}
+            {r.brinePct !== undefined ? (
+              <p data-testid="salt-brine">
+                Brine strength:{' '}
+                {r.brinePctRange && r.brinePctRange[0] !== r.brinePctRange[1] ? `${fmt(r.brinePctRange[0], 2)} to ${fmt(r.brinePctRange[1], 2)}` : fmt(r.brinePct, 2)}% salt by weight
+              </p>
+            ) : null}
+            {r.byWeight ? null : (
+              <p className="text-sm text-honey-700" data-testid="salt-uncertainty">
+                {BY_SPOON_NOTE} Grams per teaspoon: {r.source}.
+              </p>
+            )}
             <p className={r.suitable ? 'text-sm text-brine-800' : 'text-sm font-medium text-beet-700'}>{r.why}</p>
           </div>
         ) : (

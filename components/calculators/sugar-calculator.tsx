@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { Select } from '@/components/ui/select';
 import { TextField } from '@/components/ui/text-field';
 import { RULES } from '@/lib/preserving/errors';
+import { BY_SPOON_NOTE } from '@/lib/preserving/salt';
 import { SUGARS, SUGAR_KINDS, sugarToGrams } from '@/lib/preserving/sugar';
 import { convert } from '@/lib/preserving/units';
 import { CalculatorShell, LESSONS, ResultMessage, calculate, fmt } from './parts';
@@ -41,8 +42,14 @@ export function SugarCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
         r ? (
           <div className="space-y-2">
             <p className="text-xl font-bold" data-testid="sugar-grams">
+              {r.byWeight ? '' : 'about '}
               {fmt(r.grams, 0)} g ({fmt(convert(r.grams, 'g', 'lb'), 2)} lb)
             </p>
+            {r.byWeight ? null : (
+              <p className="text-sm text-honey-700" data-testid="sugar-uncertainty">
+                {BY_SPOON_NOTE} Grams per cup: {r.source}.
+              </p>
+            )}
             {r.syrupPct !== undefined ? <p>Sugar in the syrup: {fmt(r.syrupPct, 1)}% by weight</p> : null}
             <p className="text-sm text-brine-800">{r.why}</p>
           </div>

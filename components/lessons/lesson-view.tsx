@@ -1,12 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { LessonPager, Objectives, SourcesList } from '@/components/lessons/lesson-parts';
 import { TableOfContents } from '@/components/lessons/table-of-contents';
 import { mdxComponents } from '@/components/mdx';
 import { LessonActions } from '@/components/progress/lesson-actions';
 import { Badge } from '@/components/ui/badge';
-import { getCourse, getLesson, getLessonNeighbours, getLessons } from '@/lib/content';
+import { getLesson, getLessonNeighbours, getLessons } from '@/lib/content';
+import { readLesson } from '@/lib/content/access';
 import { formatMinutes } from '@/lib/content/format';
 import { compileContent } from '@/lib/content/mdx';
 
@@ -21,9 +21,8 @@ export async function lessonMetadata({ params }: LessonPageProps): Promise<Metad
 
 /** A lesson page: header, objectives, the compiled MDX (cached per process), sources, actions, previous/next, contents. */
 export async function LessonView({ courseSlug, lessonSlug }: { courseSlug: string; lessonSlug: string }) {
-  const course = getCourse(courseSlug);
-  const lesson = getLesson(courseSlug, lessonSlug);
-  if (!course || !lesson) notFound();
+  // The reader's check sits here, in the data path of the lesson body, for every route that shows one.
+  const { course, lesson } = await readLesson(courseSlug, lessonSlug);
   const { previous, next } = getLessonNeighbours(courseSlug, lessonSlug);
   const total = getLessons(courseSlug).length;
   const { content, toc } = await compileContent({ file: lesson.file, body: lesson.body, components: mdxComponents });

@@ -4,10 +4,12 @@ import { cn } from '@/lib/cn';
 const CHECK_LABEL: Record<Flag['check'], string> = {
   'processing-time': 'Processing time',
   'processing-method': 'Processing method',
+  'sterilized-jars': 'Sterilised jars',
   pack: 'Pack',
   headspace: 'Headspace',
   'vinegar-acidity': 'Vinegar acidity',
   dilution: 'Brine dilution',
+  'brine-strength': 'Brine salt by weight',
   seals: 'Seals',
 };
 

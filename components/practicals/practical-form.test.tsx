@@ -87,6 +87,24 @@ describe('PracticalForm', () => {
     expect(screen.getByLabelText('Product')).toHaveValue('fresh-pack-dill-pickles');
   }, 30_000);
 
+  it('asks fermented pickles for the brine\'s salt and flags a brine weaker by weight than the tested one', async () => {
+    const user = userEvent.setup();
+    render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
+    const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });
+    expect(screen.queryByLabelText('Salt in the brine')).toBeNull();
+    await user.selectOptions(screen.getByLabelText('Product'), 'fermented-dill-pickles');
+    expect(within(live).getByTestId('not-checked').textContent).toMatch(/Water used, Salt in the brine, Processing method/);
+    // USDA Guide 6 fermented dills: 8 cups water, 1/4 cup vinegar, 1/2 cup salt; 90 g is 4.41 % by weight,
+    // below the tested 5.35–6.87 % (computed with canning salt at 4.6–6 g per tsp).
+    await user.type(screen.getByLabelText('Vinegar used'), '59');
+    await user.type(screen.getByLabelText('Water used'), '1893');
+    await user.type(screen.getByLabelText('Salt in the brine'), '90');
+    expect(await within(live).findByText(/The brine is 4.41 % salt by weight, weaker than the tested fermented dill brine/)).toBeInTheDocument();
+    await user.clear(screen.getByLabelText('Salt in the brine'));
+    await user.type(screen.getByLabelText('Salt in the brine'), '125');
+    await waitFor(() => expect(within(live).queryByText(/salt by weight, weaker/)).toBeNull());
+  }, 30_000);
+
   it('names what is missing on submit and sends nothing', async () => {
     const user = userEvent.setup();
     const fetchSpy = vi.fn();

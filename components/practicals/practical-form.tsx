@@ -9,7 +9,7 @@ import { Select } from '@/components/ui/select';
 import { FormAlert } from '@/components/ui/form-alert';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
-import { CHECK_INPUTS, checkPractical, type CheckInput, type Flag } from '@/lib/practicals/checks';
+import { checkInputsFor, checkPractical, type CheckInput, type Flag } from '@/lib/practicals/checks';
 import { JAR_SIZES, PRODUCT_OPTIONS } from '@/lib/preserving/products';
 import { PROCESSING_METHOD_LABELS, PROCESSING_METHODS, practicalFormSchema, type PracticalForm as FormValues, type PracticalFormInput } from '@/lib/validations/practical';
 import { FlagList } from './flag-list';
@@ -35,6 +35,7 @@ const CHECK_INPUT_LABELS: Record<CheckInput, string> = {
   vinegarAcidityPct: 'Vinegar acidity',
   vinegarMl: 'Vinegar used',
   waterMl: 'Water used',
+  saltG: 'Salt in the brine',
   method: 'Processing method',
   altitudeFt: 'Altitude',
   minutes: 'Minutes processed',
@@ -68,7 +69,7 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
   const flags = useMemo(() => checkPractical(values as Parameters<typeof checkPractical>[0]), [values]);
   // The fields the checks read that are still empty: until they are entered, "no flags" means
   // "nothing checked yet", and the box says which ones.
-  const notChecked = CHECK_INPUTS.filter((name) => {
+  const notChecked = checkInputsFor(values.product).filter((name) => {
     const v = (values as Record<string, unknown>)[name];
     return v === undefined || v === null || v === '' || (typeof v === 'number' && Number.isNaN(v));
   }).map((name) => CHECK_INPUT_LABELS[name]);
@@ -126,12 +127,24 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
           <TextField label="Vinegar acidity" hint="From the label" type="number" step="0.1" min={0} suffix="%" error={errors.vinegarAcidityPct?.message} {...register('vinegarAcidityPct', num)} />
           <TextField label="Vinegar used" hint="1 cup = 237 mL" type="number" step="any" min={0} suffix="mL" error={errors.vinegarMl?.message} {...register('vinegarMl', num)} />
           <TextField label="Water used" hint="In the brine" type="number" step="any" min={0} suffix="mL" error={errors.waterMl?.message} {...register('waterMl', num)} />
+          {values.product === 'fermented-dill-pickles' ? (
+            <TextField
+              label="Salt in the brine"
+              hint="Weighed; fermented pickles are checked by salt by weight"
+              type="number"
+              step="any"
+              min={0}
+              suffix="g"
+              error={errors.saltG?.message}
+              {...register('saltG', { setValueAs: (v) => (v === '' || v === null || v === undefined ? undefined : Number(v)) })}
+            />
+          ) : null}
         </fieldset>
 
         <fieldset className="grid gap-4 md:grid-cols-3">
           <legend className="mb-2 font-display text-lg font-bold">Processing</legend>
           <Select label="Processing method" options={METHOD_OPTIONS} error={errors.method?.message} {...register('method')} />
-          <TextField label="Altitude" hint="Of your kitchen, in feet" type="number" inputMode="numeric" min={0} suffix="ft" error={errors.altitudeFt?.message} {...register('altitudeFt', num)} />
+          <TextField label="Altitude" hint="Of your kitchen, in feet (1 m = 3.28 ft); below sea level is negative" type="number" inputMode="numeric" min={-1500} suffix="ft" error={errors.altitudeFt?.message} {...register('altitudeFt', num)} />
           <TextField label="Minutes processed" hint="Counted from the return to a full boil" type="number" inputMode="numeric" min={0} suffix="min" error={errors.minutes?.message} {...register('minutes', num)} />
           <TextField label="Date put up" type="date" error={errors.batchDate?.message} {...register('batchDate')} />
           <TextField label="Jars sealed" hint="After 12–24 hours" type="number" inputMode="numeric" min={0} error={errors.sealedJars?.message} {...register('sealedJars', num)} />

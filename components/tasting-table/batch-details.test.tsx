@@ -22,6 +22,8 @@ describe('BatchDetails', () => {
     expect(cells('Seals')[0]).toBe('7 sealed, 0 not sealed');
     // USDA Complete Guide to Home Canning (2015), Guide 6, quick fresh-pack dill pickles: pints 15 min at 1,001-6,000 ft.
     expect(cells('Minutes processed')).toEqual(['15 min', '15 min in boiling water for 1,001–6,000 ft']);
+    // The brine beside its product's tested liquid (6 cups 5 % vinegar to 8 cups water: 2.14 %), never a pH.
+    expect(cells('Water')).toEqual(['1893 mL', 'tested liquid 2.14 % acetic acid or more (this brine 2.14 %)']);
   });
 
   it('gives one dash for a value none of whose parts was stored, not one per part', () => {

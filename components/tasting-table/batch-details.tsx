@@ -21,7 +21,11 @@ export function BatchDetails({ details, expected }: { details: Partial<Practical
     {
       label: 'Water',
       value: joined([n(details.waterMl, 0)], `${n(details.waterMl, 0)} mL`),
-      expected: expected.brine ? `brine ≈ ${n(expected.brine.aceticAcidPct)} % acetic acid, estimated pH ${n(expected.brine.estimatedPh)} (liquid alone)` : undefined,
+      expected: expected.brine
+        ? `tested liquid ${n(expected.brine.testedAceticAcidPct)} % acetic acid or more (this brine ${n(expected.brine.aceticAcidPct)} %)`
+        : expected.brineStrength
+          ? `fermented brine ${n(expected.brineStrength.minPct)}–${n(expected.brineStrength.maxPct)} % salt by weight${expected.brineStrength.saltPct !== undefined ? ` (this brine ${n(expected.brineStrength.saltPct)} %)` : ''}`
+          : undefined,
     },
     { label: 'Headspace measured', value: joined([n(details.headspaceIn, 3)], `${n(details.headspaceIn, 3)} in`), expected: expected.headspace ? `${n(expected.headspace.recommendedIn, 3)} in` : undefined },
     { label: 'Method', value: (details.method && PROCESSING_METHOD_LABELS[details.method]) || t(details.method) },

@@ -1,7 +1,7 @@
 import type { CourseRequirements } from './eligibility';
 import { REFRESHER_COURSE_SLUG } from './validity';
 
-/** Courses whose certificate needs an approved practical batch (the flagship's lesson 08 is the practical). */
+/** Courses whose certificate needs an approved practical batch (the flagship's last lesson is the practical). */
 const PRACTICAL_COURSES = new Set(['pickling-and-canning']);
 
 export type ContentCourse = { slug: string; finalExam?: string | null; workshopRequired?: boolean };

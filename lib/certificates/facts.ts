@@ -16,6 +16,8 @@ export type EnrollmentRow = {
   courseId: number;
   courseSlug: string;
   courseTitle: string;
+  /** The course content version the enrollment began under (its requirements). */
+  contentVersion: number;
   validityMonths: number;
   workshopId: number | null;
   workshopStartsAt: Date | null;
@@ -52,7 +54,7 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
 
   const raw = await q<Record<string, unknown>>(
     `SELECT e.id, e.userId, u.name AS learnerName, u.email AS learnerEmail, e.courseId, c.slug AS courseSlug, c.title AS courseTitle,
-            c.validityMonths, e.workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace, w.attendanceRequired,
+            e.contentVersion, c.validityMonths, e.workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace, w.attendanceRequired,
             e.status, e.feeCents, e.feeWaiverId, e.attendedAt, e.completedAt, e.createdAt,
             ce.id AS certId, ce.serial, ce.issuedAt, ce.validUntil, ce.revokedAt, ce.revokeReason
        FROM enrollments e
@@ -72,6 +74,7 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
     courseId: Number(r.courseId),
     courseSlug: String(r.courseSlug),
     courseTitle: String(r.courseTitle),
+    contentVersion: Number(r.contentVersion),
     validityMonths: Number(r.validityMonths),
     workshopId: r.workshopId === null ? null : Number(r.workshopId),
     workshopStartsAt: asDate(r.workshopStartsAt),
@@ -131,10 +134,11 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
   const graceCutoff = addMonths(now, -REFRESHER_GRACE_MONTHS);
 
   for (const row of rows) {
-    let requirements = requirementsCache.get(row.courseSlug);
+    const versionKey = `${row.courseSlug}@${row.contentVersion}`;
+    let requirements = requirementsCache.get(versionKey);
     if (!requirements) {
-      requirements = requirementsForCourse(row.courseSlug);
-      requirementsCache.set(row.courseSlug, requirements);
+      requirements = requirementsForCourse(row.courseSlug, row.contentVersion);
+      requirementsCache.set(versionKey, requirements);
     }
     const prior: PriorCertificate[] = certificates
       .filter((c) => Number(c.userId) === row.userId && Number(c.enrollmentId) !== row.id)

@@ -1,7 +1,10 @@
 import 'server-only';
+import { forbidden, notFound } from 'next/navigation';
 import { isEnrolled } from '@/lib/access';
+import { requirePageRole } from '@/lib/auth/guard';
 import type { SessionUser } from '@/lib/auth/users';
 import { roleAllows } from '@/lib/roles';
+import { getCourse, getLesson, type CourseContent, type LessonContent } from './index';
 
 /**
  * Who may read a members-only lesson: a learner with an active or completed enrollment in the
@@ -11,4 +14,21 @@ import { roleAllows } from '@/lib/roles';
 export async function canReadMembersLesson(user: Pick<SessionUser, 'id' | 'role'>, courseSlug: string): Promise<boolean> {
   if (roleAllows(user.role, ['instructor'])) return true;
   return isEnrolled(user.id, courseSlug);
+}
+
+/**
+ * The one way to a lesson's body: unknown lessons are a 404, and a members-only lesson first passes
+ * the reader's check (sign-in page when signed out, 403 without access). Pages and layouts render
+ * in parallel, and a router request may render the page alone, so the page's data needs this check
+ * of its own. A preview lesson reads no cookie, so its page stays prerendered.
+ */
+export async function readLesson(courseSlug: string, lessonSlug: string): Promise<{ course: CourseContent; lesson: LessonContent }> {
+  const course = getCourse(courseSlug);
+  const lesson = getLesson(courseSlug, lessonSlug);
+  if (!course || !lesson) notFound();
+  if (!lesson.preview) {
+    const user = await requirePageRole(`/learn/${course.slug}/${lesson.slug}`);
+    if (!(await canReadMembersLesson(user, course.slug))) forbidden();
+  }
+  return { course, lesson };
 }

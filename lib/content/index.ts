@@ -1,5 +1,6 @@
 import 'server-only';
 import path from 'node:path';
+import { loadChanges, type CourseChanges } from './changes';
 import { loadCourses, loadLessons } from './loader';
 import type { CourseContent, LessonContent } from './schema';
 
@@ -21,6 +22,11 @@ export function getCourses(): readonly CourseContent[] {
   if (!READ_ONCE) return loadCourses(CONTENT_ROOT);
   coursesOnce ??= loadCourses(CONTENT_ROOT);
   return coursesOnce;
+}
+
+/** `{ course }` for every course: the static params of the pages under /courses/[course]. */
+export function courseParams(): { course: string }[] {
+  return getCourses().map((course) => ({ course: course.slug }));
 }
 
 export function getCourse(slug: string): CourseContent | null {
@@ -48,4 +54,13 @@ export function getLessonNeighbours(courseSlug: string, lessonSlug: string): { p
   const index = lessons.findIndex((lesson) => lesson.slug === lessonSlug);
   if (index < 0) return { previous: null, next: null };
   return { previous: lessons[index - 1] ?? null, next: lessons[index + 1] ?? null };
+}
+
+const changesOnce = new Map<string, CourseChanges | null>();
+
+/** The dated "what changed" record of a course, newest first, or null when it has none. */
+export function getChanges(courseSlug: string): CourseChanges | null {
+  if (!READ_ONCE) return loadChanges(CONTENT_ROOT, courseSlug);
+  if (!changesOnce.has(courseSlug)) changesOnce.set(courseSlug, loadChanges(CONTENT_ROOT, courseSlug));
+  return changesOnce.get(courseSlug) ?? null;
 }

@@ -23,6 +23,8 @@ export const courseFrontMatterSchema = z
     requirements: z.array(text).min(1),
     finalExam: quizSlug.optional(),
     workshopRequired: z.boolean(),
+    /** The course content version; raised when a change adds a requirement (a new lesson). An enrollment keeps the version it began under. */
+    version: z.number().int().positive().default(1),
   })
   .strict();
 
@@ -35,6 +37,8 @@ export const lessonFrontMatterSchema = z
     objectives: z.array(text).min(2, 'list at least 2 learning objectives'),
     quiz: quizSlug,
     preview: z.boolean().default(false),
+    /** The course content version from which this lesson is required (enrollments begun earlier are not held to it). */
+    since: z.number().int().positive().default(1),
     sources: z.array(sourceSchema).min(1, 'cite at least one published source'),
   })
   .strict();

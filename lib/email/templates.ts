@@ -191,3 +191,12 @@ export function certificateIssuedEmail({
     pdf ? [pdf] : undefined,
   );
 }
+
+/** Sent to a certificate holder when a course's "what changed" record publishes new entries. */
+export function courseChangesEmail({ to, name, courseTitle, changes, changesUrl }: { to: string; name: string; courseTitle: string; changes: { date: string; summary: string; source: string }[]; changesUrl: string }): OutgoingEmail {
+  return compose('course.changes', to, `What changed in ${courseTitle}`, `Hello ${name},`, [
+    { kind: 'p', text: `You hold a certificate for ${courseTitle}. ${changes.length === 1 ? 'One change to its safety figures or advice has' : `${changes.length} changes to its safety figures or advice have`} been published, so that volunteers teach from the current figures:` },
+    ...changes.map((c): Block => ({ kind: 'note', text: `${c.date}: ${c.summary} (Source: ${c.source})` })),
+    { kind: 'button', label: 'Read what changed', href: changesUrl },
+  ]);
+}

@@ -3,6 +3,7 @@ import { Op, QueryTypes, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/users';
 import { enqueueEmail } from '@/lib/email/outbox';
 import { enrollmentReceiptEmail } from '@/lib/email/templates';
+import { getCourse } from '@/lib/content';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { createCheckoutForEnrollment, expireCheckoutQuietly } from '@/lib/payments/checkout';
@@ -77,7 +78,7 @@ export async function enrollInWorkshop({ user, workshopId, waiverCode, address }
 
     const waiver = waiverId ? await redeemWaiver({ waiverId, courseId: course.id, transaction }) : null;
     const enrollment = await Enrollment.create(
-      { userId: user.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'awaiting_payment', feeCents: waiver ? 0 : course.feeCents, feeWaiverId: waiver?.id ?? null },
+      { userId: user.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'awaiting_payment', feeCents: waiver ? 0 : course.feeCents, feeWaiverId: waiver?.id ?? null, contentVersion: getCourse(course.slug)?.version ?? 1 },
       { transaction },
     );
     await auditCreated(enrollment, { transaction, actorId: user.id, data: { workshopId: workshop.id, feeCents: enrollment.feeCents, waiverId: waiver?.id ?? null } });

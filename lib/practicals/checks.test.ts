@@ -2,7 +2,10 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { PracticalDetails } from '@/lib/validations/practical';
-import { CHECK_INPUTS, checkPractical, computeExpectations, MIN_BRINE_ACETIC_ACID_PCT } from './checks';
+import { PRODUCTS, VINEGAR_PICKLED_IDS, testedAceticAcidPct, type ProductId } from '@/lib/preserving/products';
+import { FERMENTED_BRINE } from '@/lib/preserving/salt';
+import { mlPer } from '@/lib/preserving/units';
+import { CHECK_INPUTS, checkInputsFor, checkPractical, computeExpectations } from './checks';
 
 // A batch that follows the USDA quick fresh-pack dill recipe at sea level: the values below are
 // from USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6, "Quick fresh-pack dill
@@ -102,21 +105,21 @@ describe('checkPractical', () => {
     expect(checks({ vinegarAcidityPct: 5 })).toEqual([]);
   });
 
-  it('flags a brine more dilute than the weakest tested recipe, and accepts that recipe itself', () => {
+  it('flags a brine more dilute than its product\'s tested liquid, and accepts that recipe itself', () => {
     // Quick fresh-pack dill liquid: 6 cups 5 % vinegar in 14 cups = 2.142857… % acetic acid (computed from USDA Guide 6).
-    expect(MIN_BRINE_ACETIC_ACID_PCT).toBeCloseTo(2.142857, 6);
+    expect(testedAceticAcidPct(PRODUCTS['fresh-pack-dill-pickles'].testedLiquid)).toBeCloseTo(2.142857, 6);
     expect(checks({})).toEqual([]);
     // One more cup of water than the recipe: 5 × 6 / 15 = 2.0 %.
     const flags = checkPractical({ ...good, vinegarMl: 6 * 236.5882365, waterMl: 9 * 236.5882365 });
     expect(flags.map((f) => f.check)).toEqual(['dilution']);
     expect(flags[0].actual).toMatch(/^2 % acetic acid \(40 % of the liquid is vinegar\)/);
-    // Dilly beans, 1:1 (2½ cups vinegar, 2½ cups water in USDA Guide 6 from memory): 2.5 %, no flag.
-    expect(checks({ product: 'dilly-beans', vinegarMl: 591.5, waterMl: 591.5, minutes: 5 })).toEqual([]);
+    // Dilly beans, 1:1 (So Easy to Preserve, 6th ed., 2 1/2 cups each): 2.5 %, no dilution flag (5 min: sterilised jars).
+    expect(checks({ product: 'dilly-beans', vinegarMl: 591.5, waterMl: 591.5, minutes: 5 })).toEqual(['sterilized-jars']);
   });
 
-  it('does not apply the dilution floor to fermented pickles, whose acid comes from fermenting', () => {
+  it('does not apply a vinegar floor to fermented pickles, whose acid comes from fermenting', () => {
     // USDA Guide 6 fermented dills: ¼ cup vinegar to 8 cups water in the crock.
-    expect(checks({ product: 'fermented-dill-pickles', vinegarMl: 59.15, waterMl: 1892.7 })).toEqual([]);
+    expect(checks({ product: 'fermented-dill-pickles', vinegarMl: 59.15, waterMl: 1892.7, jar: 'quart', minutes: 15 })).toEqual([]);
   });
 
   it('flags a pack other than the tested recipe’s and jars that did not seal', () => {
@@ -133,6 +136,96 @@ describe('checkPractical', () => {
   });
 });
 
+describe('checkPractical: each product against its own tested liquid', () => {
+  const CUP = mlPer('cup'); // NIST Handbook 44, Appendix C (exact)
+  // A batch of each product that follows its table at sea level, with the liquid given in cups.
+  const batchOf = (id: ProductId, vinegarCups: number, waterCups: number): Partial<PracticalDetails> => {
+    const p = PRODUCTS[id];
+    const jar = p.jars[0];
+    return { ...good, product: id, pack: p.pack, jar, minutes: Math.max(10, p.times[jar]![0]), vinegarMl: vinegarCups * CUP, waterMl: waterCups * CUP };
+  };
+  const dilution = (details: Partial<PracticalDetails>) => checkPractical(details).filter((f) => f.check === 'dilution');
+
+  it.each(VINEGAR_PICKLED_IDS.map((id) => [id] as const))('%s: its tested liquid passes; 3 % more water is flagged against it, with its source', (id) => {
+    const l = PRODUCTS[id].testedLiquid;
+    expect(dilution(batchOf(id, l.vinegarCups, l.waterCups))).toEqual([]);
+    const thinner = batchOf(id, l.vinegarCups, l.waterCups + (l.vinegarCups + l.waterCups) * 0.03);
+    const [flag] = dilution(thinner);
+    expect(flag).toMatchObject({ check: 'dilution', expected: `≥ ${String(Number(testedAceticAcidPct(l).toFixed(2)))} % acetic acid`, source: l.source });
+    expect(flag.message).toContain(`tested liquid of ${PRODUCTS[id].name.toLowerCase()}`);
+  });
+
+  // The review's reproductions, each against USDA Complete Guide to Home Canning (rev. 2015), Guide 6.
+  it('flags hot peppers at 2.5 % (tested 5 cups vinegar to 1 cup water: 4.17 %)', () => {
+    expect(dilution(batchOf('pickled-hot-peppers', 1, 1))[0]).toMatchObject({ expected: '≥ 4.17 % acetic acid', actual: expect.stringMatching(/^2.5 % acetic acid/) });
+  });
+  it('flags beets at 2.27 % (tested 4 cups vinegar to 2 cups water: 3.33 %; recipe from memory)', () => {
+    expect(dilution(batchOf('pickled-beets', 1, 1.2))[0]).toMatchObject({ expected: '≥ 3.33 % acetic acid', actual: expect.stringMatching(/^2.27 % acetic acid/) });
+  });
+  it('flags bread-and-butter at 2.14 % (tested 4 cups vinegar, no water: 5 %; its sugar not counted in the volume)', () => {
+    expect(dilution(batchOf('bread-and-butter-pickles', 6, 8))[0]).toMatchObject({ expected: '≥ 5 % acetic acid', actual: expect.stringMatching(/^2.14 % acetic acid/) });
+  });
+
+  it('with no product chosen, compares with the weakest tested liquid (quick fresh-pack dill, 2.14 %)', () => {
+    const [flag] = dilution({ vinegarMl: 100, vinegarAcidityPct: 5, waterMl: 1000 });
+    expect(flag).toMatchObject({ expected: '≥ 2.14 % acetic acid', source: PRODUCTS['fresh-pack-dill-pickles'].testedLiquid.source });
+    expect(flag.message).toMatch(/weakest tested liquid Brinewright lists \(quick fresh-pack dill pickles\)/);
+  });
+
+  it('keeps the demo beets brine (473 mL vinegar, 237 mL water: 3.331 %) level with 3.33 % at the precision shown', () => {
+    expect(dilution({ ...batchOf('pickled-beets', 2, 1), vinegarMl: 473, waterMl: 237 })).toEqual([]);
+  });
+});
+
+describe('checkPractical: fermented pickles by brine strength', () => {
+  // USDA Guide 6 fermented dill pickles, per gallon: 1/2 cup canning salt, 1/4 cup vinegar, 8 cups water.
+  // Salt by weight computed (C) with canning salt at 4.6–6 g per tsp (no published figure; see salt.ts):
+  // 110.4 g / (110.4 + 1,951.85) = 5.35 %, 144 g / (144 + 1,951.85) = 6.87 %.
+  const fermented = { ...good, product: 'fermented-dill-pickles' as const, jar: 'quart' as const, minutes: 15, vinegarMl: 0.25 * mlPer('cup'), waterMl: 8 * mlPer('cup') };
+
+  it('computes the tested brine\'s span', () => {
+    expect(FERMENTED_BRINE.minPct).toBeCloseTo(5.353, 3);
+    expect(FERMENTED_BRINE.maxPct).toBeCloseTo(6.871, 3);
+  });
+
+  it('flags a weaker brine by weight and passes the tested one', () => {
+    expect(checkPractical({ ...fermented, saltG: 125 })).toEqual([]);
+    expect(checkPractical({ ...fermented, saltG: 110.4 })).toEqual([]);
+    const [flag] = checkPractical({ ...fermented, saltG: 90 });
+    expect(flag).toMatchObject({ check: 'brine-strength', expected: '≥ 5.35 % salt by weight', actual: '4.41 % salt by weight' });
+    expect(flag.source).toContain('"Dill pickles" (fermented)');
+    // Without the salt the check is skipped, and the form names the field.
+    expect(checkPractical(fermented)).toEqual([]);
+    expect(checkInputsFor('fermented-dill-pickles')).toContain('saltG');
+    expect(checkInputsFor('dilly-beans')).not.toContain('saltG');
+  });
+
+  it('does not read the salt of other products', () => {
+    expect(checks({ saltG: 1 })).toEqual([]);
+  });
+});
+
+describe('checkPractical: processes under 10 minutes', () => {
+  // USDA Complete Guide to Home Canning, Guide 1, "Sterilization of empty jars" (MSU Extension
+  // reproduction): pickled products processed less than 10 minutes go into sterile jars; boil the empty
+  // jars 10 minutes below 1,000 ft, 1 more minute for each further 1,000 ft.
+  const dilly = { ...good, product: 'dilly-beans' as const, vinegarMl: 591.5, waterMl: 591.5, minutes: 5, altitudeFt: 500 };
+
+  it('says the jars must be sterilised, with the minutes for the altitude', () => {
+    const [flag] = checkPractical(dilly);
+    expect(flag).toMatchObject({ check: 'sterilized-jars', expected: 'jars boiled empty 10 min', actual: '5 min process' });
+    expect(flag.source).toMatch(/Guide 1, "Sterilization of empty jars"/);
+    expect(checkPractical({ ...dilly, altitudeFt: -200 })[0]).toMatchObject({ check: 'sterilized-jars', expected: 'jars boiled empty 10 min' });
+    // 10 minutes or more needs no sterilising.
+    expect(checks({ ...dilly, minutes: 10 })).toEqual([]);
+  });
+
+  it('uses the lowest band below sea level', () => {
+    expect(checks({ altitudeFt: -200, minutes: 10 })).toEqual([]);
+    expect(computeExpectations({ ...good, altitudeFt: -200 }).processing).toMatchObject({ minutes: 10, altitudeBand: { fromFt: 0, toFt: 1000 } });
+  });
+});
+
 describe('computeExpectations', () => {
   it('gives the published numbers for the batch', () => {
     const e = computeExpectations({ ...good, altitudeFt: 7000, jar: 'quart' });
@@ -140,6 +233,9 @@ describe('computeExpectations', () => {
     expect(e.headspace).toEqual({ recommendedIn: 0.5 });
     expect(e.pack).toBe('raw');
     expect(e.brine?.aceticAcidPct).toBeCloseTo(2.142857, 5);
+    expect(e.brine).toMatchObject({ testedName: 'Quick fresh-pack dill pickles', testedAceticAcidPct: expect.closeTo(2.142857, 5) });
+    expect(e.brine).not.toHaveProperty('estimatedPh');
+    expect(computeExpectations({ ...good, product: 'dilly-beans', altitudeFt: 0 }).sterilizeJars).toMatchObject({ boilMinutes: 10 });
     expect(e.lowTemperaturePasteurization).toEqual({ waterTempF: [180, 185], minutes: 30 });
   });
 

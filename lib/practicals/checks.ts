@@ -1,7 +1,8 @@
-import { ACID_FOOD_PH, brineAcidity, MIN_VINEGAR_ACIDITY_PCT } from '@/lib/preserving/acidity';
+import { brineAcidity, MIN_VINEGAR_ACIDITY_PCT } from '@/lib/preserving/acidity';
 import { PreservingError } from '@/lib/preserving/errors';
 import { headspaceCheck } from '@/lib/preserving/headspace';
-import { processingTime } from '@/lib/preserving/processing';
+import { processingTime, sterilizeJarsFor, STERILIZE_BELOW_MINUTES } from '@/lib/preserving/processing';
+import { FERMENTED_BRINE } from '@/lib/preserving/salt';
 import { getProduct, type JarSize, type ProductId } from '@/lib/preserving/products';
 import type { PracticalDetails } from '@/lib/validations/practical';
 
@@ -10,7 +11,7 @@ import type { PracticalDetails } from '@/lib/validations/practical';
 // where the batch departs from the published numbers. Brinewright checks arithmetic only: passing
 // every check does not make a batch safe.
 
-export type FlagCheck = 'processing-time' | 'processing-method' | 'pack' | 'headspace' | 'vinegar-acidity' | 'dilution' | 'seals';
+export type FlagCheck = 'processing-time' | 'processing-method' | 'sterilized-jars' | 'pack' | 'headspace' | 'vinegar-acidity' | 'dilution' | 'brine-strength' | 'seals';
 
 export type Flag = {
   check: FlagCheck;
@@ -26,19 +27,22 @@ export type Expectations = {
   processing?: { minutes: number; method: string; altitudeBand: { fromFt: number; toFt: number | null }; source: string } | { unavailable: string };
   lowTemperaturePasteurization?: { waterTempF: readonly number[]; minutes: number } | null;
   headspace?: { recommendedIn: number };
-  brine?: { aceticAcidPct: number; vinegarShare: number; estimatedPh: number };
+  /** The batch's liquid beside its product's tested liquid (no pH: an estimate would read as reassurance). */
+  brine?: { aceticAcidPct: number; vinegarShare: number; testedAceticAcidPct: number; testedName: string; source: string };
+  /** Fermented pickles: the brine's salt by weight beside the tested recipe's. */
+  brineStrength?: { saltPct?: number; minPct: number; maxPct: number; source: string };
+  /** Processes under 10 minutes: the jars are sterilised first. */
+  sterilizeJars?: { boilMinutes: number; source: string };
   pack?: 'raw' | 'hot';
 };
 
 type Input = Partial<PracticalDetails>;
 
-/**
- * The most dilute pickling liquid among the tested recipes of the product list: quick fresh-pack
- * dill pickles, 1½ quarts of 5 % vinegar to 2 quarts of water (USDA Complete Guide to Home Canning,
- * AIB 539, rev. 2015, Guide 6), i.e. 5 % × 6/14 ≈ 2.14 % acetic acid (computed from the recipe).
- */
-export const MIN_BRINE_ACETIC_ACID_PCT = (5 * 6) / 14;
-const MIN_BRINE_SOURCE = 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6, "Quick fresh-pack dill pickles" (6 cups 5 % vinegar to 8 cups water)';
+const FERMENTED = 'fermented-dill-pickles';
+
+/** Salt by weight of a brine from grams of salt and millilitres of water and vinegar (1 g per mL). */
+const saltPctOf = (saltG: number, liquidMl: number) => (saltG / (saltG + liquidMl)) * 100;
+const pct2 = (n: number) => Math.round(n * 100) / 100;
 
 const JAR_LABEL: Record<string, string> = { 'half-pint': 'half-pint', pint: 'pint', quart: 'quart' };
 const fmt = (n: number, digits = 2) => String(Number(n.toFixed(digits)));
@@ -66,21 +70,26 @@ export function computeExpectations(input: Input): Expectations {
     } catch {
       // no recommendation for this product
     }
-    if (input.jar && isNumber(input.altitudeFt) && input.altitudeFt >= 0) {
+    if (input.jar && isNumber(input.altitudeFt)) {
       try {
         const t = processingTime({ product: input.product as ProductId, jar: input.jar as JarSize, altitudeFt: input.altitudeFt });
         out.processing = { minutes: t.minutes, method: t.method, altitudeBand: t.altitudeBand, source: t.source };
         out.lowTemperaturePasteurization = t.lowTemperaturePasteurization ?? null;
+        if (t.sterilizeJars) out.sterilizeJars = { boilMinutes: t.sterilizeJars.boilMinutes, source: t.sterilizeJars.source };
       } catch (error) {
         if (!(error instanceof PreservingError)) throw error;
         out.processing = { unavailable: error.message };
       }
     }
   }
-  if (isNumber(input.vinegarMl) && isNumber(input.vinegarAcidityPct) && isNumber(input.waterMl) && input.vinegarMl > 0 && input.vinegarAcidityPct > 0 && input.waterMl >= 0) {
+  if (product?.id === FERMENTED) {
+    const liquid = (isNumber(input.waterMl) ? input.waterMl : 0) + (isNumber(input.vinegarMl) ? input.vinegarMl : 0);
+    const saltPct = isNumber(input.saltG) && input.saltG > 0 && liquid > 0 ? saltPctOf(input.saltG, liquid) : undefined;
+    out.brineStrength = { saltPct, minPct: FERMENTED_BRINE.minPct, maxPct: FERMENTED_BRINE.maxPct, source: FERMENTED_BRINE.source };
+  } else if (isNumber(input.vinegarMl) && isNumber(input.vinegarAcidityPct) && isNumber(input.waterMl) && input.vinegarMl > 0 && input.vinegarAcidityPct > 0 && input.waterMl >= 0) {
     try {
-      const b = brineAcidity({ vinegarMl: input.vinegarMl, vinegarAcidityPct: input.vinegarAcidityPct, waterMl: input.waterMl });
-      out.brine = { aceticAcidPct: b.aceticAcidPct, vinegarShare: b.vinegarShare, estimatedPh: b.estimatedPh };
+      const b = brineAcidity({ vinegarMl: input.vinegarMl, vinegarAcidityPct: input.vinegarAcidityPct, waterMl: input.waterMl, product: product?.id });
+      out.brine = { aceticAcidPct: b.aceticAcidPct, vinegarShare: b.vinegarShare, testedAceticAcidPct: b.tested.aceticAcidPct, testedName: b.tested.name, source: b.tested.source };
     } catch (error) {
       if (!(error instanceof PreservingError)) throw error;
     }
@@ -89,8 +98,11 @@ export function computeExpectations(input: Input): Expectations {
 }
 
 /** The batch fields checkPractical reads (a check whose fields are empty is skipped, not passed). */
-export const CHECK_INPUTS = ['product', 'pack', 'jar', 'headspaceIn', 'vinegarAcidityPct', 'vinegarMl', 'waterMl', 'method', 'altitudeFt', 'minutes', 'unsealedJars'] as const satisfies readonly (keyof PracticalDetails)[];
+export const CHECK_INPUTS = ['product', 'pack', 'jar', 'headspaceIn', 'vinegarAcidityPct', 'vinegarMl', 'waterMl', 'saltG', 'method', 'altitudeFt', 'minutes', 'unsealedJars'] as const satisfies readonly (keyof PracticalDetails)[];
 export type CheckInput = (typeof CHECK_INPUTS)[number];
+
+/** The check inputs that matter for a product: the brine's salt is read for fermented pickles only. */
+export const checkInputsFor = (product: unknown): readonly CheckInput[] => CHECK_INPUTS.filter((name) => name !== 'saltG' || product === FERMENTED);
 
 /** Every failed check for the batch; checks whose inputs are missing are skipped, so the form can call it as the learner types. */
 export function checkPractical(input: Input): Flag[] {
@@ -99,7 +111,7 @@ export function checkPractical(input: Input): Flag[] {
   const jar = input.jar ? JAR_LABEL[input.jar] ?? input.jar : '';
 
   // Processing time for the product, jar and altitude (the product's published table).
-  if (product && input.jar && isNumber(input.altitudeFt) && input.altitudeFt >= 0 && input.method) {
+  if (product && input.jar && isNumber(input.altitudeFt) && input.method) {
     let published: ReturnType<typeof processingTime> | null = null;
     try {
       published = processingTime({ product: input.product as ProductId, jar: input.jar as JarSize, altitudeFt: input.altitudeFt });
@@ -144,6 +156,18 @@ export function checkPractical(input: Input): Flag[] {
     }
   }
 
+  // Under 10 minutes in boiling water the jars must have been sterilised; the form does not ask, so it is always said.
+  if (input.method === 'boiling-water' && isNumber(input.minutes) && input.minutes < STERILIZE_BELOW_MINUTES) {
+    const sterilize = sterilizeJarsFor(input.minutes, isNumber(input.altitudeFt) ? input.altitudeFt : 0)!;
+    flags.push({
+      check: 'sterilized-jars',
+      message: `Processed ${input.minutes} min, under ${STERILIZE_BELOW_MINUTES} minutes: the jars must be sterilised before filling (boil the empty jars ${isNumber(input.altitudeFt) ? `${sterilize.boilMinutes} minutes at ${input.altitudeFt.toLocaleString('en-US')} ft` : '10 minutes up to 1,000 ft, 1 more minute for each further 1,000 ft'}). Say in the notes how the jars were sterilised.`,
+      expected: isNumber(input.altitudeFt) ? `jars boiled empty ${sterilize.boilMinutes} min` : 'sterilised jars',
+      actual: `${input.minutes} min process`,
+      source: sterilize.source,
+    });
+  }
+
   // The pack the published time assumes.
   if (product && input.pack && input.pack !== product.pack) {
     flags.push({
@@ -184,10 +208,10 @@ export function checkPractical(input: Input): Flag[] {
     });
   }
 
-  // Dilution: the brine's acidity from the vinegar and water amounts. Fermented pickles take their
-  // acid from the fermentation, so only their vinegar's strength is checked.
+  // Dilution: each vinegar-pickled product against its own tested liquid (with no product chosen, the
+  // weakest tested liquid). Compared at 0.01 %, the precision the flag shows.
   if (
-    input.product !== 'fermented-dill-pickles' &&
+    input.product !== FERMENTED &&
     isNumber(input.vinegarMl) &&
     isNumber(input.vinegarAcidityPct) &&
     isNumber(input.waterMl) &&
@@ -196,27 +220,34 @@ export function checkPractical(input: Input): Flag[] {
     input.waterMl >= 0
   ) {
     try {
-      const b = brineAcidity({ vinegarMl: input.vinegarMl, vinegarAcidityPct: input.vinegarAcidityPct, waterMl: input.waterMl });
-      const actual = `${fmt(b.aceticAcidPct)} % acetic acid (${Math.round(b.vinegarShare * 100)} % of the liquid is vinegar)`;
-      if (b.estimatedPh > ACID_FOOD_PH) {
+      const b = brineAcidity({ vinegarMl: input.vinegarMl, vinegarAcidityPct: input.vinegarAcidityPct, waterMl: input.waterMl, product: product?.id });
+      if (b.belowTested) {
+        const tested = b.tested.weakest ? `the weakest tested liquid Brinewright lists (${b.tested.name.toLowerCase()})` : `the tested liquid of ${b.tested.name.toLowerCase()}`;
         flags.push({
           check: 'dilution',
-          message: `The brine's estimated pH is ${fmt(b.estimatedPh)}, above ${ACID_FOOD_PH}, the line for acid foods: this mix is not acid enough for a boiling-water canner.`,
-          expected: `pH ≤ ${ACID_FOOD_PH}`,
-          actual: `pH ${fmt(b.estimatedPh)}`,
-          source: '21 CFR 114.3 (acidified foods)',
-        });
-      } else if (b.aceticAcidPct < MIN_BRINE_ACETIC_ACID_PCT - 1e-9) {
-        flags.push({
-          check: 'dilution',
-          message: `The brine is ${fmt(b.aceticAcidPct)} % acetic acid, more dilute than any of the tested recipes Brinewright lists (the weakest, quick fresh-pack dills, is about ${fmt(MIN_BRINE_ACETIC_ACID_PCT)} %). Never add water beyond the tested recipe's proportions.`,
-          expected: `≥ ${fmt(MIN_BRINE_ACETIC_ACID_PCT)} % acetic acid`,
-          actual,
-          source: MIN_BRINE_SOURCE,
+          message: `The brine is ${fmt(b.aceticAcidPct)} % acetic acid, weaker than ${tested}, ${fmt(b.tested.aceticAcidPct)} %. Never add water beyond the tested recipe's proportions.`,
+          expected: `≥ ${fmt(b.tested.aceticAcidPct)} % acetic acid`,
+          actual: `${fmt(b.aceticAcidPct)} % acetic acid (${Math.round(b.vinegarShare * 100)} % of the liquid is vinegar)`,
+          source: b.tested.source,
         });
       }
     } catch (error) {
       if (!(error instanceof PreservingError)) throw error;
+    }
+  }
+
+  // Fermented pickles make their own acid: their check is the brine's salt by weight.
+  if (input.product === FERMENTED && isNumber(input.saltG) && isNumber(input.waterMl) && input.saltG >= 0 && input.waterMl > 0) {
+    const liquidMl = input.waterMl + (isNumber(input.vinegarMl) && input.vinegarMl > 0 ? input.vinegarMl : 0);
+    const saltPct = saltPctOf(input.saltG, liquidMl);
+    if (pct2(saltPct) < pct2(FERMENTED_BRINE.minPct)) {
+      flags.push({
+        check: 'brine-strength',
+        message: `The brine is ${fmt(saltPct)} % salt by weight, weaker than the tested fermented dill brine (${fmt(FERMENTED_BRINE.minPct)} to ${fmt(FERMENTED_BRINE.maxPct)} %, 1/2 cup canning salt per 8 1/4 cups of water and vinegar). Too little salt lets spoilage organisms grow before the fermentation makes the acid.`,
+        expected: `≥ ${fmt(FERMENTED_BRINE.minPct)} % salt by weight`,
+        actual: `${fmt(saltPct)} % salt by weight`,
+        source: FERMENTED_BRINE.source,
+      });
     }
   }
 

@@ -1,4 +1,5 @@
 import { AppError } from '@/lib/errors';
+import { readBodyBytes } from '@/lib/server/body';
 import { MAX_PHOTO_BYTES } from './images';
 
 // Room for the multipart boundaries and the other small fields around the photo.
@@ -12,26 +13,11 @@ export const TOO_LARGE_MESSAGE = 'That photo is larger than 10 MB. Choose a smal
 export async function readPhotoForm(request: Request): Promise<{ file: Buffer; fields: Record<string, string> }> {
   const type = request.headers.get('content-type') ?? '';
   if (!type.toLowerCase().startsWith('multipart/form-data')) throw new AppError('bad_request', 'Send the photo as multipart/form-data with a "photo" field.');
-  const limit = MAX_PHOTO_BYTES + MULTIPART_OVERHEAD;
-  const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > limit) throw new AppError('too_large', TOO_LARGE_MESSAGE);
-  if (!request.body) throw new AppError('bad_request', 'The upload is empty.');
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  const reader = request.body.getReader();
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > limit) {
-      await reader.cancel().catch(() => undefined);
-      throw new AppError('too_large', TOO_LARGE_MESSAGE);
-    }
-    chunks.push(value);
-  }
+  const body = await readBodyBytes(request, MAX_PHOTO_BYTES + MULTIPART_OVERHEAD, TOO_LARGE_MESSAGE);
+  if (!body) throw new AppError('bad_request', 'The upload is empty.');
   let form: FormData;
   try {
-    form = await new Response(Buffer.concat(chunks), { headers: { 'content-type': type } }).formData();
+    form = await new Response(body as BodyInit, { headers: { 'content-type': type } }).formData();
   } catch {
     throw new AppError('bad_request', 'The upload could not be read as a form.');
   }

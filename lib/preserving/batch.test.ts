@@ -51,3 +51,12 @@ describe('planBatch', () => {
     expect(() => planBatch({ product: 'dilly-beans', jar: 'pint', jars: -2 })).toThrow('The number of jars cannot be negative.');
   });
 });
+
+describe('planBatch: processes under 10 minutes', () => {
+  it('tells the dilly-bean planner the jars must be sterilised (5 min at 0–1,000 ft; USDA Complete Guide, Guide 1)', () => {
+    const plan = planBatch({ product: 'dilly-beans', jar: 'pint', jars: 4 });
+    expect(plan.sterilizeJars?.message).toMatch(/processed 5 minutes at up to 1,000 ft, under 10 minutes: there, the jars must be sterilised/);
+    expect(plan.sterilizeJars?.source).toMatch(/Sterilization of empty jars/);
+    expect(planBatch({ product: 'fresh-pack-dill-pickles', jar: 'pint', jars: 4 })).not.toHaveProperty('sterilizeJars');
+  });
+});

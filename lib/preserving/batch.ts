@@ -1,5 +1,6 @@
 import { JARS_RULE, checkChoice, checkNumber, outsideTable } from './errors';
-import { JAR_SIZES, getProduct, type JarSize, type ProductId } from './products';
+import { JAR_SIZES, MAX_TABLE_ALTITUDE_FT, PRODUCTS, getProduct, type JarSize, type ProductId } from './products';
+import { STERILIZE_BELOW_MINUTES, STERILIZE_SOURCE, sterilizingMinutes } from './processing';
 import { JAR_PINTS, convert, mlPer } from './units';
 
 type IngredientUnit = 'lb' | 'cup' | 'tbsp' | 'tsp' | 'gallon' | 'head' | 'clove' | 'stick' | 'whole';
@@ -127,7 +128,17 @@ const COUNTED: IngredientUnit[] = ['head', 'clove', 'stick', 'whole'];
 const round2 = (n: number) => Math.round(n * 100) / 100;
 
 export type PlannedIngredient = { name: string; amount: number; unit: IngredientUnit; metric?: { amount: number; unit: 'kg' | 'mL' | 'L' } };
-export type BatchPlan = { produceLb: number | null; produceKg: number | null; brineMl: number; extraPct: number; ingredients: PlannedIngredient[]; scale: number; source: string };
+export type BatchPlan = {
+  produceLb: number | null;
+  produceKg: number | null;
+  brineMl: number;
+  extraPct: number;
+  ingredients: PlannedIngredient[];
+  scale: number;
+  source: string;
+  /** Where the jar size's process is under 10 minutes (some altitude bands): the jars must be sterilised. */
+  sterilizeJars?: { message: string; source: string };
+};
 
 /** Produce, brine and the other ingredients for N jars, scaled from the tested recipe's yield. */
 export function planBatch({ product, jar, jars }: { product: string; jar: JarSize | string; jars: number }): BatchPlan {
@@ -156,5 +167,23 @@ export function planBatch({ product, jar, jars }: { product: string; jar: JarSiz
     ingredients,
     scale,
     source: recipe.source,
+    ...sterilizeNote(found.id, size),
+  };
+}
+
+/** The sterilising step where any altitude band of the jar size's table processes under 10 minutes. */
+function sterilizeNote(id: ProductId, size: JarSize): Pick<BatchPlan, 'sterilizeJars'> {
+  const product = PRODUCTS[id];
+  const row = product.times[size] ?? [];
+  const short = product.bands.map((band, i) => ({ band, minutes: row[i] })).filter((b) => b.minutes < STERILIZE_BELOW_MINUTES);
+  if (!short.length) return {};
+  const where = short
+    .map(({ band, minutes }) => `${minutes} minutes at ${band.fromFt === 0 ? 'up to' : `${band.fromFt.toLocaleString('en-US')} to`} ${(band.toFt ?? MAX_TABLE_ALTITUDE_FT).toLocaleString('en-US')} ft`)
+    .join(', ');
+  return {
+    sterilizeJars: {
+      message: `${product.name} in ${size} jars are processed ${where}, under ${STERILIZE_BELOW_MINUTES} minutes: there, the jars must be sterilised before filling (boil the empty jars ${sterilizingMinutes(0)} minutes up to 1,000 ft, 1 more minute for each further 1,000 ft).`,
+      source: STERILIZE_SOURCE,
+    },
   };
 }

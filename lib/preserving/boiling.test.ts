@@ -72,8 +72,14 @@ describe('boilingPoint', () => {
     }
   });
 
-  it('refuses negative altitudes and altitudes above the model layer', () => {
-    expect(() => boilingPoint({ altitudeFt: -1 })).toThrow('The altitude in feet cannot be negative.');
+  it('answers below sea level (1976 standard atmosphere: pressure above 101,325 Pa, water boils above 212 °F)', () => {
+    const below = boilingPoint({ altitudeFt: -282 });
+    expect(below.pressurePa).toBeGreaterThan(101325);
+    expect(below.fahrenheit).toBeGreaterThan(boilingPoint({ altitudeFt: 0 }).fahrenheit);
+  });
+
+  it('refuses altitudes below the lowest dry land and above the model layer', () => {
+    expect(() => boilingPoint({ altitudeFt: -1501 })).toThrow('The altitude in feet must be at least -1,500.');
     expect(() => boilingPoint({ altitudeFt: 40000 })).toThrow(/local extension office/);
   });
 });

@@ -104,7 +104,10 @@ function capital(text: string): string {
  * the same names) and the calculator components, so all three give the same message.
  */
 export const RULES = {
-  altitudeFt: { param: 'altitudeFt', label: 'the altitude in feet' },
+  // Towns below sea level are allowed and use the lowest band; the lowest dry land, the Dead Sea
+  // shore, is about 1,410 ft (430 m) below sea level (from memory).
+  altitudeFt: { param: 'altitudeFt', label: 'the altitude in feet', min: -1500 },
+  altitudeM: { param: 'altitudeM', label: 'the altitude in metres', min: -457 },
   jars: { param: 'jars', label: 'the number of jars', min: 1, max: 500, integer: true },
   measuredIn: { param: 'measuredIn', label: 'the measured headspace in inches', max: 6 },
   vinegarMl: { param: 'vinegarMl', label: 'the vinegar in mL' },

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { AppError, parseOrThrow, route } from '@/lib/errors';
-import { PreservingError, checkChoice, parseNumber, type NumberRule } from './errors';
+import { PreservingError, RULES, checkChoice, parseNumber, type NumberRule } from './errors';
+import { altitudeInFeet } from './units';
 
 /**
  * Query-string schemas and the error mapping for the /api/tools/* routes. Server-side only by use
@@ -47,8 +48,32 @@ export function choiceParam<T extends string>(choices: readonly T[], param: stri
     });
 }
 
+/**
+ * The altitude of a query: `altitudeFt`, or `altitudeM` for metres (exactly one of them), read into
+ * feet. Both or neither is a 400 naming them.
+ */
+export function withAltitude<S extends z.ZodRawShape>(shape: S) {
+  return z
+    .object({ ...shape, altitudeFt: optionalNumberParam(RULES.altitudeFt), altitudeM: optionalNumberParam(RULES.altitudeM) })
+    .transform((query, ctx) => {
+      const { altitudeFt, altitudeM, ...rest } = query as { altitudeFt?: number; altitudeM?: number } & Record<string, unknown>;
+      if ((altitudeFt === undefined) === (altitudeM === undefined)) {
+        // Neither: the same sentence as a missing feet value; both: refused rather than one silently winning.
+        const message = altitudeFt === undefined ? `Enter ${RULES.altitudeFt.label} as a number.` : 'Give the altitude once: altitudeFt in feet, or altitudeM in metres.';
+        ctx.addIssue({ code: 'custom', path: ['altitudeFt'], message });
+        return z.NEVER;
+      }
+      return { ...(rest as z.infer<z.ZodObject<S>>), altitudeFt: altitudeFt ?? altitudeInFeet(altitudeM as number, 'm') };
+    });
+}
+
 /** A product id: must be given (400); an unknown one is the function's 404. */
 export const productParam = z.string({ error: 'Choose a product.' }).trim().min(1, 'Choose a product.');
+/** An optional product id: absent or empty means "not given"; an unknown one is the function's 404. */
+export const optionalProductParam = z
+  .string()
+  .nullish()
+  .transform((raw) => (raw === undefined || raw === null || raw.trim() === '' ? undefined : raw.trim()));
 
 /** A free-text unit name, checked by the function it is passed to. */
 export const unitParam = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, `Choose ${what}.`);

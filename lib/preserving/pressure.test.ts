@@ -31,6 +31,11 @@ describe('pressureForAltitude', () => {
   it('answers outside-table above 10,000 ft and invalid for a bad gauge or altitude', () => {
     expect(() => pressureForAltitude({ gauge: 'dial', altitudeFt: 10500 })).toThrow(/local extension office/);
     expect(() => pressureForAltitude({ gauge: 'spring', altitudeFt: 0 })).toThrow('Choose a gauge type: weighted, dial.');
-    expect(() => pressureForAltitude({ gauge: 'dial', altitudeFt: -1 })).toThrow('The altitude in feet cannot be negative.');
+    expect(() => pressureForAltitude({ gauge: 'dial', altitudeFt: -1501 })).toThrow('The altitude in feet must be at least -1,500.');
+  });
+
+  it('uses the lowest band below sea level (USDA Guide 4: dial 11 psi, weighted 10 psi at 0–1,000 ft)', () => {
+    expect(pressureForAltitude({ gauge: 'dial', altitudeFt: -200 })).toMatchObject({ pounds: 11, altitudeBand: { fromFt: 0, toFt: 2000 } });
+    expect(pressureForAltitude({ gauge: 'weighted', altitudeFt: -1400 }).pounds).toBe(10);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { LOCAL_GUIDANCE, PreservingError } from './errors';
-import { isProcessedLongEnough, processingTime } from './processing';
+import { STERILIZE_SOURCE, isProcessedLongEnough, processingTime, sterilizingMinutes } from './processing';
 
 /** The altitudes tested in every band: each band's edges and a point inside. */
 const BAND_POINTS: [number, 0 | 1 | 2][] = [
@@ -94,7 +94,7 @@ describe('processingTime', () => {
   });
 
   it('refuses invalid input naming the parameter, and unknown products as not-found', () => {
-    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: -5 }))).toMatchObject({ kind: 'invalid', param: 'altitudeFt', message: 'The altitude in feet cannot be negative.' });
+    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: -1501 }))).toMatchObject({ kind: 'invalid', param: 'altitudeFt', message: 'The altitude in feet must be at least -1,500.' });
     expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: Number.NaN }))).toMatchObject({ kind: 'invalid', param: 'altitudeFt' });
     expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'gallon', altitudeFt: 0 }))).toMatchObject({ kind: 'invalid', param: 'jar' });
     expect(catchError(() => processingTime({ product: 'okra', jar: 'pint', altitudeFt: 0 }))).toMatchObject({ kind: 'not-found', param: 'product' });
@@ -116,3 +116,31 @@ function catchError(fn: () => unknown): PreservingError {
   }
   throw new Error('expected a PreservingError');
 }
+
+describe('sterilised jars for processes under 10 minutes', () => {
+  // USDA Complete Guide to Home Canning, Guide 1, "Sterilization of empty jars" (MSU Extension
+  // reproduction): pickled products processed less than 10 minutes go into sterile jars; boil empty
+  // jars 10 minutes below 1,000 ft, 1 additional minute for each additional 1,000 ft.
+  it('boils empty jars 10 minutes up to 1,000 ft and 1 more for each further 1,000 ft or part of it', () => {
+    expect(sterilizingMinutes(-200)).toBe(10);
+    expect(sterilizingMinutes(1000)).toBe(10);
+    expect(sterilizingMinutes(1001)).toBe(11);
+    expect(sterilizingMinutes(2000)).toBe(11);
+    expect(sterilizingMinutes(5200)).toBe(15);
+    expect(sterilizingMinutes(10000)).toBe(19);
+  });
+
+  it('says so for dilly beans at 0–1,000 ft (5 min) and not at 10 minutes or more', () => {
+    const low = processingTime({ product: 'dilly-beans', jar: 'pint', altitudeFt: 800 });
+    expect(low.minutes).toBe(5);
+    expect(low.sterilizeJars).toMatchObject({ boilMinutes: 10, source: STERILIZE_SOURCE });
+    expect(low.sterilizeJars!.message).toMatch(/must be sterilised before filling/);
+    expect(processingTime({ product: 'dilly-beans', jar: 'pint', altitudeFt: 1200 })).not.toHaveProperty('sterilizeJars');
+    expect(processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: 0 })).not.toHaveProperty('sterilizeJars');
+  });
+
+  it('uses the lowest band below sea level (towns below sea level)', () => {
+    expect(processingTime({ product: 'pickled-beets', jar: 'pint', altitudeFt: -200 })).toMatchObject({ minutes: 30, altitudeBand: { fromFt: 0, toFt: 1000 } });
+    expect(processingTime({ product: 'dilly-beans', jar: 'pint', altitudeFt: -1400 }).sterilizeJars?.boilMinutes).toBe(10);
+  });
+});

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { PreservingError } from './errors';
-import { JAR_SIZES, PRODUCTS, PRODUCT_IDS, getProduct } from './products';
+import { RECIPES } from './batch';
+import { JAR_SIZES, PRODUCTS, PRODUCT_IDS, VINEGAR_PICKLED_IDS, WEAKEST_TESTED, getProduct, testedAceticAcidPct } from './products';
 
 describe('products', () => {
   it('holds the seven pickled products of the shared contract', () => {
@@ -66,5 +67,41 @@ describe('products', () => {
       expect((error as PreservingError).kind).toBe('not-found');
       expect((error as PreservingError).param).toBe('product');
     }
+  });
+});
+
+describe('tested liquids', () => {
+  // USDA Complete Guide to Home Canning (rev. 2015), Guide 6; acetic acid computed as vinegar acid over
+  // vinegar + water (dissolved sugar not counted in the volume).
+  it.each([
+    ['fresh-pack-dill-pickles', 2.142857, 'Guide 6:20, 1 1/2 qt vinegar to 2 qt water (MSU Extension reproduction)'],
+    ['bread-and-butter-pickles', 5, 'Guide 6:19, 4 cups vinegar, 4 1/2 cups sugar, no water (MSU Extension reproduction)'],
+    ['pickle-relish', 5, '6 cups vinegar, no water (from memory)'],
+    ['dilly-beans', 2.5, 'equal parts vinegar and water (So Easy to Preserve, 6th ed., via University of Minnesota Extension)'],
+    ['pickled-beets', 3.333333, '4 cups vinegar to 2 cups water (from memory)'],
+    ['pickled-hot-peppers', 4.166667, '5 cups vinegar to 1 cup water (secondary pages quoting NCHFP)'],
+    ['fermented-dill-pickles', 0.151515, '1/4 cup vinegar to 8 cups water per gallon (its acid comes from fermenting)'],
+  ] as const)('%s: %s per cent acetic acid (%s)', (id, pct, _source) => {
+    const l = PRODUCTS[id].testedLiquid;
+    expect(testedAceticAcidPct(l)).toBeCloseTo(pct, 5);
+    expect(l.vinegarAcidityPct).toBe(5);
+    expect(l.sugarCountsInVolume).toBe(false);
+    expect(l.source.length).toBeGreaterThan(20);
+  });
+
+  it('agrees with the liquids the batch planner scales', () => {
+    for (const id of PRODUCT_IDS) {
+      const brine = RECIPES[id].ingredients.filter((i) => i.brine);
+      const vinegar = brine.filter((i) => /vinegar/.test(i.name)).reduce((sum, i) => sum + i.amount, 0);
+      const water = brine.filter((i) => /^water/.test(i.name)).reduce((sum, i) => sum + i.amount, 0);
+      const l = PRODUCTS[id].testedLiquid;
+      // Same proportions (the dilly beans' planner recipe is the half-size So Easy to Preserve one).
+      expect(vinegar / (vinegar + water), id).toBeCloseTo(l.vinegarCups / (l.vinegarCups + l.waterCups), 10);
+    }
+  });
+
+  it('names the weakest tested vinegar liquid: quick fresh-pack dill pickles', () => {
+    expect(WEAKEST_TESTED.product.id).toBe('fresh-pack-dill-pickles');
+    expect(VINEGAR_PICKLED_IDS).not.toContain('fermented-dill-pickles');
   });
 });

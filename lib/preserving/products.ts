@@ -65,9 +65,34 @@ export type Product = {
   confidence: Confidence;
   /** Where the guide allows 180–185 °F for 30 minutes instead of the boiling-water time. */
   lowTemperaturePasteurization?: boolean;
+  /** The pickling liquid of the product's tested recipe. */
+  testedLiquid: TestedLiquid;
+};
+
+/**
+ * The liquid poured over the produce in a tested recipe, in US cups as the recipe gives it.
+ * Dissolved sugar is NOT counted in the liquid's volume (`sugarCountsInVolume: false`): the recipes
+ * give sugar by dry measure and the learner's batch is entered as vinegar and water only, so the
+ * comparison is like for like; counting the sugar's volume would only lower the floor.
+ */
+export type TestedLiquid = {
+  vinegarCups: number;
+  vinegarAcidityPct: number;
+  waterCups: number;
+  /** Sugar dissolved in the liquid, dry US cups (not counted in the volume). */
+  sugarCups?: number;
+  /** Another liquid counted in the volume (none of the Guide 6 recipes here has one). */
+  other?: { name: string; cups: number };
+  /** Canning or pickling salt in the liquid, dry US cups (fermented pickles: the brine's salt). */
+  saltCups?: number;
+  sugarCountsInVolume: false;
+  source: string;
+  confidence: Confidence;
 };
 
 const GUIDE6 = 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6';
+
+const liquid = (l: Omit<TestedLiquid, 'vinegarAcidityPct' | 'sugarCountsInVolume'>): TestedLiquid => ({ vinegarAcidityPct: 5, sugarCountsInVolume: false, ...l });
 
 export const PRODUCTS: Record<ProductId, Product> = {
   'fresh-pack-dill-pickles': {
@@ -81,6 +106,9 @@ export const PRODUCTS: Record<ProductId, Product> = {
     source: `${GUIDE6}, "Quick fresh-pack dill pickles", recommended process time table`,
     confidence: 'verified',
     lowTemperaturePasteurization: true,
+    // 1 1/2 qt vinegar (5 %), 2 qt water, 1/2 cup salt, 1/4 cup sugar (Guide 6:20 as reproduced by
+    // Michigan State University Extension, 1997, from the 1994 edition).
+    testedLiquid: liquid({ vinegarCups: 6, waterCups: 8, sugarCups: 0.25, saltCups: 0.5, source: `${GUIDE6}, "Quick fresh-pack dill pickles": 1 1/2 qt vinegar (5 %), 2 qt water, 1/4 cup sugar, 1/2 cup salt`, confidence: 'verified' }),
   },
   'bread-and-butter-pickles': {
     id: 'bread-and-butter-pickles',
@@ -93,6 +121,8 @@ export const PRODUCTS: Record<ProductId, Product> = {
     source: `${GUIDE6}, "Bread-and-butter pickles", recommended process time table`,
     confidence: 'verified',
     lowTemperaturePasteurization: true,
+    // 4 cups vinegar (5 %), 4 1/2 cups sugar, no water (Guide 6:19, Michigan State University Extension reproduction).
+    testedLiquid: liquid({ vinegarCups: 4, waterCups: 0, sugarCups: 4.5, source: `${GUIDE6}, "Bread-and-butter pickles": 4 cups vinegar (5 %), 4 1/2 cups sugar, no water`, confidence: 'verified' }),
   },
   'pickle-relish': {
     id: 'pickle-relish',
@@ -104,6 +134,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
     source: `${GUIDE6}, "Pickle relish", recommended process time table`,
     confidence: 'verified',
+    testedLiquid: liquid({ vinegarCups: 6, waterCups: 0, sugarCups: 2, source: `${GUIDE6}, "Pickle relish": 6 cups white vinegar (5 %), 2 cups sugar, no water (from memory; the batch planner's recipe has the same)`, confidence: 'memory' }),
   },
   'dilly-beans': {
     id: 'dilly-beans',
@@ -115,6 +146,10 @@ export const PRODUCTS: Record<ProductId, Product> = {
     times: { pint: [5, 10, 15] },
     source: `${GUIDE6}, "Pickled dilly beans", recommended process time table`,
     confidence: 'secondary',
+    // Equal parts vinegar and water: So Easy to Preserve, 6th ed., as reproduced by University of
+    // Minnesota Extension (2 1/2 cups each, read there); Guide 6's own version has 4 cups each (from
+    // memory, also on secondary pages). The batch planner scales the same recipe.
+    testedLiquid: liquid({ vinegarCups: 2.5, waterCups: 2.5, saltCups: 0.25, source: 'So Easy to Preserve, 6th ed. (University of Georgia Extension, 2014), "Pickled dilly beans": 2 1/2 cups white vinegar (5 %), 2 1/2 cups water, as reproduced by University of Minnesota Extension', confidence: 'secondary' }),
   },
   'pickled-beets': {
     id: 'pickled-beets',
@@ -128,6 +163,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     // 1,001–3,000 ft, the other prints 45 there, out of order with the rest (a misprint, taken as 35).
     source: `${GUIDE6}, "Pickled beets", recommended process time table (four altitude bands)`,
     confidence: 'secondary',
+    testedLiquid: liquid({ vinegarCups: 4, waterCups: 2, sugarCups: 2, source: `${GUIDE6}, "Pickled beets": 4 cups vinegar (5 %), 2 cups water, 2 cups sugar (from memory, not confirmed here)`, confidence: 'memory' }),
   },
   'pickled-hot-peppers': {
     id: 'pickled-hot-peppers',
@@ -139,6 +175,7 @@ export const PRODUCTS: Record<ProductId, Product> = {
     times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
     source: `${GUIDE6}, "Pickled hot peppers", recommended process time table`,
     confidence: 'verified',
+    testedLiquid: liquid({ vinegarCups: 5, waterCups: 1, sugarCups: 0.125, source: `${GUIDE6}, "Pickled hot peppers": 5 cups vinegar (5 %), 1 cup water, 2 tbsp sugar (read on secondary pages quoting the National Center for Home Food Preservation)`, confidence: 'secondary' }),
   },
   'fermented-dill-pickles': {
     id: 'fermented-dill-pickles',
@@ -151,6 +188,9 @@ export const PRODUCTS: Record<ProductId, Product> = {
     source: `${GUIDE6}, "Dill pickles" (fermented), recommended process time table`,
     confidence: 'verified',
     lowTemperaturePasteurization: true,
+    // Per gallon of crock: 1/2 cup salt, 1/4 cup vinegar (5 %), 8 cups water. Its acid comes from the
+    // fermentation, so the check that fits it is the brine's salt by weight (BRINE_BY_WEIGHT below).
+    testedLiquid: liquid({ vinegarCups: 0.25, waterCups: 8, saltCups: 0.5, source: `${GUIDE6}, "Dill pickles" (fermented): per gallon, 1/2 cup salt, 1/4 cup vinegar (5 %), 8 cups water`, confidence: 'verified' }),
   },
 };
 
@@ -172,3 +212,17 @@ export function getProduct(id: string): Product {
 
 /** Options for a product picker: id and plain name. */
 export const PRODUCT_OPTIONS = PRODUCT_IDS.map((id) => ({ value: id, label: PRODUCTS[id].name }));
+
+/** A tested liquid's acetic acid in g per 100 mL: vinegar acid over vinegar + water + other liquid
+ * (the volumes are all in cups, so the unit cancels; dissolved sugar not counted, see TestedLiquid). */
+export function testedAceticAcidPct(l: TestedLiquid): number {
+  return (l.vinegarCups * l.vinegarAcidityPct) / (l.vinegarCups + l.waterCups + (l.other?.cups ?? 0));
+}
+
+/** Products whose acid comes from the vinegar of their tested liquid (fermented pickles make their own). */
+export const VINEGAR_PICKLED_IDS = PRODUCT_IDS.filter((id) => id !== 'fermented-dill-pickles');
+
+/** The weakest tested vinegar liquid in the product table (quick fresh-pack dill pickles, 6 : 8). */
+export const WEAKEST_TESTED = VINEGAR_PICKLED_IDS.map((id) => ({ product: PRODUCTS[id], aceticAcidPct: testedAceticAcidPct(PRODUCTS[id].testedLiquid) })).reduce((a, b) =>
+  b.aceticAcidPct < a.aceticAcidPct ? b : a,
+);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SALTS, SALT_KINDS, saltForBrine, saltToGrams } from './salt';
+import { BY_SPOON_NOTE, SALTS, SALT_KINDS, saltForBrine, saltToGrams } from './salt';
 import { mlPer } from './units';
 
 describe('saltToGrams', () => {
@@ -57,5 +57,36 @@ describe('saltForBrine', () => {
 
   it('refuses a brine stronger than saturated salt water (about 26 % at 20 °C, CRC Handbook)', () => {
     expect(() => saltForBrine({ salt: 'canning', waterMl: 1000, brinePct: 30 })).toThrow('The brine strength in % must be at most 26.');
+  });
+});
+
+describe('how sure a spoonful is', () => {
+  it('gives every salt a span of grams per teaspoon and its source, and says by weight is exact', () => {
+    for (const kind of SALT_KINDS) {
+      const { gPerTsp, gPerTspRange, gPerTspSource } = SALTS[kind];
+      expect(gPerTspRange[0]).toBeLessThanOrEqual(gPerTsp);
+      expect(gPerTspRange[1]).toBeGreaterThanOrEqual(gPerTsp);
+      expect(gPerTspSource).toMatch(/memory|secondhand|secondary|USDA/);
+    }
+    expect(BY_SPOON_NOTE).toMatch(/By weight is exact; by spoon or cup is approximate/);
+  });
+
+  it('answers a range by spoon and an exact figure by weight', () => {
+    // Canning salt: no published g/tsp found; 4.6 (UW-Extension B2267, 220 g per cup, quoted secondhand) to 6 g (from memory).
+    const spoon = saltToGrams({ salt: 'canning', amount: 1, unit: 'tbsp', waterMl: 1000 });
+    expect(spoon.byWeight).toBe(false);
+    expect(spoon.gramsRange[0]).toBeCloseTo(13.8, 10);
+    expect(spoon.gramsRange[1]).toBeCloseTo(18, 10);
+    expect(spoon.brinePctRange![0]).toBeCloseTo((13.8 / 1013.8) * 100, 9);
+    expect(spoon.source).toBe(SALTS.canning.gPerTspSource);
+    const weighed = saltToGrams({ salt: 'canning', amount: 50, unit: 'g', waterMl: 950 });
+    expect(weighed).toMatchObject({ byWeight: true, gramsRange: [50, 50], brinePct: 5, brinePctRange: [5, 5] });
+  });
+
+  it('gives the teaspoons for a brine as a range too', () => {
+    const r = saltForBrine({ salt: 'canning', waterMl: 950, brinePct: 5 });
+    expect(r.grams).toBeCloseTo(50, 9);
+    expect(r.teaspoonsRange[0]).toBeCloseTo(50 / 6, 9);
+    expect(r.teaspoonsRange[1]).toBeCloseTo(50 / 4.6, 9);
   });
 });

@@ -43,3 +43,10 @@ describe('sugarToGrams', () => {
     expect(() => sugarToGrams({ sugar: 'granulated', amount: 0, unit: 'cup', liquidMl: 0 })).toThrow(/both are 0/);
   });
 });
+
+describe('how sure a cupful is', () => {
+  it('says whether the grams are exact (by weight) or approximate (by cup), with the source of the figure', () => {
+    expect(sugarToGrams({ sugar: 'granulated', amount: 1, unit: 'cup' })).toMatchObject({ byWeight: false, source: SUGARS.granulated.gPerCupSource });
+    expect(sugarToGrams({ sugar: 'granulated', amount: 200, unit: 'g' })).toMatchObject({ byWeight: true, grams: 200 });
+  });
+});

@@ -1,5 +1,5 @@
 import { PreservingError, checkChoice, checkNumber, RULES } from './errors';
-import { gramsOf, type Unit } from './units';
+import { gramsOf, isUnit, unitKind, type Unit } from './units';
 
 export const SUGAR_KINDS = ['granulated', 'brown-packed'] as const;
 export type SugarKind = (typeof SUGAR_KINDS)[number];
@@ -28,7 +28,8 @@ export const SUGARS: Record<SugarKind, SugarInfo> = {
 const WATER_G_PER_ML = 1;
 
 export type SugarToGramsInput = { sugar: SugarKind | string; amount: number; unit: Unit | string; liquidMl?: number };
-export type SugarToGramsResult = { grams: number; gPerCup: number; syrupPct?: number; why: string };
+/** `byWeight` false means the grams come from a cup figure: approximate (see BY_SPOON_NOTE in salt.ts). */
+export type SugarToGramsResult = { grams: number; gPerCup: number; byWeight: boolean; source: string; syrupPct?: number; why: string };
 
 /** Weight of an amount of sugar given by volume or weight, and its share by weight of a syrup. */
 export function sugarToGrams({ sugar, amount, unit, liquidMl }: SugarToGramsInput): SugarToGramsResult {
@@ -36,7 +37,8 @@ export function sugarToGrams({ sugar, amount, unit, liquidMl }: SugarToGramsInpu
   const info = SUGARS[kind];
   const value = checkNumber(amount, RULES.sugarAmount);
   const grams = gramsOf(value, unit, info.gPerCup, 'the sugar');
-  const result: SugarToGramsResult = { grams, gPerCup: info.gPerCup, why: info.why };
+  const byWeight = isUnit(unit) && unitKind(unit) === 'mass';
+  const result: SugarToGramsResult = { grams, gPerCup: info.gPerCup, byWeight, source: info.gPerCupSource, why: info.why };
   if (liquidMl !== undefined) {
     const liquid = checkNumber(liquidMl, RULES.liquidMl);
     if (grams + liquid <= 0) throw new PreservingError('invalid', 'Enter some sugar or liquid: both are 0.', 'liquidMl');

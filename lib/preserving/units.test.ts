@@ -2,7 +2,7 @@ import { createRequire } from 'node:module';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { PreservingError } from './errors';
-import { UNITS, convert, unitKind, type Unit } from './units';
+import { UNITS, altitudeInFeet, convert, unitKind, type Unit } from './units';
 
 // convert-units ships no type declarations; load it with a small local type.
 type ConvertUnits = (value: number) => { from: (unit: string) => { to: (unit: string) => number } };
@@ -87,5 +87,19 @@ describe('convert: refusals', () => {
     expect(refusal(() => convert(-1, 'cup', 'mL'))).toMatchObject({ kind: 'invalid', param: 'value' });
     expect(convert(-18, 'C', 'F')).toBeCloseTo(-0.4, 10);
     expect(refusal(() => convert(-500, 'F', 'C'))).toMatchObject({ kind: 'invalid', param: 'value' });
+  });
+});
+
+describe('altitudeInFeet', () => {
+  it('reads metres exactly (1 ft = 0.3048 m, NIST Handbook 44) and feet as typed', () => {
+    expect(altitudeInFeet(304.8, 'm')).toBeCloseTo(1000, 10);
+    expect(altitudeInFeet(1829, 'ft')).toBe(1829);
+    expect(altitudeInFeet(-86, 'm')).toBeCloseTo(-282.152, 3);
+  });
+
+  it('refuses altitudes below the lowest dry land (about -430 m, from memory), in the unit typed', () => {
+    expect(() => altitudeInFeet(-458, 'm')).toThrow('The altitude in metres must be at least -457.');
+    expect(() => altitudeInFeet(-1501, 'ft')).toThrow('The altitude in feet must be at least -1,500.');
+    expect(() => altitudeInFeet(1, 'yd')).toThrow(/Choose the altitude's unit: ft, m/);
   });
 });

@@ -1,4 +1,4 @@
-import { PreservingError, checkNumber } from './errors';
+import { PreservingError, RULES, checkNumber } from './errors';
 
 /**
  * Exact unit definitions (NIST Handbook 44, 2024 edition, Appendix C, "General tables of units of
@@ -96,6 +96,17 @@ export function convert(value: number, from: Unit | string, to: Unit | string): 
 
 /** Millilitres in one unit of a volume (exact). */
 export const mlPer = (unit: Exclude<Unit, 'g' | 'kg' | 'oz' | 'lb' | 'F' | 'C' | 'ft' | 'm'>) => FACTORS[unit].base;
+
+export const ALTITUDE_UNITS = ['ft', 'm'] as const;
+export type AltitudeUnit = (typeof ALTITUDE_UNITS)[number];
+
+/** An altitude typed in feet or metres, in feet (1 ft = 0.3048 m exactly, NIST Handbook 44). Each unit
+ * has its own rule, so a wrong value is named in the unit it was typed in. */
+export function altitudeInFeet(value: number, unit: AltitudeUnit | string): number {
+  if (unit === 'm') return checkNumber(value, RULES.altitudeM) / 0.3048;
+  if (unit === 'ft') return checkNumber(value, RULES.altitudeFt);
+  throw new PreservingError('invalid', `Choose the altitude's unit: ${ALTITUDE_UNITS.join(', ')}.`, 'altitudeUnit');
+}
 
 /** Jar capacities: a pint jar holds one US pint, a quart jar one US quart (common practice). */
 export const JAR_ML = { 'half-pint': GALLON_ML / 16, pint: GALLON_ML / 8, quart: GALLON_ML / 4 } as const;

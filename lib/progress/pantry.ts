@@ -1,10 +1,11 @@
 import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { getCourse, getLessons } from '@/lib/content';
+import { lessonsForVersion } from '@/lib/content/versions';
 import { db } from '@/models';
 import { buildShelf, type Shelf } from './shelf';
 
-type Row = { courseSlug: string; courseTitle: string; status: Shelf['status'] };
+type Row = { courseSlug: string; courseTitle: string; status: Shelf['status']; contentVersion: number };
 
 /**
  * The learner's shelves: one per course they are enrolled in (latest enrollment per course),
@@ -13,7 +14,7 @@ type Row = { courseSlug: string; courseTitle: string; status: Shelf['status'] };
 export async function fetchPantry(userId: number): Promise<Shelf[]> {
   const { sequelize } = db();
   const enrollments = await sequelize.query<Row>(
-    `SELECT c.slug AS courseSlug, c.title AS courseTitle, e.status
+    `SELECT c.slug AS courseSlug, c.title AS courseTitle, e.status, e.contentVersion
        FROM enrollments e JOIN courses c ON c.id = e.courseId
       WHERE e.userId = :userId
         AND e.id = (SELECT e2.id FROM enrollments e2 WHERE e2.userId = e.userId AND e2.courseId = e.courseId ORDER BY e2.createdAt DESC, e2.id DESC LIMIT 1)
@@ -41,7 +42,8 @@ export async function fetchPantry(userId: number): Promise<Shelf[]> {
       title: content?.title ?? e.courseTitle,
       status: e.status,
       finalExam: content?.finalExam ?? null,
-      lessons: getLessons(e.courseSlug).map((l) => ({ slug: l.slug, title: l.title, order: l.order, quiz: l.quiz })),
+      // The jars of the lessons in force when the enrollment began.
+      lessons: lessonsForVersion(getLessons(e.courseSlug), Number(e.contentVersion)).map((l) => ({ slug: l.slug, title: l.title, order: l.order, quiz: l.quiz })),
       read,
       passedQuizzes: passed.filter((q) => q.startsWith(`${e.courseSlug}--`)),
     });

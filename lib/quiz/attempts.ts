@@ -1,7 +1,7 @@
 import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { findActiveEnrollment } from '@/lib/access';
-import { getCourse } from '@/lib/content';
+import { getCourse, getLessons } from '@/lib/content';
 import type { SessionUser } from '@/lib/auth/users';
 import { AppError } from '@/lib/errors';
 import { roleAllows } from '@/lib/roles';
@@ -133,6 +133,17 @@ function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: bool
 export type StartResult = { attempt: AttemptView; created: boolean };
 
 /**
+ * The questions a bank may ask an enrollment begun under `contentVersion`: a final exam leaves out
+ * the questions of lessons added to the course later, which that enrollment is not required to read.
+ */
+export function questionPool(bank: Bank, contentVersion: number): Bank['questions'] {
+  const later = getLessons(bank.course).filter((l) => l.since > contentVersion && l.quiz !== bank.slug);
+  if (later.length === 0) return bank.questions;
+  const skip = new Set(later.flatMap((l) => getBank(l.quiz)?.questions.map((q) => q.id) ?? []));
+  return bank.questions.filter((q) => !skip.has(q.id));
+}
+
+/**
  * Starts an attempt for an enrolled learner, or returns the one still open. Refuses (429, with
  * nextAttemptAt) when the bank's attempt limit is reached in its window.
  */
@@ -169,7 +180,8 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
       }
     }
 
-    const drawn = drawQuestions(bank.questions, bank.draw, random);
+    const pool = questionPool(bank, enrollment.contentVersion);
+    const drawn = drawQuestions(pool, bank.draw, random);
     const deadlineAt = bank.timeLimitMinutes ? new Date(now.getTime() + bank.timeLimitMinutes * 60_000) : null;
     const row = await QuizAttempt.create(
       { userId: user.id, courseId: course.id, quizSlug, drawn, startedAt: now, deadlineAt },

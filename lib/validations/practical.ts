@@ -37,9 +37,12 @@ export const practicalFormSchema = z
     vinegarAcidityPct: number('vinegar acidity', 0.1, 20, ' %'),
     vinegarMl: number('amount of vinegar', 0, 20_000, ' mL'),
     waterMl: number('amount of water', 0, 20_000, ' mL'),
+    // Weighed salt of the brine: fermented pickles are checked by the brine's salt by weight.
+    saltG: number('salt in the brine', 0, 5_000, ' g').optional(),
     headspaceIn: number('headspace measured', 0, 3, ' in'),
     method: z.enum(PROCESSING_METHODS, { error: 'Choose the processing method.' }),
-    altitudeFt: whole('altitude', 0, 14_000, ' ft'),
+    // Below sea level is allowed (the lowest band applies); the lowest dry land is about -1,410 ft.
+    altitudeFt: whole('altitude', -1_500, 14_000, ' ft'),
     minutes: whole('minutes processed', 0, 240),
     batchDate: z.iso
       .date({ error: 'Enter the date you put up the batch.' })

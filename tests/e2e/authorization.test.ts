@@ -3,6 +3,7 @@ import { discoverRoutes } from '../support/app-routes';
 import { createAuthorizationFixtures, FIXTURE_PASSWORD } from './support/authorization-fixtures';
 import { MATRIX, rowKey, SUBJECTS, type Fixtures, type PageRow, type RouteRow, type Subject } from './support/authorization-matrix';
 import { send, signInHttp, type Jar } from './support/http';
+import { privateSentences, sendRouterRequest } from './support/router-request';
 import { securityHeaderProblems } from './support/security-headers';
 
 function discoveredKeys(): string[] {
@@ -33,6 +34,7 @@ describe('the authorization matrix covers app/', () => {
 describe('the authorization matrix against the running app', () => {
   let fixtures: Fixtures;
   const jars = {} as Record<Subject, Jar | undefined>;
+  let learnerB: Jar;
 
   beforeAll(async () => {
     const people = await createAuthorizationFixtures();
@@ -40,6 +42,7 @@ describe('the authorization matrix against the running app', () => {
     jars.visitor = undefined;
     jars.own = (await signInHttp(people.emails.a, FIXTURE_PASSWORD)).jar;
     jars.other = jars.own; // A again: the probes point this column at B's records
+    learnerB = (await signInHttp(people.emails.b, FIXTURE_PASSWORD)).jar;
     jars.instructor = (await signInHttp('instructor@cedarhollow.example', 'demo-instructor-pass')).jar;
     jars.coordinator = (await signInHttp('coordinator@cedarhollow.example', 'demo-coordinator-pass')).jar;
     jars.admin = (await signInHttp('admin@cedarhollow.example', 'demo-admin-pass')).jar;
@@ -88,5 +91,68 @@ describe('the authorization matrix against the running app', () => {
     // The walk really asked: one request per requested cell.
     const cells = MATRIX.filter((r) => r.kind !== 'action').reduce((n, r) => n + r.expect.filter((e) => e !== 'n/a').length, 0);
     expect(outcomes).toHaveLength(cells);
+  }, 240_000);
+
+  // A page's content as someone allowed to see it (for the refused cells: what must not leak).
+  const allowedPages = new Map<string, string | null>();
+  async function allowedHtml(path: string): Promise<string | null> {
+    if (!allowedPages.has(path)) {
+      let html: string | null = null;
+      for (const jar of [jars.own, learnerB, jars.instructor, jars.coordinator, jars.admin]) {
+        const response = await send(path, { jar, headers: { 'x-forwarded-for': '198.51.100.40' } });
+        const text = await response.text();
+        if (response.status === 200) {
+          html = text;
+          break;
+        }
+      }
+      allowedPages.set(path, html);
+    }
+    return allowedPages.get(path) ?? null;
+  }
+
+  it('refuses router requests that claim every layout is already on screen as it refuses plain loads, and neither carries the page', async () => {
+    // What anyone may read (every page a visitor opens): a sentence found there is not private.
+    let publicText = '';
+    for (const row of MATRIX) {
+      if (row.kind === 'page' && row.expect[0] === 200) publicText += await (await send(row.probe(fixtures, 'visitor').path)).text();
+    }
+    // Every course's page (the matrix probes one), with its lessons' titles and summaries.
+    for (const course of new Set(publicText.match(/\/courses\/[a-z0-9-]+(?=")/g))) publicText += await (await send(course)).text();
+    const wrong: string[] = [];
+    let refusedCompared = 0;
+    for (const row of MATRIX) {
+      if (row.kind !== 'page') continue;
+      for (const [i, subject] of SUBJECTS.entries()) {
+        const expected = row.expect[i];
+        if (expected === 'n/a') continue;
+        const request = row.probe(fixtures, subject);
+        const headers = { 'x-forwarded-for': `198.51.100.${i + 10}` };
+        const where = `${row.pattern} as ${subject} (${request.path})`;
+        const router = await sendRouterRequest(row.renders ?? row.pattern, request.path, { jar: jars[subject], headers });
+        const routerBody = await router.text();
+        if (expected === 200) {
+          if (router.status !== 200) wrong.push(`${where}: the plain load is 200, the router request ${router.status}`);
+          continue;
+        }
+        // Refused: the answer may be the router's redirect, the sign-in or the 403 page, never the page's content.
+        const content = await allowedHtml(request.path);
+        if (!content) continue; // no one of the matrix may open this address: nothing of it to leak
+        const sentences = privateSentences(content, publicText);
+        if (sentences.length === 0) {
+          wrong.push(`${where}: no sentence of the allowed page to compare with (the check would prove nothing)`);
+          continue;
+        }
+        refusedCompared += 1;
+        const plain = await send(request.path, { jar: jars[subject], headers });
+        for (const [kind, status, body] of [['plain load', plain.status, await plain.text()], ['router request', router.status, routerBody]] as const) {
+          const leaked = sentences.filter((sentence) => body.includes(sentence));
+          if (leaked.length) wrong.push(`${where}: the ${kind} (${status}) carries ${leaked.length} of ${sentences.length} sentences of the page, e.g. “${leaked[0]}”`);
+        }
+      }
+    }
+    expect(wrong).toEqual([]);
+    // The walk compared refused cells for real (each page row that refuses someone, with something to hide).
+    expect(refusedCompared).toBeGreaterThan(20);
   }, 240_000);
 });

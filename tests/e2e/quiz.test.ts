@@ -1,26 +1,12 @@
-import fs from 'node:fs';
-import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, seriousViolations, signIn } from './support/browser';
+import { answerChoices, readBank } from './support/quiz';
 
-// The key of the lesson quiz, read from the bank file as a learner who knows the material would
-// know it (the browser never receives it).
-type BankQuestion = { id: string; kind: string; prompt: string; choices?: { id: string; text: string }[]; answer: unknown; explanation: string };
 const QUIZ = 'pickling-and-canning--acidity';
-const bank = JSON.parse(fs.readFileSync(path.join(process.cwd(), 'content/quizzes', `${QUIZ}.json`), 'utf8')) as { questions: BankQuestion[] };
+const bank = readBank(QUIZ);
 
-async function answerEverything(page: Page) {
-  for (const q of bank.questions) {
-    const group = page.locator(`fieldset[data-question="${q.id}"]`);
-    if (q.kind === 'single' || q.kind === 'multiple') {
-      const right = q.kind === 'single' ? [q.answer as string] : (q.answer as string[]);
-      for (const id of right) await group.getByLabel(q.choices!.find((c) => c.id === id)!.text, { exact: true }).check();
-    } else if (q.kind === 'true-false') {
-      await group.getByLabel(q.answer ? 'True' : 'False', { exact: true }).check();
-    }
-  }
-}
+const answerEverything = (page: Page) => answerChoices(page, bank.questions);
 
 describe('quiz, progress and the Pantry in the browser', () => {
   // A fresh browser (empty profile) for each person, so one test's session never leaks into the next.

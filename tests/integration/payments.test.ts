@@ -5,6 +5,7 @@ import { POST as refundPOST } from '@/app/api/enrollments/[id]/refund/route';
 import { GET as workshopsGET } from '@/app/api/courses/[course]/workshops/route';
 import { POST as webhookPOST } from '@/app/api/webhooks/stripe/route';
 import { startFakePayments } from '@/fakes/payments/server';
+import { getCourse } from '@/lib/content';
 import { releaseStaleCheckouts } from '@/lib/payments/reconcile';
 import { db } from '@/models';
 import { createCourses, createUser, resetDatabase } from '../helpers/db';
@@ -71,6 +72,9 @@ describe('paying through the fake payment server', () => {
     expect(body.outcome).toBe('checkout');
     expect(body.url).toMatch(new RegExp(`^${h.payments.url}/pay/cs_test_`));
     expect((await enrollmentOf(learner.id))!.status).toBe('awaiting_payment');
+    // A new enrollment keeps the course content version it began under (the fermenting lesson's).
+    expect((await enrollmentOf(learner.id))!.contentVersion).toBe(getCourse('pickling-and-canning')!.version);
+    expect(getCourse('pickling-and-canning')!.version).toBe(2);
     expect(await seatsLeft()).toBe(11);
 
     // The checkout page is a real form with labelled fields.

@@ -3,7 +3,8 @@ import { GET as pantry } from '@/app/api/pantry/route';
 import { GET as getProgress, POST as markRead } from '@/app/api/progress/route';
 import { POST as submit } from '@/app/api/attempts/[id]/submit/route';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
-import { getLesson } from '@/lib/content';
+import { getLesson, getLessons } from '@/lib/content';
+import { lessonsForVersion } from '@/lib/content/versions';
 import { db } from '@/models';
 import { createCourses, createUser } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
@@ -54,12 +55,32 @@ describe('POST /api/progress', () => {
 });
 
 describe('GET /api/pantry', () => {
+  it('nine jars for an enrollment begun under the current content, eight for one begun before the fermenting lesson', async () => {
+    const NEW_LESSON = 'fermented-pickles-and-sauerkraut';
+    const all = getLessons('pickling-and-canning');
+    const older = all.filter((l) => l.slug !== NEW_LESSON);
+    expect(all.find((l) => l.slug === NEW_LESSON)?.since).toBe(2);
+
+    actAs(learner);
+    let [shelf] = await shelves();
+    expect(shelf.jars.map((j: { lessonSlug: string }) => j.lessonSlug)).toEqual(older.map((l) => l.slug));
+    expect(shelf.jars).toHaveLength(8);
+
+    const newcomer = await createUser('learner');
+    await enroll(newcomer.id, courses.flagship.id).then((e) => e.update({ contentVersion: 2 }));
+    actAs(newcomer);
+    [shelf] = await shelves();
+    expect(shelf.jars.map((j: { lessonSlug: string }) => j.lessonSlug)).toEqual(all.map((l) => l.slug));
+    expect(shelf.jars).toHaveLength(9);
+  });
+
   it('shows a shelf per course with a jar per lesson that fills as it is read and its quiz passed', async () => {
     const title = getLesson('pickling-and-canning', 'acidity')!.title;
     actAs(learner);
     let [shelf] = await shelves();
     expect(shelf.courseSlug).toBe('pickling-and-canning');
-    expect(shelf.jars).toHaveLength(8);
+    // freshLearner's enrollment is written without a content version, so it is held to version 1's lessons.
+    expect(shelf.jars).toHaveLength(lessonsForVersion(getLessons('pickling-and-canning'), 1).length);
     const acidity = () => shelf.jars.find((j: { lessonSlug: string }) => j.lessonSlug === 'acidity');
     expect(acidity()).toMatchObject({ fill: 0, label: `${title}: not read yet, quiz not passed yet` });
     expect(shelf.next.href).toBe('/learn/pickling-and-canning/why-preserving-is-a-safety-job');

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
+import { getCourses, getLessons } from '@/lib/content';
 import { getBanks } from '@/lib/quiz/bank';
 import { formatAnswer } from '@/lib/quiz/resolve';
 import { createCourses, createUser, resetDatabase } from '../helpers/db';
@@ -19,6 +20,12 @@ describe('no answer key before submission', () => {
     await enroll(learner.id, flagship.id);
     await enroll(learner.id, refresher.id);
     actAs(learner);
+  });
+
+  it('covers every lesson quiz of every course, the fermenting lesson\'s among them', () => {
+    const slugs = getBanks().map((b) => b.slug);
+    for (const course of getCourses()) for (const lesson of getLessons(course.slug)) expect(slugs).toContain(lesson.quiz);
+    expect(slugs).toContain('pickling-and-canning--fermented-pickles-and-sauerkraut');
   });
 
   for (const bank of getBanks()) {

@@ -62,6 +62,8 @@ export default async function setup() {
   server = startAppServer(port, env, { stdio: ['ignore', 'inherit', 'inherit'] });
   await waitForOk(`${baseUrl}/api/health`, 60_000);
   process.env.E2E_BASE_URL = baseUrl;
+  // For tests that read the server's memory (/proc/<pid> and its children).
+  process.env.E2E_SERVER_PID = String(server.pid);
 
   return async () => {
     server?.kill('SIGTERM');

@@ -50,13 +50,22 @@ describe('GET /api/tools/processing-time', () => {
     expect(status).toBe(200);
     expect(body).toMatchObject({ minutes: 25, method: 'boiling-water', altitudeBand: { fromFt: 6001, toFt: 10000 }, lowTemperaturePasteurization: { waterTempF: [180, 185], minutes: 30 } });
     expect(body.source).toContain('Complete Guide to Home Canning');
-    expect((await call(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 0 })).body.minutes).toBe(5);
+    const dilly = (await call(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 0 })).body;
+    expect(dilly.minutes).toBe(5);
+    // Under 10 minutes: sterilised jars, 10 minutes' boil up to 1,000 ft (USDA Complete Guide, Guide 1).
+    expect(dilly.sterilizeJars).toMatchObject({ boilMinutes: 10, source: expect.stringContaining('Sterilization of empty jars') });
+    // Metres: 2,000 m = 6,562 ft, above 6,000 ft; below sea level the lowest band.
+    expect((await call(processingTime, 'processing-time', { product: 'fresh-pack-dill-pickles', jar: 'quart', altitudeM: 2000 })).body.minutes).toBe(25);
+    expect((await call(processingTime, 'processing-time', { product: 'fresh-pack-dill-pickles', jar: 'quart', altitudeM: -86 })).body.minutes).toBe(15);
   });
 
   it('answers 400 for a missing, non-numeric or negative altitude, naming it', async () => {
     await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint' }, 'altitudeFt', 'Enter the altitude in feet as a number.');
     await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 'high' }, 'altitudeFt');
-    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: -20 }, 'altitudeFt', 'The altitude in feet cannot be negative.');
+    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: -2000 }, 'altitudeFt', 'The altitude in feet must be at least -1,500.');
+    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeM: -500 }, 'altitudeM', 'The altitude in metres must be at least -457.');
+    // Feet and metres together are refused rather than one silently winning.
+    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 100, altitudeM: 30 }, 'altitudeFt', 'Give the altitude once: altitudeFt in feet, or altitudeM in metres.');
     await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'jug', altitudeFt: 0 }, 'jar');
     await expect400(processingTime, 'processing-time', { jar: 'pint', altitudeFt: 0 }, 'product');
   });
@@ -97,7 +106,8 @@ describe('GET /api/tools/boiling-point', () => {
 
   it('answers 400 for bad altitudes and 422 above the model', async () => {
     await expect400(boilingPoint, 'boiling-point', { altitudeFt: '' }, 'altitudeFt');
-    await expect400(boilingPoint, 'boiling-point', { altitudeFt: -1 }, 'altitudeFt');
+    await expect400(boilingPoint, 'boiling-point', { altitudeFt: -1501 }, 'altitudeFt');
+    await expect400(boilingPoint, 'boiling-point', { altitudeM: 'high' }, 'altitudeM');
     await expect422(boilingPoint, 'boiling-point', { altitudeFt: 50000 }, 'altitudeFt');
   });
 });
@@ -131,6 +141,21 @@ describe('GET /api/tools/brine', () => {
     const withProduce = await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, otherMl: 0, produceG: 1000, produceWaterPct: 95 });
     expect(withProduce.body.equilibratedAcidityPct as number).toBeCloseTo((25 / 1950) * 100, 9);
     expect((withProduce.body.warnings as string[]).length).toBe(1);
+    expect(withProduce.body).not.toHaveProperty('equilibratedPh');
+    expect(withProduce.body.phCaution).toMatch(/before the produce goes in/);
+  });
+
+  it('compares with a chosen product\'s tested liquid, and answers 404 for an unknown product', async () => {
+    // USDA Guide 6, pickled hot peppers: 5 cups vinegar (5 %), 1 cup water → 4.17 %; 1 : 1 (2.5 %) warns.
+    const { status, body } = await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: 'pickled-hot-peppers' });
+    expect(status).toBe(200);
+    expect(body).toMatchObject({ belowTested: true, tested: { product: 'pickled-hot-peppers', aceticAcidPct: expect.closeTo(4.1667, 4), weakest: false } });
+    expect((body.warnings as string[]).join(' ')).toMatch(/weaker than the tested liquid of pickled hot peppers \(4.17%\)/);
+    // An empty product is "not given": the weakest tested liquid (2.14 %), which 2.5 % is not below.
+    expect((await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: '' })).body).toMatchObject({ belowTested: false, tested: { weakest: true } });
+    const unknown = await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: 'pickled-okra' });
+    expect(unknown.status).toBe(404);
+    expect(unknown.body).toMatchObject({ error: 'not_found', param: 'product' });
   });
 
   it('answers 400 naming the parameter', async () => {

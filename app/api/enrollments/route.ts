@@ -1,7 +1,8 @@
 import { requireRole } from '@/lib/auth/guard';
 import { clientAddress } from '@/lib/auth/options';
 import { enrollInWorkshop } from '@/lib/enrollment/enroll';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { EnrollSchema } from '@/lib/validations/enrollment';
 
 // A learner takes a seat: answers the checkout page's address, or (with a waiver) the confirmation page.

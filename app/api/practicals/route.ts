@@ -1,5 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { submitPractical } from '@/lib/practicals/service';
 import { practicalSubmissionSchema } from '@/lib/validations/practical';
 

@@ -1,5 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { MarkReadSchema, ProgressQuerySchema } from '@/lib/progress/schema';
 import { markLessonRead, passedQuizzes, readLessons } from '@/lib/progress/store';
 

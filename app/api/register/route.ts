@@ -1,6 +1,7 @@
 import { clientAddress } from '@/lib/auth/options';
 import { countRegistration, registerLearner } from '@/lib/auth/users';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { RegisterSchema } from '@/lib/validations/user';
 
 export const POST = route(async (request) => {

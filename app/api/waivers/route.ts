@@ -1,7 +1,8 @@
 import { requireRole } from '@/lib/auth/guard';
 import { fetchWaivers } from '@/lib/enrollment/queries';
 import { createWaiver } from '@/lib/enrollment/waivers';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { WaiverSchema } from '@/lib/validations/waiver';
 
 export const GET = route(async () => {

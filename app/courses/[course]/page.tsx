@@ -5,17 +5,16 @@ import { CourseWorkshops } from '@/components/enrollment/course-workshops';
 import { mdxComponents } from '@/components/mdx';
 import { Badge } from '@/components/ui/badge';
 import { ButtonLink } from '@/components/ui/button';
-import { getCourse, getCourses, getLessons } from '@/lib/content';
+import { courseParams, getCourse, getLessons } from '@/lib/content';
 import { formatFee, formatMinutes } from '@/lib/content/format';
+import { requirementText } from '@/lib/content/versions';
 import { compileContent } from '@/lib/content/mdx';
 
 type Props = { params: Promise<{ course: string }> };
 
 export const dynamicParams = false;
 
-export function generateStaticParams() {
-  return getCourses().map((course) => ({ course: course.slug }));
-}
+export const generateStaticParams = courseParams;
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const course = getCourse((await params).course);
@@ -90,9 +89,12 @@ export default async function CoursePage({ params }: Props) {
           </h2>
           <ul className="list-disc space-y-1.5 pl-5 text-sm">
             {course.requirements.map((requirement) => (
-              <li key={requirement}>{requirement}</li>
+              <li key={requirement}>{requirementText(requirement, lessons.length)}</li>
             ))}
           </ul>
+          <p className="mt-3 text-sm">
+            <Link href={`/courses/${course.slug}/changes`}>What changed in this course</Link>
+          </p>
         </section>
       </aside>
     </div>

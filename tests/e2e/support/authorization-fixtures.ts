@@ -13,7 +13,7 @@ export const FIXTURE_PASSWORD = 'authz-matrix-pass-123';
 
 type Conn = mariadb.Connection;
 
-async function connect(): Promise<Conn> {
+export async function connect(): Promise<Conn> {
   const raw = process.env.E2E_DATABASE_URL;
   if (!raw) throw new Error('E2E_DATABASE_URL is not set');
   const url = new URL(raw);

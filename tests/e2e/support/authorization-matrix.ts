@@ -39,7 +39,8 @@ export type Fixtures = {
 export type Request = { path: string; body?: unknown; headers?: Record<string, string> };
 export type Probe = (fx: Fixtures, subject: Subject) => Request;
 
-export type PageRow = { kind: 'page'; pattern: string; probe: Probe; expect: Answers; bodyIncludes?: Partial<Record<Subject, string>> };
+/** `renders`: the app route that answers the probe when a rewrite sends it elsewhere (the router-request walk claims its layouts). */
+export type PageRow = { kind: 'page'; pattern: string; probe: Probe; expect: Answers; bodyIncludes?: Partial<Record<Subject, string>>; renders?: string };
 export type RouteRow = { kind: 'route'; pattern: string; method: string; probe: Probe; expect: Answers };
 export type ActionExpected = 'pass' | 401 | 403 | 'n/a';
 export type ActionRow = { kind: 'action'; pattern: string; action: string; expect: [ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected] };
@@ -79,6 +80,7 @@ const pages: PageRow[] = [
   { kind: 'page', pattern: '/confirm-email', probe: at('/confirm-email?token=not-a-token'), expect: PUBLIC },
   { kind: 'page', pattern: '/courses', probe: at('/courses'), expect: PUBLIC },
   { kind: 'page', pattern: '/courses/[course]', probe: at(`/courses/${FLAGSHIP}`), expect: PUBLIC },
+  { kind: 'page', pattern: '/courses/[course]/changes', probe: at(`/courses/${FLAGSHIP}/changes`), expect: PUBLIC },
   { kind: 'page', pattern: '/desk', probe: at('/desk'), expect: COORDINATOR_PAGE },
   { kind: 'page', pattern: '/desk/payments', probe: at('/desk/payments'), expect: COORDINATOR_PAGE },
   { kind: 'page', pattern: '/desk/reports', probe: at('/desk/reports'), expect: COORDINATOR_PAGE },
@@ -98,6 +100,7 @@ const pages: PageRow[] = [
     pattern: '/learn/[course]/[lesson]',
     probe: (_fx, s) => ({ path: s === 'other' ? `/learn/${REFRESHER}/time-and-altitude-review` : `/learn/${FLAGSHIP}/processing` }),
     expect: [S, 200, 403, 200, 200, 200],
+    renders: '/learn/[course]/[lesson]/members',
   },
   // A preview lesson: a static page for everyone.
   { kind: 'page', pattern: '/learn/[course]/[lesson]', probe: at(`/learn/${FLAGSHIP}/acidity`), expect: PUBLIC },

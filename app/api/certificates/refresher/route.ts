@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { requireRole } from '@/lib/auth/guard';
 import { claimRefresherCertificate } from '@/lib/certificates/issue';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 
 const ClaimSchema = z.object({ enrollmentId: z.number().int().positive() });
 

@@ -1,7 +1,8 @@
 import { requireRole } from '@/lib/auth/guard';
 import { issueCertificates } from '@/lib/certificates/issue';
 import { IssueSchema } from '@/lib/certificates/schemas';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 
 /**
  * POST /api/desk/certificates { enrollmentIds } — issues a certificate for each eligible one.

@@ -1,8 +1,7 @@
-import { z } from 'zod';
-import { RULES, boilingPoint } from '@/lib/preserving';
-import { numberParam, toolRoute } from '@/lib/preserving/http';
+import { boilingPoint } from '@/lib/preserving';
+import { toolRoute, withAltitude } from '@/lib/preserving/http';
 
-const query = z.object({ altitudeFt: numberParam(RULES.altitudeFt) });
+const query = withAltitude({});
 
-/** GET /api/tools/boiling-point?altitudeFt — boiling point of water (1976 atmosphere + IAPWS-IF97). */
+/** GET /api/tools/boiling-point?altitudeFt (or altitudeM) — boiling point of water (1976 atmosphere + IAPWS-IF97). */
 export const GET = toolRoute(query, boilingPoint);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { RULES, brineAcidity } from '@/lib/preserving';
-import { numberParam, optionalNumberParam, toolRoute } from '@/lib/preserving/http';
+import { numberParam, optionalNumberParam, optionalProductParam, toolRoute } from '@/lib/preserving/http';
 
 const query = z.object({
   vinegarMl: numberParam(RULES.vinegarMl),
@@ -9,7 +9,8 @@ const query = z.object({
   otherMl: optionalNumberParam(RULES.otherMl),
   produceG: optionalNumberParam(RULES.produceG),
   produceWaterPct: optionalNumberParam(RULES.produceWaterPct),
+  product: optionalProductParam,
 });
 
-/** GET /api/tools/brine — acetic acid %, vinegar share, estimated pH and warnings of a brine. */
+/** GET /api/tools/brine[?product] — acetic acid %, comparison with the tested liquid, the liquid's pH before the produce, and warnings. */
 export const GET = toolRoute(query, brineAcidity);

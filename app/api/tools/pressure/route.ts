@@ -1,8 +1,7 @@
-import { z } from 'zod';
-import { GAUGES, RULES, pressureForAltitude } from '@/lib/preserving';
-import { choiceParam, numberParam, toolRoute } from '@/lib/preserving/http';
+import { GAUGES, pressureForAltitude } from '@/lib/preserving';
+import { choiceParam, toolRoute, withAltitude } from '@/lib/preserving/http';
 
-const query = z.object({ gauge: choiceParam(GAUGES, 'gauge', 'a gauge type'), altitudeFt: numberParam(RULES.altitudeFt) });
+const query = withAltitude({ gauge: choiceParam(GAUGES, 'gauge', 'a gauge type') });
 
-/** GET /api/tools/pressure?gauge&altitudeFt — pressure-canner pounds by gauge type and altitude. */
+/** GET /api/tools/pressure?gauge&altitudeFt (or altitudeM) — pressure-canner pounds by gauge type and altitude. */
 export const GET = toolRoute(query, pressureForAltitude);

@@ -1,5 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { submitAttempt } from '@/lib/quiz/attempts';
 import { SubmitSchema } from '@/lib/quiz/grading';
 import { parseAttemptId } from '@/lib/quiz/params';

@@ -1,6 +1,7 @@
 import { requireRole } from '@/lib/auth/guard';
 import { markAttendance } from '@/lib/enrollment/admin';
-import { AppError, parseOrThrow, readJson, route } from '@/lib/errors';
+import { AppError, parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { AttendanceSchema } from '@/lib/validations/workshop';
 
 // The workshop's instructor (or a coordinator) marks a learner present, or clears the mark.

@@ -1,5 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
-import { AppError, parseOrThrow, readJson, route } from '@/lib/errors';
+import { AppError, parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 import { refundEnrollment } from '@/lib/payments/refunds';
 import { RefundSchema } from '@/lib/validations/enrollment';
 

@@ -1,6 +1,6 @@
 import { LessonView, lessonMetadata, type LessonPageProps } from '@/components/lessons/lesson-view';
 
-// Members-only lessons, rendered per request (./layout.tsx has checked access); the URL the
+// Members-only lessons, rendered per request (LessonView checks access, as ./layout.tsx does); the URL the
 // learner sees stays /learn/<course>/<lesson> (next.config.mjs rewrites to here).
 export const generateMetadata = lessonMetadata;
 

@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { requireRole } from '@/lib/auth/guard';
 import { revokeCertificate } from '@/lib/certificates/issue';
 import { RevokeSchema } from '@/lib/certificates/schemas';
-import { parseOrThrow, readJson, route } from '@/lib/errors';
+import { parseOrThrow, route } from '@/lib/errors';
+import { readJson } from '@/lib/server/body';
 
 const IdSchema = z.coerce.number().int().positive();
 
