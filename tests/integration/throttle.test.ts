@@ -129,9 +129,13 @@ describe('registration throttle', () => {
   it('lets REGISTER_MAX_PER_ADDRESS accounts a window come from one address (a class on one Wi-Fi), then answers 429 with Retry-After', async () => {
     const max = getEnv().REGISTER_MAX_PER_ADDRESS;
     expect(max).toBe(30);
-    const statuses = await Promise.all(Array.from({ length: max + 10 }, (_, i) => register(i, '198.51.100.50').then((r) => r.status)));
+    // Four waves of ten at once: counted exactly whatever the order of arrival.
+    const statuses: number[] = [];
+    for (let wave = 0; wave < (max + 10) / 10; wave++) {
+      statuses.push(...(await Promise.all(Array.from({ length: 10 }, (_, i) => register(wave * 10 + i, '198.51.100.50').then((r) => r.status)))));
+    }
     expect(statuses.filter((s) => s === 201)).toHaveLength(max);
-    expect(statuses.filter((s) => s === 429)).toHaveLength(10);
+    expect(statuses.filter((s) => s !== 201)).toEqual(Array(10).fill(429));
     expect(await db().User.count()).toBe(max);
     const over = await register(999, '198.51.100.50');
     expect(over.status).toBe(429);
