@@ -3,6 +3,7 @@
 export async function register() {
   if (process.env.NEXT_RUNTIME === 'nodejs') {
     const { getEnv } = await import('./lib/env');
-    getEnv();
+    const { refuseDemoSettings } = await import('./lib/production-check');
+    refuseDemoSettings(getEnv());
   }
 }

@@ -20,6 +20,7 @@ import http from 'node:http';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { getEnv } from './lib/env';
+import { refuseDemoSettings } from './lib/production-check';
 import { applyClientAddress } from './lib/server/client-address';
 import { RECORD_HEADER, StaticPageCache, recordable, recordingHeaders, sendRecorded, staticPagePaths, variantFor } from './lib/server/static-pages';
 
@@ -35,6 +36,13 @@ const hostname = values.hostname ?? process.env.HOSTNAME ?? undefined;
 if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`server.ts: the port must be a number from 0 to 65535 (got ${values.port ?? process.env.PORT})`);
 // The whole configuration is checked here, before any worker starts (lib/env.ts names what is wrong).
 const { WEB_CONCURRENCY: workers, TRUST_PROXY: trustProxy } = getEnv();
+// Demo secrets and the local payment fake are refused in production (lib/production-check.ts).
+try {
+  refuseDemoSettings(getEnv(), process.env, 'The app server');
+} catch (error) {
+  console.error(error instanceof Error ? error.message : String(error));
+  process.exit(2);
+}
 
 const root = __dirname;
 const log = (message: string) => process.stdout.write(`[server${cluster.isWorker ? ` ${cluster.worker?.id}` : ''}] ${message}\n`);

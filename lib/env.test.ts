@@ -8,7 +8,9 @@ describe('parseEnv', () => {
     const env = parseEnv(good);
     expect(env.DATABASE_URL).toBe(good.DATABASE_URL);
     expect(env.APP_URL).toBe('http://localhost:3000');
-    expect(env.SIGNIN_MAX_PER_ACCOUNT).toBe(5);
+    expect(env.SIGNIN_MAX_PER_ACCOUNT_ADDRESS).toBe(5);
+    expect(env.REGISTER_MAX_PER_ADDRESS).toBe(30);
+    expect(env.SMTP_REQUIRE_TLS).toBe(true);
   });
 
   it('names DATABASE_URL when it is missing', () => {

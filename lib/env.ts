@@ -27,9 +27,22 @@ const EnvSchema = z.object({
   // from the client is replaced; with it, the proxy must overwrite that header (nginx.conf does).
   WEB_CONCURRENCY: z.coerce.number({ error: 'WEB_CONCURRENCY must be a whole number from 1 to 64' }).int().min(1).max(64).default(1),
   TRUST_PROXY: z.enum(['true', 'false'], { error: 'TRUST_PROXY must be true or false' }).default('false').transform((v) => v === 'true'),
-  SIGNIN_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
-  SIGNIN_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(20),
+  // Throttles (lib/throttle.ts, counted in MariaDB's rate_limits table). Sign-in: attempts per
+  // e-mail and client address, per address across accounts; past SIGNIN_SLOW_AFTER_PER_ACCOUNT
+  // attempts on one account from anywhere each further one waits a second more (at most
+  // SIGNIN_SLOW_MAX_SECONDS) instead of locking the account, so strangers cannot lock out its owner.
+  SIGNIN_MAX_PER_ACCOUNT_ADDRESS: z.coerce.number().int().positive().default(5),
+  SIGNIN_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
   SIGNIN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
+  SIGNIN_SLOW_AFTER_PER_ACCOUNT: z.coerce.number().int().positive().default(10),
+  SIGNIN_SLOW_MAX_SECONDS: z.coerce.number().int().min(0).max(30).default(5),
+  // Wrong fee waiver codes per learner account and per client address.
+  WAIVER_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(10),
+  WAIVER_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(20),
+  WAIVER_WINDOW_MINUTES: z.coerce.number().int().positive().default(60),
+  // New accounts per client address: a class on one venue's Wi-Fi fits, a script does not.
+  REGISTER_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
+  REGISTER_WINDOW_MINUTES: z.coerce.number().int().positive().default(60),
   // Certificates (lib/certificates): the program named on the PDF, and the verification throttle.
   CERTIFICATE_PROGRAM_NAME: z.string().min(1).max(120).default('Cedar Hollow County home-preserving program'),
   VERIFY_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(60),
@@ -45,6 +58,8 @@ const EnvSchema = z.object({
   SMTP_HOST: z.string().min(1).default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().positive().max(65535).default(2525),
   SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  // STARTTLS is required on a relay that is not on loopback, unless this is false.
+  SMTP_REQUIRE_TLS: z.enum(['true', 'false'], { error: 'SMTP_REQUIRE_TLS must be true or false' }).default('true').transform((v) => v === 'true'),
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3).default('Brinewright <hello@brinewright.example>'),

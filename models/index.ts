@@ -13,7 +13,6 @@ import { Practical } from './practical';
 import { PracticalPhoto } from './practical-photo';
 import { QuizAttempt } from './quiz-attempt';
 import { Review } from './review';
-import { SignInThrottle } from './sign-in-throttle';
 import { User } from './user';
 import { Workshop } from './workshop';
 
@@ -32,7 +31,6 @@ const registry = {
   PracticalPhoto,
   QuizAttempt,
   Review,
-  SignInThrottle,
   User,
   Workshop,
 };
@@ -114,7 +112,6 @@ export {
   PracticalPhoto,
   QuizAttempt,
   Review,
-  SignInThrottle,
   User,
   Workshop,
 };

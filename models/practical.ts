@@ -16,6 +16,8 @@ export class Practical extends Model<InferAttributes<Practical>, InferCreationAt
   declare flags: CreationOptional<Record<string, unknown>[]>;
   declare flagCount: CreationOptional<number>;
   declare submittedAt: Date;
+  declare claimedById: CreationOptional<number | null>;
+  declare claimedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +31,8 @@ export class Practical extends Model<InferAttributes<Practical>, InferCreationAt
         flags: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         flagCount: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 0 },
         submittedAt: { type: DataTypes.DATE, allowNull: false },
+        claimedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        claimedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

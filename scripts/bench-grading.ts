@@ -154,7 +154,7 @@ async function main() {
   console.log(`[bench] preparing the bench database and ${ATTEMPTS} open attempts…`);
   const { bodies, userCourseId, questionIds } = await prepareDatabase();
   const base = `http://127.0.0.1:${APP_PORT}`;
-  const env = { ...process.env, NODE_ENV: 'production' as const, NEXT_TELEMETRY_DISABLED: '1', NEXT_DIST_DIR: DIST_DIR, DATABASE_URL: dbUrl!, NEXTAUTH_URL: base, APP_URL: base, DB_POOL_MAX: String(POOL_MAX) };
+  const env = { ...process.env, NODE_ENV: 'production' as const, BRINEWRIGHT_DEMO: '1', NEXT_TELEMETRY_DISABLED: '1', NEXT_DIST_DIR: DIST_DIR, DATABASE_URL: dbUrl!, NEXTAUTH_URL: base, APP_URL: base, DB_POOL_MAX: String(POOL_MAX) };
   if (!fs.existsSync(path.join(root, DIST_DIR, 'BUILD_ID'))) {
     console.log(`[bench] building the app into ${DIST_DIR}…`);
     const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });

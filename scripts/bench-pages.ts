@@ -62,6 +62,7 @@ function appEnv(): NodeJS.ProcessEnv {
   return {
     ...process.env,
     NODE_ENV: 'production',
+    BRINEWRIGHT_DEMO: '1',
     NEXT_TELEMETRY_DISABLED: '1',
     NEXT_DIST_DIR: distDir,
     DATABASE_URL: databaseUrl,

@@ -196,6 +196,7 @@ async function main() {
   const env = {
     ...process.env,
     NODE_ENV: 'production' as const,
+    BRINEWRIGHT_DEMO: '1',
     NEXT_TELEMETRY_DISABLED: '1',
     NEXT_DIST_DIR: distDir,
     DATABASE_URL: url,

@@ -93,7 +93,7 @@ function ensureSharedBuild(): number {
   const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], {
     cwd: root,
     stdio: 'inherit',
-    env: { ...process.env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', NEXT_DIST_DIR: distDir },
+    env: { ...process.env, NODE_ENV: 'production', BRINEWRIGHT_DEMO: '1', NEXT_TELEMETRY_DISABLED: '1', NEXT_DIST_DIR: distDir },
   });
   if (build.status !== 0) throw new Error('next build failed');
   return (Date.now() - started) / 1000;

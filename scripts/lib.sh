@@ -2,6 +2,9 @@
 # Shared by demo.sh and test.sh: paths and the demo-only secret.
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 export NEXT_TELEMETRY_DISABLED=1
+# The demo and the tests run production builds with the repository's demo secrets and local fakes,
+# which a production process refuses without this flag (lib/production-check.ts).
+export BRINEWRIGHT_DEMO=1
 mkdir -p "$ROOT/.data"
 
 # A random secret made once per checkout for local runs; real deployments set NEXTAUTH_SECRET themselves.

@@ -7,9 +7,12 @@
 // Run with the react-server condition so the app's server-only modules load outside Next.
 import { queueChangeNotices } from '../lib/changes/notices';
 import { queueWorkshopReminders } from '../lib/email/reminders';
+import { getEnv } from '../lib/env';
+import { refuseDemoSettings } from '../lib/production-check';
 import { outboxBacklog, sendDueEmails } from '../lib/email/sender';
 import { releaseStaleCheckouts } from '../lib/payments/reconcile';
 import { LOOSE_PHOTO_DAYS, pruneLoosePhotos } from '../lib/practicals/service';
+import { pruneThrottles } from '../lib/throttle';
 import { watchParent } from './watch-parent';
 
 const POLL_MS = Number(process.env.WORKER_POLL_MS ?? 1000);
@@ -45,6 +48,8 @@ async function every(ms: number, name: string, job: () => Promise<string | null>
 }
 
 async function main() {
+  // The same refusal as the app server: no demo secrets and no payment fake in production.
+  refuseDemoSettings(getEnv(), process.env, 'The worker');
   log(`started (poll ${POLL_MS} ms)`);
   await Promise.all([
     every(POLL_MS, 'outbox', async () => {
@@ -65,6 +70,8 @@ async function main() {
       return r.changes ? `changes: announced ${r.changes} to ${r.emails} certificate holder(s)` : null;
     }),
     every(PRUNE_EVERY_MS, 'photos', async () => {
+      // Throttle windows that ended a day ago count nothing any more.
+      await pruneThrottles(86_400);
       const n = await pruneLoosePhotos();
       return n ? `photos: removed ${n} uploaded more than ${LOOSE_PHOTO_DAYS} days ago and never submitted` : null;
     }),
@@ -86,6 +93,6 @@ process.on('SIGINT', stop);
 watchParent(stop);
 
 main().catch((error) => {
-  console.error('[worker] fatal:', error);
+  console.error('[worker] fatal:', error instanceof Error && error.name === 'EnvError' ? error.message : error);
   process.exit(1);
 });

@@ -40,7 +40,7 @@ export function WaiverForm({ courses, defaultExpiry }: { courses: { id: number; 
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label="New fee waiver code">
-      <TextField label="Code" hint="Leave empty to generate one." autoComplete="off" error={err('code')} {...register('code')} />
+      <TextField label="Code" hint="Leave empty to generate one with 12 random characters. A word you choose is easy to guess: keep its uses few and its last day near." autoComplete="off" error={err('code')} {...register('code')} />
       <Select label="Course" options={[{ value: '', label: 'Any course' }, ...courses.map((c) => ({ value: String(c.id), label: c.title }))]} error={err('courseId')} {...register('courseId')} />
       <TextField label="Number of uses" type="number" min={1} max={1000} inputMode="numeric" error={err('maxUses')} {...register('maxUses')} />
       <TextField label="Last day it works" type="date" hint="The code stops working after this day (UTC)." error={err('expiresOn')} {...register('expiresOn')} />

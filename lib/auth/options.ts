@@ -3,7 +3,8 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { getEnv } from '@/lib/env';
 import { SignInSchema } from '@/lib/validations/user';
-import { ThrottledError, currentRole, verifyCredentials } from './users';
+import { ThrottledError } from './sign-in-throttle';
+import { currentRole, verifyCredentials } from './users';
 
 type HeaderBag = Record<string, string | string[] | undefined> | Headers | undefined;
 

@@ -5,8 +5,12 @@ import { AppError } from '@/lib/errors';
 import type { Role } from '@/lib/roles';
 import { db } from '@/models';
 import { queueWelcomeEmail } from '@/lib/email/welcome';
+import { getEnv } from '@/lib/env';
+import { takeOrThrow } from '@/lib/throttle';
 import type { RegisterInput } from '@/lib/validations/user';
-import { clearAccount, isThrottled, recordFailure } from './throttle';
+import { countSignInAttempt } from './sign-in-throttle';
+
+export { ThrottledError } from './sign-in-throttle';
 
 const COST = 10;
 // Compared against when the e-mail is unknown, so both answers take the same time.
@@ -15,6 +19,15 @@ const DUMMY_HASH = bcrypt.hashSync('brinewright-no-such-account', COST);
 export type SessionUser = { id: number; email: string; name: string; role: Role };
 
 export const hashPassword = (plain: string) => bcrypt.hash(plain, COST);
+
+/** Counts a registration from a client address (REGISTER_MAX_PER_ADDRESS per REGISTER_WINDOW_MINUTES); 429 past it. */
+export async function countRegistration(address: string): Promise<void> {
+  const env = getEnv();
+  await takeOrThrow(
+    [{ bucket: `register:${address}`, max: env.REGISTER_MAX_PER_ADDRESS, windowSeconds: env.REGISTER_WINDOW_MINUTES * 60 }],
+    'Too many new accounts from your network in the last hour. Please wait and try again, or ask the program coordinator for help.',
+  );
+}
 
 /** Creates a learner account; a taken e-mail is a 409 with a clear message, and no second row. */
 export async function registerLearner(input: RegisterInput): Promise<SessionUser> {
@@ -37,27 +50,17 @@ export async function registerLearner(input: RegisterInput): Promise<SessionUser
   }
 }
 
-export class ThrottledError extends Error {
-  constructor() {
-    super('Too many sign-in attempts. Please wait 15 minutes and try again.');
-    this.name = 'ThrottledError';
-  }
-}
-
 /**
- * Checks an e-mail and password. A wrong password and an unknown e-mail give the same null,
- * after the same bcrypt work; too many failures throw ThrottledError.
+ * Checks an e-mail and password. The attempt is counted first (lib/auth/sign-in-throttle.ts), so
+ * parallel guesses cannot race past the limit; a wrong password and an unknown e-mail give the same
+ * null after the same bcrypt work; a right one takes its attempt back.
  */
-export async function verifyCredentials(emailAddress: string, plain: string, address: string): Promise<SessionUser | null> {
-  const keys = { account: emailAddress, address };
-  if (await isThrottled(keys)) throw new ThrottledError();
+export async function verifyCredentials(emailAddress: string, plain: string, address: string, options: { sleep?: (ms: number) => Promise<void> } = {}): Promise<SessionUser | null> {
+  const takeBack = await countSignInAttempt({ email: emailAddress, address }, options);
   const user = await db().User.findOne({ where: { email: emailAddress } });
   const ok = await bcrypt.compare(plain, user?.passwordHash ?? DUMMY_HASH);
-  if (!user || !ok) {
-    await recordFailure(keys);
-    return null;
-  }
-  await clearAccount(emailAddress);
+  if (!user || !ok) return null;
+  await takeBack();
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 }
 

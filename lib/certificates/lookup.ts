@@ -2,7 +2,7 @@ import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
-import { hitRateLimit, pruneRateLimits } from '@/lib/rate-limit';
+import { pruneThrottles, take } from '@/lib/throttle';
 import { roleAllows } from '@/lib/roles';
 import type { SessionUser } from '@/lib/auth/users';
 import { db } from '@/models';
@@ -63,9 +63,9 @@ export async function verifySerial(input: string, now: Date = new Date()): Promi
  */
 export async function verifyForAddress(input: string, address: string, now: Date = new Date()): Promise<Verification> {
   const env = getEnv();
-  const limit = await hitRateLimit(`verify:${address}`, env.VERIFY_MAX_PER_ADDRESS, env.VERIFY_WINDOW_MINUTES * 60, now);
+  const limit = await take([{ bucket: `verify:${address}`, max: env.VERIFY_MAX_PER_ADDRESS, windowSeconds: env.VERIFY_WINDOW_MINUTES * 60 }], now);
   // Housekeeping now and then: windows that ended a day ago are of no use to anyone.
-  if (Math.random() < 0.01) await pruneRateLimits(86_400, now);
+  if (Math.random() < 0.01) await pruneThrottles(86_400, now);
   if (!limit.allowed) {
     throw new AppError('rate_limit', 'Too many certificate checks from your address. Please wait a few minutes and try again.', {
       extra: { retryAfterSeconds: limit.retryAfterSeconds },

@@ -6,6 +6,7 @@ import { Op, QueryTypes, Transaction } from 'sequelize';
 import { getEnv } from '@/lib/env';
 import { db, type OutboxEmail } from '@/models';
 import type { OutgoingAttachment } from './outbox';
+import { smtpTlsOptions } from './smtp-tls';
 
 export type SenderOptions = {
   /** Rows claimed per round. */
@@ -33,15 +34,14 @@ let transportCache: { key: string; transport: Transporter } | undefined;
 /** The SMTP transport from configuration (the local fake in the demo and the tests). */
 export function smtpTransport(): Transporter {
   const env = getEnv();
-  const key = `${env.SMTP_HOST}:${env.SMTP_PORT}:${env.SMTP_SECURE}:${env.SMTP_USER ?? ''}`;
+  const key = `${env.SMTP_HOST}:${env.SMTP_PORT}:${env.SMTP_SECURE}:${env.SMTP_REQUIRE_TLS}:${env.SMTP_USER ?? ''}`;
   if (transportCache?.key !== key) {
     transportCache = {
       key,
       transport: nodemailer.createTransport({
         host: env.SMTP_HOST,
         port: env.SMTP_PORT,
-        secure: env.SMTP_SECURE,
-        ignoreTLS: !env.SMTP_SECURE,
+        ...smtpTlsOptions(env),
         auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASSWORD ?? '' } : undefined,
         connectionTimeout: 5_000,
         greetingTimeout: 5_000,

@@ -110,6 +110,15 @@ export function refundEmail({ to, name, courseTitle, workshop, amountCents, curr
   ]);
 }
 
+/** Sent to every coordinator when a paid checkout's amount or currency differs from the enrollment's fee. */
+export function paymentMismatchEmail({ to, name, learnerEmail, courseTitle, enrollmentId, paidCents, paidCurrency, feeCents, feeCurrency, appUrl }: { to: string; name: string; learnerEmail: string; courseTitle: string; enrollmentId: number; paidCents: number; paidCurrency: string; feeCents: number; feeCurrency: string; appUrl: string }): OutgoingEmail {
+  return compose('payment.amount_mismatch', to, `Payment does not match the fee: enrollment ${enrollmentId}`, `Hello ${name},`, [
+    { kind: 'p', text: `A card payment for ${courseTitle} arrived with a different amount or currency than the enrollment's fee, so the enrollment was not activated. Check the payment with the provider, then refund it or settle the difference.` },
+    { kind: 'facts', rows: [['Learner', learnerEmail], ['Enrollment', String(enrollmentId)], ['Paid', formatMoney(paidCents, paidCurrency)], ['Fee', formatMoney(feeCents, feeCurrency)]] },
+    { kind: 'button', label: 'Open the Certificate desk', href: `${trimUrl(appUrl)}/desk` },
+  ]);
+}
+
 /** Sent a day before a workshop. */
 export function workshopReminderEmail({ to, name, courseTitle, workshop, appUrl }: { to: string; name: string; courseTitle: string; workshop: WorkshopFacts; appUrl: string }): OutgoingEmail {
   return compose('workshop.reminder', to, `Tomorrow: your ${courseTitle} workshop`, `Hello ${name},`, [

@@ -10,7 +10,7 @@ import { createCheckoutForEnrollment, expireCheckoutQuietly } from '@/lib/paymen
 import { db, type Course, type Enrollment, type Workshop } from '@/models';
 import { auditCreated, transitionEnrollment } from './state';
 import { SEAT_HOLDING_STATUSES } from './transitions';
-import { redeemWaiver } from './waivers';
+import { checkWaiverCode, redeemWaiver } from './waivers';
 
 export type EnrollResult =
   | { outcome: 'checkout'; enrollmentId: number; url: string }
@@ -39,10 +39,18 @@ async function countHolders(workshopId: number, transaction: Transaction): Promi
  * With a valid waiver code (or a free course) the enrollment is active at once; otherwise it awaits
  * payment and the answer carries the checkout page's address.
  */
-export async function enrollInWorkshop({ user, workshopId, waiverCode }: { user: SessionUser; workshopId: number; waiverCode?: string | null }): Promise<EnrollResult> {
+export async function enrollInWorkshop({ user, workshopId, waiverCode, address }: { user: SessionUser; workshopId: number; waiverCode?: string | null; address: string }): Promise<EnrollResult> {
   const { Workshop, Course, Enrollment, User, sequelize } = db();
   const appUrl = getEnv().APP_URL.replace(/\/$/, '');
   const superseded: number[] = [];
+
+  // A typed code is checked (and counted) before the workshop row is locked, so guessing never holds the lock.
+  let waiverId: number | null = null;
+  if (waiverCode) {
+    const target = await Workshop.findByPk(workshopId, { attributes: ['id', 'courseId'] });
+    if (!target) throw new AppError('not_found', 'That workshop does not exist.');
+    waiverId = await checkWaiverCode({ code: waiverCode, courseId: target.courseId, userId: user.id, address });
+  }
 
   const step = await sequelize.transaction(async (transaction) => {
     const workshop = await Workshop.findByPk(workshopId, { transaction, lock: transaction.LOCK.UPDATE });
@@ -68,7 +76,7 @@ export async function enrollInWorkshop({ user, workshopId, waiverCode }: { user:
 
     if ((await countHolders(workshop.id, transaction)) >= workshop.seats) throw new WorkshopFullError();
 
-    const waiver = waiverCode ? await redeemWaiver({ code: waiverCode, courseId: course.id, transaction }) : null;
+    const waiver = waiverId ? await redeemWaiver({ waiverId, courseId: course.id, transaction }) : null;
     const enrollment = await Enrollment.create(
       { userId: user.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'awaiting_payment', feeCents: waiver ? 0 : course.feeCents, feeWaiverId: waiver?.id ?? null, contentVersion: getCourse(course.slug)?.version ?? 1 },
       { transaction },

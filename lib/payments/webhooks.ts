@@ -3,11 +3,11 @@ import { UniqueConstraintError, type Transaction } from 'sequelize';
 import type Stripe from 'stripe';
 import { audit } from '@/lib/audit';
 import { enqueueEmail } from '@/lib/email/outbox';
-import { enrollmentReceiptEmail } from '@/lib/email/templates';
+import { enrollmentReceiptEmail, paymentMismatchEmail } from '@/lib/email/templates';
 import { transitionEnrollment } from '@/lib/enrollment/state';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
-import { db, type Payment } from '@/models';
+import { db, type Course, type Enrollment, type Payment } from '@/models';
 import { stripe } from './stripe';
 
 export type WebhookOutcome = { duplicate: boolean; handled: boolean; type: string };
@@ -81,6 +81,14 @@ async function sessionPaid(session: Stripe.Checkout.Session, eventId: string, tr
   }
   const payment = await lockPayment(session, enrollment.id, transaction);
   if (payment.status === 'paid' || payment.status === 'refunded') return false;
+  // The amount paid must be the enrollment's fee in its course's currency; anything else activates nothing.
+  const course = await Course.findByPk(enrollment.courseId, { transaction });
+  const paidCents = session.amount_total ?? -1;
+  const paidCurrency = (session.currency ?? '').toLowerCase();
+  if (!course || paidCents !== enrollment.feeCents || paidCurrency !== course.currency.toLowerCase()) {
+    await amountMismatch({ session, eventId, enrollment, course, paidCents, paidCurrency, paymentId: payment.id, transaction });
+    return true;
+  }
   const paymentIntent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
   await payment.update({ status: 'paid', paidAt: new Date(), paymentIntentId: paymentIntent, amountCents: session.amount_total ?? payment.amountCents }, { transaction });
   await audit({ actorId: null, action: 'payment.paid', subjectType: 'payment', subjectId: payment.id, data: { eventId, enrollmentId: enrollment.id, amountCents: payment.amountCents } }, { transaction });
@@ -91,16 +99,38 @@ async function sessionPaid(session: Stripe.Checkout.Session, eventId: string, tr
     return true;
   }
   await transitionEnrollment(enrollment, 'active', { transaction, actorId: null, reason: 'paid', data: { paymentId: payment.id, eventId } });
-  const [course, workshop, learner] = await Promise.all([
-    Course.findByPk(enrollment.courseId, { transaction }),
+  const [workshop, learner] = await Promise.all([
     enrollment.workshopId ? Workshop.findByPk(enrollment.workshopId, { transaction }) : null,
     User.findByPk(enrollment.userId, { transaction }),
   ]);
   await enqueueEmail(
-    enrollmentReceiptEmail({ to: learner!.email, name: learner!.name, courseTitle: course!.title, workshop, amountCents: payment.amountCents, currency: payment.currency, waived: false, appUrl: getEnv().APP_URL }),
+    enrollmentReceiptEmail({ to: learner!.email, name: learner!.name, courseTitle: course.title, workshop, amountCents: payment.amountCents, currency: payment.currency, waived: false, appUrl: getEnv().APP_URL }),
     { transaction },
   );
   return true;
+}
+
+/** A paid session whose amount or currency is not the fee: audited, every coordinator told, the enrollment left waiting. */
+async function amountMismatch({ session, eventId, enrollment, course, paidCents, paidCurrency, paymentId, transaction }: { session: Stripe.Checkout.Session; eventId: string; enrollment: Enrollment; course: Course | null; paidCents: number; paidCurrency: string; paymentId: number; transaction: Transaction }) {
+  const { User, Payment } = db();
+  const feeCurrency = course?.currency ?? '';
+  // The money did arrive: the row says so (what was paid), so the desk can refund it.
+  const paymentIntent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
+  await Payment.update({ status: 'paid', paidAt: new Date(), paymentIntentId: paymentIntent, amountCents: Math.max(0, paidCents), currency: paidCurrency.slice(0, 3) || 'usd' }, { where: { id: paymentId }, transaction });
+  await audit(
+    { actorId: null, action: 'payment.amount_mismatch', subjectType: 'payment', subjectId: paymentId, data: { eventId, checkoutSessionId: session.id, enrollmentId: enrollment.id, paidCents, paidCurrency, feeCents: enrollment.feeCents, feeCurrency } },
+    { transaction },
+  );
+  const [learner, coordinators] = await Promise.all([
+    User.findByPk(enrollment.userId, { transaction }),
+    User.findAll({ where: { role: ['coordinator', 'admin'] }, attributes: ['email', 'name'], transaction }),
+  ]);
+  for (const to of coordinators) {
+    await enqueueEmail(
+      paymentMismatchEmail({ to: to.email, name: to.name, learnerEmail: learner?.email ?? '(account removed)', courseTitle: course?.title ?? 'an unknown course', enrollmentId: enrollment.id, paidCents: Math.max(0, paidCents), paidCurrency: paidCurrency || '?', feeCents: enrollment.feeCents, feeCurrency, appUrl: getEnv().APP_URL }),
+      { transaction },
+    );
+  }
 }
 
 /** Applies an expired session found by the worker (its webhook never came); true when something changed. */

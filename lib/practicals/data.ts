@@ -190,17 +190,20 @@ export type SubmissionView = {
   learner: { id: number; name: string; email: string };
   course: { slug: string; title: string };
   workshop: { id: number; startsAt: string; place: string } | null;
+  /** The instructor holding this round to decide on it, if any. */
+  claim: { byId: number; byName: string } | null;
 };
 
 /** One submission for the Tasting table, with the earlier rounds of the same enrollment. */
 export async function fetchSubmission({ id }: { id: number }): Promise<SubmissionView | null> {
   const { Practical, User, Enrollment, Course, Workshop } = db();
-  const practical = await Practical.findByPk(id, { attributes: ['id', 'enrollmentId', 'userId'] });
+  const practical = await Practical.findByPk(id, { attributes: ['id', 'enrollmentId', 'userId', 'claimedById'] });
   if (!practical) return null;
-  const [rounds, learner, enrollment] = await Promise.all([
+  const [rounds, learner, enrollment, claimant] = await Promise.all([
     roundsWhere({ enrollmentId: practical.enrollmentId }),
     User.findByPk(practical.userId, { attributes: ['id', 'name', 'email'] }),
     Enrollment.findByPk(practical.enrollmentId),
+    practical.claimedById ? User.findByPk(practical.claimedById, { attributes: ['id', 'name'] }) : null,
   ]);
   if (!learner || !enrollment) return null;
   const [course, workshop] = await Promise.all([Course.findByPk(enrollment.courseId), enrollment.workshopId ? Workshop.findByPk(enrollment.workshopId) : null]);
@@ -212,6 +215,7 @@ export async function fetchSubmission({ id }: { id: number }): Promise<Submissio
     learner: { id: learner.id, name: learner.name, email: learner.email },
     course: { slug: course.slug, title: course.title },
     workshop: workshop ? { id: workshop.id, startsAt: workshop.startsAt.toISOString(), place: workshop.place } : null,
+    claim: claimant ? { byId: claimant.id, byName: claimant.name } : null,
   };
 }
 

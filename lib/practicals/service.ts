@@ -1,6 +1,6 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { findActiveEnrollment } from '@/lib/access';
 import { audit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/users';
@@ -10,8 +10,9 @@ import { AppError } from '@/lib/errors';
 import { roleAllows } from '@/lib/roles';
 import { getStorage } from '@/lib/storage';
 import type { PracticalForm, ReviewInput } from '@/lib/validations/practical';
-import { db } from '@/models';
+import { db, type Practical } from '@/models';
 import { checkPractical, type Flag } from './checks';
+import { REFUSAL, decisionRight } from './decision-rights';
 import { reviewEmail } from './email';
 import { PhotoRejected, processPhoto } from './images';
 
@@ -94,11 +95,17 @@ export async function pruneLoosePhotos(options: { now?: Date; limit?: number } =
   return pruned;
 }
 
-/** The stored bytes of a photo for a viewer allowed to see it: its owner, instructors and coordinators. */
+/**
+ * The stored bytes of a photo for a viewer allowed to see it: its owner; instructors and
+ * coordinators only once it is part of a submission (a loose upload is the learner's own draft).
+ */
 export async function readPhotoFor(viewer: SessionUser, photoId: number, size: 'full' | 'thumb') {
   const photo = await db().PracticalPhoto.findByPk(photoId);
   if (!photo) throw new AppError('not_found', 'There is no such photo.');
-  if (photo.userId !== viewer.id && !roleAllows(viewer.role, ['instructor'])) throw new AppError('forbidden', 'This photo belongs to another learner.');
+  if (photo.userId !== viewer.id) {
+    if (!roleAllows(viewer.role, ['instructor'])) throw new AppError('forbidden', 'This photo belongs to another learner.');
+    if (photo.practicalId === null) throw new AppError('forbidden', 'This photo is not part of a submission yet; only the learner who uploaded it can see it.');
+  }
   const stored = await getStorage().get(size === 'thumb' ? photo.thumbnailKey : photo.storageKey);
   if (!stored) throw new AppError('not_found', 'The photo file is missing from storage.');
   return stored;
@@ -151,12 +158,70 @@ export async function submitPractical(user: SessionUser, courseSlug: string, for
   });
 }
 
-/** Records an instructor's rubric and decision on a waiting round and e-mails the learner, all in one transaction. */
+/** The instructor of the workshop a practical's enrollment is in, or null (self-paced, no instructor). */
+async function workshopInstructorOf(enrollmentId: number, transaction?: Transaction): Promise<number | null> {
+  const { Enrollment, Workshop } = db();
+  const enrollment = await Enrollment.findByPk(enrollmentId, { attributes: ['id', 'workshopId'], transaction });
+  const workshop = enrollment?.workshopId ? await Workshop.findByPk(enrollment.workshopId, { attributes: ['id', 'instructorId'], transaction }) : null;
+  return workshop?.instructorId ?? null;
+}
+
+/** Throws 403 with the reason unless the viewer may approve or ask for changes (lib/practicals/decision-rights.ts). */
+function requireDecisionRight(viewer: SessionUser, practical: Practical, workshopInstructorId: number | null) {
+  const right = decisionRight({ viewer, learnerId: practical.userId, workshopInstructorId, claimedById: practical.claimedById ?? null });
+  if (!right.may) throw new AppError('forbidden', REFUSAL[right.reason]);
+}
+
+/** Who may decide on a round, for the submission page: the same rule the review route applies. */
+export async function decisionRightFor(viewer: SessionUser, practicalId: number) {
+  const practical = await db().Practical.findByPk(practicalId, { attributes: ['id', 'userId', 'enrollmentId', 'claimedById'] });
+  if (!practical) return null;
+  return decisionRight({ viewer, learnerId: practical.userId, workshopInstructorId: await workshopInstructorOf(practical.enrollmentId), claimedById: practical.claimedById ?? null });
+}
+
+/** An instructor takes a waiting round to decide on it; one claimant at a time (409 while another holds it). */
+export async function claimPractical(viewer: SessionUser, practicalId: number) {
+  const { Practical, sequelize } = db();
+  return sequelize.transaction(async (transaction) => {
+    const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
+    if (!practical) throw new AppError('not_found', 'There is no such submission.');
+    if (practical.userId === viewer.id) throw new AppError('forbidden', REFUSAL.own);
+    if (practical.status !== 'submitted') throw new AppError('conflict', 'This round has already been reviewed.');
+    if (practical.claimedById === viewer.id) return { practicalId: practical.id, claimedById: viewer.id };
+    if (practical.claimedById !== null) throw new AppError('conflict', REFUSAL.claimed_by_other);
+    await practical.update({ claimedById: viewer.id, claimedAt: new Date() }, { transaction });
+    await audit({ actorId: viewer.id, action: 'practical.claimed', subjectType: 'practical', subjectId: practical.id, data: { round: practical.round } }, { transaction });
+    return { practicalId: practical.id, claimedById: viewer.id };
+  });
+}
+
+/** The claimant gives a round back, or a coordinator releases someone else's claim. */
+export async function releasePractical(viewer: SessionUser, practicalId: number) {
+  const { Practical, sequelize } = db();
+  return sequelize.transaction(async (transaction) => {
+    const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
+    if (!practical) throw new AppError('not_found', 'There is no such submission.');
+    if (practical.claimedById === null) throw new AppError('conflict', 'Nobody has claimed this submission.');
+    if (practical.claimedById !== viewer.id && !roleAllows(viewer.role, ['coordinator'])) {
+      throw new AppError('forbidden', 'Only the instructor who claimed this submission or a coordinator can release it.');
+    }
+    const from = practical.claimedById;
+    await practical.update({ claimedById: null, claimedAt: null }, { transaction });
+    await audit({ actorId: viewer.id, action: 'practical.released', subjectType: 'practical', subjectId: practical.id, data: { claimedById: from } }, { transaction });
+    return { practicalId: practical.id, claimedById: null };
+  });
+}
+
+/**
+ * Records a rubric and decision on a waiting round and e-mails the learner, all in one transaction;
+ * only a coordinator, the workshop's instructor or the claimant may, never the learner themself.
+ */
 export async function reviewPractical(reviewer: SessionUser, practicalId: number, input: ReviewInput) {
   const { Practical, Review, User, Enrollment, Course, sequelize } = db();
   return sequelize.transaction(async (transaction) => {
     const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!practical) throw new AppError('not_found', 'There is no such submission.');
+    requireDecisionRight(reviewer, practical, await workshopInstructorOf(practical.enrollmentId, transaction));
     if (practical.status !== 'submitted') throw new AppError('conflict', 'This round has already been reviewed.');
     const [learner, enrollment] = await Promise.all([
       User.findByPk(practical.userId, { transaction }),

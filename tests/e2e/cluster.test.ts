@@ -149,7 +149,7 @@ beforeAll(async () => {
     S3_ACCESS_KEY_ID: ACCESS_KEY,
     S3_SECRET_ACCESS_KEY: SECRET,
     S3_FORCE_PATH_STYLE: 'true',
-    SIGNIN_MAX_PER_ACCOUNT: '3',
+    SIGNIN_MAX_PER_ACCOUNT_ADDRESS: '3',
     AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
   };
   for (const [name, port] of [['A', portA], ['B', portB]] as const) {
@@ -180,7 +180,7 @@ afterAll(async () => {
           await q('DELETE FROM outbox_emails WHERE toAddress IN (?)', [Object.values(learners).map((l) => l.email)]);
           await q('DELETE FROM users WHERE id IN (?)', [ids]);
         }
-        await q("DELETE FROM sign_in_throttles WHERE bucket LIKE ? OR bucket LIKE 'address:198.51.100.%'", [`account:%-${run}@cluster.test.example`]);
+        await q("DELETE FROM rate_limits WHERE bucket LIKE ? OR bucket LIKE ? OR bucket LIKE 'signin:address:198.51.100.%'", [`signin:%-${run}@cluster.test.example`, 'signin:pair:198.51.100.%']);
         if (workshopId) await q('DELETE FROM workshops WHERE id = ?', [workshopId]);
         if (waiverId) await q('DELETE FROM fee_waivers WHERE id = ?', [waiverId]);
         await q('SET FOREIGN_KEY_CHECKS = 1', []);
@@ -265,22 +265,22 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
     expect(tables).toEqual([]);
   });
 
-  it('sign-in throttling is counted in MariaDB: failures spread over both servers lock the account on both', async () => {
+  it('sign-in throttling is counted in MariaDB: failures spread over both servers use up the e-mail and address on both', async () => {
     const { email } = learners.locked;
     const from = address(10);
-    // SIGNIN_MAX_PER_ACCOUNT is 3 on both servers: A, B, A.
+    // SIGNIN_MAX_PER_ACCOUNT_ADDRESS is 3 on both servers: A, B, A.
     for (const [i, app] of [apps[0], apps[1], apps[0]].entries()) {
       const attempt = await apiSignIn(app.url, email, `wrong-password-${i}`, from);
       expect(attempt, `failure ${i + 1} on ${app.name}`).toEqual({ cookie: null, status: 401 });
     }
-    const failures = async () => (await query<{ failures: number }>('SELECT failures FROM sign_in_throttles WHERE bucket = ?', [`account:${email}`]))[0]?.failures;
-    expect(await failures()).toBe(3);
-    // Now the right password is refused on B and on A alike. It is the shared count that refuses
-    // it: the password is not even checked (a right one would clear the count, a wrong one add 1).
+    const attempts = async () => Number((await query<{ hits: number }>('SELECT hits FROM rate_limits WHERE bucket = ?', [`signin:pair:${from}|${email}`]))[0]?.hits);
+    expect(await attempts()).toBe(3);
+    // Now the right password is refused (429) on B and on A alike. It is the shared count that
+    // refuses it, before the password is checked: each refused attempt is counted too.
     for (const app of [apps[1], apps[0]]) {
-      expect(await apiSignIn(app.url, email, PASSWORD, from), `server ${app.name}`).toEqual({ cookie: null, status: 401 });
+      expect(await apiSignIn(app.url, email, PASSWORD, from), `server ${app.name}`).toEqual({ cookie: null, status: 429 });
     }
-    expect(await failures()).toBe(3);
+    expect(await attempts()).toBe(5);
     // Another account from another address still signs in on either server.
     expect((await apiSignIn(apps[1].url, learners.racerA.email, PASSWORD, address(11))).cookie).toMatch(/^next-auth\.session-token=/);
   });

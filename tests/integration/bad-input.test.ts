@@ -34,12 +34,12 @@ const MIN_REQUESTS = 10_000;
  * excluded from the fingerprint.
  */
 const MAY_WRITE: Record<string, { table: string; why: string }[]> = {
-  // Every public certificate check counts against the client's address (lib/rate-limit.ts, 60 per
+  // Every public certificate check counts against the client's address (lib/throttle.ts, 60 per
   // 10 minutes), a malformed or unknown serial included: that is the throttle doing its job.
   'app/api/certificates/[serial]/route.ts#GET': [{ table: 'rate_limits', why: 'verification throttle counts every check per address' }],
-  // A failed sign-in with a valid CSRF token is counted per account and per address
-  // (lib/auth/users.ts recordFailure), so that guessing is throttled across app servers.
-  'app/api/auth/[...nextauth]/route.ts#POST': [{ table: 'sign_in_throttles', why: 'failed sign-ins are counted for the sign-in throttle' }],
+  // A sign-in with a valid CSRF token is counted per e-mail and address, per address and per
+  // account before the password is checked (lib/auth/sign-in-throttle.ts), across app servers.
+  'app/api/auth/[...nextauth]/route.ts#POST': [{ table: 'rate_limits', why: 'sign-in attempts are counted for the sign-in throttle' }],
 };
 
 type Handler = (request: Request, context: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;

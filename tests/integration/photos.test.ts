@@ -1,15 +1,15 @@
 import sharp from 'sharp';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { GET as getPhoto } from '@/app/api/photos/[id]/route';
 import { POST as uploadPhoto } from '@/app/api/photos/route';
 import { AppError } from '@/lib/errors';
 import { getStorage, setStorage } from '@/lib/storage';
 import { db } from '@/models';
-import { createUser, resetDatabase } from '../helpers/db';
+import { createUser } from '../helpers/db';
 import { params } from '../helpers/request';
 import { actAs } from '../helpers/session';
 import { LOOSE_PHOTO_DAYS, pruneLoosePhotos, submitPractical } from '@/lib/practicals/service';
-import { catalog, enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, useTemporaryStorage } from './practical-fixtures';
+import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting } from './practical-fixtures';
 
 const GPS_IFD_TAG = 0x8825; // TIFF/EXIF 2.3: the pointer to the GPS sub-IFD, written in IFD0
 
@@ -23,19 +23,7 @@ function ifd0Tags(exif: Buffer): number[] {
   return Array.from({ length: u16(ifd) }, (_, i) => u16(ifd + 2 + 12 * i));
 }
 
-let storage: ReturnType<typeof useTemporaryStorage>;
-let setting: Awaited<ReturnType<typeof catalog>>;
-
-beforeAll(() => {
-  storage = useTemporaryStorage();
-});
-afterAll(() => storage.cleanup());
-
-beforeEach(async () => {
-  await resetDatabase();
-  actAs(null);
-  setting = await catalog();
-});
+const fixture = practicalSetting();
 
 async function storedImage(photoId: number, which: 'storageKey' | 'thumbnailKey' = 'storageKey') {
   const row = await db().PracticalPhoto.findByPk(photoId);
@@ -45,7 +33,7 @@ async function storedImage(photoId: number, which: 'storageKey' | 'thumbnailKey'
 
 describe('POST /api/photos', () => {
   it('re-encodes a JPEG with a location in its metadata: location and every tag gone, turned upright', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     // 400 × 300 stored sideways with orientation 6 (rotate 90° clockwise to view), a camera make and a GPS position.
     const input = await makeJpeg(400, 300, (s) =>
@@ -76,7 +64,7 @@ describe('POST /api/photos', () => {
   });
 
   it('decides the type from the content: a PNG named .jpg and sent as image/jpeg is accepted as a PNG', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const png = await sharp({ create: { width: 120, height: 80, channels: 4, background: { r: 20, g: 120, b: 90, alpha: 0.5 } } }).png().toBuffer();
     const response = await uploadPhoto(photoRequest(png, 'lids.jpg', 'image/jpeg'), {});
@@ -88,7 +76,7 @@ describe('POST /api/photos', () => {
   });
 
   it('accepts WebP and scales a large photo to 2000 px on the long side with a 320 px thumbnail', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const webp = await sharp(await makeJpeg(3000, 1200)).webp().toBuffer();
     const response = await uploadPhoto(photoRequest(webp, 'shelf.webp', 'image/webp'), {});
@@ -100,18 +88,18 @@ describe('POST /api/photos', () => {
   });
 
   it('answers a text file named .jpg with 415 and a clear message, and stores nothing', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
-    const filesBefore = storage.files();
+    const filesBefore = fixture.storage.files();
     const response = await uploadPhoto(photoRequest(Buffer.from('These are my pickles, honestly.\n'.repeat(50)), 'pickles.jpg', 'image/jpeg'), {});
     expect(response.status).toBe(415);
     expect((await response.json()).message).toMatch(/not a JPEG, PNG or WebP photo/);
     expect(await db().PracticalPhoto.count()).toBe(0);
-    expect(storage.files()).toEqual(filesBefore);
+    expect(fixture.storage.files()).toEqual(filesBefore);
   });
 
   it('answers 415 for a file that only starts like a JPEG but is not one', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const fake = Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0]), Buffer.from('not really a picture'.repeat(20))]);
     const response = await uploadPhoto(photoRequest(fake, 'x.jpg', 'image/jpeg'), {});
@@ -120,7 +108,7 @@ describe('POST /api/photos', () => {
   });
 
   it('leaves nothing behind when the store fails between the photo and its thumbnail', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const real = getStorage();
     // The photo is stored, then the store stops answering before the thumbnail is written.
@@ -130,7 +118,7 @@ describe('POST /api/photos', () => {
       get: (key) => real.get(key),
       delete: (key) => real.delete(key),
     });
-    const filesBefore = storage.files();
+    const filesBefore = fixture.storage.files();
     try {
       const response = await uploadPhoto(photoRequest(await makeJpeg(400, 300), 'jars.jpg', 'image/jpeg'), {});
       expect(response.status).toBe(503);
@@ -139,24 +127,24 @@ describe('POST /api/photos', () => {
       setStorage(real);
     }
     expect(await db().PracticalPhoto.count()).toBe(0);
-    expect(storage.files()).toEqual(filesBefore);
+    expect(fixture.storage.files()).toEqual(filesBefore);
   });
 
   it('answers an 11 MB file with 413 and stores nothing', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const big = Buffer.alloc(11 * 1024 * 1024, 7);
     big.set([0xff, 0xd8, 0xff, 0xe0]);
-    const filesBefore = storage.files();
+    const filesBefore = fixture.storage.files();
     const response = await uploadPhoto(photoRequest(big, 'huge.jpg', 'image/jpeg'), {});
     expect(response.status).toBe(413);
     expect((await response.json()).message).toMatch(/larger than 10 MB/);
     expect(await db().PracticalPhoto.count()).toBe(0);
-    expect(storage.files()).toEqual(filesBefore);
+    expect(fixture.storage.files()).toEqual(filesBefore);
   });
 
   it('answers 413 from the declared length alone, before reading the body', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const request = new Request('http://localhost:3000/api/photos', {
       method: 'POST',
@@ -169,12 +157,12 @@ describe('POST /api/photos', () => {
   it('takes photos only from a signed-in learner with an active enrollment in the course', async () => {
     const jpeg = await makeJpeg(64, 64);
     expect((await uploadPhoto(photoRequest(jpeg, 'a.jpg', 'image/jpeg'), {})).status).toBe(401);
-    actAs(setting.instructor);
+    actAs(fixture.current.instructor);
     expect((await uploadPhoto(photoRequest(jpeg, 'a.jpg', 'image/jpeg'), {})).status).toBe(403);
-    const { learner: unpaid } = await enrolledLearner(setting.flagship.id, 'awaiting_payment');
+    const { learner: unpaid } = await enrolledLearner(fixture.current.flagship.id, 'awaiting_payment');
     actAs(unpaid);
     expect((await uploadPhoto(photoRequest(jpeg, 'a.jpg', 'image/jpeg'), {})).status).toBe(403);
-    const { learner: other } = await enrolledLearner(setting.refresher.id);
+    const { learner: other } = await enrolledLearner(fixture.current.refresher.id);
     actAs(other);
     expect((await uploadPhoto(photoRequest(jpeg, 'a.jpg', 'image/jpeg'), {})).status).toBe(403);
     expect((await uploadPhoto(photoRequest(jpeg, 'a.jpg', 'image/jpeg', 'volunteer-refresher'), {})).status).toBe(201);
@@ -183,9 +171,9 @@ describe('POST /api/photos', () => {
 });
 
 describe('GET /api/photos/[id]', () => {
-  it('serves a photo to its owner, instructors and coordinators, and 403 to another learner', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
-    const { learner: other } = await enrolledLearner(setting.flagship.id);
+  it('serves a photo to its owner, to staff once it is part of a submission, and 403 to another learner', async () => {
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
+    const { learner: other } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const uploaded = await (await uploadPhoto(photoRequest(await makeJpeg(300, 200), 'jars.jpg', 'image/jpeg'), {})).json();
     const id = String(uploaded.photo.id);
@@ -201,12 +189,20 @@ describe('GET /api/photos/[id]', () => {
     // Never enlarged: a 300 px photo keeps a 300 px thumbnail.
     expect(await sharp(thumb).metadata()).toMatchObject({ width: 300, height: 200 });
 
-    actAs(setting.instructor);
-    expect((await get()).status).toBe(200);
-    actAs(await createUser('coordinator'));
-    expect((await get()).status).toBe(200);
-    actAs(await createUser('admin'));
-    expect((await get()).status).toBe(200);
+    // A loose upload (not yet in a submission) is the learner's own draft: staff are refused.
+    const staff = [fixture.current.instructor, await createUser('coordinator'), await createUser('admin')];
+    for (const person of staff) {
+      actAs(person);
+      const loose = await get();
+      expect(loose.status, person.role).toBe(403);
+      expect((await loose.json()).message).toMatch(/not part of a submission/);
+    }
+    // Once it belongs to a submission, every instructor and coordinator may see it.
+    await submitPractical(learner, 'pickling-and-canning', GOOD_BATCH([Number(id)]));
+    for (const person of staff) {
+      actAs(person);
+      expect((await get()).status, person.role).toBe(200);
+    }
 
     actAs(other);
     const refused = await get();
@@ -224,7 +220,7 @@ describe('GET /api/photos/[id]', () => {
 
 describe('photos never submitted (the worker’s pruneLoosePhotos)', () => {
   it('removes rows and objects of photos loose for more than LOOSE_PHOTO_DAYS; submitted and recent ones stay', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
     const ids: number[] = [];
     for (let i = 0; i < 5; i++) {
@@ -245,14 +241,14 @@ describe('photos never submitted (the worker’s pruneLoosePhotos)', () => {
     const goneKeys = [...(await keysOf(oldA)), ...(await keysOf(oldB))];
     const keptKeys = [...(await keysOf(submittedA)), ...(await keysOf(submittedB)), ...(await keysOf(recent))];
     // The folder is shared with the other tests of this file: count what this one changes.
-    const filesBefore = storage.files().length;
+    const filesBefore = fixture.storage.files().length;
 
     expect(await pruneLoosePhotos({ now })).toBe(2);
     const left = (await PracticalPhoto.findAll({ where: { id: ids } })).map((p) => p.id).sort((a, b) => a - b);
     expect(left).toEqual([submittedA, submittedB, recent].sort((a, b) => a - b));
     for (const key of goneKeys) expect(await getStorage().get(key), key).toBeNull();
     for (const key of keptKeys) expect(await getStorage().get(key), key).not.toBeNull();
-    expect(storage.files()).toHaveLength(filesBefore - 4);
+    expect(fixture.storage.files()).toHaveLength(filesBefore - 4);
     // Nothing is left to remove; a day later the recent one is still inside its week.
     expect(await pruneLoosePhotos({ now })).toBe(0);
     expect(await pruneLoosePhotos({ now: new Date(now.getTime() + 0.5 * 86_400_000) })).toBe(0);

@@ -2,11 +2,13 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import sharp, { type Sharp } from 'sharp';
+import { afterAll, beforeAll, beforeEach } from 'vitest';
 import type { SessionUser } from '@/lib/auth/users';
 import { diskDriver, setStorage } from '@/lib/storage';
 import type { PracticalForm } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createCourses, createUser } from '../helpers/db';
+import { createCourses, createUser, resetDatabase } from '../helpers/db';
+import { actAs } from '../helpers/session';
 
 // Shared set-up for the practical and photo tests: a photo folder of their own, an enrolled learner.
 
@@ -87,3 +89,26 @@ export const GOOD_BATCH = (photoIds: number[]): PracticalForm => ({
 });
 
 export type { SessionUser };
+
+/** The hooks a practical test file needs: its own photo folder, then per test a clean database, nobody signed in and the catalog. */
+export function practicalSetting(): { readonly current: Awaited<ReturnType<typeof catalog>>; readonly storage: ReturnType<typeof useTemporaryStorage> } {
+  let storage: ReturnType<typeof useTemporaryStorage>;
+  let current: Awaited<ReturnType<typeof catalog>>;
+  beforeAll(() => {
+    storage = useTemporaryStorage();
+  });
+  afterAll(() => storage.cleanup());
+  beforeEach(async () => {
+    await resetDatabase();
+    actAs(null);
+    current = await catalog();
+  });
+  return {
+    get current() {
+      return current;
+    },
+    get storage() {
+      return storage;
+    },
+  };
+}

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { POST as uploadPhoto } from '@/app/api/photos/route';
 import { POST as review } from '@/app/api/practicals/[id]/review/route';
 import { POST as submit } from '@/app/api/practicals/route';
@@ -6,23 +6,12 @@ import { GET as submissions } from '@/app/api/tasting-table/submissions/route';
 import { fetchLearnerPracticals, fetchSubmission } from '@/lib/practicals/data';
 import { RUBRIC_CRITERIA, type PracticalForm } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createUser, resetDatabase } from '../helpers/db';
+import { createUser } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
 import { actAs } from '../helpers/session';
-import { catalog, enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, useTemporaryStorage, type SessionUser } from './practical-fixtures';
+import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting, type SessionUser } from './practical-fixtures';
 
-let storage: ReturnType<typeof useTemporaryStorage>;
-let setting: Awaited<ReturnType<typeof catalog>>;
-
-beforeAll(() => {
-  storage = useTemporaryStorage();
-});
-afterAll(() => storage.cleanup());
-beforeEach(async () => {
-  await resetDatabase();
-  actAs(null);
-  setting = await catalog();
-});
+const fixture = practicalSetting();
 
 async function upload(user: SessionUser, count = 2): Promise<number[]> {
   actAs(user);
@@ -45,7 +34,7 @@ const decide = (id: number, body: unknown) => review(jsonRequest(`/api/practical
 
 describe('POST /api/practicals', () => {
   it('stores a round linked to the enrollment, with its photos and the automatic flags, and never blocks on a flag', async () => {
-    const { learner, enrollment } = await enrolledLearner(setting.flagship.id, 'active', setting.workshop.id);
+    const { learner, enrollment } = await enrolledLearner(fixture.current.flagship.id, 'active', fixture.current.workshop.id);
     const photoIds = await upload(learner);
     // 10 minutes at 5,200 ft: USDA Guide 6 quick fresh-pack dill pints need 15 min at 1,001–6,000 ft.
     const response = await post({ photoIds, minutes: 10 });
@@ -65,8 +54,8 @@ describe('POST /api/practicals', () => {
   });
 
   it('refuses photos that are not the learner’s, too few photos, and a batch that does not add up', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
-    const { learner: other } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
+    const { learner: other } = await enrolledLearner(fixture.current.flagship.id);
     const othersPhotos = await upload(other);
     const own = await upload(learner, 1);
     actAs(learner);
@@ -86,13 +75,13 @@ describe('POST /api/practicals', () => {
   });
 
   it('is only for a learner with an active or completed enrollment in that course', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id);
     const photoIds = await upload(learner);
     await db().Enrollment.update({ status: 'withdrawn' }, { where: { userId: learner.id } });
     actAs(learner);
     expect((await post({ photoIds })).status).toBe(403);
     expect((await post({ photoIds }, 'volunteer-refresher')).status).toBe(403);
-    actAs(setting.instructor);
+    actAs(fixture.current.instructor);
     expect((await post({ photoIds })).status).toBe(403);
     actAs(null);
     expect((await post({ photoIds })).status).toBe(401);
@@ -102,7 +91,7 @@ describe('POST /api/practicals', () => {
 
 describe('the review flow', () => {
   it('asks for changes, takes a resubmission as round 2 keeping round 1 and its review, then approves, e-mailing the learner each time', async () => {
-    const { learner, enrollment } = await enrolledLearner(setting.flagship.id, 'active', setting.workshop.id);
+    const { learner, enrollment } = await enrolledLearner(fixture.current.flagship.id, 'active', fixture.current.workshop.id);
     const first = await upload(learner);
     const { practical: round1 } = await (await post({ photoIds: first, minutes: 10 })).json();
     // A second round while the first waits is a conflict.
@@ -112,7 +101,7 @@ describe('the review flow', () => {
 
     // Only instructors and up review.
     expect((await decide(round1.id, { decision: 'approved', rubric: rubric(), comment: '' })).status).toBe(403);
-    actAs(setting.instructor);
+    actAs(fixture.current.instructor);
     // Approving with a criterion not met, or asking for changes without saying what, is refused.
     const inconsistent = await decide(round1.id, { decision: 'approved', rubric: rubric(['rims-and-lids']), comment: '' });
     expect(inconsistent.status).toBe(400);
@@ -141,7 +130,7 @@ describe('the review flow', () => {
     const { practical: round2 } = await (await post({ photoIds: early, minutes: 15 })).json();
     expect(round2).toMatchObject({ round: 2, flags: [] });
 
-    actAs(setting.instructor);
+    actAs(fixture.current.instructor);
     expect((await decide(round2.id, { decision: 'approved', rubric: rubric(), comment: 'Clean rims, good seals.' })).status).toBe(201);
     const mails = await db().OutboxEmail.findAll({ where: { kind: 'practical.reviewed' }, order: [['id', 'ASC']] });
     expect(mails.map((m) => m.subject)).toEqual([expect.stringMatching(/needs changes/), expect.stringMatching(/is approved/)]);
@@ -158,7 +147,7 @@ describe('the review flow', () => {
     expect(history[1].photos.map((p) => p.id)).toEqual(first);
     const page = await fetchSubmission({ id: round2.id });
     expect(page?.earlierRounds.map((r) => r.round)).toEqual([1]);
-    expect(page?.workshop?.id).toBe(setting.workshop.id);
+    expect(page?.workshop?.id).toBe(fixture.current.workshop.id);
 
     // An approved practical takes no further round.
     actAs(learner);
@@ -166,9 +155,9 @@ describe('the review flow', () => {
   });
 
   it('leaves no review, e-mail or status change behind when the e-mail cannot be written', async () => {
-    const { learner } = await enrolledLearner(setting.flagship.id);
+    const { learner } = await enrolledLearner(fixture.current.flagship.id, 'active', fixture.current.workshop.id);
     const { practical } = await (await post({ photoIds: await upload(learner) })).json();
-    actAs(setting.instructor);
+    actAs(fixture.current.instructor);
     // Shrinking the outbox's address column makes the e-mail insert fail inside the review's transaction.
     await db().sequelize.query('ALTER TABLE outbox_emails MODIFY toAddress VARCHAR(3) NOT NULL');
     try {
@@ -187,12 +176,12 @@ describe('GET /api/tasting-table/submissions', () => {
 
   async function seed() {
     const otherWorkshop = await db().Workshop.create({
-      courseId: setting.flagship.id, instructorId: setting.instructor.id, startsAt: new Date('2027-01-10T16:00:00Z'), endsAt: new Date('2027-01-10T21:00:00Z'), timeZone: 'America/Denver', place: 'Upper Fork Community Kitchen', seats: 10,
+      courseId: fixture.current.flagship.id, instructorId: fixture.current.instructor.id, startsAt: new Date('2027-01-10T16:00:00Z'), endsAt: new Date('2027-01-10T21:00:00Z'), timeZone: 'America/Denver', place: 'Upper Fork Community Kitchen', seats: 10,
     });
     const now = Date.now();
     // 25 submissions: every third flagged, every fifth approved, ages 0..24 days, alternating workshops.
     for (let i = 0; i < 25; i++) {
-      const { learner, enrollment } = await enrolledLearner(setting.flagship.id, 'active', i % 2 ? otherWorkshop.id : setting.workshop.id, { quick: true });
+      const { learner, enrollment } = await enrolledLearner(fixture.current.flagship.id, 'active', i % 2 ? otherWorkshop.id : fixture.current.workshop.id, { quick: true });
       await db().User.update({ name: `Learner ${String.fromCharCode(65 + (i % 26))}` }, { where: { id: learner.id } });
       await db().Practical.create({
         enrollmentId: enrollment.id, userId: learner.id, round: 1, status: i % 5 === 0 ? 'approved' : 'submitted', details: { product: 'dilly-beans' },
@@ -212,7 +201,7 @@ describe('GET /api/tasting-table/submissions', () => {
 
   it('pages, sorts, filters by status, workshop, flags and age, and counts each status', async () => {
     const { otherWorkshop } = await seed();
-    actAs(setting.instructor);
+    actAs(fixture.current.instructor);
     const all = await (await get()).json();
     expect(all).toMatchObject({ total: 25, page: 1, pageSize: 20, pageCount: 2, counts: { submitted: 20, approved: 5, changes_requested: 0 } });
     expect(all.rows).toHaveLength(20);
@@ -242,8 +231,8 @@ describe('GET /api/tasting-table/submissions', () => {
     const old = await (await get('?olderThanDays=10&status=submitted')).json();
     expect(old.total).toBe(12);
     expect(old.counts).toEqual({ submitted: 12, approved: 3, changes_requested: 0 });
-    const combined = await (await get(`?status=submitted&flagged=yes&workshop=${setting.workshop.id}`)).json();
-    expect(combined.rows.every((r: { status: string; flagCount: number; workshopId: number }) => r.status === 'submitted' && r.flagCount > 0 && r.workshopId === setting.workshop.id)).toBe(true);
+    const combined = await (await get(`?status=submitted&flagged=yes&workshop=${fixture.current.workshop.id}`)).json();
+    expect(combined.rows.every((r: { status: string; flagCount: number; workshopId: number }) => r.status === 'submitted' && r.flagCount > 0 && r.workshopId === fixture.current.workshop.id)).toBe(true);
     // Even i (the first workshop), i % 3 == 0, not approved (i % 5 != 0): 6, 12, 18, 24.
     expect(combined.total).toBe(4);
 

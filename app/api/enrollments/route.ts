@@ -1,4 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
+import { clientAddress } from '@/lib/auth/options';
 import { enrollInWorkshop } from '@/lib/enrollment/enroll';
 import { parseOrThrow, route } from '@/lib/errors';
 import { readJson } from '@/lib/server/body';
@@ -8,6 +9,6 @@ import { EnrollSchema } from '@/lib/validations/enrollment';
 export const POST = route(async (request) => {
   const user = await requireRole('learner');
   const input = parseOrThrow(EnrollSchema, await readJson(request), 'enrollment');
-  const result = await enrollInWorkshop({ user, workshopId: input.workshopId, waiverCode: input.waiverCode });
+  const result = await enrollInWorkshop({ user, workshopId: input.workshopId, waiverCode: input.waiverCode, address: clientAddress(request.headers) });
   return Response.json(result, { status: 201 });
 });

@@ -178,7 +178,8 @@ const routes: RouteRow[] = [
   { kind: 'route', pattern: '/api/enrollments', method: 'POST', probe: () => ({ path: '/api/enrollments', body: {} }), expect: LEARNER_WRITE },
   { kind: 'route', pattern: '/api/health', method: 'GET', probe: at('/api/health'), expect: PUBLIC },
   { kind: 'route', pattern: '/api/pantry', method: 'GET', probe: at('/api/pantry'), expect: [401, 200, NA, 403, 403, 403] },
-  { kind: 'route', pattern: '/api/photos/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/photos/${ab(s, fx.a.photoId, fx.b.photoId)}?size=thumb` }), expect: [401, 200, 403, 200, 200, 200] },
+  // The fixtures' photos are loose uploads (not yet in a submission): only their owner may read them.
+  { kind: 'route', pattern: '/api/photos/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/photos/${ab(s, fx.a.photoId, fx.b.photoId)}?size=thumb` }), expect: [401, 200, 403, 403, 403, 403] },
   {
     kind: 'route',
     pattern: '/api/photos',
@@ -191,6 +192,9 @@ const routes: RouteRow[] = [
     },
     expect: [401, 201, NA, 403, 403, 403],
   },
+  // A missing submission: the guard lets staff through, then 404 (claiming the demo's waiting round would change shared data).
+  { kind: 'route', pattern: '/api/practicals/[id]/claim', method: 'POST', probe: () => ({ path: '/api/practicals/999999999/claim' }), expect: [401, 403, NA, 404, 404, 404] },
+  { kind: 'route', pattern: '/api/practicals/[id]/claim', method: 'DELETE', probe: () => ({ path: '/api/practicals/999999999/claim' }), expect: [401, 403, NA, 404, 404, 404] },
   { kind: 'route', pattern: '/api/practicals/[id]/review', method: 'POST', probe: (fx) => ({ path: `/api/practicals/${fx.practicalId}/review`, body: {} }), expect: [401, 403, NA, 400, 400, 400] },
   { kind: 'route', pattern: '/api/practicals', method: 'POST', probe: () => ({ path: '/api/practicals', body: {} }), expect: LEARNER_WRITE },
   { kind: 'route', pattern: '/api/progress', method: 'GET', probe: at(`/api/progress?course=${FLAGSHIP}`), expect: [401, 200, NA, 403, 403, 403] },

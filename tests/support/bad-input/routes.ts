@@ -253,6 +253,8 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/photos/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam }, query: badQuery(['size'], { size: fc.constantFrom('thumb', 'full') }) },
   'app/api/photos/route.ts#POST': { who: ['learner'], special: 'photo-upload' },
   'app/api/practicals/[id]/review/route.ts#POST': { who: STAFF, params: { id: idParam }, body: badJsonBodies(reviewFields) },
+  'app/api/practicals/[id]/claim/route.ts#POST': { who: STAFF, params: { id: idParam } },
+  'app/api/practicals/[id]/claim/route.ts#DELETE': { who: STAFF, params: { id: idParam } },
   'app/api/practicals/route.ts#POST': { who: ['learner'], body: badJsonBodies(practicalFields) },
   'app/api/progress/route.ts#GET': { who: ['learner'], query: badQuery(['course'], { course: fc.constantFrom('pickling-and-canning', 'no-such-course') }), mayAnswerOk: true },
   'app/api/progress/route.ts#POST': { who: ['learner'], body: badJsonBodies({ courseSlug: slugField, lessonSlug: slugField }) },

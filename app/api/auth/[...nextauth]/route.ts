@@ -1,6 +1,8 @@
 import NextAuth from 'next-auth';
 import { NextRequest } from 'next/server';
 import { checkNextAuthRequest, withClearError } from '@/lib/auth/nextauth-request';
+import { asTooManyAttempts } from '@/lib/auth/sign-in-answer';
+import { signInRefusal } from '@/lib/auth/sign-in-throttle';
 import { authOptions } from '@/lib/auth/options';
 import { errorResponse, refuseCrossSite } from '@/lib/errors';
 import { JSON_BODY_LIMIT, readBodyBytes } from '@/lib/server/body';
@@ -16,7 +18,10 @@ async function handler(request: NextRequest, context: Context) {
     const params = await context.params;
     const bounded = request.method === 'POST' ? await withBoundedBody(request) : request;
     await checkNextAuthRequest(bounded, params);
-    return await withClearError(await NextAuth(authOptions())(bounded, { params }));
+    // A sign-in refused by the throttle answers 429 with Retry-After (authorize() leaves the seconds here).
+    const refusals: number[] = [];
+    const response = await signInRefusal.run(refusals, () => NextAuth(authOptions())(bounded, { params }));
+    return await asTooManyAttempts(await withClearError(response), refusals);
   } catch (error) {
     return errorResponse(error);
   }

@@ -7,12 +7,13 @@ import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from '@/components/prac
 import { BackToTable } from '@/components/tasting-table/back-to-table';
 import { BatchDetails } from '@/components/tasting-table/batch-details';
 import { PhotoViewer } from '@/components/tasting-table/photo-viewer';
-import { ReviewForm } from '@/components/tasting-table/review-form';
+import { DecisionPanel } from '@/components/tasting-table/decision-panel';
 import { Badge } from '@/components/ui/badge';
 import { Card } from '@/components/ui/card';
 import { requirePageRole } from '@/lib/auth/guard';
 import { computeExpectations } from '@/lib/practicals/checks';
 import { fetchSubmission } from '@/lib/practicals/data';
+import { decisionRightFor } from '@/lib/practicals/service';
 
 export const metadata: Metadata = { title: 'Practical submission' };
 
@@ -20,10 +21,10 @@ const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle:
 
 export default async function SubmissionPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  await requirePageRole(`/tasting-table/submissions/${id}`, 'instructor');
+  const viewer = await requirePageRole(`/tasting-table/submissions/${id}`, 'instructor');
   if (!/^\d{1,10}$/.test(id)) notFound();
-  const submission = await fetchSubmission({ id: Number(id) });
-  if (!submission) notFound();
+  const [submission, right] = await Promise.all([fetchSubmission({ id: Number(id) }), decisionRightFor(viewer, Number(id))]);
+  if (!submission || !right) notFound();
   const { round, earlierRounds, learner, course, workshop } = submission;
   const expected = computeExpectations(round.details);
 
@@ -62,7 +63,7 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
       ) : null}
       {round.status === 'submitted' ? (
         <Card title="Rubric and decision">
-          <ReviewForm practicalId={round.id} round={round.round} />
+          <DecisionPanel practicalId={round.id} round={round.round} right={right} claim={submission.claim} viewer={viewer} />
         </Card>
       ) : null}
 

@@ -1,0 +1,34 @@
+import { describe, expect, it } from 'vitest';
+import { decisionRight } from './decision-rights';
+
+const facts = (viewer: { id: number; role: 'learner' | 'instructor' | 'coordinator' | 'admin' }, over: Partial<{ learnerId: number; workshopInstructorId: number | null; claimedById: number | null }> = {}) => ({
+  viewer,
+  learnerId: 1,
+  workshopInstructorId: 2,
+  claimedById: null,
+  ...over,
+});
+
+describe('decisionRight', () => {
+  it('lets a coordinator, the workshop instructor and the claimant decide', () => {
+    expect(decisionRight(facts({ id: 9, role: 'coordinator' }))).toEqual({ may: true, as: 'coordinator' });
+    expect(decisionRight(facts({ id: 9, role: 'admin' }))).toEqual({ may: true, as: 'coordinator' });
+    expect(decisionRight(facts({ id: 2, role: 'instructor' }))).toEqual({ may: true, as: 'workshop instructor' });
+    expect(decisionRight(facts({ id: 3, role: 'instructor' }, { claimedById: 3 }))).toEqual({ may: true, as: 'claimant' });
+  });
+
+  it('asks any other instructor to claim first, and refuses while someone else holds the claim', () => {
+    expect(decisionRight(facts({ id: 3, role: 'instructor' }))).toEqual({ may: false, reason: 'claim_first' });
+    expect(decisionRight(facts({ id: 3, role: 'instructor' }, { claimedById: 4 }))).toEqual({ may: false, reason: 'claimed_by_other' });
+    expect(decisionRight(facts({ id: 3, role: 'instructor' }, { workshopInstructorId: null }))).toEqual({ may: false, reason: 'claim_first' });
+  });
+
+  it('never lets anyone decide on their own practical, not even a coordinator who teaches their own workshop', () => {
+    expect(decisionRight(facts({ id: 1, role: 'coordinator' }))).toEqual({ may: false, reason: 'own' });
+    expect(decisionRight(facts({ id: 1, role: 'instructor' }, { workshopInstructorId: 1, claimedById: 1 }))).toEqual({ may: false, reason: 'own' });
+  });
+
+  it('refuses a learner', () => {
+    expect(decisionRight(facts({ id: 5, role: 'learner' }))).toEqual({ may: false, reason: 'not_instructor' });
+  });
+});
