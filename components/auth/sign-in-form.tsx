@@ -12,7 +12,7 @@ import { SignInSchema, type SignInInput } from '@/lib/validations/user';
 
 const MESSAGES: Record<string, string> = {
   CredentialsSignin: 'That e-mail address and password do not match an account.',
-  Throttled: 'Too many sign-in attempts. Please wait 15 minutes and try again.',
+  Throttled: 'Too many sign-in attempts. Please wait a few minutes and try again.',
 };
 
 export function SignInForm({ callbackUrl, initialError }: { callbackUrl?: string; initialError?: string }) {
