@@ -74,6 +74,8 @@ function WorkshopRow({ workshop: w, onEnrolled }: { workshop: WorkshopItem; onEn
       window.location.assign(body.url);
     } catch (e) {
       if (e instanceof FetchError && e.status === 401) {
+        // A full load: the sign-in page then comes back to this course page with a fresh session.
+        // eslint-disable-next-line @next/next/no-location-assign-relative-destination
         window.location.assign(`/signin?callbackUrl=${encodeURIComponent(window.location.pathname)}`);
         return;
       }

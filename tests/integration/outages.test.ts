@@ -21,7 +21,7 @@ import { db } from '@/models';
 import { createCourses, createUser, resetDatabase } from '../helpers/db';
 import { jsonRequest, params } from '../helpers/request';
 import { actAs } from '../helpers/session';
-import { payWithCard, sessionIdOf, startHarness, type Harness } from './enrollment-fakes';
+import { payWithCard, startHarness, type Harness } from './enrollment-fakes';
 
 // Test cards follow the common test-card convention: 4242 4242 4242 4242 succeeds.
 const GOOD = '4242 4242 4242 4242';
