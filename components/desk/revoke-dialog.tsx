@@ -7,7 +7,7 @@ import { Dialog } from '@/components/ui/dialog';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { TextArea } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { RevokeSchema, type RevokeInput } from '@/lib/certificates/schemas';
+import { RevokeSchema, type RevokeInput } from '@/lib/validations/certificate';
 import { errorMessage, postJson } from '@/lib/fetcher';
 
 type Target = { certificateId: number; serial: string; learnerName: string };

@@ -6,7 +6,7 @@ import { postJson, type FetchError } from '@/lib/fetcher';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SubmitButton } from '@/components/ui/submit-button';
-import { SubmitSchema } from '@/lib/quiz/grading';
+import { SubmitSchema } from '@/lib/validations/quiz';
 import { Countdown } from './countdown';
 import { QuestionField } from './question-field';
 import { QuizResult } from './quiz-result';

@@ -2,9 +2,9 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { POST as submit } from '@/app/api/attempts/[id]/submit/route';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { db } from '@/models';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { answersFor, freshLearner } from './quiz-support';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { answersFor, freshLearner } from '../support/quiz-support';
 
 // The database round trips one graded submission costs (the hot path of `npm run bench:grading`),
 // counted with Sequelize's query hook: a regression guard for the request path, not a timing test.

@@ -4,10 +4,10 @@ import { POST as submit } from '@/app/api/attempts/[id]/submit/route';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getBank } from '@/lib/quiz/bank';
 import { db } from '@/models';
-import { createCourses, createUser } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { answersFor, drawnOf, enroll, freshLearner } from './quiz-support';
+import { createCourses, createUser } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { answersFor, drawnOf, enroll, freshLearner } from '../support/quiz-support';
 
 const LESSON_QUIZ = 'pickling-and-canning--acidity';
 const EXAM = 'pickling-and-canning--final-exam';

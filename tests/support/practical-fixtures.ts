@@ -6,7 +6,7 @@ import type { SessionUser } from '@/lib/auth/users';
 import { diskDriver, setStorage } from '@/lib/storage';
 import type { PracticalForm } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createCourses, createUser } from '../helpers/db';
+import { createCourses, createUser } from './db';
 
 // Shared set-up for the practical and photo tests: a photo folder of their own, an enrolled learner.
 
