@@ -11,6 +11,7 @@ import { Payment } from './payment';
 import { PaymentEvent } from './payment-event';
 import { Practical } from './practical';
 import { PracticalPhoto } from './practical-photo';
+import { QuizAnswer } from './quiz-answer';
 import { QuizAttempt } from './quiz-attempt';
 import { Review } from './review';
 import { User } from './user';
@@ -29,6 +30,7 @@ const registry = {
   PaymentEvent,
   Practical,
   PracticalPhoto,
+  QuizAnswer,
   QuizAttempt,
   Review,
   User,
@@ -55,6 +57,10 @@ function associate() {
 
   QuizAttempt.belongsTo(User, { foreignKey: fk('userId'), as: 'user' });
   QuizAttempt.belongsTo(Course, { foreignKey: fk('courseId'), as: 'course' });
+  QuizAttempt.hasMany(QuizAnswer, { foreignKey: fk('attemptId'), as: 'answerRows' });
+  QuizAnswer.belongsTo(QuizAttempt, { foreignKey: fk('attemptId'), as: 'attempt' });
+  QuizAnswer.belongsTo(Course, { foreignKey: fk('courseId'), as: 'course' });
+  QuizAnswer.belongsTo(Workshop, { foreignKey: fk('workshopId', true), as: 'workshop' });
 
   Practical.belongsTo(Enrollment, { foreignKey: fk('enrollmentId'), as: 'enrollment' });
   Practical.belongsTo(User, { foreignKey: fk('userId'), as: 'user' });
@@ -110,6 +116,7 @@ export {
   PaymentEvent,
   Practical,
   PracticalPhoto,
+  QuizAnswer,
   QuizAttempt,
   Review,
   User,

@@ -28,6 +28,7 @@ import { writeBenchResults } from './bench-results';
 type CannonResult = { requests: { total: number; average: number }; non2xx: number; errors: number; timeouts: number };
 type CannonRequest = { method?: string; path?: string; headers?: Record<string, string> };
 type CannonInstance = { on(event: 'response', listener: (client: unknown, status: number, bytes: number, responseTime: number) => void): void };
+// eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (
   options: { url: string; connections: number; duration: number; headers: Record<string, string>; requests: { setupRequest: (req: CannonRequest) => CannonRequest }[] },
   done: (error: Error | null, result: CannonResult) => void,

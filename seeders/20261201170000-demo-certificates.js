@@ -4,24 +4,30 @@
 // Certificate desk. Ines has done everything the flagship course asks, so the coordinator can
 // issue her certificate; Wren was certified almost three years ago, so her Pantry offers the
 // refresher course.
+const fs = require('node:fs');
+const path = require('node:path');
 const bcrypt = require('bcryptjs');
+const matter = require('gray-matter');
+
+/** The flagship's lesson slugs required under `version` (front matter `since`, default 1), in order. */
+function flagshipLessons(version) {
+  const dir = path.join(__dirname, '..', 'content', 'lessons', 'pickling-and-canning');
+  return fs
+    .readdirSync(dir)
+    .filter((file) => file.endsWith('.mdx'))
+    .map((file) => ({ slug: file.replace(/^\d+-/, '').replace(/\.mdx$/, ''), data: matter(fs.readFileSync(path.join(dir, file), 'utf8')).data }))
+    .filter((lesson) => (lesson.data.since ?? 1) <= version)
+    .sort((a, b) => a.data.order - b.data.order)
+    .map((lesson) => lesson.slug);
+}
 
 const LEARNERS = [
   { email: 'ines@cedarhollow.example', name: 'Inés Alvarado', password: 'demo-ines-pass' },
   { email: 'wren@cedarhollow.example', name: 'Wren Castellanos', password: 'demo-wren-pass' },
 ];
 // Lesson slugs and quiz slugs of the flagship course under content version 1, the version these
-// enrollments begin under (enrollments.contentVersion's default): the fermenting lesson came later.
-const LESSONS = [
-  'why-preserving-is-a-safety-job',
-  'acidity',
-  'salt-sugar-and-water',
-  'preparing-produce-and-keeping-it-crisp',
-  'jars-packing-and-headspace',
-  'processing',
-  'cooling-seals-storage-and-spoilage',
-  'the-practical-assessment',
-];
+// enrollments begin under (enrollments.contentVersion's default), read from the content itself.
+const LESSONS = flagshipLessons(1);
 const QUIZZES = [...LESSONS.map((l) => `pickling-and-canning--${l}`), 'pickling-and-canning--final-exam'];
 // A serial in the product's format (lib/certificates/serial.ts), with its check character.
 const WREN_SERIAL = 'XJC3-GMFM-3AEY-FWPY';

@@ -8,6 +8,7 @@ import { useForm } from 'react-hook-form';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
 import { PASSWORD_MIN, RegisterSchema, type RegisterInput } from '@/lib/validations/user';
+import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
 
 export function RegisterForm() {
   const router = useRouter();
@@ -16,13 +17,13 @@ export function RegisterForm() {
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
-    const response = await fetch('/api/register', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(values) });
-    if (!response.ok) {
-      const body = (await response.json().catch(() => null)) as { message?: string; fields?: Record<string, string[]> } | null;
-      for (const [field, messages] of Object.entries(body?.fields ?? {})) {
+    try {
+      await postJson('/api/register', values);
+    } catch (e) {
+      for (const [field, messages] of Object.entries(e instanceof FetchError ? e.fields : {})) {
         if (field === 'name' || field === 'email' || field === 'password') setError(field, { message: messages[0] });
       }
-      setFormError(body?.message ?? 'We could not create your account. Please try again.');
+      setFormError(errorMessage(e, 'We could not create your account. Please try again.'));
       return;
     }
     const result = await signIn('credentials', { redirect: false, email: values.email, password: values.password });

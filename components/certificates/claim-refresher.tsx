@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { errorMessage, postJson } from '@/lib/fetcher';
 
 /** The Pantry's button for a completed refresher: issues its certificate, then refreshes the page. */
 export function ClaimRefresher({ enrollmentId }: { enrollmentId: number }) {
@@ -10,10 +11,10 @@ export function ClaimRefresher({ enrollmentId }: { enrollmentId: number }) {
   const [state, setState] = useState<{ pending: boolean; error: string | null }>({ pending: false, error: null });
   async function claim() {
     setState({ pending: true, error: null });
-    const response = await fetch('/api/certificates/refresher', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ enrollmentId }) });
-    if (!response.ok) {
-      const body = await response.json().catch(() => null);
-      setState({ pending: false, error: body?.message ?? 'Could not issue the certificate. Please try again.' });
+    try {
+      await postJson('/api/certificates/refresher', { enrollmentId });
+    } catch (e) {
+      setState({ pending: false, error: errorMessage(e, 'Could not issue the certificate. Please try again.') });
       return;
     }
     setState({ pending: false, error: null });

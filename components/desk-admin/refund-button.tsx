@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
+import { FetchError, postJson } from '@/lib/fetcher';
 
 /** Refund with a confirmation step; the server refunds through the payment service and e-mails the learner. */
 export function RefundButton({ enrollmentId, learnerName, amount }: { enrollmentId: number; learnerName: string; amount: string }) {
@@ -20,17 +21,12 @@ export function RefundButton({ enrollmentId, learnerName, amount }: { enrollment
     setPending(true);
     setError(null);
     try {
-      const response = await fetch(`/api/enrollments/${enrollmentId}/refund`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ reason }) });
-      const body = await response.json().catch(() => null);
-      if (!response.ok) {
-        setError(body?.message ?? 'The refund did not go through.');
-        return;
-      }
+      await postJson(`/api/enrollments/${enrollmentId}/refund`, { reason });
       setOpen(false);
       toast.show(`Refunded ${amount} to ${learnerName}.`, 'success');
       router.refresh();
-    } catch {
-      setError('Brinewright could not be reached; nothing was refunded.');
+    } catch (e) {
+      setError(e instanceof FetchError && !e.unreachable ? e.message : 'Brinewright could not be reached; nothing was refunded.');
     } finally {
       setPending(false);
     }

@@ -10,6 +10,7 @@ import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { WaiverSchema, type WaiverInput } from '@/lib/validations/waiver';
+import { FetchError, postJson } from '@/lib/fetcher';
 
 /** The coordinator's fee waiver form (react-hook-form, the schema POST /api/waivers uses). */
 export function WaiverForm({ courses, defaultExpiry }: { courses: { id: number; title: string }[]; defaultExpiry: string }) {
@@ -23,18 +24,14 @@ export function WaiverForm({ courses, defaultExpiry }: { courses: { id: number; 
   const onSubmit = handleSubmit(async (values) => {
     setMessage(null);
     try {
-      const response = await fetch('/api/waivers', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ ...values, code: values.code ?? '', courseId: values.courseId ?? '', note: values.note ?? '' }) });
-      const body = await response.json().catch(() => null);
-      if (!response.ok) {
-        setMessage(body?.message ?? 'The code was not created.');
-        for (const [field, messages] of Object.entries((body?.fields ?? {}) as Record<string, string[]>)) setError(field as keyof WaiverInput, { message: messages[0] });
-        return;
-      }
+      const body = await postJson<{ waiver: { code: string } }>('/api/waivers', { ...values, code: values.code ?? '', courseId: values.courseId ?? '', note: values.note ?? '' });
       toast.show(`Waiver code ${body.waiver.code} created.`, 'success');
       reset(defaults);
       router.refresh();
-    } catch {
-      setMessage('Brinewright could not be reached; try again.');
+    } catch (e) {
+      if (!(e instanceof FetchError) || e.unreachable) return setMessage('Brinewright could not be reached; try again.');
+      setMessage(e.message);
+      for (const [field, messages] of Object.entries(e.fields)) setError(field as keyof WaiverInput, { message: messages[0] });
     }
   });
 

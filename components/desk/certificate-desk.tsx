@@ -11,7 +11,7 @@ import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import type { DeskEnrollment, DeskOptions, DeskPage } from '@/lib/desk/enrollments';
 import { Checklist } from './checklist';
-import { fetchJson, postJson } from './fetcher';
+import { fetchJson, postJson } from '@/lib/fetcher';
 import { CERT_LABEL, CERT_TONE, STATUS_LABEL, STATUS_TONE, formatDate } from './labels';
 import { RevokeDialog } from './revoke-dialog';
 

@@ -7,8 +7,8 @@ import { Dialog } from '@/components/ui/dialog';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { TextArea } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
-import { RevokeSchema, type RevokeInput } from '@/lib/certificates/schemas';
-import { FetchError, postJson } from './fetcher';
+import { RevokeSchema, type RevokeInput } from '@/lib/validations/certificate';
+import { errorMessage, postJson } from '@/lib/fetcher';
 
 type Target = { certificateId: number; serial: string; learnerName: string };
 
@@ -26,7 +26,7 @@ export function RevokeDialog({ target, onClose, onDone }: { target: Target | nul
       onDone();
       onClose();
     } catch (e) {
-      const message = e instanceof FetchError ? e.message : 'Could not revoke the certificate.';
+      const message = errorMessage(e, 'Could not revoke the certificate.');
       form.setError('reason', { message });
     }
   });

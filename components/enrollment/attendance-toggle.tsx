@@ -1,6 +1,7 @@
 'use client';
 
 import { useState } from 'react';
+import { FetchError, postJson } from '@/lib/fetcher';
 
 /** One learner's attendance checkbox; saves at once and says so in a live region. */
 export function AttendanceToggle({ enrollmentId, learnerName, attended: initial, disabled }: { enrollmentId: number; learnerName: string; attended: boolean; disabled?: boolean }) {
@@ -13,16 +14,11 @@ export function AttendanceToggle({ enrollmentId, learnerName, attended: initial,
     setPending(true);
     setMessage(null);
     try {
-      const response = await fetch(`/api/enrollments/${enrollmentId}/attendance`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ attended: next }) });
-      const body = await response.json().catch(() => null);
-      if (!response.ok) {
-        setMessage(body?.message ?? 'Not saved.');
-        return;
-      }
+      await postJson(`/api/enrollments/${enrollmentId}/attendance`, { attended: next });
       setAttended(next);
       setMessage(next ? 'Marked present.' : 'Mark cleared.');
-    } catch {
-      setMessage('Not saved: Brinewright could not be reached.');
+    } catch (e) {
+      setMessage(e instanceof FetchError && !e.unreachable ? e.message : 'Not saved: Brinewright could not be reached.');
     } finally {
       setPending(false);
     }

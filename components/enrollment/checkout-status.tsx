@@ -5,6 +5,7 @@ import { useEffect } from 'react';
 import useSWR from 'swr';
 import { ButtonLink } from '@/components/ui/button';
 import { formatMoney, formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
+import { fetchJson, type FetchError } from '@/lib/fetcher';
 
 type Status = {
   id: number;
@@ -17,17 +18,10 @@ type Status = {
   payment: { status: string; amountCents: number; currency: string } | null;
 };
 
-async function fetcher(url: string): Promise<{ enrollment: Status }> {
-  const response = await fetch(url, { headers: { accept: 'application/json' } });
-  const body = await response.json().catch(() => null);
-  if (!response.ok) throw new Error(body?.message ?? 'The enrollment could not be loaded.');
-  return body;
-}
-
 /** After checkout: polls the enrollment until the payment webhook has made it active, then opens the Pantry. */
 export function CheckoutStatus({ enrollmentId }: { enrollmentId: number }) {
   const router = useRouter();
-  const { data, error } = useSWR(`/api/enrollments/${enrollmentId}`, fetcher, {
+  const { data, error } = useSWR<{ enrollment: Status }, FetchError>(`/api/enrollments/${enrollmentId}`, fetchJson, {
     refreshInterval: (latest) => (latest?.enrollment.status === 'awaiting_payment' ? 1500 : 0),
   });
   const e = data?.enrollment;

@@ -7,22 +7,10 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
 import type { PublicWorkshop } from '@/lib/enrollment/workshops';
+import { FetchError, fetchJson, postJson } from '@/lib/fetcher';
 
 // The route answers the server's PublicWorkshop shape; the type import is erased from the client bundle.
 export type WorkshopItem = PublicWorkshop;
-
-class FetchError extends Error {
-  constructor(message: string, readonly status: number) {
-    super(message);
-  }
-}
-
-async function fetcher(url: string): Promise<{ workshops: WorkshopItem[] }> {
-  const response = await fetch(url, { headers: { accept: 'application/json' } });
-  const body = await response.json().catch(() => null);
-  if (!response.ok) throw new FetchError(body?.message ?? 'The workshops could not be loaded.', response.status);
-  return body;
-}
 
 const STATUS_LABEL: Record<string, string> = {
   awaiting_payment: 'Awaiting payment',
@@ -33,7 +21,7 @@ const STATUS_LABEL: Record<string, string> = {
 
 /** Upcoming workshops of a course with seats left, and the enroll action (card payment or a fee waiver code). */
 export function CourseWorkshops({ courseSlug }: { courseSlug: string }) {
-  const { data, error, isLoading, mutate } = useSWR(`/api/courses/${encodeURIComponent(courseSlug)}/workshops`, fetcher);
+  const { data, error, isLoading, mutate } = useSWR<{ workshops: WorkshopItem[] }, FetchError>(`/api/courses/${encodeURIComponent(courseSlug)}/workshops`, fetchJson);
 
   return (
     <section aria-labelledby="workshops-heading" className="space-y-4">
@@ -81,25 +69,18 @@ function WorkshopRow({ workshop: w, onEnrolled }: { workshop: WorkshopItem; onEn
     setPending(true);
     setMessage(null);
     try {
-      const response = await fetch('/api/enrollments', {
-        method: 'POST',
-        headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ workshopId: w.id, ...(waiverCode.trim() ? { waiverCode: waiverCode.trim() } : {}) }),
-      });
-      const body = await response.json().catch(() => null);
-      if (response.status === 401) {
+      const body = await postJson<{ url: string }>('/api/enrollments', { workshopId: w.id, ...(waiverCode.trim() ? { waiverCode: waiverCode.trim() } : {}) });
+      // A checkout page to pay, or (with a waiver) straight to the confirmation.
+      window.location.assign(body.url);
+    } catch (e) {
+      if (e instanceof FetchError && e.status === 401) {
+        // A full load: the sign-in page then comes back to this course page with a fresh session.
+        // eslint-disable-next-line @next/next/no-location-assign-relative-destination
         window.location.assign(`/signin?callbackUrl=${encodeURIComponent(window.location.pathname)}`);
         return;
       }
-      if (!response.ok) {
-        setMessage(body?.fields?.waiverCode?.[0] ?? body?.message ?? 'The enrollment did not go through. Please try again.');
-        onEnrolled();
-        return;
-      }
-      // A checkout page to pay, or (with a waiver) straight to the confirmation.
-      window.location.assign(body.url);
-    } catch {
-      setMessage('Brinewright could not be reached. Check your connection and try again.');
+      setMessage(e instanceof FetchError ? (e.fields.waiverCode?.[0] ?? e.message) : 'The enrollment did not go through. Please try again.');
+      if (e instanceof FetchError && !e.unreachable) onEnrolled();
     } finally {
       setPending(false);
     }

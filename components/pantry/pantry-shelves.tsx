@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import useSWR from 'swr';
-import { fetchJson, type HttpError } from '@/components/progress/fetch-json';
+import { fetchJson, type FetchError } from '@/lib/fetcher';
 import { Badge } from '@/components/ui/badge';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -13,7 +13,7 @@ const STATUS = { awaiting_payment: ['Awaiting payment', 'honey'], active: ['Acti
 
 /** The learner's courses as shelves of jars, one jar per lesson, from GET /api/pantry. */
 export function PantryShelves() {
-  const { data, error, isLoading, mutate } = useSWR<{ shelves: Shelf[] }, HttpError>('/api/pantry', (url: string) => fetchJson(url), { revalidateOnFocus: true });
+  const { data, error, isLoading, mutate } = useSWR<{ shelves: Shelf[] }, FetchError>('/api/pantry', (url: string) => fetchJson(url), { revalidateOnFocus: true });
 
   if (isLoading) {
     return (

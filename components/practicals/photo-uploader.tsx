@@ -67,6 +67,7 @@ export function PhotoUploader({ courseSlug, onChange, describedBy, invalid }: { 
   useEffect(() => {
     onChange(idKey ? idKey.split(',').map(Number) : []);
     // onChange is the form's setter; only the ids matter here.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [idKey]);
 
   const add = (files: FileList | null) => {

@@ -14,6 +14,7 @@ import { JAR_SIZES, PRODUCT_OPTIONS } from '@/lib/preserving/products';
 import { PROCESSING_METHOD_LABELS, PROCESSING_METHODS, practicalFormSchema, type PracticalForm as FormValues, type PracticalFormInput } from '@/lib/validations/practical';
 import { FlagList } from './flag-list';
 import { PhotoUploader } from './photo-uploader';
+import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
 
 const JAR_OPTIONS = [{ value: '', label: 'Choose a jar size' }, ...JAR_SIZES.map((j) => ({ value: j, label: j === 'half-pint' ? 'Half-pint' : j[0].toUpperCase() + j.slice(1) }))];
 const PRODUCTS = [{ value: '', label: 'Choose the product' }, ...PRODUCT_OPTIONS];
@@ -76,17 +77,16 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
 
   const onSubmit = async (form: FormValues) => {
     setServerError(null);
-    const response = await fetch('/api/practicals', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ course: courseSlug, practical: form }) });
-    const body = await response.json().catch(() => ({}));
-    if (response.status === 201) {
+    try {
+      const body = await postJson<{ practical: typeof result }>('/api/practicals', { course: courseSlug, practical: form });
       setResult(body.practical);
       router.refresh();
-      return;
+    } catch (e) {
+      for (const [key, messages] of Object.entries(e instanceof FetchError ? e.fields : {})) {
+        setError(key.replace(/^practical\./, '') as keyof PracticalFormInput, { message: messages[0] });
+      }
+      setServerError(errorMessage(e, 'The practical could not be submitted. Please try again.'));
     }
-    for (const [key, messages] of Object.entries((body.fields ?? {}) as Record<string, string[]>)) {
-      setError(key.replace(/^practical\./, '') as keyof PracticalFormInput, { message: messages[0] });
-    }
-    setServerError(body.message ?? 'The practical could not be submitted. Please try again.');
   };
 
   if (result) {

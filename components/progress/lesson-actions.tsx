@@ -5,7 +5,7 @@ import { useSession } from 'next-auth/react';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { Button, ButtonLink } from '@/components/ui/button';
-import { fetchJson, HttpError } from './fetch-json';
+import { errorMessage, fetchJson, postJson, type FetchError } from '@/lib/fetcher';
 
 type Progress = { courseSlug: string; read: Record<string, string>; passedQuizzes: string[] };
 
@@ -18,7 +18,7 @@ export function LessonActions({ courseSlug, lessonSlug, quizSlug }: { courseSlug
   // could only be a 401, an error in every visitor's console on the public lessons).
   const session = useSession();
   const key = session.status === 'authenticated' ? `/api/progress?course=${encodeURIComponent(courseSlug)}` : null;
-  const { data, error, isLoading: progressLoading, mutate } = useSWR<Progress, HttpError>(key, (url: string) => fetchJson<Progress>(url), {
+  const { data, error, isLoading: progressLoading, mutate } = useSWR<Progress, FetchError>(key, (url: string) => fetchJson<Progress>(url), {
     shouldRetryOnError: false,
     revalidateOnFocus: false,
   });
@@ -35,10 +35,10 @@ export function LessonActions({ courseSlug, lessonSlug, quizSlug }: { courseSlug
     setPending(true);
     setFailure(null);
     try {
-      const result = await fetchJson<{ readAt: string }>('/api/progress', { method: 'POST', body: JSON.stringify({ courseSlug, lessonSlug }) });
+      const result = await postJson<{ readAt: string }>('/api/progress', { courseSlug, lessonSlug });
       await mutate((current) => (current ? { ...current, read: { ...current.read, [lessonSlug]: result.readAt } } : current), { revalidate: true });
     } catch (e) {
-      setFailure(e instanceof HttpError ? e.message : 'That did not work. Please try again.');
+      setFailure(errorMessage(e, 'That did not work. Please try again.'));
     } finally {
       setPending(false);
     }

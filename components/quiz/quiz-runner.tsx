@@ -2,11 +2,11 @@
 
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { fetchJson, HttpError } from '@/components/progress/fetch-json';
+import { postJson, type FetchError } from '@/lib/fetcher';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SubmitButton } from '@/components/ui/submit-button';
-import { SubmitSchema } from '@/lib/quiz/grading';
+import { SubmitSchema } from '@/lib/validations/quiz';
 import { Countdown } from './countdown';
 import { QuestionField } from './question-field';
 import { QuizResult } from './quiz-result';
@@ -29,12 +29,12 @@ export function QuizRunner({ intro }: { intro: Intro }) {
     setProblem(null);
     setPhase({ kind: 'starting' });
     try {
-      const { attempt } = await fetchJson<{ attempt: AttemptView }>(`/api/quizzes/${intro.quizSlug}/attempts`, { method: 'POST' });
+      const { attempt } = await postJson<{ attempt: AttemptView }>(`/api/quizzes/${intro.quizSlug}/attempts`);
       rememberOpenAttempt(intro.quizSlug, attempt.id);
       form.reset(loadAnswers(attempt.id) ?? emptyValues(attempt.questions));
       setPhase({ kind: 'taking', attempt });
     } catch (e) {
-      const err = e as HttpError;
+      const err = e as FetchError;
       const next = typeof err.body?.nextAttemptAt === 'string' ? new Date(err.body.nextAttemptAt as string) : null;
       setProblem(next ? `${err.message.split(' You may')[0]} You may try again on ${next.toLocaleString()}.` : err.message);
       setPhase({ kind: 'intro' });
@@ -72,16 +72,16 @@ export function QuizRunner({ intro }: { intro: Intro }) {
       setProblem(null);
       setFieldErrors({});
       try {
-        const result = await fetchJson<{ attempt: AttemptView }>(`/api/attempts/${attempt.id}/submit`, { method: 'POST', body: JSON.stringify(body.data) });
+        const result = await postJson<{ attempt: AttemptView }>(`/api/attempts/${attempt.id}/submit`, body.data);
         forgetAttempt(intro.quizSlug, attempt.id);
         setPhase({ kind: 'done', attempt: result.attempt });
       } catch (e) {
-        const err = e as HttpError;
+        const err = e as FetchError;
         if (err.status === 409 && err.body?.attempt) {
           forgetAttempt(intro.quizSlug, attempt.id);
           setPhase({ kind: 'done', attempt: err.body.attempt as AttemptView });
-        } else if (err.status === 400 && err.body?.fields) {
-          const fields = err.body.fields as Record<string, string[]>;
+        } else if (err.status === 400 && Object.keys(err.fields).length) {
+          const fields = err.fields;
           setFieldErrors(Object.fromEntries(Object.entries(fields).map(([k, v]) => [k.replace(/^answers\./, ''), v[0]])));
           setProblem(err.message);
         } else {

@@ -10,6 +10,7 @@ import { SubmitButton } from '@/components/ui/submit-button';
 import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { RUBRIC_CRITERIA, reviewSchema, type ReviewInput } from '@/lib/validations/practical';
+import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
 
 type FormInput = input<typeof reviewSchema>;
 
@@ -32,15 +33,15 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
 
   const onSubmit = async (input: ReviewInput) => {
     setServerError(null);
-    const response = await fetch(`/api/practicals/${practicalId}/review`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(input) });
-    const body = await response.json().catch(() => ({}));
-    if (response.status === 201) {
-      toast.show(input.decision === 'approved' ? 'Approved. The learner gets an e-mail.' : 'Changes requested. The learner gets an e-mail.', 'success');
-      router.refresh();
+    try {
+      await postJson(`/api/practicals/${practicalId}/review`, input);
+    } catch (e) {
+      for (const [key, messages] of Object.entries(e instanceof FetchError ? e.fields : {})) setError(key as 'comment', { message: messages[0] });
+      setServerError(errorMessage(e, 'The review could not be saved. Please try again.'));
       return;
     }
-    for (const [key, messages] of Object.entries((body.fields ?? {}) as Record<string, string[]>)) setError(key as 'comment', { message: messages[0] });
-    setServerError(body.message ?? 'The review could not be saved. Please try again.');
+    toast.show(input.decision === 'approved' ? 'Approved. The learner gets an e-mail.' : 'Changes requested. The learner gets an e-mail.', 'success');
+    router.refresh();
   };
 
   return (

@@ -13,7 +13,7 @@ import type { TastingTablePage, WorkshopOption } from '@/lib/practicals/data';
 import { PRODUCTS } from '@/lib/preserving/products';
 import { tastingTableQuerySchema, type TastingSort } from '@/lib/validations/practical';
 import { rememberTableView } from './back-to-table';
-import { jsonFetcher } from './fetcher';
+import { fetchJson } from '@/lib/fetcher';
 
 type Filters = { page: number; sort: TastingSort; status: string; workshop: string; flagged: string; olderThanDays: string };
 
@@ -100,7 +100,7 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
     if (url !== `${window.location.pathname}${window.location.search}`) window.history.replaceState(null, '', url);
     rememberTableView(search);
   }, [filters]);
-  const { data, error, isLoading, isValidating, mutate } = useSWR<TastingTablePage>(submissionsKey(filters), jsonFetcher, { keepPreviousData: true });
+  const { data, error, isLoading, isValidating, mutate } = useSWR<TastingTablePage>(submissionsKey(filters), fetchJson, { keepPreviousData: true });
   const set = (change: Partial<Filters>) => setFilters((f) => ({ ...f, page: 1, ...change }));
   const [now] = useState(() => Date.now());
   const sortHeader = (label: string, sort: TastingSort) => (

@@ -5,9 +5,8 @@ import { enqueueEmail } from '@/lib/email/outbox';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { db } from '@/models';
-import { certificateIssuedEmail } from '@/lib/email/templates';
+import { certificateIssuedEmail, certificateRevokedEmail } from '@/lib/email/templates';
 import { transitionEnrollment } from '@/lib/enrollment/state';
-import { certificateRevokedEmail } from './email';
 import type { RequirementKey } from './eligibility';
 import { loadStandings } from './facts';
 import { renderCertificatePdf } from './pdf';
@@ -137,7 +136,7 @@ export async function revokeCertificate(certificateId: number, actorId: number, 
       'SELECT u.name, u.email, c.title FROM enrollments e JOIN users u ON u.id = e.userId JOIN courses c ON c.id = e.courseId WHERE e.id = :id',
       { replacements: { id: certificate.enrollmentId }, type: QueryTypes.SELECT, transaction },
     );
-    await enqueueEmail(certificateRevokedEmail({ to: info.email, learnerName: info.name, courseTitle: info.title, serial: certificate.serial, reason }), { transaction });
+    await enqueueEmail(certificateRevokedEmail({ to: info.email, name: info.name, courseTitle: info.title, serial: certificate.serial, reason }), { transaction });
     return { id: certificate.id, serial: certificate.serial, revokedAt: now };
   });
 }

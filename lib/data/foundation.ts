@@ -16,16 +16,6 @@ export async function fetchLearnerEnrollments({ userId }: { userId: number }): P
   );
 }
 
-/** How many enrollments are in each status, for the desk's summary. */
-export async function fetchEnrollmentCounts(): Promise<Record<EnrollmentStatus, number>> {
-  const rows = await db().sequelize.query<{ status: EnrollmentStatus; n: number }>('SELECT status, COUNT(*) AS n FROM enrollments GROUP BY status', {
-    type: QueryTypes.SELECT,
-  });
-  const counts: Record<EnrollmentStatus, number> = { awaiting_payment: 0, active: 0, completed: 0, withdrawn: 0 };
-  for (const row of rows) counts[row.status] = Number(row.n);
-  return counts;
-}
-
 export type UserRow = { id: number; name: string; email: string; role: Role; createdAt: Date };
 
 export async function fetchUsers({ limit = 200 }: { limit?: number } = {}): Promise<UserRow[]> {

@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
 import { loadStandings, type EnrollmentStanding } from '@/lib/certificates/facts';
 import type { Check } from '@/lib/certificates/eligibility';
-import type { DeskFilter, DeskQuery } from '@/lib/certificates/schemas';
+import type { DeskFilter, DeskQuery } from '@/lib/validations/certificate';
 import { certificateState, type CertificateState } from '@/lib/certificates/validity';
 import type { EnrollmentStatus } from '@/lib/enrollment-status';
 

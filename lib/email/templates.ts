@@ -1,6 +1,7 @@
 // Every message Brinewright sends, each with a plain-text and an HTML part. Pure functions: they
 // build an OutgoingEmail for enqueueEmail() and do no I/O, so any module (and its tests) may call them.
 import { formatMoney, formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
+import { RUBRIC_CRITERIA, type ReviewInput } from '@/lib/validations/practical';
 import type { OutgoingAttachment, OutgoingEmail } from './outbox';
 
 export type WorkshopFacts = { startsAt: Date | string; endsAt: Date | string; timeZone: string; place: string };
@@ -129,32 +130,39 @@ export function workshopReminderEmail({ to, name, courseTitle, workshop, appUrl 
   ]);
 }
 
-/** Sent when an instructor has reviewed a practical (hook for the practicals feature). */
+/** Sent when an instructor has reviewed a round of a practical: the decision, the comment and the rubric. */
 export function practicalReviewedEmail({
   to,
   name,
   courseTitle,
-  decision,
-  comment,
-  appUrl,
+  round,
+  review,
+  reviewerName,
+  url,
 }: {
   to: string;
   name: string;
   courseTitle: string;
-  decision: 'approved' | 'changes_requested';
-  comment?: string | null;
-  appUrl: string;
+  round: number;
+  review: ReviewInput;
+  reviewerName: string;
+  url: string;
 }): OutgoingEmail {
-  const approved = decision === 'approved';
-  return compose('practical.reviewed', to, approved ? `Your practical batch was approved: ${courseTitle}` : `Your practical batch needs changes: ${courseTitle}`, `Hello ${name},`, [
+  const approved = review.decision === 'approved';
+  const rubric = RUBRIC_CRITERIA.map(({ id, label }): [string, string] => {
+    const r = review.rubric[id];
+    return [label, `${r.verdict === 'met' ? 'met' : 'not met'}${r.comment ? ` (${r.comment})` : ''}`];
+  });
+  return compose('practical.reviewed', to, approved ? `Your practical batch is approved — ${courseTitle}` : `Your practical batch needs changes — ${courseTitle}`, `Hello ${name},`, [
     {
       kind: 'p',
       text: approved
-        ? 'An instructor has reviewed the photos of your practical batch and approved it.'
-        : 'An instructor has reviewed the photos of your practical batch and asked for changes before it can be approved.',
+        ? `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and approved it.`
+        : `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and asks for changes before it can be approved.`,
     },
-    ...(comment ? [{ kind: 'facts' as const, rows: [['Instructor’s note', comment]] as [string, string][] }] : []),
-    { kind: 'button', label: approved ? 'See your progress' : 'See what to change', href: `${trimUrl(appUrl)}/pantry` },
+    ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'What to change'}: ${review.comment}` }] : []),
+    { kind: 'facts', rows: rubric },
+    { kind: 'button', label: approved ? 'See the review' : 'See the review and submit a new round', href: url },
   ]);
 }
 
@@ -190,6 +198,15 @@ export function certificateIssuedEmail({
     ],
     pdf ? [pdf] : undefined,
   );
+}
+
+/** Sent to the holder when the coordinator revokes a certificate, with the reason given. */
+export function certificateRevokedEmail({ to, name, courseTitle, serial, reason }: { to: string; name: string; courseTitle: string; serial: string; reason: string }): OutgoingEmail {
+  return compose('certificate.revoked', to, `Certificate revoked: ${courseTitle}`, `Hello ${name},`, [
+    { kind: 'p', text: `Your certificate ${serial} for ${courseTitle} has been revoked.` },
+    { kind: 'facts', rows: [['Reason given', reason]] },
+    { kind: 'p', text: 'Its verification page now shows it as revoked. Please contact the program coordinator with any questions.' },
+  ]);
 }
 
 /** Sent to a certificate holder when a course's "what changed" record publishes new entries. */

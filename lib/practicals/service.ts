@@ -5,6 +5,7 @@ import { findActiveEnrollment } from '@/lib/access';
 import { audit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/users';
 import { enqueueEmail } from '@/lib/email/outbox';
+import { practicalReviewedEmail } from '@/lib/email/templates';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { roleAllows } from '@/lib/roles';
@@ -13,7 +14,6 @@ import type { PracticalForm, ReviewInput } from '@/lib/validations/practical';
 import { db, type Practical } from '@/models';
 import { checkPractical, type Flag } from './checks';
 import { REFUSAL, decisionRight } from './decision-rights';
-import { reviewEmail } from './email';
 import { PhotoRejected, processPhoto } from './images';
 
 // A learner may keep only so many uploaded photos that are not yet part of a submission.
@@ -234,15 +234,16 @@ export async function reviewPractical(reviewer: SessionUser, practicalId: number
       { transaction },
     );
     await practical.update({ status: input.decision }, { transaction });
-    const message = reviewEmail({
-      learnerName: learner.name,
+    const message = practicalReviewedEmail({
+      to: learner.email,
+      name: learner.name,
       courseTitle: course.title,
       round: practical.round,
       review: input,
       reviewerName: reviewer.name,
       url: new URL(`/learn/${course.slug}/practical`, getEnv().APP_URL).toString(),
     });
-    await enqueueEmail({ kind: 'practical.reviewed', to: learner.email, ...message }, { transaction });
+    await enqueueEmail(message, { transaction });
     await audit(
       { actorId: reviewer.id, action: `practical.${input.decision}`, subjectType: 'practical', subjectId: practical.id, data: { round: practical.round, reviewId: review.id } },
       { transaction },

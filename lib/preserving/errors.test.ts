@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { LOCAL_GUIDANCE, PRESERVING_ERROR_STATUS, PreservingError, checkChoice, outsideTable, parseNumber } from './errors';
+import { LOCAL_GUIDANCE, PreservingError, checkChoice, outsideTable, parseNumber } from './errors';
 
 const rule = { param: 'waterMl', label: 'the water in mL' };
 
@@ -34,10 +34,6 @@ describe('parseNumber', () => {
 });
 
 describe('errors', () => {
-  it('maps kinds to the HTTP statuses of the API', () => {
-    expect(PRESERVING_ERROR_STATUS).toEqual({ invalid: 400, 'not-found': 404, 'outside-table': 422 });
-  });
-
   it('ends outside-table messages with the local-guidance sentence', () => {
     const error = outsideTable('Above the table.', 'altitudeFt');
     expect(error.kind).toBe('outside-table');

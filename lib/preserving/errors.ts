@@ -1,4 +1,4 @@
-/** What went wrong with a calculator input; routes map each kind to one HTTP status. */
+/** What went wrong with a calculator input; `http.ts` maps each kind to one HTTP status. */
 export type PreservingErrorKind = 'invalid' | 'not-found' | 'outside-table';
 
 /**
@@ -19,15 +19,6 @@ export class PreservingError extends Error {
     this.param = param;
   }
 }
-
-export const isPreservingError = (error: unknown): error is PreservingError => error instanceof PreservingError;
-
-/** The HTTP status a route answers for each kind. */
-export const PRESERVING_ERROR_STATUS: Record<PreservingErrorKind, 400 | 404 | 422> = {
-  invalid: 400,
-  'not-found': 404,
-  'outside-table': 422,
-};
 
 /** The sentence every outside-table answer ends with. */
 export const LOCAL_GUIDANCE =

@@ -193,6 +193,7 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
 }
 
 /** The attempt with the workshop of the learner's current enrollment in its course (one statement). */
+// Raw SQL: the correlated subquery keeps the submit's read to one round trip (grading figure, `npm run bench:grading`).
 async function attemptWithWorkshop(id: number): Promise<(AttemptRow & { workshopId: number | null }) | null> {
   const rows = await db().sequelize.query<AttemptRow & { workshopId: number | null }>(
     `SELECT qa.*, (SELECT e.workshopId FROM enrollments e WHERE e.userId = qa.userId AND e.courseId = qa.courseId AND e.status IN ('active', 'completed')
@@ -211,6 +212,7 @@ async function attemptWithWorkshop(id: number): Promise<(AttemptRow & { workshop
  * in one multi-row INSERT only if that UPDATE took, and commits. Any error rolls the whole
  * transaction back (the EXIT HANDLER) and reaches the caller. Returns whether this call stored the grade.
  */
+// Raw SQL: one compound statement instead of a Sequelize transaction's five round trips serves the grading figure.
 async function storeGradeOnce(row: AttemptRow & { workshopId: number | null }, stored: StoredAnswers, grade: Grade, now: Date): Promise<boolean> {
   const replacements: unknown[] = [JSON.stringify(stored), grade.scorePct, grade.passed, now, now, row.id];
   // The workshop the answers count towards: that of the learner's current enrollment in the course.

@@ -1,6 +1,5 @@
-import { z } from 'zod';
 import { AppError } from '@/lib/errors';
-import { NUMERIC_UNITS, type NumericUnit, type ResolvedQuestion } from './schema';
+import type { NumericUnit, ResolvedQuestion } from './schema';
 
 // Drawing, the learner's view and grading of one attempt. Pure: no database, no randomness that
 // cannot be injected, so every rule here is unit-tested.
@@ -59,21 +58,6 @@ export function publicQuestions(questions: readonly ResolvedQuestion[], drawn: D
   });
 }
 
-/** The body of POST /api/attempts/[id]/submit. */
-export const SubmitSchema = z
-  .object({
-    answers: z.record(
-      z.string().min(1).max(120),
-      z.union([
-        z.string().min(1).max(20),
-        z.array(z.string().min(1).max(20)).max(12),
-        z.boolean(),
-        z.object({ value: z.number({ error: 'Give a number.' }).finite(), unit: z.enum(NUMERIC_UNITS, { error: 'Choose a unit.' }) }).strict(),
-      ]),
-    ),
-  })
-  .strict();
-export type SubmitInput = z.infer<typeof SubmitSchema>;
 
 export type Converter = (value: number, from: string, to: string) => number;
 

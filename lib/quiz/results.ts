@@ -37,6 +37,7 @@ type Row = { quizSlug: string; questionId: string; attempts: number | string; ri
  * Every question's figures in ONE aggregated query: answers, % right, unanswered, and the most
  * chosen wrong answer (a window function ranks the wrong responses of each question).
  */
+// Raw SQL: one aggregated statement with a window function (the most frequent wrong answer), which Sequelize's query builder cannot express.
 export async function fetchQuestionResults(filter: ResultsFilter): Promise<QuestionStat[]> {
   const where: string[] = [];
   const replacements: Record<string, unknown> = {};

@@ -5,9 +5,9 @@ import { authOptions } from '@/lib/auth/options';
 import { verifyCredentials } from '@/lib/auth/users';
 import { changeRole } from '@/lib/users-admin';
 import { db } from '@/models';
-import { createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest } from '../helpers/request';
-import { actAs } from '../helpers/session';
+import { createUser, resetDatabase } from '../support/db';
+import { jsonRequest } from '../support/request';
+import { actAs } from '../support/session';
 
 beforeEach(async () => {
   await resetDatabase();

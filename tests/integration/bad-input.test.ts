@@ -16,14 +16,14 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getEnv } from '@/lib/env';
 import { db } from '@/models';
 import type { SessionUser } from '@/lib/auth/users';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { actAs } from '../helpers/session';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { actAs } from '../support/session';
 import { discoverRoutes } from '../support/app-routes';
 import type { BadBody } from '../support/bad-input/arbitraries';
 import { changedTables, fingerprint, tableNames } from '../support/bad-input/fingerprint';
 import { EVERYONE, SWEEP, type SweepSpec, type Who } from '../support/bad-input/routes';
 import { encode, nextAuthRequests, photoRequests, webhookRequests, type NextAuthContext, type RawRequest } from '../support/bad-input/special';
-import { useTemporaryStorage } from './practical-fixtures';
+import { useTemporaryStorage } from '../support/practical-fixtures';
 
 const SEED = process.env.BAD_INPUT_SEED ? Number(process.env.BAD_INPUT_SEED) : 20261202;
 const RUNS = Number(process.env.BAD_INPUT_RUNS ?? 300);

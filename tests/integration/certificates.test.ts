@@ -10,10 +10,10 @@ import { loadStandings } from '@/lib/certificates/facts';
 import { normalizeSerial } from '@/lib/certificates/serial';
 import { fetchLearnerCertificates, verifySerial } from '@/lib/certificates/lookup';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { certificateCount, eligibleEnrollment } from './certificate-fixtures';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { certificateCount, eligibleEnrollment } from '../support/certificate-fixtures';
 
 let courses: Awaited<ReturnType<typeof createCourses>>;
 

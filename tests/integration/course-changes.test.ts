@@ -9,11 +9,11 @@ import { getBank } from '@/lib/quiz/bank';
 import { questionPool } from '@/lib/quiz/attempts';
 import { db } from '@/models';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
-import { params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { drawnOf, enroll } from './quiz-support';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { eligibleEnrollment } from './certificate-fixtures';
+import { params } from '../support/request';
+import { actAs } from '../support/session';
+import { drawnOf, enroll } from '../support/quiz-support';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { eligibleEnrollment } from '../support/certificate-fixtures';
 
 const FLAGSHIP = 'pickling-and-canning';
 const NEW_LESSON = 'fermented-pickles-and-sauerkraut';

@@ -8,10 +8,10 @@ import { REFUSAL } from '@/lib/practicals/decision-rights';
 import { acceptPhoto, decisionRightFor, submitPractical } from '@/lib/practicals/service';
 import { RUBRIC_CRITERIA } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createUser } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting, type SessionUser } from './practical-fixtures';
+import { createUser } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting, type SessionUser } from '../support/practical-fixtures';
 
 const fixture = practicalSetting();
 

@@ -3,9 +3,9 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { GET as rosterRoute } from '@/app/api/desk/roster/route';
 import { issueCertificate } from '@/lib/certificates/issue';
 import { fetchDeskReports } from '@/lib/desk/reports';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { actAs } from '../helpers/session';
-import { eligibleEnrollment } from './certificate-fixtures';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { actAs } from '../support/session';
+import { eligibleEnrollment } from '../support/certificate-fixtures';
 
 beforeEach(async () => {
   await resetDatabase();

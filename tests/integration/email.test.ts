@@ -6,10 +6,10 @@ import { enqueueEmail } from '@/lib/email/outbox';
 import { queueWorkshopReminders } from '@/lib/email/reminders';
 import { backoffMs, sendDueEmails } from '@/lib/email/sender';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { startHarness, type Harness } from './enrollment-fakes';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest } from '../support/request';
+import { actAs } from '../support/session';
+import { startHarness, type Harness } from '../support/enrollment-fakes';
 
 let h: Harness;
 let courseId: number;

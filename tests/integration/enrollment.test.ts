@@ -6,9 +6,9 @@ import { GET as waiversGET, POST as waiversPOST } from '@/app/api/waivers/route'
 import { saveWorkshop } from '@/lib/enrollment/admin';
 import { TransitionError, transitionEnrollment } from '@/lib/enrollment/state';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
 
 let courseId: number;
 

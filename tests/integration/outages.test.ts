@@ -18,10 +18,10 @@ import { POST as enrollPOST } from '@/app/api/enrollments/route';
 import { messageIdFor, sendDueEmails } from '@/lib/email/sender';
 import type { SessionUser } from '@/lib/auth/users';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { payWithCard, sessionIdOf, startHarness, type Harness } from './enrollment-fakes';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { payWithCard, startHarness, type Harness } from '../support/enrollment-fakes';
 
 // Test cards follow the common test-card convention: 4242 4242 4242 4242 succeeds.
 const GOOD = '4242 4242 4242 4242';

@@ -9,8 +9,8 @@ import { QueryTypes, Transaction } from 'sequelize';
 import { enqueueEmail } from '@/lib/email/outbox';
 import { claimDue, lockDueIds, messageIdFor, sendDueEmails } from '@/lib/email/sender';
 import { db } from '@/models';
-import { resetDatabase } from '../helpers/db';
-import { startHarness, type Harness } from './enrollment-fakes';
+import { resetDatabase } from '../support/db';
+import { startHarness, type Harness } from '../support/enrollment-fakes';
 
 const root = path.resolve(__dirname, '../..');
 let h: Harness;

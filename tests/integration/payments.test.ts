@@ -8,10 +8,10 @@ import { startFakePayments } from '@/fakes/payments/server';
 import { getCourse } from '@/lib/content';
 import { releaseStaleCheckouts } from '@/lib/payments/reconcile';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { API_KEY, WEBHOOK_SECRET, payWithCard, sessionIdOf, signedHeader, startHarness, type Harness } from './enrollment-fakes';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { API_KEY, WEBHOOK_SECRET, payWithCard, sessionIdOf, signedHeader, startHarness, type Harness } from '../support/enrollment-fakes';
 
 // Test cards follow the common test-card convention: 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is declined.
 const GOOD = '4242 4242 4242 4242';

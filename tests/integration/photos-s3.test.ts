@@ -7,10 +7,10 @@ import { POST as uploadPhoto } from '@/app/api/photos/route';
 import { startFakeS3, type FakeS3 } from '@/fakes/s3/server';
 import { s3Driver, setStorage } from '@/lib/storage';
 import { db } from '@/models';
-import { resetDatabase } from '../helpers/db';
-import { params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { catalog, enrolledLearner, makeJpeg, photoRequest } from './practical-fixtures';
+import { resetDatabase } from '../support/db';
+import { params } from '../support/request';
+import { actAs } from '../support/session';
+import { catalog, enrolledLearner, makeJpeg, photoRequest } from '../support/practical-fixtures';
 
 // The practical photo routes with the S3 driver (STORAGE_DRIVER=s3) against the local fake: the
 // same answers as on disk, and a store outage answered 503 with nothing half-stored.

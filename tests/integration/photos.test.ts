@@ -5,11 +5,11 @@ import { POST as uploadPhoto } from '@/app/api/photos/route';
 import { AppError } from '@/lib/errors';
 import { getStorage, setStorage } from '@/lib/storage';
 import { db } from '@/models';
-import { createUser } from '../helpers/db';
-import { params } from '../helpers/request';
-import { actAs } from '../helpers/session';
+import { createUser } from '../support/db';
+import { params } from '../support/request';
+import { actAs } from '../support/session';
 import { LOOSE_PHOTO_DAYS, pruneLoosePhotos, submitPractical } from '@/lib/practicals/service';
-import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting } from './practical-fixtures';
+import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting } from '../support/practical-fixtures';
 
 const GPS_IFD_TAG = 0x8825; // TIFF/EXIF 2.3: the pointer to the GPS sub-IFD, written in IFD0
 

@@ -6,10 +6,10 @@ import { GET as submissions } from '@/app/api/tasting-table/submissions/route';
 import { fetchLearnerPracticals, fetchSubmission } from '@/lib/practicals/data';
 import { RUBRIC_CRITERIA, type PracticalForm } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createUser } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting, type SessionUser } from './practical-fixtures';
+import { createUser } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { enrolledLearner, GOOD_BATCH, makeJpeg, photoRequest, practicalSetting, type SessionUser } from '../support/practical-fixtures';
 
 const fixture = practicalSetting();
 

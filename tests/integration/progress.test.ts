@@ -6,10 +6,10 @@ import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getLesson, getLessons } from '@/lib/content';
 import { lessonsForVersion } from '@/lib/content/versions';
 import { db } from '@/models';
-import { createCourses, createUser } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { answersFor, enroll, freshLearner } from './quiz-support';
+import { createCourses, createUser } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { answersFor, enroll, freshLearner } from '../support/quiz-support';
 
 let courses: Awaited<ReturnType<typeof createCourses>>;
 let learner: Awaited<ReturnType<typeof createUser>>;

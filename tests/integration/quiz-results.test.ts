@@ -4,10 +4,10 @@ import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getBank } from '@/lib/quiz/bank';
 import { fetchQuestionResults, ResultsFilterSchema } from '@/lib/quiz/results';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { answersFor, drawnOf, enroll } from './quiz-support';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { answersFor, drawnOf, enroll } from '../support/quiz-support';
 
 const QUIZ = 'pickling-and-canning--why-preserving-is-a-safety-job';
 

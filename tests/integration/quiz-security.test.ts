@@ -3,10 +3,10 @@ import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getCourses, getLessons } from '@/lib/content';
 import { getBanks } from '@/lib/quiz/bank';
 import { formatAnswer } from '@/lib/quiz/resolve';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { enroll } from './quiz-support';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { params } from '../support/request';
+import { actAs } from '../support/session';
+import { enroll } from '../support/quiz-support';
 
 // The answer key never reaches a learner before submission: for every bank, start an attempt and
 // look through the raw JSON for each key field and for each question's right-answer markers.

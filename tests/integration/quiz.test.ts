@@ -4,10 +4,10 @@ import { POST as submit } from '@/app/api/attempts/[id]/submit/route';
 import { POST as start } from '@/app/api/quizzes/[quiz]/attempts/route';
 import { getBank } from '@/lib/quiz/bank';
 import { db } from '@/models';
-import { createCourses, createUser } from '../helpers/db';
-import { jsonRequest, params } from '../helpers/request';
-import { actAs } from '../helpers/session';
-import { answersFor, drawnOf, enroll, freshLearner } from './quiz-support';
+import { createCourses, createUser } from '../support/db';
+import { jsonRequest, params } from '../support/request';
+import { actAs } from '../support/session';
+import { answersFor, drawnOf, enroll, freshLearner } from '../support/quiz-support';
 
 const LESSON_QUIZ = 'pickling-and-canning--acidity';
 const EXAM = 'pickling-and-canning--final-exam';
@@ -113,7 +113,7 @@ describe('POST /api/attempts/[id]/submit', () => {
     expect(row!.passed).toBe(true);
     expect(Number(row!.scorePct)).toBe(100);
     expect(row!.submittedAt).not.toBeNull();
-    const [[{ n }]] = (await db().sequelize.query('SELECT COUNT(*) AS n FROM quiz_answers WHERE attemptId = ? AND correct = 1', { replacements: [body.attempt.id] })) as [{ n: number }[], unknown];
+    const n = await db().QuizAnswer.count({ where: { attemptId: body.attempt.id, correct: true } });
     expect(Number(n)).toBe(7);
   });
 
@@ -136,7 +136,7 @@ describe('POST /api/attempts/[id]/submit', () => {
     const [ra, rb] = [await a.json(), await b.json()];
     expect([ra.graded, rb.graded].sort()).toEqual([false, true]);
     expect(ra.attempt.result).toEqual(rb.attempt.result);
-    const [[{ n }]] = (await db().sequelize.query('SELECT COUNT(*) AS n FROM quiz_answers WHERE attemptId = ?', { replacements: [body.attempt.id] })) as [{ n: number }[], unknown];
+    const n = await db().QuizAnswer.count({ where: { attemptId: body.attempt.id } });
     expect(Number(n)).toBe(7);
     // A later third submit still returns the stored result.
     const third = await (await submitReq(body.attempt.id, { answers: good })).json();

@@ -6,8 +6,8 @@ import { AppError } from '@/lib/errors';
 import { db } from '@/models';
 import { discoverRoutes } from '../support/app-routes';
 import { MATRIX, SUBJECTS, type ActionExpected, type ActionRow, type Subject } from '../e2e/support/authorization-matrix';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { actAs } from '../helpers/session';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { actAs } from '../support/session';
 
 // Server actions are called as functions with each person signed in (actAs), against the rows of the
 // same authorization matrix the browser-less walk uses. Next's revalidatePath needs a request scope.

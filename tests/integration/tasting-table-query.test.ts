@@ -2,9 +2,9 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { GET as submissions } from '@/app/api/tasting-table/submissions/route';
 import { db } from '@/models';
-import { resetDatabase } from '../helpers/db';
-import { actAs } from '../helpers/session';
-import { catalog, enrolledLearner } from './practical-fixtures';
+import { resetDatabase } from '../support/db';
+import { actAs } from '../support/session';
+import { catalog, enrolledLearner } from '../support/practical-fixtures';
 
 // The Tasting table's page query sorts on indexes (the status sort on the ENUM's declared order
 // rather than FIELD()); these checks hold its order, paging and counts to what a plain sort of

@@ -8,9 +8,9 @@ import { WAIVER_ALPHABET, WAIVER_REFUSED, generateWaiverCode } from '@/lib/enrol
 import { getEnv } from '@/lib/env';
 import { take } from '@/lib/throttle';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { jsonRequest } from '../helpers/request';
-import { actAs } from '../helpers/session';
+import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest } from '../support/request';
+import { actAs } from '../support/session';
 
 beforeEach(async () => {
   await resetDatabase();

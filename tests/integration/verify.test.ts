@@ -4,9 +4,9 @@ import { issueCertificate } from '@/lib/certificates/issue';
 import { generateSerial } from '@/lib/certificates/serial';
 import { getEnv } from '@/lib/env';
 import { db } from '@/models';
-import { createCourses, resetDatabase } from '../helpers/db';
-import { params } from '../helpers/request';
-import { eligibleEnrollment } from './certificate-fixtures';
+import { createCourses, resetDatabase } from '../support/db';
+import { params } from '../support/request';
+import { eligibleEnrollment } from '../support/certificate-fixtures';
 
 const check = (serial: string, address = '203.0.113.7') =>
   verifyRoute(new Request(`http://localhost/api/certificates/${encodeURIComponent(serial)}`, { headers: { 'x-forwarded-for': address } }), params({ serial }));

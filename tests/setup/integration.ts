@@ -2,7 +2,7 @@ import { afterAll, vi } from 'vitest';
 import type { SessionUser } from '../../lib/auth/users';
 
 // Route handlers read the session from next-auth's session cookie (lib/auth/guard.ts); tests choose
-// who is signed in with actAs() from tests/helpers/session.ts. The mocked cookie store carries a real
+// who is signed in with actAs() from tests/support/session.ts. The mocked cookie store carries a real
 // token, encrypted with next-auth's own `encode` and the test secret, so the guard's decoding runs too.
 vi.mock('next/headers', async (importOriginal) => {
   const original = await importOriginal<typeof import('next/headers')>();

@@ -1,7 +1,7 @@
 import { requireRole } from '@/lib/auth/guard';
 import { parseOrThrow, route } from '@/lib/errors';
 import { readJson } from '@/lib/server/body';
-import { MarkReadSchema, ProgressQuerySchema } from '@/lib/progress/schema';
+import { MarkReadSchema, ProgressQuerySchema } from '@/lib/validations/progress';
 import { markLessonRead, passedQuizzes, readLessons } from '@/lib/progress/store';
 
 /** Marks a lesson read (idempotent). */

@@ -1,7 +1,7 @@
 import { requireRole } from '@/lib/auth/guard';
 import { route } from '@/lib/errors';
 import { readAttempt } from '@/lib/quiz/attempts';
-import { parseAttemptId } from '@/lib/quiz/params';
+import { parseAttemptId } from '@/lib/validations/quiz-params';
 
 type Context = { params: Promise<{ id: string }> };
 

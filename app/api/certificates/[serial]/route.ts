@@ -1,6 +1,6 @@
 import { clientAddress } from '@/lib/auth/options';
 import { verifyForAddress } from '@/lib/certificates/lookup';
-import { SerialParamSchema } from '@/lib/certificates/schemas';
+import { SerialParamSchema } from '@/lib/validations/certificate';
 import { AppError, decodeParam, parseOrThrow, route } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';

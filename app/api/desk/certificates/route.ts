@@ -1,6 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
 import { issueCertificates } from '@/lib/certificates/issue';
-import { IssueSchema } from '@/lib/certificates/schemas';
+import { IssueSchema } from '@/lib/validations/certificate';
 import { parseOrThrow, route } from '@/lib/errors';
 import { readJson } from '@/lib/server/body';
 

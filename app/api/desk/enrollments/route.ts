@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { DeskQuerySchema } from '@/lib/certificates/schemas';
+import { DeskQuerySchema } from '@/lib/validations/certificate';
 import { fetchDeskPage } from '@/lib/desk/enrollments';
 import { parseOrThrow, route } from '@/lib/errors';
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { requireRole } from '@/lib/auth/guard';
-import { DeskFilterSchema } from '@/lib/certificates/schemas';
+import { DeskFilterSchema } from '@/lib/validations/certificate';
 import { filteredIds, standingsInOrder, toDeskEnrollment } from '@/lib/desk/enrollments';
 import { rosterCsv } from '@/lib/desk/roster-csv';
 import { parseOrThrow, route } from '@/lib/errors';

@@ -1,8 +1,6 @@
-import { z } from 'zod';
-import { JAR_SIZES, RULES, planBatch } from '@/lib/preserving';
-import { choiceParam, numberParam, productParam, toolRoute } from '@/lib/preserving/http';
-
-const query = z.object({ product: productParam, jar: choiceParam(JAR_SIZES, 'jar', 'a jar size'), jars: numberParam(RULES.jars) });
+import { planBatch } from '@/lib/preserving';
+import { toolRoute } from '@/lib/preserving/http';
+import { toolQueries } from '@/lib/validations/tools';
 
 /** GET /api/tools/batch?product&jar&jars — produce, brine (with its extra margin) and ingredients. */
-export const GET = toolRoute(query, planBatch);
+export const GET = toolRoute(toolQueries.batch, planBatch);

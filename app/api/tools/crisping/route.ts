@@ -1,12 +1,6 @@
-import { z } from 'zod';
-import { CRISPING_AGENTS, JAR_SIZES, RULES, crispingPlan } from '@/lib/preserving';
-import { choiceParam, numberParam, toolRoute } from '@/lib/preserving/http';
-
-const query = z.object({
-  agent: choiceParam(CRISPING_AGENTS, 'agent', 'a crisping agent'),
-  jar: choiceParam(JAR_SIZES, 'jar', 'a jar size'),
-  jars: numberParam(RULES.jars),
-});
+import { crispingPlan } from '@/lib/preserving';
+import { toolRoute } from '@/lib/preserving/http';
+import { toolQueries } from '@/lib/validations/tools';
 
 /** GET /api/tools/crisping?agent&jar&jars — calcium chloride doses or the pickling-lime schedule. */
-export const GET = toolRoute(query, crispingPlan);
+export const GET = toolRoute(toolQueries.crisping, crispingPlan);

@@ -1,8 +1,6 @@
-import { z } from 'zod';
-import { RULES, headspaceCheck } from '@/lib/preserving';
-import { optionalNumberParam, productParam, toolRoute } from '@/lib/preserving/http';
-
-const query = z.object({ product: productParam, measuredIn: optionalNumberParam(RULES.measuredIn) });
+import { headspaceCheck } from '@/lib/preserving';
+import { toolRoute } from '@/lib/preserving/http';
+import { toolQueries } from '@/lib/validations/tools';
 
 /** GET /api/tools/headspace?product[&measuredIn] — recommended headspace and a verdict. */
-export const GET = toolRoute(query, headspaceCheck);
+export const GET = toolRoute(toolQueries.headspace, headspaceCheck);

@@ -1,7 +1,6 @@
-import { GAUGES, pressureForAltitude } from '@/lib/preserving';
-import { choiceParam, toolRoute, withAltitude } from '@/lib/preserving/http';
-
-const query = withAltitude({ gauge: choiceParam(GAUGES, 'gauge', 'a gauge type') });
+import { pressureForAltitude } from '@/lib/preserving';
+import { toolRoute } from '@/lib/preserving/http';
+import { toolQueries } from '@/lib/validations/tools';
 
 /** GET /api/tools/pressure?gauge&altitudeFt (or altitudeM) — pressure-canner pounds by gauge type and altitude. */
-export const GET = toolRoute(query, pressureForAltitude);
+export const GET = toolRoute(toolQueries.pressure, pressureForAltitude);

@@ -1,7 +1,6 @@
-import { JAR_SIZES, processingTime } from '@/lib/preserving';
-import { choiceParam, productParam, toolRoute, withAltitude } from '@/lib/preserving/http';
-
-const query = withAltitude({ product: productParam, jar: choiceParam(JAR_SIZES, 'jar', 'a jar size') });
+import { processingTime } from '@/lib/preserving';
+import { toolRoute } from '@/lib/preserving/http';
+import { toolQueries } from '@/lib/validations/tools';
 
 /** GET /api/tools/processing-time?product&jar&altitudeFt (or altitudeM) — boiling-water minutes from the USDA table. */
-export const GET = toolRoute(query, processingTime);
+export const GET = toolRoute(toolQueries['processing-time'], processingTime);

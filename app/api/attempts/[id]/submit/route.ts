@@ -2,8 +2,8 @@ import { requireRole } from '@/lib/auth/guard';
 import { parseOrThrow, route } from '@/lib/errors';
 import { readJson } from '@/lib/server/body';
 import { submitAttempt } from '@/lib/quiz/attempts';
-import { SubmitSchema } from '@/lib/quiz/grading';
-import { parseAttemptId } from '@/lib/quiz/params';
+import { SubmitSchema } from '@/lib/validations/quiz';
+import { parseAttemptId } from '@/lib/validations/quiz-params';
 
 type Context = { params: Promise<{ id: string }> };
 

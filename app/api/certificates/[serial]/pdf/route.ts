@@ -1,6 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
 import { certificatePdfFor } from '@/lib/certificates/lookup';
-import { SerialParamSchema } from '@/lib/certificates/schemas';
+import { SerialParamSchema } from '@/lib/validations/certificate';
 import { decodeParam, parseOrThrow, route } from '@/lib/errors';
 
 export const dynamic = 'force-dynamic';

@@ -1,7 +1,7 @@
 import { requireRole } from '@/lib/auth/guard';
 import { route } from '@/lib/errors';
 import { startAttempt } from '@/lib/quiz/attempts';
-import { parseQuizSlug } from '@/lib/quiz/params';
+import { parseQuizSlug } from '@/lib/validations/quiz-params';
 
 type Context = { params: Promise<{ quiz: string }> };
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { requireRole } from '@/lib/auth/guard';
 import { revokeCertificate } from '@/lib/certificates/issue';
-import { RevokeSchema } from '@/lib/certificates/schemas';
+import { RevokeSchema } from '@/lib/validations/certificate';
 import { parseOrThrow, route } from '@/lib/errors';
 import { readJson } from '@/lib/server/body';
 

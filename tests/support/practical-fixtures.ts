@@ -7,8 +7,8 @@ import type { SessionUser } from '@/lib/auth/users';
 import { diskDriver, setStorage } from '@/lib/storage';
 import type { PracticalForm } from '@/lib/validations/practical';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { actAs } from '../helpers/session';
+import { createCourses, createUser, resetDatabase } from './db';
+import { actAs } from './session';
 
 // Shared set-up for the practical and photo tests: a photo folder of their own, an enrolled learner.
 

@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { requirementsForCourse } from '@/lib/certificates/requirements';
 import { db } from '@/models';
-import { createUser } from '../helpers/db';
+import { createUser } from './db';
 
 type Course = { id: number; slug: string };
 

@@ -30,4 +30,7 @@ export const DeskQuerySchema = DeskFilterSchema.extend({
 });
 export type DeskQuery = z.infer<typeof DeskQuerySchema>;
 
+/** Body of POST /api/certificates/refresher: the refresher enrollment whose certificate the learner claims. */
+export const RefresherClaimSchema = z.object({ enrollmentId: z.number().int().positive() });
+
 export const SerialParamSchema = z.string().trim().min(1).max(40);

@@ -2,8 +2,8 @@ import { QueryTypes } from 'sequelize';
 import { getBank } from '@/lib/quiz/bank';
 import { rightAnswer, type Answers, type Drawn } from '@/lib/quiz/grading';
 import { db } from '@/models';
-import { createCourses, createUser, resetDatabase } from '../helpers/db';
-import { actAs } from '../helpers/session';
+import { createCourses, createUser, resetDatabase } from './db';
+import { actAs } from './session';
 
 /** Enrolls a user in a course with the given status; returns the enrollment. */
 export async function enroll(userId: number, courseId: number, status: 'active' | 'completed' | 'awaiting_payment' | 'withdrawn' = 'active', workshopId: number | null = null) {
