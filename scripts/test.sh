@@ -6,10 +6,10 @@ set -euo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 cd "$ROOT"
 
-if [ "$*" != "--project integration" ]; then
-  ensure_chromium
-  ensure_nginx
-fi
+case " $* " in
+  *" --project integration "*) ;;
+  *) ensure_chromium; ensure_nginx ;;
+esac
 "$ROOT/scripts/db.sh" start
 
 export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(local_secret)}"
