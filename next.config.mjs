@@ -45,6 +45,8 @@ const nextConfig = {
   // Lets a second build (tests, a helper's branch of work) live beside the demo's.
   distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
+  // With the layout's revalidate (300 s): Cache-Control s-maxage=300, stale-while-revalidate=300 on public pages.
+  expireTime: 600,
   // Lessons share one address, /learn/<course>/<lesson>. The public preview lessons are the only
   // params app/learn/[course]/[lesson] prerenders (dynamicParams = false, so unknown lessons answer
   // 404 there). Every members-only lesson is rewritten, without changing the address, to

@@ -7,6 +7,10 @@ import { Providers } from '@/components/providers';
 import { SiteFooter } from '@/components/site-footer';
 import { SiteHeader } from '@/components/site-header';
 
+// Public (prerendered) pages are fresh for 5 minutes at the proxy or a CDN (Cache-Control s-maxage=300),
+// so a lesson turned members-only does not stay public there for long; per-request pages stay private.
+export const revalidate = 300;
+
 export const metadata: Metadata = {
   title: { default: 'Brinewright', template: '%s · Brinewright' },
   description: 'Learn to pickle and can safely: lessons with working calculators, quizzes, workshops and certificates for home canners.',

@@ -22,11 +22,6 @@ const EnvSchema = z.object({
   NEXTAUTH_URL: z.url({ error: 'NEXTAUTH_URL is malformed: expected a URL such as http://localhost:3000' }).optional(),
   APP_URL: z.url({ error: 'APP_URL is malformed: expected a URL such as http://localhost:3000' }).default('http://localhost:3000'),
   DB_POOL_MAX: z.coerce.number().int().positive().default(10),
-  // The app server (server.ts): its processes, and whether a proxy in front tells the client's
-  // address. Without TRUST_PROXY=true the address is the connection's own and X-Forwarded-For
-  // from the client is replaced; with it, the proxy must overwrite that header (nginx.conf does).
-  WEB_CONCURRENCY: z.coerce.number({ error: 'WEB_CONCURRENCY must be a whole number from 1 to 64' }).int().min(1).max(64).default(1),
-  TRUST_PROXY: z.enum(['true', 'false'], { error: 'TRUST_PROXY must be true or false' }).default('false').transform((v) => v === 'true'),
   // Throttles (lib/throttle.ts, counted in MariaDB's rate_limits table). Sign-in: attempts per
   // e-mail and client address, per address across accounts; past SIGNIN_SLOW_AFTER_PER_ACCOUNT
   // attempts on one account from anywhere each further one waits a second more (at most
@@ -87,6 +82,9 @@ function requireS3Settings(env: { STORAGE_DRIVER: string; S3_BUCKET?: string; S3
 }
 
 export type Env = z.infer<typeof EnvSchema>;
+
+/** Every variable the configuration reads (.env.example lists each; tests/unit/env-example.test.ts). */
+export const ENV_NAMES = Object.keys(EnvSchema.shape);
 
 export class EnvError extends Error {
   constructor(message: string) {

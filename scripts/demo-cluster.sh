@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # npm run demo:cluster: the demo on TWO app servers behind nginx, sharing MariaDB and an
 # S3-compatible photo store (the local fake in fakes/s3). MariaDB, migrations, demo data, one
-# production build, the fakes, the worker, the production server (server.ts) on two loopback ports, nginx on :3000.
+# production build, the fakes, the worker, `next start` on two loopback ports, nginx on :3000.
 set -euo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 cd "$ROOT"
@@ -22,8 +22,6 @@ if [ ! -s "$ROOT/.data/fake-s3-secret" ]; then
   node -e "process.stdout.write(require('crypto').randomBytes(24).toString('hex'))" >"$ROOT/.data/fake-s3-secret"
 fi
 export STORAGE_DRIVER=s3
-# The app servers sit behind nginx, which overwrites X-Forwarded-For with the client's address.
-export TRUST_PROXY=true
 export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$FAKE_S3_PORT}" S3_REGION="${S3_REGION:-us-east-1}" S3_BUCKET="${S3_BUCKET:-brinewright-photos}"
 export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-BRINEWRIGHTDEMOKEY01}" S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-$(cat "$ROOT/.data/fake-s3-secret")}"
 export S3_FORCE_PATH_STYLE="${S3_FORCE_PATH_STYLE:-true}"
@@ -60,9 +58,9 @@ wait_for "http://127.0.0.1:$FAKE_S3_PORT/_fake/health" 30
 "$ROOT/node_modules/.bin/tsx" scripts/cluster/copy-photos-to-s3.ts
 "$ROOT/node_modules/.bin/tsx" --conditions=react-server scripts/worker.ts &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/tsx" server.ts --port "$APP_PORT_A" --hostname 127.0.0.1 &
+"$ROOT/node_modules/.bin/tsx" scripts/app-server.ts --port "$APP_PORT_A" &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/tsx" server.ts --port "$APP_PORT_B" --hostname 127.0.0.1 &
+"$ROOT/node_modules/.bin/tsx" scripts/app-server.ts --port "$APP_PORT_B" &
 PIDS+=($!)
 "$NGINX" -c "$NGINX_CONF" -p "$CLUSTER_DIR" &
 PIDS+=($!)

@@ -1,13 +1,19 @@
 #!/usr/bin/env bash
-# npm run demo: MariaDB, migrations, demo data, the local fakes, a production build, the app on :3000.
+# npm run demo: MariaDB, migrations, demo data, the local fakes, a production build, the app
+# (`next start` on a loopback port) behind nginx on :3000. nginx writes X-Forwarded-For itself, so a
+# client cannot choose the address the sign-in and verification throttles count.
 set -euo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 cd "$ROOT"
 
-PORT="${PORT:-3000}"
+PORT="${PORT:-3000}"               # nginx, the address people use
+APP_PORT="${APP_PORT:-3001}"       # the app, on loopback only
+PROXY_DIR="$ROOT/.data/proxy"
 "$ROOT/scripts/db.sh" start
 demo_env "$PORT"
 demo_prepare
+NGINX_SETUP="$("$ROOT/node_modules/.bin/tsx" scripts/cluster/nginx.ts "$PROXY_DIR" "$PORT" "127.0.0.1:$APP_PORT")"
+read -r NGINX NGINX_CONF <<<"$NGINX_SETUP"
 
 cat <<MSG
 
@@ -16,15 +22,10 @@ $(demo_accounts)
   Stop with Ctrl-C; stop MariaDB with: npm run db:stop
 
 MSG
-# The fakes and the worker (outbox sender, reminders) run in the background and stop with the demo.
-PIDS=()
-stop_all() { for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done; }
-trap stop_all EXIT
-trap 'exit 130' INT TERM
-"$ROOT/node_modules/.bin/tsx" scripts/fakes.ts &
+start_services
+"$ROOT/node_modules/.bin/tsx" scripts/app-server.ts --port "$APP_PORT" &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/tsx" --conditions=react-server scripts/worker.ts &
+"$NGINX" -c "$NGINX_CONF" -p "$PROXY_DIR" &
 PIDS+=($!)
-"$ROOT/node_modules/.bin/tsx" server.ts --port "$PORT" &
-PIDS+=($!)
-wait "${PIDS[2]}"
+# Runs until Ctrl-C or until the app or nginx stops.
+wait -n "${PIDS[2]}" "${PIDS[3]}"

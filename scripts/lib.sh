@@ -70,3 +70,16 @@ demo_accounts() {
   Test cards on the local checkout page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
 MSG
 }
+
+# The fakes and the worker (outbox sender, reminders) in the background, stopped with the caller
+# (demo.sh, dev.sh): their pids start PIDS, to which the caller adds its own servers.
+start_services() {
+  PIDS=()
+  stop_all() { for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done; }
+  trap stop_all EXIT
+  trap 'exit 130' INT TERM
+  "$ROOT/node_modules/.bin/tsx" scripts/fakes.ts &
+  PIDS+=($!)
+  "$ROOT/node_modules/.bin/tsx" --conditions=react-server scripts/worker.ts &
+  PIDS+=($!)
+}

@@ -1,4 +1,4 @@
-// npm run worker: the background jobs the app needs beside the app server (server.ts):
+// npm run worker: the background jobs the app needs beside the app (`next start`):
 // - the outbox sender (claims due e-mail rows, sends them over SMTP, retries with backoff),
 // - the day-before workshop reminders,
 // - releasing seats of checkouts that expired while their webhook never arrived,

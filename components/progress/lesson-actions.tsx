@@ -52,7 +52,7 @@ export function LessonActions({ courseSlug, lessonSlug, quizSlug }: { courseSlug
       <div className="flex flex-wrap items-center gap-3">
         {isLoading ? (
           <p className="text-sm text-ink-soft" role="status">
-            Checking your progress...
+            Checking your progress…
           </p>
         ) : signedOut ? (
           <p className="text-sm text-ink-soft">

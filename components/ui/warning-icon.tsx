@@ -1,8 +1,4 @@
-/**
- * A small warning triangle drawn as SVG. It replaces the U+26A0 character on purpose: one character
- * beyond Latin-1 makes V8 keep a whole prerendered page as a two-byte string, which doubles the
- * memory every request copies (see DEVELOPERS.md, "Page speed").
- */
+/** A small warning triangle drawn as SVG, so it looks the same whatever fonts the reader has. */
 export function WarningIcon({ className }: { className?: string }) {
   return (
     <svg

@@ -15,7 +15,7 @@ export const RECIPES: Record<ProductId, Recipe> = {
   'fresh-pack-dill-pickles': {
     yieldPints: 9,
     produceLb: 8,
-    source: `${G6}, "Quick fresh-pack dill pickles" (8 lb cucumbers, 7 to 9 pints; 1 tsp mustard seed per pint sets 9)`,
+    source: `${G6}, "Quick fresh-pack dill pickles" (8 lb cucumbers, 7–9 pints; 1 tsp mustard seed per pint sets 9)`,
     ingredients: [
       { name: 'pickling cucumbers, 3 to 5 inch', amount: 8, unit: 'lb' },
       { name: 'canning or pickling salt, for the 12-hour pre-brine', amount: 0.75, unit: 'cup' },

@@ -44,7 +44,7 @@ export function pressureForAltitude({ gauge, altitudeFt }: { gauge: Gauge | stri
     pounds: row.pounds,
     gauge: type,
     altitudeBand: { fromFt: row.fromFt, toFt: row.toFt },
-    source: row.confidence === 'secondary' ? `${SOURCE}; the 8,001 to 10,000 ft dial row is not in the USDA tables (a jar maker's altitude chart, unconfirmed)` : SOURCE,
+    source: row.confidence === 'secondary' ? `${SOURCE}; the 8,001–10,000 ft dial row is not in the USDA tables (a jar maker's altitude chart, unconfirmed)` : SOURCE,
     confidence: row.confidence,
   };
 }

@@ -199,7 +199,7 @@ export const isProductId = (value: unknown): value is ProductId => typeof value 
 /** An unknown id as quoted back in a message: printable, at most 40 characters. */
 const shown = (id: string) => {
   const chars = Array.from(id.replace(/[\p{Cc}\p{Cs}\p{Cf}]/gu, '\uFFFD'));
-  return chars.length > 40 ? chars.slice(0, 39).join('') + '...' : chars.join('');
+  return chars.length > 40 ? chars.slice(0, 39).join('') + '…' : chars.join('');
 };
 
 /** The product, or PreservingError not-found (HTTP 404). */

@@ -119,7 +119,7 @@ export const JAR_PINTS = { 'half-pint': 0.5, pint: 1, quart: 2 } as const;
  */
 export function gramsOf(value: number, unit: Unit | string, gramsPerCup: number, what: string): number {
   if (!isUnit(unit) || (unitKind(unit) !== 'volume' && unitKind(unit) !== 'mass')) {
-    throw new PreservingError('invalid', `Choose a unit for ${what}: a volume (tsp, tbsp, cup, mL...) or a weight (g, kg, oz, lb).`, 'unit');
+    throw new PreservingError('invalid', `Choose a unit for ${what}: a volume (tsp, tbsp, cup, mL…) or a weight (g, kg, oz, lb).`, 'unit');
   }
   return unitKind(unit) === 'mass' ? convert(value, unit, 'g') : convert(value, unit, 'cup') * gramsPerCup;
 }

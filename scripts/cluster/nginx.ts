@@ -1,7 +1,8 @@
-// nginx as the load balancer in front of several app servers: finds (or installs) Debian's nginx and
-// renders scripts/cluster/nginx.conf for a folder, a port and the app servers' addresses.
-// Used by scripts/demo-cluster.sh (as a command) and by tests/e2e/cluster.test.ts (as a module).
-//   tsx scripts/cluster/nginx.ts DIR PORT 127.0.0.1:3001 127.0.0.1:3002   → writes DIR/nginx.conf, prints "NGINX CONF"
+// nginx as the reverse proxy in front of one or several app servers: finds (or installs) Debian's
+// nginx and renders scripts/cluster/nginx.conf for a folder, a port and the app servers' addresses.
+// Used by scripts/demo.sh and scripts/demo-cluster.sh (as a command) and by the browser tests of the
+// client address and the cluster (as a module).
+//   tsx scripts/cluster/nginx.ts DIR PORT 127.0.0.1:3001 [127.0.0.1:3002 ...]   → writes DIR/nginx.conf, prints "NGINX CONF"
 import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
@@ -63,7 +64,7 @@ export function freePort(): Promise<number> {
 if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(__filename)) {
   const [dir, port, ...upstreams] = process.argv.slice(2);
   if (!dir || !/^\d+$/.test(port ?? '') || upstreams.length === 0) {
-    console.error('usage: tsx scripts/cluster/nginx.ts DIR PORT 127.0.0.1:PORT_A 127.0.0.1:PORT_B ...');
+    console.error('usage: tsx scripts/cluster/nginx.ts DIR PORT 127.0.0.1:PORT_A [127.0.0.1:PORT_B ...]');
     process.exit(2);
   }
   const nginx = ensureNginx();

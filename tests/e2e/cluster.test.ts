@@ -15,7 +15,7 @@ import { ensureNginx, freePort, writeNginxConfig } from '../../scripts/cluster/n
 import { openBrowser, seriousViolations, signIn } from './support/browser';
 import { startAppServer } from '../../scripts/app-server';
 
-// Two app servers (server.ts) (the e2e build) behind nginx, sharing the e2e database and an
+// Two app servers (`next start` of the e2e build) behind nginx, sharing the e2e database and an
 // S3-compatible bucket (fakes/s3). A learner signs in and uploads a practical photo through nginx;
 // each app server, asked on its own port, serves the same bytes, so whichever did not take the
 // upload serves the other's photo. Then what must not live in one process: sessions (JWTs),
@@ -133,8 +133,6 @@ beforeAll(async () => {
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? 'e2e-secret-0123456789abcdef',
     NEXTAUTH_URL: nginxUrl,
     APP_URL: nginxUrl,
-    // Behind nginx, which overwrites X-Forwarded-For with the address it saw.
-    TRUST_PROXY: 'true',
     // The fakes the e2e global setup started.
     STRIPE_API_HOST: '127.0.0.1',
     STRIPE_API_PORT: String(e2ePort + 1),

@@ -2,7 +2,7 @@
 //
 // This test starts everything it needs beside the browser tests' own server: a MariaDB of its own
 // (scripts/db.sh with its own port and data folder under .data/, never the shared server), the demo
-// seed, and the production server (server.ts) of the browser tests' production build (E2E_DIST_DIR) on a free port.
+// seed, and the app (`next start`) of the browser tests' production build (E2E_DIST_DIR) on a free port.
 // Learners start and submit quiz attempts for 60 s at bounded concurrency; 20 s in, MariaDB is
 // killed (SIGKILL, the harshest stop: no chance to finish anything), kept down for 10 s and started
 // again. Then it checks:

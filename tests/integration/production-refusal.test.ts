@@ -28,7 +28,7 @@ const demoProduction = { ...inherited, NODE_ENV: 'production', NEXTAUTH_URL: 'ht
 
 describe('production refuses demo settings', () => {
   it('the app server stops with a message naming each variable', async () => {
-    const { code, output } = await run(['server.ts', '--port', '0'], demoProduction);
+    const { code, output } = await run(['scripts/app-server.ts', '--port', '0'], demoProduction);
     expect(code).toBe(2);
     expect(output).toMatch(/The app server refuses to start in production with demo settings/);
     for (const name of ['STRIPE_SECRET_KEY', 'STRIPE_WEBHOOK_SECRET', 'STRIPE_API_HOST', 'NEXTAUTH_URL is plain http']) expect(output).toContain(name);

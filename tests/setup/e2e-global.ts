@@ -28,9 +28,6 @@ export default async function setup() {
     NEXTAUTH_URL: baseUrl,
     APP_URL: baseUrl,
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? 'e2e-secret-0123456789abcdef',
-    // The browser tests stand where a proxy would: some spread their requests over test addresses
-    // with X-Forwarded-For (the per-address sign-in throttle would otherwise lump them together).
-    TRUST_PROXY: 'true',
   };
   // The local fakes (payments, SMTP + mailbox) and the worker, on ports derived from E2E_PORT so
   // several checkouts can run browser tests side by side.

@@ -2,12 +2,12 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { ratioFigure, writeBenchResults } from '../../scripts/bench-results';
-import { discoverBenchScripts, figureRow, lastJsonObject } from '../../scripts/bench';
+import { ratioFigure, writeBenchResults } from '../../bench/bench-results';
+import { discoverBenchScripts, figureRow, lastJsonObject } from '../../bench/bench';
 
-describe('npm run bench (scripts/bench.ts)', () => {
+describe('npm run bench (bench/bench.ts)', () => {
   it('discovers every bench:* script of package.json, and only those', () => {
-    const found = discoverBenchScripts({ scripts: { bench: 'tsx scripts/bench.ts', 'bench:pages': 'a', test: 'b', 'bench:new-one': 'c', 'benchmark': 'd' } });
+    const found = discoverBenchScripts({ scripts: { bench: 'tsx bench/bench.ts', 'bench:pages': 'a', test: 'b', 'bench:new-one': 'c', 'benchmark': 'd' } });
     expect(found).toEqual([
       { name: 'pages', script: 'a' },
       { name: 'new-one', script: 'c' },
@@ -39,7 +39,7 @@ describe('npm run bench (scripts/bench.ts)', () => {
   });
 });
 
-describe('writeBenchResults (scripts/bench-results.ts)', () => {
+describe('writeBenchResults (bench/bench-results.ts)', () => {
   const saved = process.env.BENCH_RESULTS_FILE;
   afterEach(() => {
     if (saved === undefined) delete process.env.BENCH_RESULTS_FILE;

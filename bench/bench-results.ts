@@ -1,4 +1,4 @@
-// Machine-readable results of the benchmark scripts, collected by `npm run bench` (scripts/bench.ts)
+// Machine-readable results of the benchmark scripts, collected by `npm run bench` (bench/bench.ts)
 // into one Markdown report. A bench script calls writeBenchResults() once at the end; the file goes
 // to $BENCH_RESULTS_FILE when bench.ts set it, otherwise to bench-results/<bench>.json.
 import fs from 'node:fs';
@@ -6,7 +6,7 @@ import os from 'node:os';
 import path from 'node:path';
 
 export type BenchFigure = {
-  /** What was measured, e.g. "public lesson, app (server.ts)". */
+  /** What was measured, e.g. "public lesson, app (next start)". */
   name: string;
   value: number;
   /** req/s, ms, s, MB, … */

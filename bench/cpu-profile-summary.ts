@@ -1,6 +1,6 @@
 // Summarises V8 CPU profiles (.cpuprofile, as written by `node --cpu-prof`): the functions and the
 // packages with the most self time. Used to find where a benchmarked request spends its time.
-//   tsx scripts/cpu-profile-summary.ts <file-or-folder>... [--top 25] [--inclusive fnA,fnB]
+//   tsx bench/cpu-profile-summary.ts <file-or-folder>... [--top 25] [--inclusive fnA,fnB]
 // --inclusive: for each named function, the share of busy time spent in it or below it
 //   (url:<part> names every function of the files whose path contains <part>).
 // --stacks fnA,fnB: the heaviest call stacks (12 frames up) leading to each named function's self time.
@@ -21,7 +21,7 @@ const optionValues = new Set([topAt, incAt, stAt].filter((i) => i >= 0).map((i) 
 const inputs = args.filter((a, i) => !a.startsWith('--') && !optionValues.has(i));
 const files = inputs.flatMap((p) => (fs.statSync(p).isDirectory() ? fs.readdirSync(p).filter((f) => f.endsWith('.cpuprofile')).map((f) => path.join(p, f)) : [p]));
 if (!files.length) {
-  console.error('usage: tsx scripts/cpu-profile-summary.ts <file.cpuprofile | folder>... [--top N]');
+  console.error('usage: tsx bench/cpu-profile-summary.ts <file.cpuprofile | folder>... [--top N]');
   process.exit(2);
 }
 

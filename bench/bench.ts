@@ -3,7 +3,7 @@
 // production build, and writes a Markdown report: bench-results/REPORT.md (and a dated copy).
 //
 // Each bench script may write machine-readable figures with writeBenchResults() from
-// scripts/bench-results.ts; this script points it at bench-results/runs/<name>.json through
+// bench/bench-results.ts; this script points it at bench-results/runs/<name>.json through
 // BENCH_RESULTS_FILE. For a script that writes none, the report quotes its JSON output (the last
 // JSON object it printed, or bench-results/<name>.json) and every output line that states a goal.
 //
@@ -195,7 +195,7 @@ function report(runs: Run[], facts: { started: Date; totalS: number; buildS: num
   const cpus = os.cpus();
   const out: string[] = [];
   out.push(`# Brinewright benchmarks — ${facts.started.toISOString().slice(0, 16).replace('T', ' ')} UTC`, '');
-  out.push('Written by `npm run bench` (scripts/bench.ts). Every figure is from this one run on this machine.', '');
+  out.push('Written by `npm run bench` (bench/bench.ts). Every figure is from this one run on this machine.', '');
   out.push('## Machine', '');
   out.push(`- ${os.availableParallelism()} cores (${cpus[0]?.model ?? 'unknown CPU'}), ${(os.totalmem() / 1024 ** 3).toFixed(1)} GB memory, ${os.type()} ${os.release()}`);
   out.push(`- Node ${process.version}; commit ${gitCommit()}`);

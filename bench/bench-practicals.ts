@@ -10,7 +10,7 @@
  * Environment: BENCH_PORT (3190), BENCH_DIST_DIR (.next-bench), BENCH_SKIP_BUILD=1 to reuse that
  * build, BENCH_SECONDS (15), BENCH_DATABASE_NAME; BENCH_ONLY=table to measure only the Tasting table
  * (no photo), BENCH_KEEP_DB=1 to keep the seeded database for EXPLAIN, BENCH_CPU_PROF=<folder> to
- * run the app under `node --cpu-prof` (summarise with scripts/cpu-profile-summary.ts).
+ * run the app under `node --cpu-prof` (summarise with bench/cpu-profile-summary.ts).
  */
 import { execFileSync, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -20,7 +20,7 @@ import sharp from 'sharp';
 import { createSequelize } from '../lib/db';
 import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { MAX_PHOTO_BYTES, processPhoto } from '../lib/practicals/images';
-import { startAppServer, stopAppServer } from './app-server';
+import { startAppServer, stopAppServer } from '../scripts/app-server';
 import { cpuMsOfTree } from './bench-support';
 import { writeBenchResults } from './bench-results';
 
@@ -316,7 +316,7 @@ async function main() {
     tastingTableP95Under150ms: (results.tastingTable as { p95: number }).p95 < 150,
   };
   console.log(`[bench] goals: re-encode < 2 s: ${goals.reencodeUnder2s === undefined ? 'not measured' : goals.reencodeUnder2s ? 'met' : 'NOT met'}; Tasting table p95 < 150 ms: ${goals.tastingTableP95Under150ms ? 'met' : 'NOT met'}`);
-  // For `npm run bench` (scripts/bench.ts): the same figures as JSON.
+  // For `npm run bench` (bench/bench.ts): the same figures as JSON.
   const reencode = results.reencode as { times: number[]; peakRssMb: number } | undefined;
   const table = results.tastingTable as { p95: number; rps: number; cpuMsPerRequest: number };
   writeBenchResults({

@@ -1,5 +1,5 @@
 // npm run bench:pages — requests per second and p95 latency of a public lesson page and of the
-// Brine bench, served by the app (server.ts, what `npm start` runs) and, as the yardstick, by nginx serving the same
+// Brine bench, served by the app (`next start`, what `npm start` runs) and, as the yardstick, by nginx serving the same
 // HTML saved to files. Also prints the first-load JS of a lesson page against a bare page.
 //
 // With BENCH_TARGET containing `cluster` (the default is `direct,cluster`) it also measures the
@@ -25,8 +25,8 @@ import zlib from 'node:zlib';
 import { waitForOk } from '../lib/migrator';
 import { ratioFigure, writeBenchResults, type BenchFigure } from './bench-results';
 import { cpuMsOfTree } from './bench-support';
-import { ensureNginx, freePort } from './cluster/nginx';
-import { startAppServer } from './app-server';
+import { ensureNginx, freePort } from '../scripts/cluster/nginx';
+import { startAppServer } from '../scripts/app-server';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: object) => AutocannonInstance;
@@ -137,7 +137,7 @@ function startNginx(nginx: string, dir: string, proxyPort: number | null) {
   const conf = path.join(dir, 'nginx.conf');
   fs.writeFileSync(
     conf,
-    `# Written by scripts/bench-pages.ts: static files on loopback, no logging.
+    `# Written by bench/bench-pages.ts: static files on loopback, no logging.
 ${process.getuid?.() === 0 ? 'user root;' : ''}
 daemon off;
 worker_processes ${os.availableParallelism()};
@@ -223,20 +223,6 @@ async function firstLoadJs(pagePath: string) {
 
 const kb = (n: number) => `${(n / 1024).toFixed(1)} kB`;
 
-/**
- * Next keeps a prerendered page's HTML as one JavaScript string and sends it from that string on
- * every request. A single character outside Latin-1 (… ⚠ – ’ ≥ …) makes V8 store the whole page
- * two bytes a character; above 128 kB (a page of more than ~65,000 characters) such a string sits
- * in V8's large-object space and every request pays for fresh large allocations (mmap/munmap,
- * extra GC). Measured on the acidity lesson (73,500 characters, one … and one ⚠): 4.6 ms of
- * server CPU per request against 1.4 ms for the same page with those two replaced.
- */
-function twoByteWarning(html: string): string | null {
-  const wide = [...new Set([...html].filter((c) => c.charCodeAt(0) > 0xff))];
-  if (!wide.length || html.length * 2 <= 128 * 1024) return null;
-  return `${html.length} characters with ${wide.length} outside Latin-1 (${wide.join(' ')}): V8 holds it as a ${kb(html.length * 2)} two-byte string, over the 128 kB large-object limit, so each request costs several times the CPU of the same page in Latin-1 — replace those characters in the components or content that render them`;
-}
-
 async function main() {
   const env = appEnv();
   ensureBuild(env);
@@ -260,11 +246,6 @@ async function main() {
     if (!response.ok) throw new Error(`${page.path} answered ${response.status}`);
     const html = await response.text();
     fs.writeFileSync(path.join(dir, 'www', page.file), html);
-    const warning = twoByteWarning(html);
-    if (warning) {
-      log(`WARNING ${page.path}: ${warning}`);
-      warnings.push(`Warning: ${page.path}: ${warning}`);
-    }
   }
   const proxyPort = targets.includes('cluster') ? await freePort() : null;
   const proxyUrl = `http://127.0.0.1:${proxyPort}`;
@@ -319,7 +300,7 @@ async function main() {
     const ratio = appRun.rps / nginxRun.rps;
     log(`${page.name}: app/nginx requests per second = ${ratio.toFixed(2)}× (goal ≥ 0.50×) ${ratio >= 0.5 ? 'met' : 'NOT met'}`);
     const anchor = { name: 'nginx serving the same HTML from a file', value: nginxRun.rps };
-    figures.push({ ...ratioFigure(`${page.path}: the app alone (server.ts), req/s`, appRun.rps, 'req/s', anchor, 0.5) });
+    figures.push({ ...ratioFigure(`${page.path}: the app alone (next start), req/s`, appRun.rps, 'req/s', anchor, 0.5) });
     const cpuRatio = nginxRun.nginxCpuMs / appRun.appCpuMs;
     // nginx's share of one core during its run: far below 1, the load generator (autocannon, one
     // JavaScript thread on the same machine) set the pace, and the req/s ratio says little.

@@ -4,9 +4,9 @@
 // the same size. Prints requests/s, p95 and the ratio. Goals: >= 0.5x the bare handler, p95 < 100 ms.
 // Two floors under the same load, for reading the ratio: the app's health route (one SELECT 1, no
 // session) and a calculator route (no session, no database), which is what Next itself costs.
-// WEB_CONCURRENCY=<n> runs the app as n processes (server.ts); the bare handler stays one process.
+// The app is one `next start` process, like the bare handler (several processes go behind nginx: demo:cluster).
 // BENCH_CPU_PROF=<folder>: run the app under `node --cpu-prof` and write its profile there
-// (summarise with `tsx scripts/cpu-profile-summary.ts <folder>`).
+// (summarise with `tsx bench/cpu-profile-summary.ts <folder>`).
 import { spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import http from 'node:http';
@@ -19,7 +19,7 @@ import { rebuildDatabase, waitForOk } from '../lib/migrator';
 import { COMPUTE_FNS } from '../lib/quiz/compute';
 import { drawQuestions, rightAnswer, type Answers } from '../lib/quiz/grading';
 import { parseBankFile, resolveBanks } from '../lib/quiz/resolve';
-import { startAppServer, stopAppServer } from './app-server';
+import { startAppServer, stopAppServer } from '../scripts/app-server';
 import { cpuMsOfTree } from './bench-support';
 import { ratioFigure, writeBenchResults } from './bench-results';
 
@@ -37,7 +37,6 @@ const ATTEMPTS = Number(process.env.BENCH_ATTEMPTS ?? 40_000);
 const CPU_PROF = process.env.BENCH_CPU_PROF ? path.resolve(process.env.BENCH_CPU_PROF) : undefined;
 const QUIZ = 'pickling-and-canning--acidity';
 const TOOL_PATH = '/api/tools/convert?value=1&from=cup&to=mL';
-const WORKERS = Number(process.env.WEB_CONCURRENCY ?? 1);
 const LEARNER = { email: 'learner@cedarhollow.example', password: 'demo-learner-pass' };
 
 const dbUrl = process.env.BENCH_DATABASE_URL;
@@ -250,11 +249,10 @@ async function main() {
     console.log(`bare (one INSERT)        : ${fmt(bareRun)}`);
     if (floorRun) console.log(`floor (app, GET /api/health, one SELECT 1): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
     if (toolRun) console.log(`framework floor (app, GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
-    console.log(`app processes: ${WORKERS} (WEB_CONCURRENCY)`);
     const la = (l: number[]) => l.map((x) => x.toFixed(2)).join(' ');
     console.log(`load average (1, 5, 15 min): ${la(loadBefore)} before, ${la(os.loadavg())} after (2-core machine: above 2 the figures are noisy)`);
     console.log(`ratio app/bare           : ${ratio.toFixed(2)}x  (goal >= 0.5x: ${ratio >= 0.5 ? 'met' : 'not met'}); app p95 ${appRun.p95.toFixed(1)} ms (goal < 100 ms: ${appRun.p95 < 100 ? 'met' : 'not met'})`);
-    // For `npm run bench` (scripts/bench.ts): the same figures as JSON.
+    // For `npm run bench` (bench/bench.ts): the same figures as JSON.
     writeBenchResults({
       bench: 'grading',
       loadAverage: { before: loadBefore, after: os.loadavg() },
@@ -264,7 +262,7 @@ async function main() {
         ...(appRun.cpuMsPerRequest === undefined ? [] : [{ name: 'graded quiz submission, server CPU per request', value: appRun.cpuMsPerRequest, unit: 'ms', ...(bareRun.cpuMsPerRequest === undefined ? {} : { anchor: { name: 'bare handler', value: bareRun.cpuMsPerRequest, unit: 'ms' } }) }]),
       ],
       notes: [
-        `app (${WORKERS} process${WORKERS === 1 ? '' : 'es'}, WEB_CONCURRENCY): ${fmt(appRun)}`,
+        `app (one next start process): ${fmt(appRun)}`,
         `bare: ${fmt(bareRun)}`,
         ...(floorRun ? [`floor (GET /api/health): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`] : []),
         ...(toolRun ? [`framework floor (GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`] : []),

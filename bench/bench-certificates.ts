@@ -96,7 +96,7 @@ async function main() {
       2,
     ),
   );
-  // For `npm run bench` (scripts/bench.ts): the same figures as JSON.
+  // For `npm run bench` (bench/bench.ts): the same figures as JSON.
   writeBenchResults({
     bench: 'certificates',
     figures: [
