@@ -4,5 +4,10 @@ export async function register() {
   if (process.env.NEXT_RUNTIME === 'nodejs') {
     const { getEnv } = await import('./lib/env');
     getEnv();
+    // `next build` may load this file too; the database is not the build's business.
+    if (process.env.NEXT_PHASE !== 'phase-production-build') {
+      const { syncCoursesAtStart } = await import('./lib/courses/start');
+      await syncCoursesAtStart();
+    }
   }
 }
