@@ -157,6 +157,7 @@ const routes: RouteRow[] = [
     expect: [401, 409, 404, 403, 403, 403],
   },
   { kind: 'route', pattern: '/api/courses/[course]/workshops', method: 'GET', probe: at(`/api/courses/${FLAGSHIP}/workshops`), expect: PUBLIC },
+  { kind: 'route', pattern: '/api/desk/certificates/[id]/reissue', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/reissue`, body: {} }), expect: COORDINATOR_WRITE },
   { kind: 'route', pattern: '/api/desk/certificates/[id]/revoke', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/revoke`, body: {} }), expect: COORDINATOR_WRITE },
   // An enrollment that does not exist: answered per id (200, not_found), nothing issued.
   { kind: 'route', pattern: '/api/desk/certificates', method: 'POST', probe: () => ({ path: '/api/desk/certificates', body: { enrollmentIds: [2_000_000_000] } }), expect: COORDINATOR_READ },
