@@ -10,6 +10,7 @@ import { SiteHeader } from '@/components/site-header';
 export const metadata: Metadata = {
   title: { default: 'Brinewright', template: '%s · Brinewright' },
   description: 'Learn to pickle and can safely: lessons with working calculators, quizzes, workshops and certificates for home canners.',
+  manifest: '/manifest.webmanifest',
 };
 
 export default function RootLayout({ children }: { children: ReactNode }) {

@@ -12,6 +12,7 @@ import { Payment } from './payment';
 import { PaymentEvent } from './payment-event';
 import { Practical } from './practical';
 import { PracticalPhoto } from './practical-photo';
+import { ProgramSetting } from './program-setting';
 import { QuizAttempt } from './quiz-attempt';
 import { Review } from './review';
 import { SignInThrottle } from './sign-in-throttle';
@@ -32,6 +33,7 @@ const registry = {
   PaymentEvent,
   Practical,
   PracticalPhoto,
+  ProgramSetting,
   QuizAttempt,
   Review,
   SignInThrottle,

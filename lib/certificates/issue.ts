@@ -4,6 +4,7 @@ import { audit } from '@/lib/audit';
 import { enqueueEmail } from '@/lib/email/outbox';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
+import { getProgramIdentity } from '@/lib/program/settings';
 import { roleAllows } from '@/lib/roles';
 import { db } from '@/models';
 import { certificateIssuedEmail } from '@/lib/email/templates';
@@ -22,7 +23,8 @@ export type IssueOutcome =
   | { enrollmentId: number; outcome: 'not_eligible'; missing: RequirementKey[] }
   | { enrollmentId: number; outcome: 'not_found' };
 
-export const programName = () => getEnv().CERTIFICATE_PROGRAM_NAME;
+/** The name certificates carry: the program's settings page, else CERTIFICATE_PROGRAM_NAME. */
+export const programName = async (transaction?: Transaction) => (await getProgramIdentity({ transaction })).name;
 
 export const SIGNER_TITLE = 'Program coordinator';
 
@@ -90,7 +92,7 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
         const serial = generateSerial();
         const validUntil = validUntilFor({ courseSlug: row.courseSlug, validityMonths: row.validityMonths, issuedAt: now, prior: standing.prior });
         // What the certificate says is fixed here: later renames never reach it (a correction is a reissue).
-        const wording = { holderName: row.learnerName, courseTitle: row.courseTitle, programName: programName(), ...(await signerFor(actorId, transaction)) };
+        const wording = { holderName: row.learnerName, courseTitle: row.courseTitle, programName: await programName(transaction), ...(await signerFor(actorId, transaction)) };
         const certificate = await Certificate.create({ enrollmentId, userId: row.userId, issuedById: actorId, serial, issuedAt: now, validUntil, ...wording }, { transaction });
         // Through the one state machine (it audits the move as well).
         if (row.status === 'active') await transitionEnrollment(enrollmentId, 'completed', { transaction, actorId, reason: 'certificate', data: { serial } });
@@ -149,7 +151,7 @@ export async function reissueCertificate(certificateId: number, actorId: number,
           },
           { transaction },
         );
-        const wording: Wording = { holderName: input.holderName?.trim() || holder.name, courseTitle: course.title, programName: programName(), ...(await signerFor(actorId, transaction)) };
+        const wording: Wording = { holderName: input.holderName?.trim() || holder.name, courseTitle: course.title, programName: await programName(transaction), ...(await signerFor(actorId, transaction)) };
         await certificate.update({ ...wording, serial: generateSerial(), version: certificate.version + 1 }, { transaction });
         await audit(
           { actorId, action: 'certificate.reissued', subjectType: 'certificate', subjectId: certificate.id, data: { fromSerial: previous.serial, toSerial: certificate.serial, version: certificate.version, reason: input.reason } },

@@ -254,6 +254,8 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/enrollments/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam } },
   'app/api/enrollments/route.ts#POST': { who: ['learner'], body: badJsonBodies(enrollFields) },
   'app/api/health/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
+  'app/api/program/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
+  'app/api/program/logo/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
   'app/api/pantry/route.ts#GET': { who: ['learner'], query: badQuery([]), mayAnswerOk: true },
   'app/api/photos/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam }, query: badQuery(['size'], { size: fc.constantFrom('thumb', 'full') }) },
   'app/api/photos/route.ts#POST': { who: ['learner'], special: 'photo-upload' },

@@ -1,0 +1,13 @@
+import { getProgramIdentity } from '@/lib/program/settings';
+import { route } from '@/lib/errors';
+
+export const dynamic = 'force-dynamic';
+
+/** GET /api/program — the program's public identity for the header (name, short name, contact, whether a logo exists). */
+export const GET = route(async () => {
+  const p = await getProgramIdentity();
+  return Response.json(
+    { name: p.name, shortName: p.shortName, contactEmail: p.contactEmail, contactPhone: p.contactPhone, logo: p.logoKey ? `/api/program/logo?v=${p.logoKey.slice(-24, -4)}` : null },
+    { headers: { 'Cache-Control': 'public, max-age=60' } },
+  );
+});
