@@ -25,6 +25,9 @@ export class Certificate extends Model<InferAttributes<Certificate>, InferCreati
   declare signerName: CreationOptional<string | null>;
   declare signerTitle: CreationOptional<string | null>;
   declare version: CreationOptional<number>;
+  /** The serial an imported certificate had in the program's earlier records; verification accepts it too. */
+  declare legacySerial: CreationOptional<string | null>;
+  declare importedAt: CreationOptional<Date | null>;
   declare issuedAt: Date;
   declare validUntil: Date;
   declare revokedAt: CreationOptional<Date | null>;
@@ -40,6 +43,8 @@ export class Certificate extends Model<InferAttributes<Certificate>, InferCreati
         serial: { type: DataTypes.STRING(32), allowNull: false, unique: true },
         ...WORDING_ATTRIBUTES,
         version: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 1 },
+        legacySerial: { type: DataTypes.STRING(40), allowNull: true, unique: true },
+        importedAt: { type: DataTypes.DATE, allowNull: true },
         issuedAt: { type: DataTypes.DATE, allowNull: false },
         validUntil: { type: DataTypes.DATE, allowNull: false },
         revokedAt: { type: DataTypes.DATE, allowNull: true },

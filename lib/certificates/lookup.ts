@@ -48,9 +48,10 @@ type CertificateRecord = {
 const STORED = 'ce.id, ce.userId, ce.issuedAt, ce.validUntil, ce.revokedAt, ce.serial AS currentSerial';
 const WORDING = 'holderName, courseTitle, programName, signerName, signerTitle';
 
-async function findBySerial(serial: string): Promise<CertificateRecord | null> {
+async function findBySerial(serial: string, legacy = false): Promise<CertificateRecord | null> {
+  // An imported certificate is also found by the serial of the program's earlier records.
   const [row] = await db().sequelize.query<CertificateRecord>(
-    `SELECT ${STORED}, ce.serial, ${WORDING.split(', ').map((f) => `ce.${f}`).join(', ')}, NULL AS replacedAt FROM certificates ce WHERE ce.serial = :serial
+    `SELECT ${STORED}, ce.serial, ${WORDING.split(', ').map((f) => `ce.${f}`).join(', ')}, NULL AS replacedAt FROM certificates ce WHERE ce.${legacy ? 'legacySerial' : 'serial'} = :serial
      UNION ALL
      SELECT ${STORED}, v.serial, ${WORDING.split(', ').map((f) => `v.${f}`).join(', ')}, v.replacedAt FROM certificate_versions v JOIN certificates ce ON ce.id = v.certificateId WHERE v.serial = :serial
      LIMIT 1`,
@@ -64,12 +65,12 @@ async function findBySerial(serial: string): Promise<CertificateRecord | null> {
 /** Looks a serial up for the public check; no throttle (see verifyForAddress). */
 export async function verifySerial(input: string, now: Date = new Date()): Promise<Verification> {
   const serial = normalizeSerial(input);
-  if (!serial) return { found: false, serial: input.slice(0, 40), reason: 'malformed' };
-  const cert = await findBySerial(serial);
-  if (!cert) return { found: false, serial, reason: 'unknown' };
+  const old = input.trim().slice(0, 40);
+  const cert = (serial ? await findBySerial(serial) : null) ?? (old ? await findBySerial(old, true) : null);
+  if (!cert) return serial ? { found: false, serial, reason: 'unknown' } : { found: false, serial: input.slice(0, 40), reason: 'malformed' };
   return {
     found: true,
-    serial,
+    serial: serial && cert ? serial : old,
     state: certificateState(cert, now),
     learnerName: cert.holderName,
     courseTitle: cert.courseTitle,
