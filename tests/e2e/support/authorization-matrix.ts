@@ -67,6 +67,7 @@ const LEARNER_WRITE: Answers = [401, 400, NA, 403, 403, 403];
 const pages: PageRow[] = [
   { kind: 'page', pattern: '/', probe: at('/'), expect: PUBLIC },
   { kind: 'page', pattern: '/admin/users', probe: at('/admin/users'), expect: [S, 403, NA, 403, 403, 200] },
+  { kind: 'page', pattern: '/desk/import', probe: at('/desk/import'), expect: COORDINATOR_PAGE },
   { kind: 'page', pattern: '/admin/program', probe: at('/admin/program'), expect: [S, 403, NA, 403, 403, 200] },
   { kind: 'page', pattern: '/bench', probe: at('/bench'), expect: PUBLIC },
   // Another learner's enrollment number in the address shows nothing of theirs.
@@ -226,6 +227,8 @@ const routes: RouteRow[] = [
 ];
 
 const actions: ActionRow[] = [
+  { kind: 'action', pattern: '/desk/import', action: 'importAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
+  { kind: 'action', pattern: '/desk/import', action: 'previewImportAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
   { kind: 'action', pattern: '/admin/program', action: 'saveProgramAction', expect: [401, 403, NA, 403, 403, 'pass'] },
   { kind: 'action', pattern: '/admin/users', action: 'changeRoleAction', expect: [401, 403, NA, 403, 403, 'pass'] },
   { kind: 'action', pattern: '/desk/workshops', action: 'saveWorkshopAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
