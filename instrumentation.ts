@@ -5,5 +5,10 @@ export async function register() {
     const { getEnv } = await import('./lib/env');
     const { refuseDemoSettings } = await import('./lib/production-check');
     refuseDemoSettings(getEnv());
+    // `next build` may load this file too; the database is not the build's business.
+    if (process.env.NEXT_PHASE !== 'phase-production-build') {
+      const { syncCoursesAtStart } = await import('./lib/courses/start');
+      await syncCoursesAtStart();
+    }
   }
 }

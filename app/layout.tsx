@@ -14,6 +14,7 @@ export const revalidate = 300;
 export const metadata: Metadata = {
   title: { default: 'Brinewright', template: '%s · Brinewright' },
   description: 'Learn to pickle and can safely: lessons with working calculators, quizzes, workshops and certificates for home canners.',
+  manifest: '/manifest.webmanifest',
 };
 
 export default function RootLayout({ children }: { children: ReactNode }) {

@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { Logo } from '@/components/logo';
 import { LinkPending } from '@/components/ui/link-pending';
 import { PUBLIC_NAV } from '@/lib/nav';
+import { ProgramBadge } from './program/program-badge';
 import { UserNav } from './user-nav';
 
 /** Static header; the signed-in part is a client leaf so public pages stay static. */
@@ -15,6 +16,7 @@ export function SiteHeader() {
         <Link href="/" className="no-underline" aria-label="Brinewright home">
           <Logo />
         </Link>
+        <ProgramBadge />
         <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-x-4 gap-y-1">
           {PUBLIC_NAV.map((item) => (
             <Link key={item.href} href={item.href} className="relative text-sm font-medium text-brine-50 no-underline hover:text-white hover:underline">

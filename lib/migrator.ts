@@ -2,6 +2,7 @@ import path from 'node:path';
 import { createRequire } from 'node:module';
 import { Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
+import { syncCourses } from './courses/sync';
 import { createSequelize } from './db';
 
 type Step = { up: (qi: unknown, S: typeof Sequelize) => Promise<unknown>; down: (qi: unknown, S: typeof Sequelize) => Promise<unknown> };
@@ -35,8 +36,15 @@ function umzugFor(sequelize: Sequelize, folder: 'migrations' | 'seeders', tableN
 export const migrator = (sequelize: Sequelize) => umzugFor(sequelize, 'migrations', 'SequelizeMeta');
 export const seeder = (sequelize: Sequelize) => umzugFor(sequelize, 'seeders', 'SequelizeData');
 
+/** What `npm run db:migrate` does: the pending migrations, then the course rows brought in line with content/courses/. */
+export async function migrateAndSync(sequelize: Sequelize): Promise<{ migrations: string[]; courses: Awaited<ReturnType<typeof syncCourses>> }> {
+  const done = await migrator(sequelize).up();
+  return { migrations: done.map((m) => m.name), courses: await syncCourses(sequelize) };
+}
+
 /**
- * Drops and recreates the database named in `url`, then migrates it (and seeds it with `seed`).
+ * Drops and recreates the database named in `url`, then migrates it (and, with `seed`, brings the
+ * courses in from content/ and seeds the demo program).
  * Only names matching `allowed` are touched, so a test or benchmark can never wipe the demo's data.
  */
 export async function rebuildDatabase(url: string, options: { allowed: RegExp; purpose: string; seed?: boolean }): Promise<void> {
@@ -53,8 +61,12 @@ export async function rebuildDatabase(url: string, options: { allowed: RegExp; p
   }
   const sequelize = createSequelize(url);
   try {
-    await migrator(sequelize).up();
-    if (options.seed) await seeder(sequelize).up();
+    if (options.seed) {
+      await migrateAndSync(sequelize);
+      await seeder(sequelize).up();
+    } else {
+      await migrator(sequelize).up();
+    }
   } finally {
     await sequelize.close();
   }

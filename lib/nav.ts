@@ -14,6 +14,7 @@ export const ROLE_NAV: readonly NavItem[] = [
   { href: '/tasting-table', label: 'Tasting table', roles: ['instructor', 'coordinator', 'admin'] },
   { href: '/desk', label: 'Certificate desk', roles: ['coordinator', 'admin'] },
   { href: '/admin/users', label: 'Users and roles', roles: ['admin'] },
+  { href: '/admin/program', label: 'Program', roles: ['admin'] },
 ];
 
 export function navFor(role: Role | null): NavItem[] {

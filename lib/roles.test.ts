@@ -24,6 +24,6 @@ describe('navFor', () => {
     expect(navFor('learner').map((i) => i.label)).toEqual(['Pantry']);
     expect(navFor('instructor').map((i) => i.label)).toEqual(['Tasting table']);
     expect(navFor('coordinator').map((i) => i.label)).toEqual(['Tasting table', 'Certificate desk']);
-    expect(navFor('admin').map((i) => i.label)).toEqual(['Tasting table', 'Certificate desk', 'Users and roles']);
+    expect(navFor('admin').map((i) => i.label)).toEqual(['Tasting table', 'Certificate desk', 'Users and roles', 'Program']);
   });
 });

@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { AuditLog } from './audit-log';
 import { Certificate } from './certificate';
+import { CertificateVersion } from './certificate-version';
 import { Course } from './course';
 import { Enrollment } from './enrollment';
 import { FeeWaiver } from './fee-waiver';
@@ -11,6 +12,7 @@ import { Payment } from './payment';
 import { PaymentEvent } from './payment-event';
 import { Practical } from './practical';
 import { PracticalPhoto } from './practical-photo';
+import { ProgramSetting } from './program-setting';
 import { QuizAnswer } from './quiz-answer';
 import { QuizAttempt } from './quiz-attempt';
 import { Review } from './review';
@@ -21,6 +23,7 @@ import { Workshop } from './workshop';
 const registry = {
   AuditLog,
   Certificate,
+  CertificateVersion,
   Course,
   Enrollment,
   FeeWaiver,
@@ -30,6 +33,7 @@ const registry = {
   PaymentEvent,
   Practical,
   PracticalPhoto,
+  ProgramSetting,
   QuizAnswer,
   QuizAttempt,
   Review,
@@ -75,6 +79,8 @@ function associate() {
   Certificate.belongsTo(User, { foreignKey: fk('userId'), as: 'user' });
   Certificate.belongsTo(User, { foreignKey: fk('issuedById', true), as: 'issuedBy' });
   Enrollment.hasOne(Certificate, { foreignKey: fk('enrollmentId'), as: 'certificate' });
+  CertificateVersion.belongsTo(Certificate, { foreignKey: fk('certificateId'), as: 'certificate' });
+  CertificateVersion.belongsTo(User, { foreignKey: fk('replacedById', true), as: 'replacedBy' });
 
   Payment.belongsTo(Enrollment, { foreignKey: fk('enrollmentId'), as: 'enrollment' });
   Enrollment.hasMany(Payment, { foreignKey: fk('enrollmentId'), as: 'payments' });

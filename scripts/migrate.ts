@@ -1,8 +1,14 @@
-// Usage: tsx scripts/migrate.ts up | down | seed | unseed | reset
-// Reads DATABASE_URL like the app does.
+// Usage: tsx scripts/migrate.ts up | sync | down | seed | unseed | reset
+// Reads DATABASE_URL like the app does. `up` applies the migrations and then brings the courses
+// table in line with content/courses/; `sync` does only the second part.
 import { createSequelize } from '../lib/db';
 import { parseEnv } from '../lib/env';
-import { migrator, seeder } from '../lib/migrator';
+import { syncCourses, type SyncReport } from '../lib/courses/sync';
+import { migrateAndSync, migrator, seeder } from '../lib/migrator';
+
+function printCourses(report: SyncReport) {
+  console.log(`[courses] ${report.lines.length ? report.lines.join('; ') : 'in line with content/courses/, nothing changed'}`);
+}
 
 async function main() {
   const command = process.argv[2] ?? 'up';
@@ -14,8 +20,11 @@ async function main() {
   const sequelize = createSequelize(env.DATABASE_URL);
   try {
     if (command === 'up') {
-      const done = await migrator(sequelize).up();
-      console.log(`[migrate] applied ${done.length} migration(s)${done.length ? ': ' + done.map((m) => m.name).join(', ') : ''}`);
+      const { migrations, courses } = await migrateAndSync(sequelize);
+      console.log(`[migrate] applied ${migrations.length} migration(s)${migrations.length ? ': ' + migrations.join(', ') : ''}`);
+      printCourses(courses);
+    } else if (command === 'sync') {
+      printCourses(await syncCourses(sequelize));
     } else if (command === 'down') {
       await migrator(sequelize).down();
       console.log('[migrate] reverted the last migration');
@@ -28,11 +37,11 @@ async function main() {
     } else if (command === 'reset') {
       await seeder(sequelize).down({ to: 0 });
       await migrator(sequelize).down({ to: 0 });
-      await migrator(sequelize).up();
+      printCourses((await migrateAndSync(sequelize)).courses);
       await seeder(sequelize).up();
       console.log('[migrate] database rebuilt and seeded');
     } else {
-      throw new Error(`unknown command "${command}": use up, down, seed, unseed or reset`);
+      throw new Error(`unknown command "${command}": use up, sync, down, seed, unseed or reset`);
     }
   } finally {
     await sequelize.close();

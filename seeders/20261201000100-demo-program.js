@@ -10,11 +10,6 @@ const ACCOUNTS = [
   { email: 'admin@cedarhollow.example', name: 'Dale Okafor', role: 'admin', password: 'demo-admin-pass' },
 ];
 
-const COURSES = [
-  { slug: 'pickling-and-canning', title: 'Safe Pickling and Water-Bath Canning', feeCents: 4500, currency: 'usd', passMarkPct: 80, validityMonths: 36 },
-  { slug: 'volunteer-refresher', title: 'Volunteer Refresher: Acid, Time and Altitude', feeCents: 1500, currency: 'usd', passMarkPct: 80, validityMonths: 36 },
-];
-
 const DAY = 24 * 60 * 60 * 1000;
 
 /** @type {import('sequelize-cli').Migration} */
@@ -34,8 +29,9 @@ module.exports = {
         updatedAt: now,
       })),
     );
-    await queryInterface.bulkInsert('courses', COURSES.map((c) => ({ ...c, createdAt: now, updatedAt: now })));
-    const [[course]] = await queryInterface.sequelize.query("SELECT id FROM courses WHERE slug = 'pickling-and-canning'");
+    // Course rows come from content/courses/ through `npm run db:migrate` (lib/courses/sync.ts), as in a real program.
+    const [[course]] = await queryInterface.sequelize.query("SELECT id, feeCents FROM courses WHERE slug = 'pickling-and-canning'");
+    if (!course) throw new Error('the courses table is empty: run `npm run db:migrate` (it brings the courses in from content/courses/) before seeding');
     const [[instructor]] = await queryInterface.sequelize.query("SELECT id FROM users WHERE email = 'instructor@cedarhollow.example'");
     // Workshops start at 9:00 local time (Mountain time, UTC-7 in winter) two and five weeks from the seed.
     const at = (days, hourUtc) => {
@@ -51,7 +47,7 @@ module.exports = {
     const [[learner]] = await queryInterface.sequelize.query("SELECT id FROM users WHERE email = 'learner@cedarhollow.example'");
     const [[workshop]] = await queryInterface.sequelize.query('SELECT id FROM workshops WHERE courseId = ? ORDER BY startsAt LIMIT 1', { replacements: [course.id] });
     await queryInterface.bulkInsert('enrollments', [
-      { userId: learner.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'active', feeCents: 4500, createdAt: now, updatedAt: now },
+      { userId: learner.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'active', feeCents: course.feeCents, createdAt: now, updatedAt: now },
     ]);
     const [[enrollment]] = await queryInterface.sequelize.query('SELECT id FROM enrollments WHERE userId = ?', { replacements: [learner.id] });
     await queryInterface.bulkInsert('payments', [
@@ -63,7 +59,6 @@ module.exports = {
     await queryInterface.bulkDelete('payments', { checkoutSessionId: 'cs_demo_seeded_0001' });
     await queryInterface.bulkDelete('enrollments', {});
     await queryInterface.bulkDelete('workshops', {});
-    await queryInterface.bulkDelete('courses', { slug: COURSES.map((c) => c.slug) });
     await queryInterface.bulkDelete('users', { email: ACCOUNTS.map((a) => a.email) });
   },
 };

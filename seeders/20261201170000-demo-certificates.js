@@ -65,10 +65,10 @@ module.exports = {
       'users',
       LEARNERS.map((a) => ({ email: a.email, name: a.name, role: 'learner', passwordHash: bcrypt.hashSync(a.password, 10), emailVerifiedAt: now, createdAt: now, updatedAt: now })),
     );
-    const [[course]] = await q("SELECT id, validityMonths FROM courses WHERE slug = 'pickling-and-canning'");
+    const [[course]] = await q("SELECT id, title, validityMonths FROM courses WHERE slug = 'pickling-and-canning'");
     const [[instructor]] = await q("SELECT id FROM users WHERE email = 'instructor@cedarhollow.example'");
     const [[ines]] = await q('SELECT id FROM users WHERE email = ?', [LEARNERS[0].email]);
-    const [[wren]] = await q('SELECT id FROM users WHERE email = ?', [LEARNERS[1].email]);
+    const [[wren]] = await q('SELECT id, name FROM users WHERE email = ?', [LEARNERS[1].email]);
 
     // Two past workshops: three weeks ago (Inés) and nearly three years ago (Wren).
     const past = (msAgo) => {
@@ -109,9 +109,9 @@ module.exports = {
         { enrollmentId: enrollment.id, userId: user.id, round: 1, status: 'approved', details: JSON.stringify(approvedBatch(when)), flags: '[]', submittedAt: when, createdAt: when, updatedAt: when },
       ]);
     }
-    const [[coordinator]] = await q("SELECT id FROM users WHERE email = 'coordinator@cedarhollow.example'");
+    const [[coordinator]] = await q("SELECT id, name FROM users WHERE email = 'coordinator@cedarhollow.example'");
     await queryInterface.bulkInsert('certificates', [
-      { enrollmentId: wrenEnrollment.id, userId: wren.id, issuedById: coordinator.id, serial: WREN_SERIAL, issuedAt: longAgo, validUntil: addMonths(longAgo, course.validityMonths), createdAt: longAgo, updatedAt: longAgo },
+      { enrollmentId: wrenEnrollment.id, userId: wren.id, issuedById: coordinator.id, serial: WREN_SERIAL, holderName: wren.name, courseTitle: course.title, programName: 'Cedar Hollow County home-preserving program', signerName: coordinator.name, signerTitle: 'Program coordinator', issuedAt: longAgo, validUntil: addMonths(longAgo, course.validityMonths), createdAt: longAgo, updatedAt: longAgo },
     ]);
   },
 

@@ -8,6 +8,7 @@ const LINKS = [
   { href: '/desk/payments', label: 'Payments and refunds' },
   { href: '/desk/waivers', label: 'Fee waivers' },
   { href: '/desk/reports', label: 'Reports' },
+  { href: '/desk/import', label: 'Import holders' },
 ];
 
 export default function DeskLayout({ children }: { children: ReactNode }) {

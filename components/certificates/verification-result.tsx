@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { Badge } from '@/components/ui/badge';
 import type { Verification } from '@/lib/certificates/lookup';
 
@@ -8,6 +9,7 @@ const STATE = {
   expired: { label: 'Expired', tone: 'honey', sentence: 'This certificate was genuine but has expired.' },
   revoked: { label: 'Revoked', tone: 'beet', sentence: 'This certificate was revoked by the program and is no longer valid.' },
 } as const;
+const REPLACED = { label: 'Replaced', tone: 'honey', sentence: 'This certificate was replaced by a corrected one.' } as const;
 
 /** The public answer: the state, the name, the course and the dates, and nothing more. */
 export function VerificationResult({ result }: { result: Verification }) {
@@ -24,7 +26,7 @@ export function VerificationResult({ result }: { result: Verification }) {
       </div>
     );
   }
-  const state = STATE[result.state];
+  const state = result.replaced ? REPLACED : STATE[result.state];
   return (
     <section aria-labelledby="result-heading" className="rounded-jar border border-brine-100 bg-white p-5 shadow-shelf">
       <div className="mb-3 flex items-center gap-3">
@@ -33,6 +35,15 @@ export function VerificationResult({ result }: { result: Verification }) {
         </h2>
         <Badge tone={state.tone}>{state.label}</Badge>
       </div>
+      {result.replaced ? (
+        <p className="mb-3">
+          On {formatDate(result.replaced.at)} the program corrected this certificate and issued it again as{' '}
+          <Link className="font-mono" href={`/verify/${result.replaced.bySerial}`}>
+            {result.replaced.bySerial}
+          </Link>
+          . Check that serial for the certificate in force; below is what this one said.
+        </p>
+      ) : null}
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2">
         <dt className="font-semibold">Serial</dt>
         <dd className="font-mono">{result.serial}</dd>
@@ -40,6 +51,8 @@ export function VerificationResult({ result }: { result: Verification }) {
         <dd>{result.learnerName}</dd>
         <dt className="font-semibold">Course</dt>
         <dd>{result.courseTitle}</dd>
+        <dt className="font-semibold">Program</dt>
+        <dd>{result.programName}</dd>
         <dt className="font-semibold">Issued</dt>
         <dd>{formatDate(result.issuedAt)}</dd>
         <dt className="font-semibold">Valid until</dt>

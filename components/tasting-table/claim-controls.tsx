@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormAlert } from '@/components/ui/form-alert';
 import { useHydrated } from '@/components/ui/use-hydrated';
+import { errorMessage, fetchJson } from '@/lib/fetcher';
 
 /** Claim a waiting round to decide on it, or give the claim back (a coordinator may release anyone's). */
 export function ClaimControls({ practicalId, action }: { practicalId: number; action: 'claim' | 'release' }) {
@@ -17,12 +18,10 @@ export function ClaimControls({ practicalId, action }: { practicalId: number; ac
     setPending(true);
     setError(null);
     try {
-      const response = await fetch(`/api/practicals/${practicalId}/claim`, { method: action === 'claim' ? 'POST' : 'DELETE' });
-      const body = await response.json().catch(() => ({}));
-      if (!response.ok) setError(body.message ?? 'That did not work. Please reload the page and try again.');
-      else router.refresh();
-    } catch {
-      setError('Brinewright could not be reached; try again.');
+      await fetchJson(`/api/practicals/${practicalId}/claim`, { method: action === 'claim' ? 'POST' : 'DELETE' });
+      router.refresh();
+    } catch (error) {
+      setError(errorMessage(error, 'That did not work. Please reload the page and try again.'));
     } finally {
       setPending(false);
     }

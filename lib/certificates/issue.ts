@@ -4,6 +4,8 @@ import { audit } from '@/lib/audit';
 import { enqueueEmail } from '@/lib/email/outbox';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
+import { getProgramIdentity } from '@/lib/program/settings';
+import { roleAllows } from '@/lib/roles';
 import { db } from '@/models';
 import { certificateIssuedEmail, certificateRevokedEmail } from '@/lib/email/templates';
 import { transitionEnrollment } from '@/lib/enrollment/state';
@@ -20,7 +22,18 @@ export type IssueOutcome =
   | { enrollmentId: number; outcome: 'not_eligible'; missing: RequirementKey[] }
   | { enrollmentId: number; outcome: 'not_found' };
 
-export const programName = () => getEnv().CERTIFICATE_PROGRAM_NAME;
+/** The name certificates carry: the program's settings page, else CERTIFICATE_PROGRAM_NAME. */
+export const programName = async (transaction?: Transaction) => (await getProgramIdentity({ transaction })).name;
+
+export const SIGNER_TITLE = 'Program coordinator';
+
+/** Who signs: the coordinator or admin who issues; a certificate the learner claims (the refresher) has no signer. */
+async function signerFor(actorId: number | null, transaction: Transaction): Promise<{ signerName: string | null; signerTitle: string | null }> {
+  if (actorId === null) return { signerName: null, signerTitle: null };
+  const actor = await db().User.findByPk(actorId, { attributes: ['name', 'role'], transaction });
+  if (!actor || !roleAllows(actor.role, ['coordinator'])) return { signerName: null, signerTitle: null };
+  return { signerName: actor.name, signerTitle: SIGNER_TITLE };
+}
 
 async function existing(enrollmentId: number, transaction?: Transaction) {
   const [row] = await db().sequelize.query<{ id: number; serial: string }>('SELECT id, serial FROM certificates WHERE enrollmentId = :enrollmentId', {
@@ -31,6 +44,26 @@ async function existing(enrollmentId: number, transaction?: Transaction) {
   return row ? { id: Number(row.id), serial: row.serial } : null;
 }
 
+type Wording = { holderName: string; courseTitle: string; programName: string; signerName: string | null; signerTitle: string | null };
+
+/** The holder's e-mail with the PDF attached, in the caller's transaction. */
+async function queueCertificateEmail(c: { to: string; wording: Wording; serial: string; issuedAt: Date; validUntil: Date }, transaction: Transaction) {
+  const env = getEnv();
+  const pdf = await renderCertificatePdf({ ...c.wording, serial: c.serial, issuedAt: c.issuedAt, validUntil: c.validUntil, appUrl: env.APP_URL });
+  await enqueueEmail(
+    certificateIssuedEmail({
+      to: c.to,
+      name: c.wording.holderName,
+      courseTitle: c.wording.courseTitle,
+      serial: c.serial,
+      validUntil: c.validUntil,
+      verifyUrl: verificationUrl(env.APP_URL, c.serial),
+      pdf: { filename: `certificate-${c.serial}.pdf`, contentType: 'application/pdf', contentBase64: Buffer.from(pdf).toString('base64') },
+    }),
+    { transaction },
+  );
+}
+
 /**
  * Issues the certificate of one enrollment, at most once. In one transaction: lock the enrollment
  * row, re-check eligibility on fresh data, create the certificate (the unique key on enrollmentId
@@ -39,7 +72,6 @@ async function existing(enrollmentId: number, transaction?: Transaction) {
  */
 export async function issueCertificate(enrollmentId: number, actorId: number | null, options: { now?: Date } = {}): Promise<IssueOutcome> {
   const { sequelize, Certificate } = db();
-  const env = getEnv();
   for (let attempt = 0; attempt < 3; attempt++) {
     try {
       return await sequelize.transaction(async (transaction) => {
@@ -58,37 +90,16 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
         const { row } = standing;
         const serial = generateSerial();
         const validUntil = validUntilFor({ courseSlug: row.courseSlug, validityMonths: row.validityMonths, issuedAt: now, prior: standing.prior });
-        const certificate = await Certificate.create(
-          { enrollmentId, userId: row.userId, issuedById: actorId, serial, issuedAt: now, validUntil },
-          { transaction },
-        );
+        // What the certificate says is fixed here: later renames never reach it (a correction is a reissue).
+        const wording = { holderName: row.learnerName, courseTitle: row.courseTitle, programName: await programName(transaction), ...(await signerFor(actorId, transaction)) };
+        const certificate = await Certificate.create({ enrollmentId, userId: row.userId, issuedById: actorId, serial, issuedAt: now, validUntil, ...wording }, { transaction });
         // Through the one state machine (it audits the move as well).
         if (row.status === 'active') await transitionEnrollment(enrollmentId, 'completed', { transaction, actorId, reason: 'certificate', data: { serial } });
         await audit(
           { actorId, action: 'certificate.issued', subjectType: 'certificate', subjectId: certificate.id, data: { enrollmentId, serial, validUntil: validUntil.toISOString() } },
           { transaction },
         );
-        const pdf = await renderCertificatePdf({
-          learnerName: row.learnerName,
-          courseTitle: row.courseTitle,
-          programName: env.CERTIFICATE_PROGRAM_NAME,
-          serial,
-          issuedAt: now,
-          validUntil,
-          appUrl: env.APP_URL,
-        });
-        await enqueueEmail(
-          certificateIssuedEmail({
-            to: row.learnerEmail,
-            name: row.learnerName,
-            courseTitle: row.courseTitle,
-            serial,
-            validUntil,
-            verifyUrl: verificationUrl(env.APP_URL, serial),
-            pdf: { filename: `certificate-${serial}.pdf`, contentType: 'application/pdf', contentBase64: Buffer.from(pdf).toString('base64') },
-          }),
-          { transaction },
-        );
+        await queueCertificateEmail({ to: row.learnerEmail, wording, serial, issuedAt: now, validUntil }, transaction);
         return { enrollmentId, outcome: 'issued' as const, certificateId: certificate.id, serial };
       });
     } catch (error) {
@@ -97,6 +108,60 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
       const already = await existing(enrollmentId);
       if (already) return { enrollmentId, outcome: 'exists', certificateId: already.id, serial: already.serial };
       // Otherwise the random serial collided (75 bits: practically never); draw again.
+    }
+  }
+  throw new Error('could not draw a unique serial');
+}
+
+/**
+ * Corrects an issued certificate by issuing it again: what it said moves to certificate_versions
+ * under its old serial (verification shows it as replaced), and the certificate gets a new serial
+ * with today's wording (the holder's name as given or as the account has it now, the course title
+ * and program name of today, the reissuing coordinator as signer). Its dates stay as certified.
+ */
+export async function reissueCertificate(certificateId: number, actorId: number, input: { reason: string; holderName?: string | null }, options: { now?: Date } = {}) {
+  const { sequelize, Certificate, CertificateVersion, User, Course, Enrollment } = db();
+  for (let attempt = 0; attempt < 3; attempt++) {
+    try {
+      return await sequelize.transaction(async (transaction) => {
+        const certificate = await Certificate.findByPk(certificateId, { transaction, lock: transaction.LOCK.UPDATE });
+        if (!certificate) throw new AppError('not_found', 'There is no certificate with that id.');
+        if (certificate.revokedAt) throw new AppError('conflict', 'This certificate was revoked; a revoked certificate is not reissued.');
+        const now = options.now ?? new Date();
+        const holder = (await User.findByPk(certificate.userId, { attributes: ['name', 'email'], transaction }))!;
+        const enrollment = (await Enrollment.findByPk(certificate.enrollmentId, { attributes: ['courseId'], transaction }))!;
+        const course = (await Course.findByPk(enrollment.courseId, { attributes: ['title'], transaction }))!;
+        const previous = { serial: certificate.serial, version: certificate.version };
+        await CertificateVersion.create(
+          {
+            certificateId: certificate.id,
+            version: certificate.version,
+            serial: certificate.serial,
+            holderName: certificate.holderName,
+            courseTitle: certificate.courseTitle,
+            programName: certificate.programName,
+            signerName: certificate.signerName,
+            signerTitle: certificate.signerTitle,
+            issuedAt: certificate.issuedAt,
+            validUntil: certificate.validUntil,
+            replacedAt: now,
+            replacedById: actorId,
+            reason: input.reason,
+          },
+          { transaction },
+        );
+        const wording: Wording = { holderName: input.holderName?.trim() || holder.name, courseTitle: course.title, programName: await programName(transaction), ...(await signerFor(actorId, transaction)) };
+        await certificate.update({ ...wording, serial: generateSerial(), version: certificate.version + 1 }, { transaction });
+        await audit(
+          { actorId, action: 'certificate.reissued', subjectType: 'certificate', subjectId: certificate.id, data: { fromSerial: previous.serial, toSerial: certificate.serial, version: certificate.version, reason: input.reason } },
+          { transaction },
+        );
+        await queueCertificateEmail({ to: holder.email, wording, serial: certificate.serial, issuedAt: certificate.issuedAt, validUntil: certificate.validUntil }, transaction);
+        return { id: certificate.id, serial: certificate.serial, version: certificate.version, replacedSerial: previous.serial };
+      });
+    } catch (error) {
+      // A drawn serial that already exists (75 bits: practically never): draw again.
+      if (!(error instanceof UniqueConstraintError)) throw error;
     }
   }
   throw new Error('could not draw a unique serial');
@@ -132,11 +197,8 @@ export async function revokeCertificate(certificateId: number, actorId: number, 
     certificate.revokeReason = reason;
     await certificate.save({ transaction });
     await audit({ actorId, action: 'certificate.revoked', subjectType: 'certificate', subjectId: certificate.id, data: { serial: certificate.serial, reason } }, { transaction });
-    const [info] = await sequelize.query<{ name: string; email: string; title: string }>(
-      'SELECT u.name, u.email, c.title FROM enrollments e JOIN users u ON u.id = e.userId JOIN courses c ON c.id = e.courseId WHERE e.id = :id',
-      { replacements: { id: certificate.enrollmentId }, type: QueryTypes.SELECT, transaction },
-    );
-    await enqueueEmail(certificateRevokedEmail({ to: info.email, name: info.name, courseTitle: info.title, serial: certificate.serial, reason }), { transaction });
+    const holder = (await db().User.findByPk(certificate.userId, { attributes: ['email'], transaction }))!;
+    await enqueueEmail(certificateRevokedEmail({ to: holder.email, name: certificate.holderName, courseTitle: certificate.courseTitle, serial: certificate.serial, reason }), { transaction });
     return { id: certificate.id, serial: certificate.serial, revokedAt: now };
   });
 }

@@ -13,7 +13,19 @@ import { certificateState, type CertificateState } from './validity';
 /** What the public verification shows: the state, the name, the course and the dates, nothing more. */
 export type Verification =
   | { found: false; serial: string; reason: 'malformed' | 'unknown' }
-  | { found: true; serial: string; state: CertificateState; learnerName: string; courseTitle: string; issuedAt: string; validUntil: string; revokedAt: string | null };
+  | {
+      found: true;
+      serial: string;
+      state: CertificateState;
+      learnerName: string;
+      courseTitle: string;
+      programName: string;
+      issuedAt: string;
+      validUntil: string;
+      revokedAt: string | null;
+      /** Set when this serial is an earlier wording, corrected by a reissue under `bySerial`. */
+      replaced: { at: string; bySerial: string } | null;
+    };
 
 type CertificateRecord = {
   id: number;
@@ -22,38 +34,51 @@ type CertificateRecord = {
   issuedAt: Date;
   validUntil: Date;
   revokedAt: Date | null;
-  learnerName: string;
+  holderName: string;
   courseTitle: string;
-  courseSlug: string;
+  programName: string;
+  signerName: string | null;
+  signerTitle: string | null;
+  replacedAt: Date | null;
+  /** The current serial, when this one was replaced by a reissue. */
+  currentSerial: string;
 };
 
-async function findBySerial(serial: string): Promise<CertificateRecord | null> {
+// Only what was stored at issue: the holder's or the course's name today does not matter.
+const STORED = 'ce.id, ce.userId, ce.issuedAt, ce.validUntil, ce.revokedAt, ce.serial AS currentSerial';
+const WORDING = 'holderName, courseTitle, programName, signerName, signerTitle';
+
+async function findBySerial(serial: string, legacy = false): Promise<CertificateRecord | null> {
+  // An imported certificate is also found by the serial of the program's earlier records.
   const [row] = await db().sequelize.query<CertificateRecord>(
-    `SELECT ce.id, ce.serial, ce.userId, ce.issuedAt, ce.validUntil, ce.revokedAt, u.name AS learnerName, c.title AS courseTitle, c.slug AS courseSlug
-       FROM certificates ce JOIN users u ON u.id = ce.userId JOIN enrollments e ON e.id = ce.enrollmentId JOIN courses c ON c.id = e.courseId
-      WHERE ce.serial = :serial`,
+    `SELECT ${STORED}, ce.serial, ${WORDING.split(', ').map((f) => `ce.${f}`).join(', ')}, NULL AS replacedAt FROM certificates ce WHERE ce.${legacy ? 'legacySerial' : 'serial'} = :serial
+     UNION ALL
+     SELECT ${STORED}, v.serial, ${WORDING.split(', ').map((f) => `v.${f}`).join(', ')}, v.replacedAt FROM certificate_versions v JOIN certificates ce ON ce.id = v.certificateId WHERE v.serial = :serial
+     LIMIT 1`,
     { replacements: { serial }, type: QueryTypes.SELECT },
   );
   if (!row) return null;
   const d = (v: unknown) => (v === null ? null : new Date(v as string));
-  return { ...row, id: Number(row.id), userId: Number(row.userId), issuedAt: d(row.issuedAt)!, validUntil: d(row.validUntil)!, revokedAt: d(row.revokedAt) };
+  return { ...row, id: Number(row.id), userId: Number(row.userId), issuedAt: d(row.issuedAt)!, validUntil: d(row.validUntil)!, revokedAt: d(row.revokedAt), replacedAt: d(row.replacedAt) };
 }
 
 /** Looks a serial up for the public check; no throttle (see verifyForAddress). */
 export async function verifySerial(input: string, now: Date = new Date()): Promise<Verification> {
   const serial = normalizeSerial(input);
-  if (!serial) return { found: false, serial: input.slice(0, 40), reason: 'malformed' };
-  const cert = await findBySerial(serial);
-  if (!cert) return { found: false, serial, reason: 'unknown' };
+  const old = input.trim().slice(0, 40);
+  const cert = (serial ? await findBySerial(serial) : null) ?? (old ? await findBySerial(old, true) : null);
+  if (!cert) return serial ? { found: false, serial, reason: 'unknown' } : { found: false, serial: input.slice(0, 40), reason: 'malformed' };
   return {
     found: true,
-    serial,
+    serial: serial && cert ? serial : old,
     state: certificateState(cert, now),
-    learnerName: cert.learnerName,
+    learnerName: cert.holderName,
     courseTitle: cert.courseTitle,
+    programName: cert.programName,
     issuedAt: cert.issuedAt.toISOString(),
     validUntil: cert.validUntil.toISOString(),
     revokedAt: cert.revokedAt?.toISOString() ?? null,
+    replaced: cert.replacedAt ? { at: cert.replacedAt.toISOString(), bySerial: cert.currentSerial } : null,
   };
 }
 
@@ -82,13 +107,16 @@ export async function certificatePdfFor(serialInput: string, viewer: SessionUser
   const serial = normalizeSerial(serialInput);
   const cert = serial ? await findBySerial(serial) : null;
   const staff = roleAllows(viewer.role, ['coordinator']);
-  if (!cert || (!staff && cert.userId !== viewer.id)) throw new AppError('not_found', 'There is no certificate with that serial for your account.');
+  // An earlier wording is not handed out again: the current serial's PDF replaces it.
+  if (!cert || cert.replacedAt || (!staff && cert.userId !== viewer.id)) throw new AppError('not_found', 'There is no certificate with that serial for your account.');
   if (cert.revokedAt && !staff) throw new AppError('conflict', 'This certificate was revoked, so it can no longer be downloaded.');
   const env = getEnv();
   const pdf = await renderCertificatePdf({
-    learnerName: cert.learnerName,
+    holderName: cert.holderName,
     courseTitle: cert.courseTitle,
-    programName: env.CERTIFICATE_PROGRAM_NAME,
+    programName: cert.programName,
+    signerName: cert.signerName,
+    signerTitle: cert.signerTitle,
     serial: cert.serial,
     issuedAt: cert.issuedAt,
     validUntil: cert.validUntil,
@@ -102,7 +130,7 @@ export type LearnerCertificate = { id: number; serial: string; courseSlug: strin
 /** A learner's certificates, newest first, for the Pantry. */
 export async function fetchLearnerCertificates({ userId, now = new Date() }: { userId: number; now?: Date }): Promise<LearnerCertificate[]> {
   const rows = await db().sequelize.query<Omit<LearnerCertificate, 'state'>>(
-    `SELECT ce.id, ce.serial, c.slug AS courseSlug, c.title AS courseTitle, ce.issuedAt, ce.validUntil, ce.revokedAt
+    `SELECT ce.id, ce.serial, c.slug AS courseSlug, ce.courseTitle, ce.issuedAt, ce.validUntil, ce.revokedAt
        FROM certificates ce JOIN enrollments e ON e.id = ce.enrollmentId JOIN courses c ON c.id = e.courseId
       WHERE ce.userId = :userId ORDER BY ce.issuedAt DESC`,
     { replacements: { userId }, type: QueryTypes.SELECT },

@@ -9,7 +9,7 @@ import { qrMatrix, qrPng, qrRuns, verificationUrl } from './qr';
 import { generateSerial } from './serial';
 
 const input = () => ({
-  learnerName: 'Renée Dubois-Ñúñez',
+  holderName: 'Renée Dubois-Ñúñez',
   courseTitle: 'Safe Pickling and Water-Bath Canning',
   programName: 'Cedar Hollow County home-preserving program',
   serial: generateSerial(),

@@ -6,9 +6,11 @@ import { QUIET_ZONE, qrMatrix, qrRuns, verificationUrl } from './qr';
 import { woffToSfnt } from './woff';
 
 export type CertificatePdfInput = {
-  learnerName: string;
+  holderName: string;
   courseTitle: string;
   programName: string;
+  signerName?: string | null;
+  signerTitle?: string | null;
   serial: string;
   issuedAt: Date;
   validUntil: Date;
@@ -104,7 +106,7 @@ export async function renderCertificatePdf(input: CertificatePdfInput): Promise<
   const doc = await PDFDocument.create();
   doc.registerFontkit(cachingFontkit);
   doc.setTitle(`Certificate ${input.serial}`);
-  doc.setSubject(`${input.courseTitle}: ${input.learnerName}`);
+  doc.setSubject(`${input.courseTitle}: ${input.holderName}`);
   doc.setProducer('Brinewright');
   doc.setCreator('Brinewright certificate desk');
   const set = fontSet();
@@ -138,10 +140,11 @@ export async function renderCertificatePdf(input: CertificatePdfInput): Promise<
   await centred(set.regular, input.programName, height - 92, 14, BRINE);
   await centred(set.bold, 'Certificate of completion', height - 140, 30, INK);
   await centred(set.regular, 'This certifies that', height - 190, 13);
-  await centred(set.bold, input.learnerName, height - 232, 28, BRINE);
+  await centred(set.bold, input.holderName, height - 232, 28, BRINE);
   await centred(set.regular, 'has completed the course', height - 268, 13);
   await centred(set.bold, input.courseTitle, height - 302, 18);
   await centred(set.regular, `Issued ${formatDate(input.issuedAt)}  ·  Valid until ${formatDate(input.validUntil)}`, height - 344, 12);
+  if (input.signerName) await centred(set.regular, `Signed by ${input.signerName}${input.signerTitle ? `, ${input.signerTitle}` : ''}`, height - 372, 11, INK, width - 380);
 
   const url = verificationUrl(input.appUrl, input.serial);
   drawQr(page, qrMatrix(url), { x: width - 60 - 118, y: 56, size: 118 });

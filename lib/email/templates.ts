@@ -54,6 +54,18 @@ ${blocks
   return { kind, to, subject, text, html, ...(attachments?.length ? { attachments } : {}) };
 }
 
+export type ProgramSignature = { name: string; contactEmail: string | null; contactPhone: string | null; postalAddress: string | null };
+
+/** Signs a message with the program's own name and contact in place of the generic sign-off. */
+export function signWith(message: OutgoingEmail, program: ProgramSignature): OutgoingEmail {
+  const lines = [program.name, program.contactEmail, program.contactPhone, program.postalAddress].filter((l): l is string => Boolean(l));
+  return {
+    ...message,
+    text: message.text.replace(`\n${SIGN_OFF}\n`, `\n${lines.join('\n')}\n`),
+    html: message.html.replace(`<p style="margin:0">${esc(SIGN_OFF)}</p>`, `<p style="margin:0">${lines.map(esc).join('<br>')}</p>`),
+  };
+}
+
 function workshopRows(workshop: WorkshopFacts | null | undefined): [string, string][] {
   if (!workshop) return [];
   return [

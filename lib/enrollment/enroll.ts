@@ -77,13 +77,17 @@ export async function enrollInWorkshop({ user, workshopId, waiverCode, address }
     if ((await countHolders(workshop.id, transaction)) >= workshop.seats) throw new WorkshopFullError();
 
     const waiver = waiverId ? await redeemWaiver({ waiverId, courseId: course.id, transaction }) : null;
+    // The fee charged is the one the course page shows: the course file's, not the row's copy.
+    const content = getCourse(course.slug);
+    if (!content) throw new AppError('conflict', 'This course is no longer offered.');
+    const fee = content.feeCents;
     const enrollment = await Enrollment.create(
-      { userId: user.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'awaiting_payment', feeCents: waiver ? 0 : course.feeCents, feeWaiverId: waiver?.id ?? null, contentVersion: getCourse(course.slug)?.version ?? 1 },
+      { userId: user.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'awaiting_payment', feeCents: waiver ? 0 : fee, feeWaiverId: waiver?.id ?? null, contentVersion: content.version },
       { transaction },
     );
     await auditCreated(enrollment, { transaction, actorId: user.id, data: { workshopId: workshop.id, feeCents: enrollment.feeCents, waiverId: waiver?.id ?? null } });
 
-    if (waiver || course.feeCents === 0) {
+    if (waiver || fee === 0) {
       await transitionEnrollment(enrollment, 'active', { transaction, actorId: user.id, reason: waiver ? 'waiver' : 'free', data: waiver ? { waiverCode: waiver.code } : undefined });
       const learner = (await User.findByPk(user.id, { transaction }))!;
       await enqueueEmail(enrollmentReceiptEmail({ to: learner.email, name: learner.name, courseTitle: course.title, workshop, amountCents: 0, currency: course.currency, waived: Boolean(waiver), appUrl }), { transaction });

@@ -27,3 +27,7 @@ export const SignInSchema = z.object({
   password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200, 'That password is too long.'),
 });
 export type SignInInput = z.infer<typeof SignInSchema>;
+
+/** `npm run admin:create`: the password is checked by the same policy as a learner's. */
+export const AdminCreateSchema = RegisterSchema.extend({ password: password.optional() });
+export type AdminCreateInput = z.infer<typeof AdminCreateSchema>;

@@ -92,7 +92,7 @@ describe('issuing', () => {
     const { enrollmentId, userId } = await eligibleEnrollment(courses.flagship);
     await issueCertificate(enrollmentId, null);
     await expect(
-      db().Certificate.create({ enrollmentId, userId, issuedById: null, serial: 'ZZZZ-ZZZZ-ZZZZ-ZZZZ', issuedAt: new Date(), validUntil: new Date() }),
+      db().Certificate.create({ enrollmentId, userId, issuedById: null, serial: 'ZZZZ-ZZZZ-ZZZZ-ZZZZ', holderName: 'Twice', courseTitle: 'Twice', programName: 'Twice', issuedAt: new Date(), validUntil: new Date() }),
     ).rejects.toMatchObject({ name: 'SequelizeUniqueConstraintError' });
   });
 

@@ -28,8 +28,8 @@ beforeEach(async () => {
 async function certify(enrollmentId: number, userId: number, { revoked = false, validUntil = new Date(Date.now() + 365 * 86_400_000) } = {}) {
   const coordinator = await createUser('coordinator');
   await db().sequelize.query(
-    `INSERT INTO certificates (enrollmentId, userId, issuedById, serial, issuedAt, validUntil, revokedAt, createdAt, updatedAt)
-     VALUES (:enrollmentId, :userId, :by, :serial, NOW(), :validUntil, :revokedAt, NOW(), NOW())`,
+    `INSERT INTO certificates (enrollmentId, userId, issuedById, serial, holderName, courseTitle, programName, issuedAt, validUntil, revokedAt, createdAt, updatedAt)
+     VALUES (:enrollmentId, :userId, :by, :serial, 'Test holder', 'Test course', 'Test program', NOW(), :validUntil, :revokedAt, NOW(), NOW())`,
     { replacements: { enrollmentId, userId, by: coordinator.id, serial: `BW-TEST-${enrollmentId}`, validUntil, revokedAt: revoked ? new Date() : null } },
   );
 }

@@ -3,7 +3,7 @@
 import { QueryTypes } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
 import { createSequelize } from '@/lib/db';
-import { migrator, rebuildDatabase, seeder } from '@/lib/migrator';
+import { migrateAndSync, migrator, rebuildDatabase, seeder } from '@/lib/migrator';
 
 const base = new URL(process.env.DATABASE_URL!);
 const url = (() => {
@@ -35,7 +35,7 @@ describe('migrations and seeders', () => {
     await migrator(sequelize).down({ to: 0 });
     expect(await tables(sequelize)).toEqual(['SequelizeData', 'SequelizeMeta']);
 
-    await migrator(sequelize).up();
+    await migrateAndSync(sequelize);
     await seeder(sequelize).up();
     expect((await migrator(sequelize).executed()).map((m) => m.name)).toEqual(applied);
     expect((await seeder(sequelize).executed()).map((m) => m.name)).toEqual(seeded);

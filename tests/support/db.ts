@@ -1,4 +1,5 @@
 import { QueryTypes } from 'sequelize';
+import { syncCourses } from '@/lib/courses/sync';
 import { hashPassword, type SessionUser } from '@/lib/auth/users';
 import type { Role } from '@/lib/roles';
 import { db } from '@/models';
@@ -31,10 +32,11 @@ export async function createUser(role: Role = 'learner', overrides: Partial<{ em
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 }
 
-/** The two courses of the catalog, as the demo seeder makes them. */
+/** The two courses of the catalog, brought in from content/courses/ as `npm run db:migrate` does. */
 export async function createCourses() {
-  const { Course } = db();
-  const flagship = await Course.create({ slug: 'pickling-and-canning', title: 'Safe Pickling and Water-Bath Canning', feeCents: 4500, currency: 'usd' });
-  const refresher = await Course.create({ slug: 'volunteer-refresher', title: 'Volunteer Refresher: Acid, Time and Altitude', feeCents: 1500, currency: 'usd' });
+  const { Course, sequelize } = db();
+  await syncCourses(sequelize);
+  const flagship = (await Course.findOne({ where: { slug: 'pickling-and-canning' } }))!;
+  const refresher = (await Course.findOne({ where: { slug: 'volunteer-refresher' } }))!;
   return { flagship, refresher };
 }

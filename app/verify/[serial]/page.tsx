@@ -6,12 +6,14 @@ import { VerificationResult } from '@/components/certificates/verification-resul
 import { clientAddress } from '@/lib/auth/options';
 import { verifyForAddress, type Verification } from '@/lib/certificates/lookup';
 import { AppError, decodeParam } from '@/lib/errors';
+import { getProgramIdentity } from '@/lib/program/settings';
 
 export const metadata: Metadata = { title: 'Certificate check', robots: { index: false } };
 export const dynamic = 'force-dynamic';
 
 export default async function VerifySerialPage({ params }: { params: Promise<{ serial: string }> }) {
   const raw = decodeParam((await params).serial).slice(0, 40);
+  const program = await getProgramIdentity();
   let result: Verification | null = null;
   let throttled = false;
   try {
@@ -36,6 +38,13 @@ export default async function VerifySerialPage({ params }: { params: Promise<{ s
         </h2>
         <SerialForm />
       </section>
+      {program.contactEmail || program.contactPhone ? (
+        <p data-testid="program-contact">
+          Questions about a certificate: {program.name}
+          {program.contactEmail ? <>, <a href={`mailto:${program.contactEmail}`}>{program.contactEmail}</a></> : null}
+          {program.contactPhone ? <>, {program.contactPhone}</> : null}.
+        </p>
+      ) : null}
       <p className="text-sm text-ink-soft">
         A certificate records that its holder completed the program&apos;s training. It does not certify any recipe or product as safe. <Link href="/courses">About the courses</Link>
       </p>

@@ -60,7 +60,7 @@ export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
     const ids = async (email: string) => (await one<{ id: number }>(conn, 'SELECT id FROM users WHERE email = ?', [email])).id;
     const instructorId = await ids('instructor@cedarhollow.example');
     const coordinatorId = await ids('coordinator@cedarhollow.example');
-    const course = async (slug: string) => one<{ id: number; validityMonths: number }>(conn, 'SELECT id, validityMonths FROM courses WHERE slug = ?', [slug]);
+    const course = async (slug: string) => one<{ id: number; title: string; validityMonths: number }>(conn, 'SELECT id, title, validityMonths FROM courses WHERE slug = ?', [slug]);
     const flagship = await course('pickling-and-canning');
     const refresher = await course('volunteer-refresher');
     const startsAt = new Date(now.getTime() - 40 * 86_400_000);
@@ -88,8 +88,8 @@ export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
       validUntil.setUTCMonth(validUntil.getUTCMonth() + flagship.validityMonths);
       const certificateId = await insert(
         conn,
-        'INSERT INTO certificates (enrollmentId, userId, issuedById, serial, issuedAt, validUntil, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
-        [enrollmentId, userId, coordinatorId, serial, now, validUntil, now, now],
+        'INSERT INTO certificates (enrollmentId, userId, issuedById, serial, holderName, courseTitle, programName, issuedAt, validUntil, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+        [enrollmentId, userId, coordinatorId, serial, name, flagship.title, 'Authorization matrix program', now, validUntil, now, now],
       );
       return { enrollmentId, refresherEnrollmentId, serial, certificateId };
     };

@@ -67,6 +67,8 @@ const LEARNER_WRITE: Answers = [401, 400, NA, 403, 403, 403];
 const pages: PageRow[] = [
   { kind: 'page', pattern: '/', probe: at('/'), expect: PUBLIC },
   { kind: 'page', pattern: '/admin/users', probe: at('/admin/users'), expect: [S, 403, NA, 403, 403, 200] },
+  { kind: 'page', pattern: '/desk/import', probe: at('/desk/import'), expect: COORDINATOR_PAGE },
+  { kind: 'page', pattern: '/admin/program', probe: at('/admin/program'), expect: [S, 403, NA, 403, 403, 200] },
   { kind: 'page', pattern: '/bench', probe: at('/bench'), expect: PUBLIC },
   // Another learner's enrollment number in the address shows nothing of theirs.
   { kind: 'page', pattern: '/checkout/cancel', probe: (fx, s) => ({ path: `/checkout/cancel?enrollment=${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }), expect: [S, 200, 200, 403, 403, 403] },
@@ -147,6 +149,8 @@ const routes: RouteRow[] = [
   { kind: 'route', pattern: '/api/auth/[...nextauth]', method: 'POST', probe: () => ({ path: '/api/auth/signout', body: '', headers: { 'content-type': 'application/x-www-form-urlencoded' } }), expect: [302, 302, NA, 302, 302, 302] },
   // The PDF: its owner and the desk; to anyone else the serial does not exist.
   { kind: 'route', pattern: '/api/certificates/[serial]/pdf', method: 'GET', probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}/pdf` }), expect: [401, 200, 404, 404, 200, 200] },
+  { kind: 'route', pattern: '/api/program', method: 'GET', probe: at('/api/program'), expect: PUBLIC },
+  { kind: 'route', pattern: '/api/program/logo', method: 'GET', probe: at('/api/program/logo'), expect: PUBLIC },
   { kind: 'route', pattern: '/api/certificates/[serial]', method: 'GET', probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}` }), expect: [200, 200, 200, 200, 200, 200] },
   // A's refresher enrollment is withdrawn (not complete: 409); B's is not A's to claim (404).
   {
@@ -157,6 +161,7 @@ const routes: RouteRow[] = [
     expect: [401, 409, 404, 403, 403, 403],
   },
   { kind: 'route', pattern: '/api/courses/[course]/workshops', method: 'GET', probe: at(`/api/courses/${FLAGSHIP}/workshops`), expect: PUBLIC },
+  { kind: 'route', pattern: '/api/desk/certificates/[id]/reissue', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/reissue`, body: {} }), expect: COORDINATOR_WRITE },
   { kind: 'route', pattern: '/api/desk/certificates/[id]/revoke', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/revoke`, body: {} }), expect: COORDINATOR_WRITE },
   // An enrollment that does not exist: answered per id (200, not_found), nothing issued.
   { kind: 'route', pattern: '/api/desk/certificates', method: 'POST', probe: () => ({ path: '/api/desk/certificates', body: { enrollmentIds: [2_000_000_000] } }), expect: COORDINATOR_READ },
@@ -226,6 +231,9 @@ const routes: RouteRow[] = [
 ];
 
 const actions: ActionRow[] = [
+  { kind: 'action', pattern: '/desk/import', action: 'importAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
+  { kind: 'action', pattern: '/desk/import', action: 'previewImportAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
+  { kind: 'action', pattern: '/admin/program', action: 'saveProgramAction', expect: [401, 403, NA, 403, 403, 'pass'] },
   { kind: 'action', pattern: '/admin/users', action: 'changeRoleAction', expect: [401, 403, NA, 403, 403, 'pass'] },
   { kind: 'action', pattern: '/desk/workshops', action: 'saveWorkshopAction', expect: [401, 403, NA, 403, 'pass', 'pass'] },
 ];

@@ -231,6 +231,11 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/certificates/[serial]/route.ts#GET': { who: EVERYONE, params: { serial: serialParam }, headers: clientAddress },
   'app/api/certificates/refresher/route.ts#POST': { who: ['learner'], body: badJsonBodies({ enrollmentId: { ok: fc.constant(MISSING_ID), bad: requiredBad(badIdValue, fc.constant(String(MISSING_ID))) } }) },
   'app/api/courses/[course]/workshops/route.ts#GET': { who: EVERYONE, params: { course: courseParam } },
+  'app/api/desk/certificates/[id]/reissue/route.ts#POST': {
+    who: DESK,
+    params: { id: idParam },
+    body: badJsonBodies({ ...reasonFields(5, 500, false), holderName: { ok: fc.string({ minLength: 1, maxLength: 60 }).filter((s) => s.trim().length > 0), bad: fc.oneof(notString.filter((v) => v !== undefined && v !== null), longerThan(120)) } }),
+  },
   'app/api/desk/certificates/[id]/revoke/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(5, 500, false)) },
   'app/api/desk/certificates/route.ts#POST': { who: DESK, body: badJsonBodies({ enrollmentIds: idsField(100) }) },
   'app/api/desk/enrollments/route.ts#GET': {
@@ -249,6 +254,8 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/enrollments/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam } },
   'app/api/enrollments/route.ts#POST': { who: ['learner'], body: badJsonBodies(enrollFields) },
   'app/api/health/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
+  'app/api/program/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
+  'app/api/program/logo/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
   'app/api/pantry/route.ts#GET': { who: ['learner'], query: badQuery([]), mayAnswerOk: true },
   'app/api/photos/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam }, query: badQuery(['size'], { size: fc.constantFrom('thumb', 'full') }) },
   'app/api/photos/route.ts#POST': { who: ['learner'], special: 'photo-upload' },

@@ -7,7 +7,8 @@ export const dynamic = 'force-dynamic';
 
 /**
  * GET /api/certificates/:serial — the public check for other systems. 200 with
- * { serial, state: valid|expired|revoked, learnerName, courseTitle, issuedAt, validUntil, revokedAt };
+ * { serial, state: valid|expired|revoked, learnerName, courseTitle, programName, issuedAt, validUntil, revokedAt,
+ *   replaced: { at, bySerial } | null } (what the certificate said when issued; `replaced` for a serial a reissue corrected);
  * 404 for an unknown serial, 400 for one that is malformed (wrong length or check character),
  * 429 with Retry-After when the address checks too often.
  */
