@@ -8,7 +8,10 @@ export default defineConfig([
   {
     rules: {
       // A leading underscore marks a binding left unused on purpose (a key dropped by rest destructuring).
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
+      ],
       // A notice for the React Compiler, which this project does not run (no reactCompiler in next.config.mjs).
       'react-hooks/incompatible-library': 'off',
     },

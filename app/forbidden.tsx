@@ -8,8 +8,7 @@ export default function Forbidden() {
       </p>
       <h1 className="text-3xl font-bold">This page is for another role</h1>
       <p className="text-ink-soft">
-        Your account is signed in, but it does not have access to this page. If you think it should, ask your program coordinator to
-        check your role.
+        Your account is signed in, but it does not have access to this page. If you think it should, ask your program coordinator to check your role.
       </p>
       <ButtonLink href="/">Back to the start</ButtonLink>
     </div>

@@ -16,9 +16,9 @@ export default function HomePage() {
           <p className="text-sm font-semibold tracking-wide text-copper-700 uppercase">Home food-preservation training</p>
           <h1 className="text-4xl leading-tight font-bold md:text-5xl">Pickle and can with numbers you can check.</h1>
           <p className="max-w-prose text-lg text-ink-soft">
-            Brinewright is where a food-preservation education program teaches home canners: lessons with calculators for acidity, brine,
-            headspace and processing time by altitude; quizzes; workshops with an instructor; a practical batch reviewed from photos; and a
-            certificate the coordinator issues and anyone can verify.
+            Brinewright is where a food-preservation education program teaches home canners: lessons with calculators for acidity, brine, headspace and
+            processing time by altitude; quizzes; workshops with an instructor; a practical batch reviewed from photos; and a certificate the coordinator issues
+            and anyone can verify.
           </p>
           <div className="flex flex-wrap gap-3">
             <ButtonLink href="/courses">See the courses</ButtonLink>
@@ -30,9 +30,9 @@ export default function HomePage() {
         <Card className="bg-brine-50">
           <h2 className="mb-2 text-lg font-bold">Why the numbers matter</h2>
           <p className="text-ink-soft">
-            Botulism spores survive boiling. Pickles are safe to process in boiling water only because the acid of a tested recipe keeps the
-            food at pH 4.6 or below, and only when the jars are processed for the full tested time at your altitude. Brinewright checks the
-            arithmetic; your tested recipe and local guidance decide the rest.
+            Botulism spores survive boiling. Pickles are safe to process in boiling water only because the acid of a tested recipe keeps the food at pH 4.6 or
+            below, and only when the jars are processed for the full tested time at your altitude. Brinewright checks the arithmetic; your tested recipe and
+            local guidance decide the rest.
           </p>
         </Card>
       </section>

@@ -28,7 +28,10 @@ async function main() {
   const now = new Date();
 
   console.log(`[bench] seeding ${COUNT} eligible enrollments…`);
-  await q(`INSERT INTO users (email, name, passwordHash, role, createdAt, updatedAt) VALUES ('bench-coordinator@bench.example', 'Bench Coordinator', 'x', 'coordinator', :now, :now)`, { now });
+  await q(
+    `INSERT INTO users (email, name, passwordHash, role, createdAt, updatedAt) VALUES ('bench-coordinator@bench.example', 'Bench Coordinator', 'x', 'coordinator', :now, :now)`,
+    { now },
+  );
   await q(
     `INSERT INTO courses (slug, title, feeCents, currency, passMarkPct, validityMonths, createdAt, updatedAt)
      VALUES ('pickling-and-canning', 'Safe Pickling and Water-Bath Canning', 4500, 'usd', 80, 36, :now, :now)`,
@@ -48,16 +51,90 @@ async function main() {
   const BATCH = 100;
   for (let start = 0; start < COUNT; start += BATCH) {
     const n = Math.min(BATCH, COUNT - start);
-    const users = Array.from({ length: n }, (_, i) => ({ email: `learner${start + i}@bench.example`, name: `${names[(start + i) % names.length]} ${start + i}` }));
-    await sequelize.getQueryInterface().bulkInsert('users', users.map((u) => ({ ...u, passwordHash: 'x', role: 'learner', createdAt: now, updatedAt: now })));
-    const ids = (await sequelize.query<{ id: number }>('SELECT id FROM users WHERE email IN (:emails) ORDER BY id', { replacements: { emails: users.map((u) => u.email) }, type: QueryTypes.SELECT })).map((r) => r.id);
+    const users = Array.from({ length: n }, (_, i) => ({
+      email: `learner${start + i}@bench.example`,
+      name: `${names[(start + i) % names.length]} ${start + i}`,
+    }));
+    await sequelize.getQueryInterface().bulkInsert(
+      'users',
+      users.map((u) => ({ ...u, passwordHash: 'x', role: 'learner', createdAt: now, updatedAt: now })),
+    );
+    const ids = (
+      await sequelize.query<{ id: number }>('SELECT id FROM users WHERE email IN (:emails) ORDER BY id', {
+        replacements: { emails: users.map((u) => u.email) },
+        type: QueryTypes.SELECT,
+      })
+    ).map((r) => r.id);
     const qi = sequelize.getQueryInterface();
-    await qi.bulkInsert('enrollments', ids.map((userId) => ({ userId, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'active', feeCents: 4500, attendedAt: now, createdAt: now, updatedAt: now })));
-    const enrollments = await sequelize.query<{ id: number; userId: number }>('SELECT id, userId FROM enrollments WHERE userId IN (:ids)', { replacements: { ids }, type: QueryTypes.SELECT });
-    await qi.bulkInsert('payments', enrollments.map((e) => ({ enrollmentId: e.id, provider: 'stripe', checkoutSessionId: `cs_bench_${e.id}`, amountCents: 4500, currency: 'usd', status: 'paid', refundedCents: 0, paidAt: now, createdAt: now, updatedAt: now })));
-    await qi.bulkInsert('lesson_progress', ids.flatMap((userId) => req.lessonSlugs.map((lessonSlug) => ({ userId, courseId: course.id, lessonSlug, readAt: now, createdAt: now, updatedAt: now }))));
-    await qi.bulkInsert('quiz_attempts', ids.flatMap((userId) => quizzes.map((quizSlug) => ({ userId, courseId: course.id, quizSlug, drawn: '[]', answers: '{}', scorePct: 100, passed: true, startedAt: now, submittedAt: now, createdAt: now, updatedAt: now }))));
-    await qi.bulkInsert('practicals', enrollments.map((e) => ({ enrollmentId: e.id, userId: e.userId, round: 1, status: 'approved', details: '{}', flags: '[]', submittedAt: now, createdAt: now, updatedAt: now })));
+    await qi.bulkInsert(
+      'enrollments',
+      ids.map((userId) => ({
+        userId,
+        courseId: course.id,
+        workshopId: workshop.id,
+        runKey: String(workshop.id),
+        status: 'active',
+        feeCents: 4500,
+        attendedAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
+    const enrollments = await sequelize.query<{ id: number; userId: number }>('SELECT id, userId FROM enrollments WHERE userId IN (:ids)', {
+      replacements: { ids },
+      type: QueryTypes.SELECT,
+    });
+    await qi.bulkInsert(
+      'payments',
+      enrollments.map((e) => ({
+        enrollmentId: e.id,
+        provider: 'stripe',
+        checkoutSessionId: `cs_bench_${e.id}`,
+        amountCents: 4500,
+        currency: 'usd',
+        status: 'paid',
+        refundedCents: 0,
+        paidAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
+    await qi.bulkInsert(
+      'lesson_progress',
+      ids.flatMap((userId) => req.lessonSlugs.map((lessonSlug) => ({ userId, courseId: course.id, lessonSlug, readAt: now, createdAt: now, updatedAt: now }))),
+    );
+    await qi.bulkInsert(
+      'quiz_attempts',
+      ids.flatMap((userId) =>
+        quizzes.map((quizSlug) => ({
+          userId,
+          courseId: course.id,
+          quizSlug,
+          drawn: '[]',
+          answers: '{}',
+          scorePct: 100,
+          passed: true,
+          startedAt: now,
+          submittedAt: now,
+          createdAt: now,
+          updatedAt: now,
+        })),
+      ),
+    );
+    await qi.bulkInsert(
+      'practicals',
+      enrollments.map((e) => ({
+        enrollmentId: e.id,
+        userId: e.userId,
+        round: 1,
+        status: 'approved',
+        details: '{}',
+        flags: '[]',
+        submittedAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
   }
   const ids = (await sequelize.query<{ id: number }>('SELECT id FROM enrollments ORDER BY id', { type: QueryTypes.SELECT })).map((r) => r.id);
 
@@ -102,7 +179,12 @@ async function main() {
     figures: [
       { name: `${ids.length} certificates with PDFs in one bulk action`, value: Number(seconds.toFixed(2)), unit: 's', goal: '< 60 s', met: seconds < 60 },
       { name: 'certificates issued', value: issued, unit: `of ${ids.length}`, met: issued === ids.length },
-      { name: 'peak RSS during the bulk action', value: Number(mb(peakRss)), unit: 'MB', anchor: { name: 'before', value: Number(mb(baselineRss)), unit: 'MB' } },
+      {
+        name: 'peak RSS during the bulk action',
+        value: Number(mb(peakRss)),
+        unit: 'MB',
+        anchor: { name: 'before', value: Number(mb(baselineRss)), unit: 'MB' },
+      },
     ],
   });
   await sequelize.close();

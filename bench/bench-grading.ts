@@ -26,7 +26,10 @@ import { ratioFigure, writeBenchResults } from './bench-results';
 const root = path.resolve(__dirname, '..');
 // autocannon ships no type declarations; the part used here is typed loosely.
 type Instance = { on: (event: 'response', fn: (client: unknown, status: number, bytes: number, ms: number) => void) => void };
-const autocannon = createRequire(__filename)('autocannon') as (opts: object, done: (err: Error | null, result: { requests: { total: number }; errors: number; duration: number }) => void) => Instance;
+const autocannon = createRequire(__filename)('autocannon') as (
+  opts: object,
+  done: (err: Error | null, result: { requests: { total: number }; errors: number; duration: number }) => void,
+) => Instance;
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 20);
 const APP_PORT = Number(process.env.BENCH_PORT ?? 3151);
@@ -55,13 +58,19 @@ async function prepareDatabase() {
 
   const dir = path.join(root, 'content/quizzes');
   const banks = resolveBanks(
-    fs.readdirSync(dir).filter((f) => f.endsWith('.json')).map((f) => parseBankFile(JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8')), f)),
+    fs
+      .readdirSync(dir)
+      .filter((f) => f.endsWith('.json'))
+      .map((f) => parseBankFile(JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8')), f)),
     COMPUTE_FNS,
   );
   const bank = banks.get(QUIZ)!;
-  const [[user]] = (await sequelize.query('SELECT u.id, e.courseId FROM users u JOIN enrollments e ON e.userId = u.id JOIN courses c ON c.id = e.courseId WHERE u.email = ? AND c.slug = ?', {
-    replacements: [LEARNER.email, 'pickling-and-canning'],
-  })) as [{ id: number; courseId: number }[], unknown];
+  const [[user]] = (await sequelize.query(
+    'SELECT u.id, e.courseId FROM users u JOIN enrollments e ON e.userId = u.id JOIN courses c ON c.id = e.courseId WHERE u.email = ? AND c.slug = ?',
+    {
+      replacements: [LEARNER.email, 'pickling-and-canning'],
+    },
+  )) as [{ id: number; courseId: number }[], unknown];
   if (!user) throw new Error('The demo learner with a flagship enrollment is missing from the seed');
 
   // Open attempts made in bulk, each with its own draw, and the right answers for each.
@@ -84,7 +93,14 @@ async function prepareDatabase() {
       for (const d of drawn.questions) {
         const q = bank.questions.find((x) => x.id === d.id)!;
         const right = rightAnswer(q, d);
-        answers[q.id] = q.kind === 'single' ? right.choices![0] : q.kind === 'multiple' ? right.choices! : q.kind === 'true-false' ? (right.value as boolean) : { value: right.value as number, unit: right.unit! };
+        answers[q.id] =
+          q.kind === 'single'
+            ? right.choices![0]
+            : q.kind === 'multiple'
+              ? right.choices!
+              : q.kind === 'true-false'
+                ? (right.value as boolean)
+                : { value: right.value as number, unit: right.unit! };
       }
       bodies.push({ id: Number(insertId) + k, body: JSON.stringify({ answers }) });
     });
@@ -103,7 +119,10 @@ async function sessionCookie(base: string): Promise<string> {
     headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar.join('; ') },
     body: new URLSearchParams({ csrfToken, email: LEARNER.email, password: LEARNER.password, json: 'true' }),
   });
-  const session = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.includes('session-token'));
+  const session = signIn.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .find((c) => c.includes('session-token'));
   if (!session) throw new Error(`Sign-in failed (${signIn.status})`);
   return session;
 }
@@ -124,7 +143,12 @@ function load(url: string, next: () => { path: string; body?: string }, headers:
             method,
             setupRequest: (req: Record<string, unknown>) => {
               const n = next();
-              return { ...req, path: n.path, ...(n.body === undefined ? {} : { body: n.body }), headers: { ...headers, ...(n.body === undefined ? {} : { 'content-type': 'application/json' }) } };
+              return {
+                ...req,
+                path: n.path,
+                ...(n.body === undefined ? {} : { body: n.body }),
+                headers: { ...headers, ...(n.body === undefined ? {} : { 'content-type': 'application/json' }) },
+              };
             },
           },
         ],
@@ -153,7 +177,17 @@ async function main() {
   console.log(`[bench] preparing the bench database and ${ATTEMPTS} open attempts…`);
   const { bodies, userCourseId, questionIds } = await prepareDatabase();
   const base = `http://127.0.0.1:${APP_PORT}`;
-  const env = { ...process.env, NODE_ENV: 'production' as const, BRINEWRIGHT_DEMO: '1', NEXT_TELEMETRY_DISABLED: '1', NEXT_DIST_DIR: DIST_DIR, DATABASE_URL: dbUrl!, NEXTAUTH_URL: base, APP_URL: base, DB_POOL_MAX: String(POOL_MAX) };
+  const env = {
+    ...process.env,
+    NODE_ENV: 'production' as const,
+    BRINEWRIGHT_DEMO: '1',
+    NEXT_TELEMETRY_DISABLED: '1',
+    NEXT_DIST_DIR: DIST_DIR,
+    DATABASE_URL: dbUrl!,
+    NEXTAUTH_URL: base,
+    APP_URL: base,
+    DB_POOL_MAX: String(POOL_MAX),
+  };
   if (!fs.existsSync(path.join(root, DIST_DIR, 'BUILD_ID'))) {
     console.log(`[bench] building the app into ${DIST_DIR}…`);
     const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });
@@ -179,11 +213,15 @@ async function main() {
     const firstMeasured = cursor;
     console.log(`[bench] app: POST /api/attempts/:id/submit, ${CONNECTIONS} connections, ${DURATION_S} s`);
     const cpuBefore = cpuMsOfTree(app.pid!);
-    const appRun = await load(base, () => {
-      if (cursor >= bodies.length) throw new Error(`ran out of open attempts (${bodies.length}); raise BENCH_ATTEMPTS`);
-      const b = bodies[cursor++];
-      return { path: `/api/attempts/${b.id}/submit`, body: b.body };
-    }, { cookie });
+    const appRun = await load(
+      base,
+      () => {
+        if (cursor >= bodies.length) throw new Error(`ran out of open attempts (${bodies.length}); raise BENCH_ATTEMPTS`);
+        const b = bodies[cursor++];
+        return { path: `/api/attempts/${b.id}/submit`, body: b.body };
+      },
+      { cookie },
+    );
     const graded = cursor - firstMeasured;
     appRun.cpuMsPerRequest = (cpuMsOfTree(app.pid!) - cpuBefore) / appRun.requests;
     if (CPU_PROF) {
@@ -228,7 +266,10 @@ async function main() {
           counter += 1;
           const now = new Date();
           const rows = questionIds.map((q) => [anchor.id, userCourseId, null, QUIZ, `${q}-${counter}`, 1, 'c1', now]);
-          await pool!.query(`INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${rows.map(() => '(?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}`, rows.flat());
+          await pool!.query(
+            `INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${rows.map(() => '(?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}`,
+            rows.flat(),
+          );
           res.writeHead(200, { 'content-type': 'application/json' });
           res.end('{"ok":true}');
         } catch (error) {
@@ -243,29 +284,53 @@ async function main() {
     const bareRun = await load(`http://127.0.0.1:${BARE_PORT}`, () => ({ path: '/submit', body: bodies[k++ % bodies.length].body }), {});
 
     const ratio = appRun.rps / bareRun.rps;
-    const fmt = (r: Run) => `${r.rps.toFixed(1)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, ${r.requests} requests, ${r.non2xx} non-2xx, ${r.errors} errors${r.cpuMsPerRequest === undefined ? '' : `; server CPU ${r.cpuMsPerRequest.toFixed(2)} ms per request`}`;
+    const fmt = (r: Run) =>
+      `${r.rps.toFixed(1)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, ${r.requests} requests, ${r.non2xx} non-2xx, ${r.errors} errors${r.cpuMsPerRequest === undefined ? '' : `; server CPU ${r.cpuMsPerRequest.toFixed(2)} ms per request`}`;
     console.log('');
     console.log(`app  (graded submissions): ${fmt(appRun)}; ${graded} attempts handed out, ${Number(n)} attempts graded and passed in the database`);
     console.log(`bare (one INSERT)        : ${fmt(bareRun)}`);
     if (floorRun) console.log(`floor (app, GET /api/health, one SELECT 1): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
-    if (toolRun) console.log(`framework floor (app, GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`);
+    if (toolRun)
+      console.log(
+        `framework floor (app, GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`,
+      );
     const la = (l: number[]) => l.map((x) => x.toFixed(2)).join(' ');
     console.log(`load average (1, 5, 15 min): ${la(loadBefore)} before, ${la(os.loadavg())} after (2-core machine: above 2 the figures are noisy)`);
-    console.log(`ratio app/bare           : ${ratio.toFixed(2)}x  (goal >= 0.5x: ${ratio >= 0.5 ? 'met' : 'not met'}); app p95 ${appRun.p95.toFixed(1)} ms (goal < 100 ms: ${appRun.p95 < 100 ? 'met' : 'not met'})`);
+    console.log(
+      `ratio app/bare           : ${ratio.toFixed(2)}x  (goal >= 0.5x: ${ratio >= 0.5 ? 'met' : 'not met'}); app p95 ${appRun.p95.toFixed(1)} ms (goal < 100 ms: ${appRun.p95 < 100 ? 'met' : 'not met'})`,
+    );
     // For `npm run bench` (bench/bench.ts): the same figures as JSON.
     writeBenchResults({
       bench: 'grading',
       loadAverage: { before: loadBefore, after: os.loadavg() },
       figures: [
         ratioFigure('graded quiz submissions, app, req/s', appRun.rps, 'req/s', { name: 'bare node:http doing one INSERT', value: bareRun.rps }, 0.5),
-        { name: 'graded quiz submissions, app, p95', value: appRun.p95, unit: 'ms', anchor: { name: 'bare handler, p95', value: bareRun.p95, unit: 'ms' }, goal: '< 100 ms', met: appRun.p95 < 100 },
-        ...(appRun.cpuMsPerRequest === undefined ? [] : [{ name: 'graded quiz submission, server CPU per request', value: appRun.cpuMsPerRequest, unit: 'ms', ...(bareRun.cpuMsPerRequest === undefined ? {} : { anchor: { name: 'bare handler', value: bareRun.cpuMsPerRequest, unit: 'ms' } }) }]),
+        {
+          name: 'graded quiz submissions, app, p95',
+          value: appRun.p95,
+          unit: 'ms',
+          anchor: { name: 'bare handler, p95', value: bareRun.p95, unit: 'ms' },
+          goal: '< 100 ms',
+          met: appRun.p95 < 100,
+        },
+        ...(appRun.cpuMsPerRequest === undefined
+          ? []
+          : [
+              {
+                name: 'graded quiz submission, server CPU per request',
+                value: appRun.cpuMsPerRequest,
+                unit: 'ms',
+                ...(bareRun.cpuMsPerRequest === undefined ? {} : { anchor: { name: 'bare handler', value: bareRun.cpuMsPerRequest, unit: 'ms' } }),
+              },
+            ]),
       ],
       notes: [
         `app (one next start process): ${fmt(appRun)}`,
         `bare: ${fmt(bareRun)}`,
         ...(floorRun ? [`floor (GET /api/health): ${fmt(floorRun)}; ${(floorRun.rps / bareRun.rps).toFixed(2)}x the bare handler`] : []),
-        ...(toolRun ? [`framework floor (GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`] : []),
+        ...(toolRun
+          ? [`framework floor (GET ${TOOL_PATH}, no session, no database): ${fmt(toolRun)}; ${(toolRun.rps / bareRun.rps).toFixed(2)}x the bare handler`]
+          : []),
       ],
     });
   } finally {

@@ -31,7 +31,14 @@ import { startAppServer } from '../scripts/app-server';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: object) => AutocannonInstance;
 type AutocannonInstance = Promise<AutocannonResult> & { on(event: 'response', fn: (client: unknown, status: number, bytes: number, ms: number) => void): void };
-type AutocannonResult = { requests: { average: number; total: number }; latency: { p50: number; p99: number }; non2xx: number; errors: number; timeouts: number; duration: number };
+type AutocannonResult = {
+  requests: { average: number; total: number };
+  latency: { p50: number; p99: number };
+  non2xx: number;
+  errors: number;
+  timeouts: number;
+  duration: number;
+};
 
 const root = path.resolve(__dirname, '..');
 const appPort = Number(process.env.BENCH_APP_PORT ?? 3121);
@@ -57,8 +64,7 @@ function appEnv(): NodeJS.ProcessEnv {
   const secretFile = path.join(root, '.data', 'nextauth-secret');
   const secret = fs.existsSync(secretFile) ? fs.readFileSync(secretFile, 'utf8').trim() : 'bench-secret-0123456789abcdef';
   // Both pages measured are static; the database is only named so the app's configuration check passes.
-  const databaseUrl =
-    process.env.DATABASE_URL ?? execFileSync('bash', [path.join(root, 'scripts/db.sh'), 'url', 'brinewright'], { encoding: 'utf8' }).trim();
+  const databaseUrl = process.env.DATABASE_URL ?? execFileSync('bash', [path.join(root, 'scripts/db.sh'), 'url', 'brinewright'], { encoding: 'utf8' }).trim();
   return {
     ...process.env,
     NODE_ENV: 'production',
@@ -261,12 +267,20 @@ async function main() {
     ['Brine bench (/bench)', await firstLoadJs('/bench')],
   ] as const;
   for (const [name, js] of rows) {
-    log(`  ${name.padEnd(48)} ${String(js.files).padStart(3)} files  ${kb(js.raw).padStart(10)}  gzip ${kb(js.gzip).padStart(9)}  ${(js.gzip / bare.gzip).toFixed(2)}× bare`);
+    log(
+      `  ${name.padEnd(48)} ${String(js.files).padStart(3)} files  ${kb(js.raw).padStart(10)}  gzip ${kb(js.gzip).padStart(9)}  ${(js.gzip / bare.gzip).toFixed(2)}× bare`,
+    );
   }
 
-  const load1 = () => os.loadavg().map((n) => n.toFixed(1)).join(' ');
+  const load1 = () =>
+    os
+      .loadavg()
+      .map((n) => n.toFixed(1))
+      .join(' ');
   const loadBefore = os.loadavg();
-  log(`load average before the runs: ${load1()} on ${os.availableParallelism()} cores (other work on the machine lowers the app's figures far more than nginx's)`);
+  log(
+    `load average before the runs: ${load1()} on ${os.availableParallelism()} cores (other work on the machine lowers the app's figures far more than nginx's)`,
+  );
   log(`warming the app up (2 s per page)`);
   for (const page of pages) await load('warm-up', appUrl + page.path, 2);
 
@@ -288,9 +302,13 @@ async function main() {
 
   log(`load average after the runs: ${load1()}`);
   log('');
-  log(`${'run'.padEnd(18)} ${'req/s'.padStart(9)} ${'p50 ms'.padStart(8)} ${'p95 ms'.padStart(8)} ${'requests'.padStart(9)} ${'not 2xx'.padStart(8)} ${'app CPU ms/req'.padStart(15)} ${'nginx CPU ms/req'.padStart(17)}`);
+  log(
+    `${'run'.padEnd(18)} ${'req/s'.padStart(9)} ${'p50 ms'.padStart(8)} ${'p95 ms'.padStart(8)} ${'requests'.padStart(9)} ${'not 2xx'.padStart(8)} ${'app CPU ms/req'.padStart(15)} ${'nginx CPU ms/req'.padStart(17)}`,
+  );
   for (const r of results) {
-    log(`${r.label.padEnd(18)} ${r.rps.toFixed(0).padStart(9)} ${r.p50.toFixed(0).padStart(8)} ${r.p95.toFixed(0).padStart(8)} ${String(r.total).padStart(9)} ${String(r.bad).padStart(8)} ${r.appCpuMs.toFixed(3).padStart(15)} ${r.nginxCpuMs.toFixed(3).padStart(17)}`);
+    log(
+      `${r.label.padEnd(18)} ${r.rps.toFixed(0).padStart(9)} ${r.p50.toFixed(0).padStart(8)} ${r.p95.toFixed(0).padStart(8)} ${String(r.total).padStart(9)} ${String(r.bad).padStart(8)} ${r.appCpuMs.toFixed(3).padStart(15)} ${r.nginxCpuMs.toFixed(3).padStart(17)}`,
+    );
   }
   const figures: BenchFigure[] = [];
   const find = (label: string) => results.find((r) => r.label === label);
@@ -310,8 +328,18 @@ async function main() {
       log(`NOTE ${note}`);
       warnings.push(note);
     }
-    log(`${page.name}: server CPU per request, app ${appRun.appCpuMs.toFixed(3)} ms, nginx ${nginxRun.nginxCpuMs.toFixed(3)} ms: nginx's/app's = ${cpuRatio.toFixed(2)}× (less disturbed by other work than req/s)`);
-    figures.push({ name: `${page.path}: the app alone, server CPU per request`, value: appRun.appCpuMs, unit: 'ms', anchor: { name: 'nginx serving the file', value: nginxRun.nginxCpuMs, unit: 'ms' }, ratio: cpuRatio, goal: 'ratio = nginx CPU ÷ app CPU (≥ 0.5 would match the req/s goal)', met: cpuRatio >= 0.5 });
+    log(
+      `${page.name}: server CPU per request, app ${appRun.appCpuMs.toFixed(3)} ms, nginx ${nginxRun.nginxCpuMs.toFixed(3)} ms: nginx's/app's = ${cpuRatio.toFixed(2)}× (less disturbed by other work than req/s)`,
+    );
+    figures.push({
+      name: `${page.path}: the app alone, server CPU per request`,
+      value: appRun.appCpuMs,
+      unit: 'ms',
+      anchor: { name: 'nginx serving the file', value: nginxRun.nginxCpuMs, unit: 'ms' },
+      ratio: cpuRatio,
+      goal: 'ratio = nginx CPU ÷ app CPU (≥ 0.5 would match the req/s goal)',
+      met: cpuRatio >= 0.5,
+    });
     figures.push({ name: `${page.path}: the app alone, p95`, value: appRun.p95, unit: 'ms', anchor: { name: 'nginx, p95', value: nginxRun.p95, unit: 'ms' } });
   }
   for (const page of pages) {
@@ -322,19 +350,50 @@ async function main() {
     if (via) {
       const ratio = via.rps / nginxRun.rps;
       log(`${page.name}: through the nginx proxy (no cache)/nginx file = ${ratio.toFixed(2)}× — still the app's own speed, plus a hop`);
-      figures.push({ name: `${page.path}: app through the nginx reverse proxy, no cache, req/s`, value: via.rps, unit: 'req/s', anchor, ratio, goal: 'for comparison' });
+      figures.push({
+        name: `${page.path}: app through the nginx reverse proxy, no cache, req/s`,
+        value: via.rps,
+        unit: 'req/s',
+        anchor,
+        ratio,
+        goal: 'for comparison',
+      });
     }
     if (cached) {
       const ratio = cached.rps / nginxRun.rps;
       log(`${page.name}: through nginx with the 5 s micro-cache/nginx file = ${ratio.toFixed(2)}× — nginx's cache answering, NOT the app's own figure`);
-      figures.push({ name: `${page.path}: deployment path, nginx micro-cache (5 s) in front of the app, req/s — nginx's cache, not the app`, value: cached.rps, unit: 'req/s', anchor, ratio, goal: '≥ 0.5× (deployment path)', met: ratio >= 0.5 });
-      figures.push({ name: `${page.path}: deployment path, CPU per request (nginx + app)`, value: cached.nginxCpuMs + cached.appCpuMs, unit: 'ms', anchor: { name: 'nginx serving the file', value: nginxRun.nginxCpuMs, unit: 'ms' } });
+      figures.push({
+        name: `${page.path}: deployment path, nginx micro-cache (5 s) in front of the app, req/s — nginx's cache, not the app`,
+        value: cached.rps,
+        unit: 'req/s',
+        anchor,
+        ratio,
+        goal: '≥ 0.5× (deployment path)',
+        met: ratio >= 0.5,
+      });
+      figures.push({
+        name: `${page.path}: deployment path, CPU per request (nginx + app)`,
+        value: cached.nginxCpuMs + cached.appCpuMs,
+        unit: 'ms',
+        anchor: { name: 'nginx serving the file', value: nginxRun.nginxCpuMs, unit: 'ms' },
+      });
     }
   }
   const lessonJs = rows[1][1];
   const benchJs = rows[2][1];
-  figures.push(ratioFigure(`first-load JS of ${lessonPath} (gzip)`, lessonJs.gzip / 1024, 'kB', { name: 'a bare page of the app (/)', value: bare.gzip / 1024 }, 1.3, false));
-  figures.push(ratioFigure('first-load JS of /bench (gzip)', benchJs.gzip / 1024, 'kB', { name: 'a bare page of the app (/)', value: bare.gzip / 1024 }, 1.3, false));
+  figures.push(
+    ratioFigure(
+      `first-load JS of ${lessonPath} (gzip)`,
+      lessonJs.gzip / 1024,
+      'kB',
+      { name: 'a bare page of the app (/)', value: bare.gzip / 1024 },
+      1.3,
+      false,
+    ),
+  );
+  figures.push(
+    ratioFigure('first-load JS of /bench (gzip)', benchJs.gzip / 1024, 'kB', { name: 'a bare page of the app (/)', value: bare.gzip / 1024 }, 1.3, false),
+  );
   const file = writeBenchResults({
     bench: 'pages',
     loadAverage: { before: loadBefore, after: os.loadavg() },
@@ -343,7 +402,9 @@ async function main() {
       ...warnings.map((w) => `${w}.`),
       `${connections} connections, ${seconds} s a run, autocannon on the same machine (it takes CPU from both servers); no Accept-Encoding, so neither side compresses.`,
       `HTML sizes: ${pages.map((p) => `${p.path} ${kb(fs.statSync(path.join(dir, 'www', p.file)).size)}`).join(', ')}.`,
-      ...results.map((r) => `${r.label}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(0)} ms, p95 ${r.p95.toFixed(0)} ms, ${r.total} requests, ${r.bad} not 2xx`),
+      ...results.map(
+        (r) => `${r.label}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(0)} ms, p95 ${r.p95.toFixed(0)} ms, ${r.total} requests, ${r.bad} not 2xx`,
+      ),
     ],
   });
   log(`results: ${path.relative(root, file)}`);

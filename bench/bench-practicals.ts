@@ -30,7 +30,13 @@ type CannonRequest = { method?: string; path?: string; headers?: Record<string, 
 type CannonInstance = { on(event: 'response', listener: (client: unknown, status: number, bytes: number, responseTime: number) => void): void };
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (
-  options: { url: string; connections: number; duration: number; headers: Record<string, string>; requests: { setupRequest: (req: CannonRequest) => CannonRequest }[] },
+  options: {
+    url: string;
+    connections: number;
+    duration: number;
+    headers: Record<string, string>;
+    requests: { setupRequest: (req: CannonRequest) => CannonRequest }[];
+  },
   done: (error: Error | null, result: CannonResult) => void,
 ) => CannonInstance;
 
@@ -100,7 +106,13 @@ async function signIn(base: string, email: string, password: string): Promise<st
 
 function serverPeakRssMb(pid: number): number {
   // The HTTP server is a child of the server process (or its workers); take the largest peak among the process and its children.
-  const pids = [pid, ...run('bash', ['-c', `pgrep -P ${pid} || true`]).split('\n').filter(Boolean).map(Number)];
+  const pids = [
+    pid,
+    ...run('bash', ['-c', `pgrep -P ${pid} || true`])
+      .split('\n')
+      .filter(Boolean)
+      .map(Number),
+  ];
   let peak = 0;
   for (const p of pids) {
     try {
@@ -124,22 +136,50 @@ async function seedSubmissions(url: string, count: number) {
   for (let start = 0; start < count; start += chunk) {
     const n = Math.min(chunk, count - start);
     const stamp = new Date();
-    const users = Array.from({ length: n }, (_, i) => [`bench-${start + i}@bench.example`, `Bench Learner ${String(start + i).padStart(5, '0')}`, 'learner', '$2a$10$benchbenchbenchbenchbeOGZ0l2bq0M0CqvKkF2T7u3bJ0d1Jb5bK', stamp, stamp]);
-    await sequelize.query(`INSERT INTO users (email, name, role, passwordHash, createdAt, updatedAt) VALUES ${users.map(() => '(?,?,?,?,?,?)').join(',')}`, { replacements: users.flat() });
-    const [ids] = (await sequelize.query('SELECT id FROM users WHERE email LIKE ? ORDER BY id DESC LIMIT ?', { replacements: ['bench-%', n] })) as [{ id: number }[], unknown];
+    const users = Array.from({ length: n }, (_, i) => [
+      `bench-${start + i}@bench.example`,
+      `Bench Learner ${String(start + i).padStart(5, '0')}`,
+      'learner',
+      '$2a$10$benchbenchbenchbenchbeOGZ0l2bq0M0CqvKkF2T7u3bJ0d1Jb5bK',
+      stamp,
+      stamp,
+    ]);
+    await sequelize.query(`INSERT INTO users (email, name, role, passwordHash, createdAt, updatedAt) VALUES ${users.map(() => '(?,?,?,?,?,?)').join(',')}`, {
+      replacements: users.flat(),
+    });
+    const [ids] = (await sequelize.query('SELECT id FROM users WHERE email LIKE ? ORDER BY id DESC LIMIT ?', { replacements: ['bench-%', n] })) as [
+      { id: number }[],
+      unknown,
+    ];
     ids.reverse();
     const enrollments = ids.map((u, i) => {
       const w = workshops[(start + i) % workshops.length]?.id ?? null;
       return [u.id, course.id, w, w ? String(w) : 'self-paced', 'active', 4500, stamp, stamp];
     });
-    await sequelize.query(`INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, createdAt, updatedAt) VALUES ${enrollments.map(() => '(?,?,?,?,?,?,?,?)').join(',')}`, { replacements: enrollments.flat() });
-    const [eids] = (await sequelize.query('SELECT id, userId FROM enrollments WHERE userId IN (?) ORDER BY userId', { replacements: [ids.map((u) => u.id)] })) as [{ id: number; userId: number }[], unknown];
+    await sequelize.query(
+      `INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, createdAt, updatedAt) VALUES ${enrollments.map(() => '(?,?,?,?,?,?,?,?)').join(',')}`,
+      { replacements: enrollments.flat() },
+    );
+    const [eids] = (await sequelize.query('SELECT id, userId FROM enrollments WHERE userId IN (?) ORDER BY userId', {
+      replacements: [ids.map((u) => u.id)],
+    })) as [{ id: number; userId: number }[], unknown];
     const practicals = eids.map((e, i) => {
       const k = start + i;
       const flagged = k % 3 === 0;
       const flags = flagged ? [{ check: 'processing-time', message: 'Processed 10 min, shorter than the published 15 min.' }] : [];
       const details = { product: products[k % products.length], jar: 'pint', jars: 6, minutes: flagged ? 10 : 15, altitudeFt: 5200 };
-      return [e.id, e.userId, 1, statuses[k % statuses.length], JSON.stringify(details), JSON.stringify(flags), flags.length, new Date(now - (k % 60) * 86_400_000 - k * 1000), stamp, stamp];
+      return [
+        e.id,
+        e.userId,
+        1,
+        statuses[k % statuses.length],
+        JSON.stringify(details),
+        JSON.stringify(flags),
+        flags.length,
+        new Date(now - (k % 60) * 86_400_000 - k * 1000),
+        stamp,
+        stamp,
+      ];
     });
     await sequelize.query(
       `INSERT INTO practicals (enrollmentId, userId, round, status, details, flags, flagCount, submittedAt, createdAt, updatedAt) VALUES ${practicals.map(() => '(?,?,?,?,?,?,?,?,?,?)').join(',')}`,
@@ -168,7 +208,12 @@ async function main() {
   const onlyTable = process.env.BENCH_ONLY === 'table';
   const cpuProf = process.env.BENCH_CPU_PROF ? path.resolve(process.env.BENCH_CPU_PROF) : undefined;
   results.loadAverageBefore = os.loadavg();
-  console.log(`[bench] load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')} (2-core machine: above 2 the figures are noisy)`);
+  console.log(
+    `[bench] load average ${os
+      .loadavg()
+      .map((x) => x.toFixed(2))
+      .join(' ')} (2-core machine: above 2 the figures are noisy)`,
+  );
 
   // 1a. Re-encode in a fresh process.
   const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-bench-'));
@@ -179,9 +224,16 @@ async function main() {
     fs.writeFileSync(file, jpeg);
     const meta = await sharp(jpeg).metadata();
     console.log(`[bench] test photo: ${(jpeg.length / MB).toFixed(2)} MB, ${meta.width}×${meta.height} JPEG with orientation and GPS tags`);
-    const child = JSON.parse(run(path.join(root, 'node_modules/.bin/tsx'), [__filename, '--reencode', file])) as { times: number[]; rssBeforeMb: number; peakRssMb: number; out: { width: number; height: number; bytes: number } };
+    const child = JSON.parse(run(path.join(root, 'node_modules/.bin/tsx'), [__filename, '--reencode', file])) as {
+      times: number[];
+      rssBeforeMb: number;
+      peakRssMb: number;
+      out: { width: number; height: number; bytes: number };
+    };
     results.reencode = { inputMb: jpeg.length / MB, inputPx: [meta.width, meta.height], ...child };
-    console.log(`[bench] re-encode in process: ${child.times.map((t) => `${t.toFixed(0)} ms`).join(', ')} → ${child.out.width}×${child.out.height}, ${(child.out.bytes / 1024).toFixed(0)} KB; peak RSS ${child.peakRssMb.toFixed(0)} MB (${child.rssBeforeMb.toFixed(0)} MB after reading the file)`);
+    console.log(
+      `[bench] re-encode in process: ${child.times.map((t) => `${t.toFixed(0)} ms`).join(', ')} → ${child.out.width}×${child.out.height}, ${(child.out.bytes / 1024).toFixed(0)} KB; peak RSS ${child.peakRssMb.toFixed(0)} MB (${child.rssBeforeMb.toFixed(0)} MB after reading the file)`,
+    );
   }
 
   // 2. Database of its own, migrated, demo-seeded, 5,000 submissions.
@@ -231,7 +283,9 @@ async function main() {
       }
       const rssAfter = serverPeakRssMb(app.pid!);
       results.upload = { times: uploadTimes, serverPeakRssMbBefore: rssIdle, serverPeakRssMbAfter: rssAfter };
-      console.log(`[bench] POST /api/photos (10 MB JPEG, loopback): ${uploadTimes.map((t) => `${t.toFixed(0)} ms`).join(', ')}; server peak RSS ${rssIdle.toFixed(0)} MB before → ${rssAfter.toFixed(0)} MB after`);
+      console.log(
+        `[bench] POST /api/photos (10 MB JPEG, loopback): ${uploadTimes.map((t) => `${t.toFixed(0)} ms`).join(', ')}; server peak RSS ${rssIdle.toFixed(0)} MB before → ${rssAfter.toFixed(0)} MB after`,
+      );
     }
 
     // 2. The Tasting table's data route under load, as the demo instructor.
@@ -310,12 +364,19 @@ async function main() {
   fs.mkdirSync(path.join(root, 'bench-results'), { recursive: true });
   fs.writeFileSync(path.join(root, 'bench-results', 'practicals.json'), JSON.stringify(results, null, 2));
   results.loadAverageAfter = os.loadavg();
-  console.log(`[bench] load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')} after`);
+  console.log(
+    `[bench] load average ${os
+      .loadavg()
+      .map((x) => x.toFixed(2))
+      .join(' ')} after`,
+  );
   const goals = {
     reencodeUnder2s: results.reencode ? Math.max(...(results.reencode as { times: number[] }).times) < 2000 : undefined,
     tastingTableP95Under150ms: (results.tastingTable as { p95: number }).p95 < 150,
   };
-  console.log(`[bench] goals: re-encode < 2 s: ${goals.reencodeUnder2s === undefined ? 'not measured' : goals.reencodeUnder2s ? 'met' : 'NOT met'}; Tasting table p95 < 150 ms: ${goals.tastingTableP95Under150ms ? 'met' : 'NOT met'}`);
+  console.log(
+    `[bench] goals: re-encode < 2 s: ${goals.reencodeUnder2s === undefined ? 'not measured' : goals.reencodeUnder2s ? 'met' : 'NOT met'}; Tasting table p95 < 150 ms: ${goals.tastingTableP95Under150ms ? 'met' : 'NOT met'}`,
+  );
   // For `npm run bench` (bench/bench.ts): the same figures as JSON.
   const reencode = results.reencode as { times: number[]; peakRssMb: number } | undefined;
   const table = results.tastingTable as { p95: number; rps: number; cpuMsPerRequest: number };
@@ -323,7 +384,17 @@ async function main() {
     bench: 'practicals',
     loadAverage: { before: results.loadAverageBefore as number[], after: os.loadavg() },
     figures: [
-      ...(reencode ? [{ name: 're-encoding a 10 MB photo, slowest of the runs', value: Math.max(...reencode.times), unit: 'ms', goal: '< 2000 ms', met: goals.reencodeUnder2s }] : []),
+      ...(reencode
+        ? [
+            {
+              name: 're-encoding a 10 MB photo, slowest of the runs',
+              value: Math.max(...reencode.times),
+              unit: 'ms',
+              goal: '< 2000 ms',
+              met: goals.reencodeUnder2s,
+            },
+          ]
+        : []),
       ...(reencode ? [{ name: 're-encoding a 10 MB photo, peak RSS', value: reencode.peakRssMb, unit: 'MB' }] : []),
       { name: 'Tasting table data route (5,000 submissions), p95', value: table.p95, unit: 'ms', goal: '< 150 ms', met: goals.tastingTableP95Under150ms },
       { name: 'Tasting table data route, req/s', value: table.rps, unit: 'req/s' },

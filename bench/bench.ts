@@ -197,9 +197,14 @@ function report(runs: Run[], facts: { started: Date; totalS: number; buildS: num
   out.push(`# Brinewright benchmarks — ${facts.started.toISOString().slice(0, 16).replace('T', ' ')} UTC`, '');
   out.push('Written by `npm run bench` (bench/bench.ts). Every figure is from this one run on this machine.', '');
   out.push('## Machine', '');
-  out.push(`- ${os.availableParallelism()} cores (${cpus[0]?.model ?? 'unknown CPU'}), ${(os.totalmem() / 1024 ** 3).toFixed(1)} GB memory, ${os.type()} ${os.release()}`);
+  out.push(
+    `- ${os.availableParallelism()} cores (${cpus[0]?.model ?? 'unknown CPU'}), ${(os.totalmem() / 1024 ** 3).toFixed(1)} GB memory, ${os.type()} ${os.release()}`,
+  );
   out.push(`- Node ${process.version}; commit ${gitCommit()}`);
-  out.push(`- load average (1, 5, 15 min): ${la(facts.loadBefore)} before, ${la(facts.loadAfter)} after` + (facts.loadBefore[0] > os.availableParallelism() ? ' — the machine was busy with other work: figures are noisy and low' : ''));
+  out.push(
+    `- load average (1, 5, 15 min): ${la(facts.loadBefore)} before, ${la(facts.loadAfter)} after` +
+      (facts.loadBefore[0] > os.availableParallelism() ? ' — the machine was busy with other work: figures are noisy and low' : ''),
+  );
   out.push(`- total time ${(facts.totalS / 60).toFixed(1)} min (shared build ${facts.buildS ? `${facts.buildS.toFixed(0)} s` : 'reused'})`, '');
   out.push('## Figures', '');
   out.push('| bench | figure | value | anchor | ratio | goal | |', '| --- | --- | --- | --- | --- | --- | --- |');
@@ -225,7 +230,9 @@ function report(runs: Run[], facts: { started: Date; totalS: number; buildS: num
 async function main() {
   const started = new Date();
   const pkg = JSON.parse(fs.readFileSync(path.join(root, 'package.json'), 'utf8')) as { scripts?: Record<string, string> };
-  const only = process.env.BENCH_ONLY?.split(',').map((s) => s.trim()).filter(Boolean);
+  const only = process.env.BENCH_ONLY?.split(',')
+    .map((s) => s.trim())
+    .filter(Boolean);
   const scripts = discoverBenchScripts(pkg).filter((s) => !only || only.includes(s.name));
   if (!scripts.length) throw new Error('no bench:* scripts to run');
   log(`${scripts.length} bench scripts: ${scripts.map((s) => s.name).join(', ')}`);

@@ -19,7 +19,14 @@ const stAt = args.indexOf('--stacks');
 const STACKS = stAt >= 0 ? args[stAt + 1].split(',') : [];
 const optionValues = new Set([topAt, incAt, stAt].filter((i) => i >= 0).map((i) => i + 1));
 const inputs = args.filter((a, i) => !a.startsWith('--') && !optionValues.has(i));
-const files = inputs.flatMap((p) => (fs.statSync(p).isDirectory() ? fs.readdirSync(p).filter((f) => f.endsWith('.cpuprofile')).map((f) => path.join(p, f)) : [p]));
+const files = inputs.flatMap((p) =>
+  fs.statSync(p).isDirectory()
+    ? fs
+        .readdirSync(p)
+        .filter((f) => f.endsWith('.cpuprofile'))
+        .map((f) => path.join(p, f))
+    : [p],
+);
 if (!files.length) {
   console.error('usage: tsx bench/cpu-profile-summary.ts <file.cpuprofile | folder>... [--top N]');
   process.exit(2);
@@ -57,9 +64,15 @@ for (const file of files) {
   const idle = [...fns].filter(([k]) => k.startsWith('(idle)')).reduce((a, [, v]) => a + v, 0);
   const busy = totalUs - idle;
   const pct = (us: number) => `${((100 * us) / busy).toFixed(1).padStart(5)} %`;
-  console.log(`\n${path.basename(file)}: ${(totalUs / 1e6).toFixed(1)} s profiled, ${(busy / 1e6).toFixed(1)} s busy (${((100 * busy) / totalUs).toFixed(0)} %); shares below are of busy time`);
+  console.log(
+    `\n${path.basename(file)}: ${(totalUs / 1e6).toFixed(1)} s profiled, ${(busy / 1e6).toFixed(1)} s busy (${((100 * busy) / totalUs).toFixed(0)} %); shares below are of busy time`,
+  );
   console.log('  by origin:');
-  for (const [k, v] of [...pkgs].filter(([k]) => k !== '(idle)').sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`   ${pct(v)}  ${(v / 1000).toFixed(0).padStart(7)} ms  ${k}`);
+  for (const [k, v] of [...pkgs]
+    .filter(([k]) => k !== '(idle)')
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, 15))
+    console.log(`   ${pct(v)}  ${(v / 1000).toFixed(0).padStart(7)} ms  ${k}`);
   if (INCLUSIVE.length) {
     const parent = new Map<number, number>();
     for (const n of profile.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
@@ -100,5 +113,9 @@ for (const file of files) {
     }
   }
   console.log(`  top ${TOP} functions by self time:`);
-  for (const [k, v] of [...fns].filter(([k]) => !k.startsWith('(idle)')).sort((a, b) => b[1] - a[1]).slice(0, TOP)) console.log(`   ${pct(v)}  ${(v / 1000).toFixed(0).padStart(7)} ms  ${k}`);
+  for (const [k, v] of [...fns]
+    .filter(([k]) => !k.startsWith('(idle)'))
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, TOP))
+    console.log(`   ${pct(v)}  ${(v / 1000).toFixed(0).padStart(7)} ms  ${k}`);
 }

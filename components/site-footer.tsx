@@ -10,10 +10,9 @@ export function SiteFooter() {
             Food-safety caution
           </h2>
           <p>
-            Brinewright teaches and checks arithmetic; it never calls a recipe safe. Follow a tested recipe from a recognised food-safety
-            authority exactly, follow your local codes and the advice of your local extension service, and defer to licensed practice.
-            Home-canned food that is under-acidified or under-processed can carry botulism, which can kill. When in doubt, throw it out
-            without tasting it.
+            Brinewright teaches and checks arithmetic; it never calls a recipe safe. Follow a tested recipe from a recognised food-safety authority exactly,
+            follow your local codes and the advice of your local extension service, and defer to licensed practice. Home-canned food that is under-acidified or
+            under-processed can carry botulism, which can kill. When in doubt, throw it out without tasting it.
           </p>
         </section>
         <nav aria-label="Footer" className="flex flex-col gap-1">

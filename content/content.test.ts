@@ -40,7 +40,14 @@ describe('the courses', () => {
   it('has the flagship and the refresher with the fees of the program', () => {
     expect(getCourses().map((c) => c.slug)).toEqual(['pickling-and-canning', 'volunteer-refresher']);
     const flagship = getCourse('pickling-and-canning')!;
-    expect(flagship).toMatchObject({ title: 'Safe Pickling and Water-Bath Canning', feeCents: 4500, currency: 'usd', passMarkPct: 80, workshopRequired: true, finalExam: 'pickling-and-canning--final-exam' });
+    expect(flagship).toMatchObject({
+      title: 'Safe Pickling and Water-Bath Canning',
+      feeCents: 4500,
+      currency: 'usd',
+      passMarkPct: 80,
+      workshopRequired: true,
+      finalExam: 'pickling-and-canning--final-exam',
+    });
     const refresher = getCourse('volunteer-refresher')!;
     expect(refresher).toMatchObject({ title: 'Volunteer Refresher: Acid, Time and Altitude', feeCents: 1500, currency: 'usd', workshopRequired: false });
     expect(getCourse('no-such-course')).toBeNull();
@@ -108,11 +115,16 @@ const blocksOf = (body: string) =>
     .filter((b) => b && !b.startsWith('#'));
 
 describe('the numbers in the lessons', () => {
-  it.each(allLessons.map((l) => [l.file, l] as const))('%s names a source (or says from memory, common practice or computed) beside every safety number', (_file, lesson) => {
-    const blocks = blocksOf(lesson.body);
-    const unsourced = blocks.filter((block, i) => SAFETY_NUMBER.test(block) && !NAMED_SOURCE.test([blocks[i - 1] ?? '', block, blocks[i + 1] ?? ''].join('\n')));
-    expect(unsourced.map((b) => b.slice(0, 120))).toEqual([]);
-  });
+  it.each(allLessons.map((l) => [l.file, l] as const))(
+    '%s names a source (or says from memory, common practice or computed) beside every safety number',
+    (_file, lesson) => {
+      const blocks = blocksOf(lesson.body);
+      const unsourced = blocks.filter(
+        (block, i) => SAFETY_NUMBER.test(block) && !NAMED_SOURCE.test([blocks[i - 1] ?? '', block, blocks[i + 1] ?? ''].join('\n')),
+      );
+      expect(unsourced.map((b) => b.slice(0, 120))).toEqual([]);
+    },
+  );
 
   it('the check above fails on a number without a source', () => {
     const blocks = blocksOf('Intro text.\n\nProcess pints for 10 minutes.\n\nMore text.');
@@ -168,7 +180,14 @@ describe('the fermenting lesson', () => {
     expect(componentsUsed(lesson.body)).toContain('SaltCalculator');
     const brineSection = lesson.body.slice(lesson.body.indexOf('## Salt by weight'), lesson.body.indexOf('## Keep everything'));
     expect(brineSection).toContain('<SaltCalculator');
-    for (const topic of ['## Keep everything under the brine', '## Temperature and time', 'cool, slow option', '## Scum, mould and when to discard', '## Refrigerate or can', 'heat it slowly to a boil']) {
+    for (const topic of [
+      '## Keep everything under the brine',
+      '## Temperature and time',
+      'cool, slow option',
+      '## Scum, mould and when to discard',
+      '## Refrigerate or can',
+      'heat it slowly to a boil',
+    ]) {
       expect(lesson.body).toContain(topic);
     }
   });

@@ -9,7 +9,9 @@ describe('cn', () => {
 
   it("keeps the theme's own classes that set different properties", () => {
     // text-sm is a size and text-ink-soft a colour; rounded-jar and shadow-shelf are theme tokens.
-    expect(cn('text-sm text-ink-soft', 'rounded-jar shadow-shelf', 'font-display font-bold')).toBe('text-sm text-ink-soft rounded-jar shadow-shelf font-display font-bold');
+    expect(cn('text-sm text-ink-soft', 'rounded-jar shadow-shelf', 'font-display font-bold')).toBe(
+      'text-sm text-ink-soft rounded-jar shadow-shelf font-display font-bold',
+    );
   });
 
   it('drops false, null and undefined like clsx', () => {

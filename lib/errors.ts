@@ -2,7 +2,8 @@ import { ZodError, type z } from 'zod';
 import { getEnv } from '@/lib/env';
 import { CROSS_SITE_MESSAGE, isCrossSite } from '@/lib/server/same-origin';
 
-export type ErrorType = 'bad_request' | 'unauthorized' | 'forbidden' | 'not_found' | 'conflict' | 'unprocessable' | 'rate_limit' | 'too_large' | 'unsupported_media' | 'unavailable';
+export type ErrorType =
+  'bad_request' | 'unauthorized' | 'forbidden' | 'not_found' | 'conflict' | 'unprocessable' | 'rate_limit' | 'too_large' | 'unsupported_media' | 'unavailable';
 
 const STATUS: Record<ErrorType, number> = {
   bad_request: 400,
@@ -50,7 +51,12 @@ export class AppError extends Error {
 
   toJSON() {
     // The last guard against a message that quotes a huge input.
-    return { error: this.type, message: this.message.length > 600 ? clipText(this.message, 600) : this.message, ...(this.fields ? { fields: this.fields } : {}), ...(this.extra ?? {}) };
+    return {
+      error: this.type,
+      message: this.message.length > 600 ? clipText(this.message, 600) : this.message,
+      ...(this.fields ? { fields: this.fields } : {}),
+      ...(this.extra ?? {}),
+    };
   }
 
   toResponse(init: ResponseInit = {}): Response {
@@ -100,7 +106,19 @@ export function isDatabaseDown(error: unknown): boolean {
     seen.add(current);
     const e = current as { name?: string; code?: string; message?: string; parent?: unknown; original?: unknown; cause?: unknown };
     if (e.name && /Sequelize(Connection\w*|HostNotReachable|HostNotFound|AccessDenied|ConnectionAcquireTimeout)Error/.test(e.name)) return true;
-    if (e.code && ['ECONNREFUSED', 'ECONNRESET', 'ER_GET_CONNECTION_TIMEOUT', 'ER_CONNECTION_TIMEOUT', 'ER_SOCKET_UNEXPECTED_CLOSE', 'PROTOCOL_CONNECTION_LOST', 'ER_CLOSING_POOL'].includes(e.code)) return true;
+    if (
+      e.code &&
+      [
+        'ECONNREFUSED',
+        'ECONNRESET',
+        'ER_GET_CONNECTION_TIMEOUT',
+        'ER_CONNECTION_TIMEOUT',
+        'ER_SOCKET_UNEXPECTED_CLOSE',
+        'PROTOCOL_CONNECTION_LOST',
+        'ER_CLOSING_POOL',
+      ].includes(e.code)
+    )
+      return true;
     current = e.parent ?? e.original ?? e.cause;
   }
   return false;
@@ -148,7 +166,14 @@ export function route<C = unknown>(handler: Handler<C>): Handler<C> {
       return await handler(request, context);
     } catch (error) {
       // Next's own control-flow errors (redirect, notFound) must pass through.
-      if (error && typeof error === 'object' && 'digest' in error && typeof (error as { digest: unknown }).digest === 'string' && /^NEXT_/.test((error as { digest: string }).digest)) throw error;
+      if (
+        error &&
+        typeof error === 'object' &&
+        'digest' in error &&
+        typeof (error as { digest: unknown }).digest === 'string' &&
+        /^NEXT_/.test((error as { digest: string }).digest)
+      )
+        throw error;
       return errorResponse(error);
     }
   };

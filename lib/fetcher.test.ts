@@ -9,15 +9,28 @@ describe('fetchJson', () => {
     const fetch = vi.fn(async () => Response.json({ ok: 1 }, { status: 201 }));
     vi.stubGlobal('fetch', fetch);
     await expect(postJson('/api/x', { a: 1 })).resolves.toEqual({ ok: 1 });
-    expect(fetch).toHaveBeenCalledWith('/api/x', { method: 'POST', body: '{"a":1}', headers: { accept: 'application/json', 'content-type': 'application/json' } });
+    expect(fetch).toHaveBeenCalledWith('/api/x', {
+      method: 'POST',
+      body: '{"a":1}',
+      headers: { accept: 'application/json', 'content-type': 'application/json' },
+    });
   });
 
   it('mirrors the server’s AppError body: status, type, message, fields and the rest', async () => {
-    const server = new AppError('bad_request', 'Check the fields.', { fields: { email: ['Enter an e-mail address.'] }, extra: { nextAttemptAt: '2026-12-05' } });
+    const server = new AppError('bad_request', 'Check the fields.', {
+      fields: { email: ['Enter an e-mail address.'] },
+      extra: { nextAttemptAt: '2026-12-05' },
+    });
     vi.stubGlobal('fetch', async () => server.toResponse());
     const error = await fetchJson('/api/x').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(FetchError);
-    expect(error).toMatchObject({ status: 400, type: 'bad_request', message: 'Check the fields.', fields: { email: ['Enter an e-mail address.'] }, unreachable: false });
+    expect(error).toMatchObject({
+      status: 400,
+      type: 'bad_request',
+      message: 'Check the fields.',
+      fields: { email: ['Enter an e-mail address.'] },
+      unreachable: false,
+    });
     expect((error as FetchError).body.nextAttemptAt).toBe('2026-12-05');
   });
 

@@ -35,7 +35,10 @@ export function errorMessage(error: unknown, fallback: string): string {
 export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> {
   let response: Response;
   try {
-    response = await fetch(url, { ...init, headers: { accept: 'application/json', ...(init?.body ? { 'content-type': 'application/json' } : {}), ...(init?.headers ?? {}) } });
+    response = await fetch(url, {
+      ...init,
+      headers: { accept: 'application/json', ...(init?.body ? { 'content-type': 'application/json' } : {}), ...(init?.headers ?? {}) },
+    });
   } catch {
     throw new FetchError(0, {}, UNREACHABLE);
   }

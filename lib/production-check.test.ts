@@ -25,7 +25,9 @@ describe('demoSettings', () => {
   it('names each secret equal to a value kept in the repository', () => {
     for (const [name, values] of Object.entries(DEMO_SECRETS)) {
       for (const value of values!) {
-        const extra = name.startsWith('S3_') ? { STORAGE_DRIVER: 's3', S3_BUCKET: 'photos', S3_ACCESS_KEY_ID: 'AKIAPROGRAM', S3_SECRET_ACCESS_KEY: 'program-s3-secret' } : {};
+        const extra = name.startsWith('S3_')
+          ? { STORAGE_DRIVER: 's3', S3_BUCKET: 'photos', S3_ACCESS_KEY_ID: 'AKIAPROGRAM', S3_SECRET_ACCESS_KEY: 'program-s3-secret' }
+          : {};
         const problems = demoSettings(parseEnv({ ...real, ...extra, [name]: value }));
         expect(problems, `${name}=${value}`).toHaveLength(1);
         expect(problems[0]).toMatch(new RegExp(`^${name} is a demo or test value`));
@@ -76,7 +78,11 @@ describe('DEMO_SECRETS', () => {
   it('lists every payment key, webhook secret and S3 test key written in the repository', () => {
     // git grep over the tracked files: each literal that looks like one of these is a value anyone can read.
     const grep = (pattern: string) =>
-      execFileSync('git', ['grep', '-hoE', pattern, '--', 'lib', 'tests', 'scripts', 'fakes', 'seeders', ':!lib/production-check.test.ts'], { encoding: 'utf8' }).split('\n').filter(Boolean);
+      execFileSync('git', ['grep', '-hoE', pattern, '--', 'lib', 'tests', 'scripts', 'fakes', 'seeders', ':!lib/production-check.test.ts'], {
+        encoding: 'utf8',
+      })
+        .split('\n')
+        .filter(Boolean);
     const found = [
       ...grep("'(sk_test_[A-Za-z0-9_]+|whsec_[A-Za-z0-9_]+|BRINEWRIGHT[A-Z0-9]*KEY[0-9A-Z]*)'").map((s) => s.slice(1, -1)),
       // S3 secrets in tests: `const SECRET = '…'` and `secretAccessKey: '…'`.

@@ -62,10 +62,13 @@ async function countOne(limit: Limit, now: Date): Promise<number> {
 
 /** Seconds until the window of each bucket ends (read only when an attempt is refused). */
 async function secondsLeft(limits: Limit[], now: Date): Promise<number> {
-  const rows = await db().sequelize.query<{ bucket: string; windowStartedAt: Date }>('SELECT bucket, windowStartedAt FROM rate_limits WHERE bucket IN (:keys)', {
-    replacements: { keys: limits.map((l) => keyOf(l.bucket)) },
-    type: QueryTypes.SELECT,
-  });
+  const rows = await db().sequelize.query<{ bucket: string; windowStartedAt: Date }>(
+    'SELECT bucket, windowStartedAt FROM rate_limits WHERE bucket IN (:keys)',
+    {
+      replacements: { keys: limits.map((l) => keyOf(l.bucket)) },
+      type: QueryTypes.SELECT,
+    },
+  );
   const ends = limits.map((l) => {
     const row = rows.find((r) => r.bucket === keyOf(l.bucket));
     return new Date(row?.windowStartedAt ?? now).getTime() + l.windowSeconds * 1000;
@@ -87,7 +90,9 @@ export async function take(limits: Limit[], now: Date = new Date()): Promise<Ver
 /** Takes back one attempt from each bucket (a right password, a good code): only failures add up. */
 export async function giveBack(limits: Pick<Limit, 'bucket'>[]): Promise<void> {
   if (!limits.length) return;
-  await db().sequelize.query('UPDATE rate_limits SET hits = hits - 1 WHERE bucket IN (:keys) AND hits > 0', { replacements: { keys: limits.map((l) => keyOf(l.bucket)) } });
+  await db().sequelize.query('UPDATE rate_limits SET hits = hits - 1 WHERE bucket IN (:keys) AND hits > 0', {
+    replacements: { keys: limits.map((l) => keyOf(l.bucket)) },
+  });
 }
 
 /** Drops windows that ended long ago (housekeeping; a stale row is also reset on its next hit). */

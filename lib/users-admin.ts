@@ -16,6 +16,9 @@ export async function changeRole(actorId: number, change: RoleChange): Promise<v
     if (from === change.role) return;
     user.role = change.role;
     await user.save({ transaction });
-    await AuditLog.create({ actorId, action: 'user.role_changed', subjectType: 'user', subjectId: String(user.id), data: { from, to: change.role } }, { transaction });
+    await AuditLog.create(
+      { actorId, action: 'user.role_changed', subjectType: 'user', subjectId: String(user.id), data: { from, to: change.role } },
+      { transaction },
+    );
   });
 }

@@ -22,34 +22,55 @@ module.exports = {
               ce.signerTitle = CASE WHEN s.role IN ('coordinator', 'admin') THEN 'Program coordinator' END`,
       { replacements: [process.env.CERTIFICATE_PROGRAM_NAME || 'Cedar Hollow County home-preserving program'] },
     );
-    for (const [column, length] of [['holderName', 120], ['courseTitle', 200], ['programName', 200]]) {
+    for (const [column, length] of [
+      ['holderName', 120],
+      ['courseTitle', 200],
+      ['programName', 200],
+    ]) {
       await queryInterface.changeColumn('certificates', column, text(length, false));
     }
 
-    await queryInterface.createTable('certificate_versions', {
-      id: { type: Sequelize.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true, allowNull: false },
-      certificateId: { type: Sequelize.INTEGER.UNSIGNED, allowNull: false, references: { model: 'certificates', key: 'id' }, onUpdate: 'CASCADE', onDelete: 'CASCADE' },
-      version: { type: Sequelize.SMALLINT.UNSIGNED, allowNull: false },
-      serial: { type: Sequelize.STRING(32), allowNull: false, unique: true },
-      holderName: text(120, false),
-      courseTitle: text(200, false),
-      programName: text(200, false),
-      signerName: text(120),
-      signerTitle: text(120),
-      issuedAt: { type: Sequelize.DATE, allowNull: false },
-      validUntil: { type: Sequelize.DATE, allowNull: false },
-      replacedAt: { type: Sequelize.DATE, allowNull: false },
-      replacedById: { type: Sequelize.INTEGER.UNSIGNED, allowNull: true, references: { model: 'users', key: 'id' }, onUpdate: 'CASCADE', onDelete: 'SET NULL' },
-      reason: text(500, false),
-      createdAt: { type: Sequelize.DATE, allowNull: false },
-      updatedAt: { type: Sequelize.DATE, allowNull: false },
-    }, { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci', engine: 'InnoDB' });
+    await queryInterface.createTable(
+      'certificate_versions',
+      {
+        id: { type: Sequelize.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true, allowNull: false },
+        certificateId: {
+          type: Sequelize.INTEGER.UNSIGNED,
+          allowNull: false,
+          references: { model: 'certificates', key: 'id' },
+          onUpdate: 'CASCADE',
+          onDelete: 'CASCADE',
+        },
+        version: { type: Sequelize.SMALLINT.UNSIGNED, allowNull: false },
+        serial: { type: Sequelize.STRING(32), allowNull: false, unique: true },
+        holderName: text(120, false),
+        courseTitle: text(200, false),
+        programName: text(200, false),
+        signerName: text(120),
+        signerTitle: text(120),
+        issuedAt: { type: Sequelize.DATE, allowNull: false },
+        validUntil: { type: Sequelize.DATE, allowNull: false },
+        replacedAt: { type: Sequelize.DATE, allowNull: false },
+        replacedById: {
+          type: Sequelize.INTEGER.UNSIGNED,
+          allowNull: true,
+          references: { model: 'users', key: 'id' },
+          onUpdate: 'CASCADE',
+          onDelete: 'SET NULL',
+        },
+        reason: text(500, false),
+        createdAt: { type: Sequelize.DATE, allowNull: false },
+        updatedAt: { type: Sequelize.DATE, allowNull: false },
+      },
+      { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci', engine: 'InnoDB' },
+    );
     await queryInterface.addIndex('certificate_versions', ['certificateId', 'version'], { unique: true });
     await queryInterface.addIndex('certificate_versions', ['replacedById']);
   },
 
   async down(queryInterface) {
     await queryInterface.dropTable('certificate_versions');
-    for (const column of ['version', 'signerTitle', 'signerName', 'programName', 'courseTitle', 'holderName']) await queryInterface.removeColumn('certificates', column);
+    for (const column of ['version', 'signerTitle', 'signerName', 'programName', 'courseTitle', 'holderName'])
+      await queryInterface.removeColumn('certificates', column);
   },
 };

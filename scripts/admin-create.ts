@@ -51,7 +51,8 @@ async function main() {
     const result = await createOrPromoteAdmin({ email: values.email, name: values.name, password });
     const email = values.email.trim().toLowerCase();
     if (result.outcome === 'created') console.log(`[admin:create] created admin account ${email} (id ${result.userId}); sign in with the password just given`);
-    else if (result.outcome === 'promoted') console.log(`[admin:create] ${email} (id ${result.userId}) was a ${result.previousRole}; it is now an admin (name and password unchanged)`);
+    else if (result.outcome === 'promoted')
+      console.log(`[admin:create] ${email} (id ${result.userId}) was a ${result.previousRole}; it is now an admin (name and password unchanged)`);
     else console.log(`[admin:create] ${email} (id ${result.userId}) is already an admin; nothing changed`);
   } finally {
     await (globalThis as { __brinewrightSequelize?: { close: () => Promise<void> } }).__brinewrightSequelize?.close();

@@ -14,7 +14,9 @@ async function main() {
   const command = process.argv[2] ?? 'up';
   // The demo data holds accounts with published passwords: never in a program's real database by accident.
   if ((command === 'seed' || command === 'reset') && process.env.BRINEWRIGHT_DEMO !== '1') {
-    throw new Error(`"${command}" loads the demo data (accounts whose passwords are printed in the README) and "reset" empties the database first; it runs only with BRINEWRIGHT_DEMO=1, which npm run demo and the tests set`);
+    throw new Error(
+      `"${command}" loads the demo data (accounts whose passwords are printed in the README) and "reset" empties the database first; it runs only with BRINEWRIGHT_DEMO=1, which npm run demo and the tests set`,
+    );
   }
   const env = parseEnv({ NEXTAUTH_SECRET: 'not-used-by-migrations', ...process.env });
   const sequelize = createSequelize(env.DATABASE_URL);

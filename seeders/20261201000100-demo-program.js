@@ -40,18 +40,63 @@ module.exports = {
       return d;
     };
     await queryInterface.bulkInsert('workshops', [
-      { courseId: course.id, instructorId: instructor.id, startsAt: at(14, 16), endsAt: at(14, 21), timeZone: 'America/Denver', place: 'Cedar Hollow Grange Hall, 14 Mill Road, Cedar Hollow', seats: 12, attendanceRequired: true, createdAt: now, updatedAt: now },
-      { courseId: course.id, instructorId: instructor.id, startsAt: at(35, 16), endsAt: at(35, 21), timeZone: 'America/Denver', place: 'Upper Fork Community Kitchen, 220 Aspen Street, Upper Fork', seats: 10, attendanceRequired: true, createdAt: now, updatedAt: now },
+      {
+        courseId: course.id,
+        instructorId: instructor.id,
+        startsAt: at(14, 16),
+        endsAt: at(14, 21),
+        timeZone: 'America/Denver',
+        place: 'Cedar Hollow Grange Hall, 14 Mill Road, Cedar Hollow',
+        seats: 12,
+        attendanceRequired: true,
+        createdAt: now,
+        updatedAt: now,
+      },
+      {
+        courseId: course.id,
+        instructorId: instructor.id,
+        startsAt: at(35, 16),
+        endsAt: at(35, 21),
+        timeZone: 'America/Denver',
+        place: 'Upper Fork Community Kitchen, 220 Aspen Street, Upper Fork',
+        seats: 10,
+        attendanceRequired: true,
+        createdAt: now,
+        updatedAt: now,
+      },
     ]);
     // The demo learner has paid for the first workshop, so the members-only lessons open for her.
     const [[learner]] = await queryInterface.sequelize.query("SELECT id FROM users WHERE email = 'learner@cedarhollow.example'");
-    const [[workshop]] = await queryInterface.sequelize.query('SELECT id FROM workshops WHERE courseId = ? ORDER BY startsAt LIMIT 1', { replacements: [course.id] });
+    const [[workshop]] = await queryInterface.sequelize.query('SELECT id FROM workshops WHERE courseId = ? ORDER BY startsAt LIMIT 1', {
+      replacements: [course.id],
+    });
     await queryInterface.bulkInsert('enrollments', [
-      { userId: learner.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'active', feeCents: course.feeCents, createdAt: now, updatedAt: now },
+      {
+        userId: learner.id,
+        courseId: course.id,
+        workshopId: workshop.id,
+        runKey: String(workshop.id),
+        status: 'active',
+        feeCents: course.feeCents,
+        createdAt: now,
+        updatedAt: now,
+      },
     ]);
     const [[enrollment]] = await queryInterface.sequelize.query('SELECT id FROM enrollments WHERE userId = ?', { replacements: [learner.id] });
     await queryInterface.bulkInsert('payments', [
-      { enrollmentId: enrollment.id, provider: 'stripe', checkoutSessionId: 'cs_demo_seeded_0001', paymentIntentId: 'pi_demo_seeded_0001', amountCents: 4500, currency: 'usd', status: 'paid', refundedCents: 0, paidAt: now, createdAt: now, updatedAt: now },
+      {
+        enrollmentId: enrollment.id,
+        provider: 'stripe',
+        checkoutSessionId: 'cs_demo_seeded_0001',
+        paymentIntentId: 'pi_demo_seeded_0001',
+        amountCents: 4500,
+        currency: 'usd',
+        status: 'paid',
+        refundedCents: 0,
+        paidAt: now,
+        createdAt: now,
+        updatedAt: now,
+      },
     ]);
   },
 

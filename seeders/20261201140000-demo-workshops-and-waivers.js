@@ -24,23 +24,92 @@ module.exports = {
     const [instructor] = await q("SELECT id FROM users WHERE email = 'instructor@cedarhollow.example'");
     const [coordinator] = await q("SELECT id FROM users WHERE email = 'coordinator@cedarhollow.example'");
 
-    await queryInterface.bulkInsert('users', LEARNERS.map((l) => ({ ...l, role: 'learner', passwordHash: bcrypt.hashSync('demo-learner-pass', 10), emailVerifiedAt: now, createdAt: now, updatedAt: now })));
+    await queryInterface.bulkInsert(
+      'users',
+      LEARNERS.map((l) => ({
+        ...l,
+        role: 'learner',
+        passwordHash: bcrypt.hashSync('demo-learner-pass', 10),
+        emailVerifiedAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
     await queryInterface.bulkInsert('fee_waivers', [
-      { code: WAIVER, courseId: null, createdById: coordinator.id, maxUses: 10, uses: 0, expiresAt: new Date(now.getTime() + 90 * DAY), note: 'Returning Cedar Hollow volunteers', createdAt: now, updatedAt: now },
+      {
+        code: WAIVER,
+        courseId: null,
+        createdById: coordinator.id,
+        maxUses: 10,
+        uses: 0,
+        expiresAt: new Date(now.getTime() + 90 * DAY),
+        note: 'Returning Cedar Hollow volunteers',
+        createdAt: now,
+        updatedAt: now,
+      },
     ]);
     // Yesterday 9:00–14:00 Mountain time (16:00–21:00 UTC in winter).
     const yesterday = new Date(now.getTime() - DAY);
     const at = (d, h) => new Date(Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), d.getUTCDate(), h));
     const inThreeWeeks = new Date(now.getTime() + 21 * DAY);
     await queryInterface.bulkInsert('workshops', [
-      { courseId: flagship.id, instructorId: instructor.id, startsAt: at(yesterday, 16), endsAt: at(yesterday, 21), timeZone: 'America/Denver', place: PAST_PLACE, seats: 8, attendanceRequired: true, createdAt: now, updatedAt: now },
-      { courseId: refresher.id, instructorId: instructor.id, startsAt: at(inThreeWeeks, 1), endsAt: at(inThreeWeeks, 3), timeZone: 'America/Denver', place: REFRESHER_PLACE, seats: 16, attendanceRequired: false, createdAt: now, updatedAt: now },
+      {
+        courseId: flagship.id,
+        instructorId: instructor.id,
+        startsAt: at(yesterday, 16),
+        endsAt: at(yesterday, 21),
+        timeZone: 'America/Denver',
+        place: PAST_PLACE,
+        seats: 8,
+        attendanceRequired: true,
+        createdAt: now,
+        updatedAt: now,
+      },
+      {
+        courseId: refresher.id,
+        instructorId: instructor.id,
+        startsAt: at(inThreeWeeks, 1),
+        endsAt: at(inThreeWeeks, 3),
+        timeZone: 'America/Denver',
+        place: REFRESHER_PLACE,
+        seats: 16,
+        attendanceRequired: false,
+        createdAt: now,
+        updatedAt: now,
+      },
     ]);
     const [past] = await q('SELECT id FROM workshops WHERE place = ?', [PAST_PLACE]);
     const learners = await q('SELECT id, email FROM users WHERE email IN (?)', [LEARNERS.map((l) => l.email)]);
-    await queryInterface.bulkInsert('enrollments', learners.map((l) => ({ userId: l.id, courseId: flagship.id, workshopId: past.id, runKey: String(past.id), status: 'active', feeCents: 4500, createdAt: now, updatedAt: now })));
+    await queryInterface.bulkInsert(
+      'enrollments',
+      learners.map((l) => ({
+        userId: l.id,
+        courseId: flagship.id,
+        workshopId: past.id,
+        runKey: String(past.id),
+        status: 'active',
+        feeCents: 4500,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
     const enrollments = await q('SELECT id FROM enrollments WHERE workshopId = ?', [past.id]);
-    await queryInterface.bulkInsert('payments', enrollments.map((e, i) => ({ enrollmentId: e.id, provider: 'stripe', checkoutSessionId: `cs_demo_seeded_past_${i + 1}`, paymentIntentId: `pi_demo_seeded_past_${i + 1}`, amountCents: 4500, currency: 'usd', status: 'paid', refundedCents: 0, paidAt: now, createdAt: now, updatedAt: now })));
+    await queryInterface.bulkInsert(
+      'payments',
+      enrollments.map((e, i) => ({
+        enrollmentId: e.id,
+        provider: 'stripe',
+        checkoutSessionId: `cs_demo_seeded_past_${i + 1}`,
+        paymentIntentId: `pi_demo_seeded_past_${i + 1}`,
+        amountCents: 4500,
+        currency: 'usd',
+        status: 'paid',
+        refundedCents: 0,
+        paidAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
+    );
   },
 
   async down(queryInterface) {

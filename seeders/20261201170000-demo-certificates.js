@@ -50,9 +50,22 @@ const addMonths = (date, months) => {
 // 1,001-6,000 ft, so no flag. The brine is that recipe's solution (6 cups of 5 % vinegar to 8 cups of
 // water) in the amount seven pints take: 1,420 mL and 1,893 mL.
 const approvedBatch = (submittedAt) => ({
-  product: 'fresh-pack-dill-pickles', recipeTitle: 'Quick fresh-pack dill pickles', recipeSource: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6',
-  jar: 'pint', jars: 7, pack: 'raw', vinegarAcidityPct: 5, vinegarMl: 1420, waterMl: 1893, headspaceIn: 0.5, method: 'boiling-water', altitudeFt: 5200, minutes: 15,
-  batchDate: new Date(submittedAt.getTime() - 2 * DAY).toISOString().slice(0, 10), sealedJars: 7, unsealedJars: 0,
+  product: 'fresh-pack-dill-pickles',
+  recipeTitle: 'Quick fresh-pack dill pickles',
+  recipeSource: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6',
+  jar: 'pint',
+  jars: 7,
+  pack: 'raw',
+  vinegarAcidityPct: 5,
+  vinegarMl: 1420,
+  waterMl: 1893,
+  headspaceIn: 0.5,
+  method: 'boiling-water',
+  altitudeFt: 5200,
+  minutes: 15,
+  batchDate: new Date(submittedAt.getTime() - 2 * DAY).toISOString().slice(0, 10),
+  sealedJars: 7,
+  unsealedJars: 0,
   notes: 'Cucumbers picked the morning of the batch; blossom ends trimmed.',
 });
 
@@ -63,7 +76,15 @@ module.exports = {
     const now = new Date();
     await queryInterface.bulkInsert(
       'users',
-      LEARNERS.map((a) => ({ email: a.email, name: a.name, role: 'learner', passwordHash: bcrypt.hashSync(a.password, 10), emailVerifiedAt: now, createdAt: now, updatedAt: now })),
+      LEARNERS.map((a) => ({
+        email: a.email,
+        name: a.name,
+        role: 'learner',
+        passwordHash: bcrypt.hashSync(a.password, 10),
+        emailVerifiedAt: now,
+        createdAt: now,
+        updatedAt: now,
+      })),
     );
     const [[course]] = await q("SELECT id, title, validityMonths FROM courses WHERE slug = 'pickling-and-canning'");
     const [[instructor]] = await q("SELECT id FROM users WHERE email = 'instructor@cedarhollow.example'");
@@ -80,38 +101,139 @@ module.exports = {
     const longAgo = addMonths(past(0), -34);
     for (const startsAt of [recent, longAgo]) {
       await queryInterface.bulkInsert('workshops', [
-        { courseId: course.id, instructorId: instructor.id, startsAt, endsAt: new Date(startsAt.getTime() + 5 * 3600 * 1000), timeZone: 'America/Denver', place: PLACE, seats: 12, attendanceRequired: true, createdAt: now, updatedAt: now },
+        {
+          courseId: course.id,
+          instructorId: instructor.id,
+          startsAt,
+          endsAt: new Date(startsAt.getTime() + 5 * 3600 * 1000),
+          timeZone: 'America/Denver',
+          place: PLACE,
+          seats: 12,
+          attendanceRequired: true,
+          createdAt: now,
+          updatedAt: now,
+        },
       ]);
     }
     const [[recentWorkshop]] = await q('SELECT id FROM workshops WHERE courseId = ? AND startsAt = ?', [course.id, recent]);
     const [[oldWorkshop]] = await q('SELECT id FROM workshops WHERE courseId = ? AND startsAt = ?', [course.id, longAgo]);
 
     await queryInterface.bulkInsert('enrollments', [
-      { userId: ines.id, courseId: course.id, workshopId: recentWorkshop.id, runKey: String(recentWorkshop.id), status: 'active', feeCents: 4500, attendedAt: recent, createdAt: now, updatedAt: now },
-      { userId: wren.id, courseId: course.id, workshopId: oldWorkshop.id, runKey: String(oldWorkshop.id), status: 'completed', feeCents: 4500, attendedAt: longAgo, completedAt: longAgo, createdAt: longAgo, updatedAt: longAgo },
+      {
+        userId: ines.id,
+        courseId: course.id,
+        workshopId: recentWorkshop.id,
+        runKey: String(recentWorkshop.id),
+        status: 'active',
+        feeCents: 4500,
+        attendedAt: recent,
+        createdAt: now,
+        updatedAt: now,
+      },
+      {
+        userId: wren.id,
+        courseId: course.id,
+        workshopId: oldWorkshop.id,
+        runKey: String(oldWorkshop.id),
+        status: 'completed',
+        feeCents: 4500,
+        attendedAt: longAgo,
+        completedAt: longAgo,
+        createdAt: longAgo,
+        updatedAt: longAgo,
+      },
     ]);
     const [[inesEnrollment]] = await q('SELECT id FROM enrollments WHERE userId = ?', [ines.id]);
     const [[wrenEnrollment]] = await q('SELECT id FROM enrollments WHERE userId = ?', [wren.id]);
 
     await queryInterface.bulkInsert('payments', [
-      { enrollmentId: inesEnrollment.id, provider: 'stripe', checkoutSessionId: 'cs_demo_seeded_h7_ines', paymentIntentId: 'pi_demo_seeded_h7_ines', amountCents: 4500, currency: 'usd', status: 'paid', refundedCents: 0, paidAt: past(30 * DAY), createdAt: now, updatedAt: now },
-      { enrollmentId: wrenEnrollment.id, provider: 'stripe', checkoutSessionId: 'cs_demo_seeded_h7_wren', paymentIntentId: 'pi_demo_seeded_h7_wren', amountCents: 4500, currency: 'usd', status: 'paid', refundedCents: 0, paidAt: longAgo, createdAt: longAgo, updatedAt: longAgo },
+      {
+        enrollmentId: inesEnrollment.id,
+        provider: 'stripe',
+        checkoutSessionId: 'cs_demo_seeded_h7_ines',
+        paymentIntentId: 'pi_demo_seeded_h7_ines',
+        amountCents: 4500,
+        currency: 'usd',
+        status: 'paid',
+        refundedCents: 0,
+        paidAt: past(30 * DAY),
+        createdAt: now,
+        updatedAt: now,
+      },
+      {
+        enrollmentId: wrenEnrollment.id,
+        provider: 'stripe',
+        checkoutSessionId: 'cs_demo_seeded_h7_wren',
+        paymentIntentId: 'pi_demo_seeded_h7_wren',
+        amountCents: 4500,
+        currency: 'usd',
+        status: 'paid',
+        refundedCents: 0,
+        paidAt: longAgo,
+        createdAt: longAgo,
+        updatedAt: longAgo,
+      },
     ]);
-    for (const [user, when] of [[ines, recent], [wren, longAgo]]) {
-      await queryInterface.bulkInsert('lesson_progress', LESSONS.map((lessonSlug) => ({ userId: user.id, courseId: course.id, lessonSlug, readAt: when, createdAt: when, updatedAt: when })));
+    for (const [user, when] of [
+      [ines, recent],
+      [wren, longAgo],
+    ]) {
+      await queryInterface.bulkInsert(
+        'lesson_progress',
+        LESSONS.map((lessonSlug) => ({ userId: user.id, courseId: course.id, lessonSlug, readAt: when, createdAt: when, updatedAt: when })),
+      );
       await queryInterface.bulkInsert(
         'quiz_attempts',
-        QUIZZES.map((quizSlug) => ({ userId: user.id, courseId: course.id, quizSlug, drawn: '[]', answers: '{}', scorePct: 100, passed: true, startedAt: when, submittedAt: when, createdAt: when, updatedAt: when })),
+        QUIZZES.map((quizSlug) => ({
+          userId: user.id,
+          courseId: course.id,
+          quizSlug,
+          drawn: '[]',
+          answers: '{}',
+          scorePct: 100,
+          passed: true,
+          startedAt: when,
+          submittedAt: when,
+          createdAt: when,
+          updatedAt: when,
+        })),
       );
     }
-    for (const [enrollment, user, when] of [[inesEnrollment, ines, recent], [wrenEnrollment, wren, longAgo]]) {
+    for (const [enrollment, user, when] of [
+      [inesEnrollment, ines, recent],
+      [wrenEnrollment, wren, longAgo],
+    ]) {
       await queryInterface.bulkInsert('practicals', [
-        { enrollmentId: enrollment.id, userId: user.id, round: 1, status: 'approved', details: JSON.stringify(approvedBatch(when)), flags: '[]', submittedAt: when, createdAt: when, updatedAt: when },
+        {
+          enrollmentId: enrollment.id,
+          userId: user.id,
+          round: 1,
+          status: 'approved',
+          details: JSON.stringify(approvedBatch(when)),
+          flags: '[]',
+          submittedAt: when,
+          createdAt: when,
+          updatedAt: when,
+        },
       ]);
     }
     const [[coordinator]] = await q("SELECT id, name FROM users WHERE email = 'coordinator@cedarhollow.example'");
     await queryInterface.bulkInsert('certificates', [
-      { enrollmentId: wrenEnrollment.id, userId: wren.id, issuedById: coordinator.id, serial: WREN_SERIAL, holderName: wren.name, courseTitle: course.title, programName: 'Cedar Hollow County home-preserving program', signerName: coordinator.name, signerTitle: 'Program coordinator', issuedAt: longAgo, validUntil: addMonths(longAgo, course.validityMonths), createdAt: longAgo, updatedAt: longAgo },
+      {
+        enrollmentId: wrenEnrollment.id,
+        userId: wren.id,
+        issuedById: coordinator.id,
+        serial: WREN_SERIAL,
+        holderName: wren.name,
+        courseTitle: course.title,
+        programName: 'Cedar Hollow County home-preserving program',
+        signerName: coordinator.name,
+        signerTitle: 'Program coordinator',
+        issuedAt: longAgo,
+        validUntil: addMonths(longAgo, course.validityMonths),
+        createdAt: longAgo,
+        updatedAt: longAgo,
+      },
     ]);
   },
 

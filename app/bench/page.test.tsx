@@ -11,11 +11,26 @@ describe('Brine bench page', () => {
     render(<BenchPage />);
     expect(screen.getByRole('heading', { level: 1, name: 'Brine bench' })).toBeInTheDocument();
     expect(screen.getByRole('note', { name: 'Safety' })).toHaveTextContent('They never call a recipe safe.');
-    const names = ['Brine acidity', 'Salt by weight and brine strength', 'Sugar by weight', 'Headspace check', 'Processing time by altitude', 'Pressure canner by altitude', 'Boiling point of water', 'Crisping agents', 'Batch planner', 'Unit converter'];
+    const names = [
+      'Brine acidity',
+      'Salt by weight and brine strength',
+      'Sugar by weight',
+      'Headspace check',
+      'Processing time by altitude',
+      'Pressure canner by altitude',
+      'Boiling point of water',
+      'Crisping agents',
+      'Batch planner',
+      'Unit converter',
+    ];
     expect(screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent)).toEqual(names);
     for (const name of names) {
       const section = screen.getByRole('region', { name });
-      expect(within(section).getByRole('link', { name: /^Lesson: / }).getAttribute('href')).toMatch(/^\/learn\//);
+      expect(
+        within(section)
+          .getByRole('link', { name: /^Lesson: / })
+          .getAttribute('href'),
+      ).toMatch(/^\/learn\//);
     }
     // The page's table of contents points at each calculator.
     const nav = screen.getByRole('navigation', { name: 'Calculators on this page' });

@@ -14,7 +14,8 @@ import {
 
 export const metadata: Metadata = {
   title: 'Brine bench',
-  description: 'Every Brinewright calculator on one page: brine acidity, salt, headspace, processing time and pressure by altitude, boiling point, crisping agents, batches and units.',
+  description:
+    'Every Brinewright calculator on one page: brine acidity, salt, headspace, processing time and pressure by altitude, boiling point, crisping agents, batches and units.',
 };
 
 // Public and the same for everyone: rendered once at build time.
@@ -39,22 +40,25 @@ export default function BenchPage() {
       <header className="space-y-3">
         <h1 className="text-3xl font-bold md:text-4xl">Brine bench</h1>
         <p className="max-w-prose text-lg text-ink-soft">
-          The calculators of the course, all in one place. Each one answers as you type, shows US and metric units, and links to the lesson that explains
-          the idea behind it.
+          The calculators of the course, all in one place. Each one answers as you type, shows US and metric units, and links to the lesson that explains the
+          idea behind it.
         </p>
         <aside role="note" aria-label="Safety" className="max-w-prose rounded-jar border-l-4 border-beet-600 bg-beet-50 px-5 py-4">
           <p className="font-display font-bold text-beet-700">These tools check arithmetic. They never call a recipe safe.</p>
           <p className="mt-1 text-ink">
-            Botulism cannot be seen, smelled or tasted. Can only from tested recipes of recognised food-safety authorities, keep their proportions of
-            vinegar, water and salt, process for the full time at your altitude, and follow your local extension office, local codes and licensed
-            practice where they apply. Boiling water, steam, hot glass and lime can hurt: work with care.
+            Botulism cannot be seen, smelled or tasted. Can only from tested recipes of recognised food-safety authorities, keep their proportions of vinegar,
+            water and salt, process for the full time at your altitude, and follow your local extension office, local codes and licensed practice where they
+            apply. Boiling water, steam, hot glass and lime can hurt: work with care.
           </p>
         </aside>
         <nav aria-label="Calculators on this page">
           <ul className="flex flex-wrap gap-2 text-sm">
             {TOOLS.map((tool) => (
               <li key={tool.id}>
-                <a href={`#${tool.id}`} className="inline-block rounded-full border border-brine-200 bg-white px-3 py-1 font-medium text-brine-800 no-underline hover:bg-brine-50">
+                <a
+                  href={`#${tool.id}`}
+                  className="inline-block rounded-full border border-brine-200 bg-white px-3 py-1 font-medium text-brine-800 no-underline hover:bg-brine-50"
+                >
                   {tool.label}
                 </a>
               </li>

@@ -7,10 +7,16 @@ export const metadata: Metadata = { title: 'Confirm your e-mail address — Brin
 export const dynamic = 'force-dynamic';
 
 const COPY: Record<ConfirmOutcome, { title: string; body: string }> = {
-  confirmed: { title: 'Your e-mail address is confirmed', body: 'Thank you. Receipts, workshop reminders and your certificate will reach you at this address.' },
+  confirmed: {
+    title: 'Your e-mail address is confirmed',
+    body: 'Thank you. Receipts, workshop reminders and your certificate will reach you at this address.',
+  },
   already: { title: 'Already confirmed', body: 'This address was confirmed before; there is nothing more to do.' },
   expired: { title: 'This link has expired', body: 'Confirmation links work for seven days. Sign in and ask the program coordinator for a new one.' },
-  invalid: { title: 'This link does not work', body: 'The link is incomplete or was made for another address. Copy the whole link from the e-mail and try again.' },
+  invalid: {
+    title: 'This link does not work',
+    body: 'The link is incomplete or was made for another address. Copy the whole link from the e-mail and try again.',
+  },
 };
 
 export default async function ConfirmEmailPage({ searchParams }: { searchParams: Promise<{ token?: string | string[] }> }) {

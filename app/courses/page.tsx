@@ -19,8 +19,8 @@ export default function CoursesPage() {
       <header className="max-w-prose space-y-2">
         <h1 className="text-3xl font-bold">Courses</h1>
         <p className="text-ink-soft">
-          Each course is a set of lessons with calculators built in, a quiz after every lesson, and a certificate when you finish. The first
-          lessons of the main course are open to everyone.
+          Each course is a set of lessons with calculators built in, a quiz after every lesson, and a certificate when you finish. The first lessons of the main
+          course are open to everyone.
         </p>
       </header>
       {courses.length === 0 ? (

@@ -12,7 +12,9 @@ export default async function TastingTablePage() {
     <div className="space-y-6">
       <header className="space-y-1">
         <h1 className="text-3xl font-bold">Tasting table</h1>
-        <p className="text-ink-soft">Practical batches from learners, with the automatic checks already run. Open one to see its photos, fill in the rubric and decide.</p>
+        <p className="text-ink-soft">
+          Practical batches from learners, with the automatic checks already run. Open one to see its photos, fill in the rubric and decide.
+        </p>
       </header>
       <SubmissionsTable workshops={workshops} />
     </div>

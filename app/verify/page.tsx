@@ -13,8 +13,8 @@ export default async function VerifyPage({ searchParams }: { searchParams: Promi
     <div className="mx-auto max-w-xl space-y-6">
       <h1 className="text-3xl font-bold">Verify a certificate</h1>
       <p className="text-ink-soft">
-        Type the serial printed on a Brinewright certificate, or scan its QR code. You will see whether it is valid, expired or revoked, with the name, the course and
-        the dates on it.
+        Type the serial printed on a Brinewright certificate, or scan its QR code. You will see whether it is valid, expired or revoked, with the name, the
+        course and the dates on it.
       </p>
       <SerialForm />
     </div>

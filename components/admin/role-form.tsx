@@ -13,7 +13,13 @@ export function RoleForm({ userId, userName, role }: { userId: number; userName:
       <label className="sr-only" htmlFor={`role-${userId}`}>
         Role for {userName}
       </label>
-      <select id={`role-${userId}`} name="role" defaultValue={role} aria-describedby={messageId} className="rounded-lg border border-ink-faint/40 bg-white px-2 py-1">
+      <select
+        id={`role-${userId}`}
+        name="role"
+        defaultValue={role}
+        aria-describedby={messageId}
+        className="rounded-lg border border-ink-faint/40 bg-white px-2 py-1"
+      >
         {ROLES.map((r) => (
           <option key={r} value={r}>
             {ROLE_LABELS[r]}

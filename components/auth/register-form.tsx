@@ -40,7 +40,13 @@ export function RegisterForm() {
       <div aria-live="polite">
         {formError ? <p className="rounded-lg border border-beet-500 bg-beet-50 px-3 py-2 text-sm text-beet-700">{formError}</p> : null}
       </div>
-      <TextField label="Your name" autoComplete="name" hint="As it should appear on your certificate." error={formState.errors.name?.message} {...register('name')} />
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        hint="As it should appear on your certificate."
+        error={formState.errors.name?.message}
+        {...register('name')}
+      />
       <TextField label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register('email')} />
       <TextField
         label="Password"

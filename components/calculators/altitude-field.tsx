@@ -44,8 +44,19 @@ export function AltitudeField({
       : `= ${fmt(typed * M_PER_FT, 0)} m${below}`;
   return (
     <>
-      <TextField label="Altitude" suffix={unit} inputMode="decimal" autoComplete="off" value={value} onChange={(event) => onChange(event.target.value)} error={error} hint={hint} />
-      {onUnitChange ? <Select label="Altitude in" options={UNIT_OPTIONS} value={unit} onChange={(event) => onUnitChange(event.target.value as AltitudeUnit)} /> : null}
+      <TextField
+        label="Altitude"
+        suffix={unit}
+        inputMode="decimal"
+        autoComplete="off"
+        value={value}
+        onChange={(event) => onChange(event.target.value)}
+        error={error}
+        hint={hint}
+      />
+      {onUnitChange ? (
+        <Select label="Altitude in" options={UNIT_OPTIONS} value={unit} onChange={(event) => onUnitChange(event.target.value as AltitudeUnit)} />
+      ) : null}
     </>
   );
 }

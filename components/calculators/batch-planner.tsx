@@ -39,7 +39,9 @@ export function BatchPlanner({ defaultProduct, headingLevel }: { defaultProduct?
               {r.produceLb !== null ? `${fmt(r.produceLb, 2)} lb (${fmt(r.produceKg ?? 0, 2)} kg) of produce, ` : ''}
               {fmt(r.brineMl, 0)} mL ({fmt(r.brineMl / 236.5882365, 1)} cups) of brine
             </p>
-            <p className="text-sm text-ink-soft">The brine includes {r.extraPct}% extra for spills and topping up (common practice, not part of the tested recipe).</p>
+            <p className="text-sm text-ink-soft">
+              The brine includes {r.extraPct}% extra for spills and topping up (common practice, not part of the tested recipe).
+            </p>
             <ul className="list-disc space-y-0.5 pl-5 text-sm">
               {r.ingredients.map((i) => {
                 const [one, many] = UNIT_WORDS[i.unit];

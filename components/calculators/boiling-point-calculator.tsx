@@ -26,7 +26,8 @@ export function BoilingPointCalculator({ headingLevel }: { headingLevel?: 2 | 3 
               {fmt(r.fahrenheit, 1)} °F ({fmt(r.celsius, 1)} °C)
             </p>
             <p className="text-sm">
-              Air pressure {fmt(r.pressurePa / 1000, 1)} kPa in the standard atmosphere; the weather moves it a little. That is {fmt(Math.abs(212 - r.fahrenheit), 1)} °F {r.fahrenheit <= 212 ? 'below' : 'above'}
+              Air pressure {fmt(r.pressurePa / 1000, 1)} kPa in the standard atmosphere; the weather moves it a little. That is{' '}
+              {fmt(Math.abs(212 - r.fahrenheit), 1)} °F {r.fahrenheit <= 212 ? 'below' : 'above'}
               212 °F, which is why the tested recipe adds minutes at your altitude.
             </p>
             <p className="text-xs text-ink-soft">Model: {r.source}</p>
@@ -36,7 +37,13 @@ export function BoilingPointCalculator({ headingLevel }: { headingLevel?: 2 | 3 
         )
       }
     >
-      <AltitudeField value={altitude} onChange={setAltitude} unit={unit} onUnitChange={setUnit} error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM} />
+      <AltitudeField
+        value={altitude}
+        onChange={setAltitude}
+        unit={unit}
+        onUnitChange={setUnit}
+        error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM}
+      />
     </CalculatorShell>
   );
 }

@@ -61,7 +61,9 @@ export function BrineCalculator({ headingLevel, defaultProduct }: { headingLevel
             <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-2">
               <div>
                 <dt className="text-sm text-ink-soft">Acetic acid in the liquid</dt>
-                <dd className="text-xl font-bold" data-testid="brine-acid">{fmt(r.aceticAcidPct, 2)} g per 100 mL</dd>
+                <dd className="text-xl font-bold" data-testid="brine-acid">
+                  {fmt(r.aceticAcidPct, 2)} g per 100 mL
+                </dd>
               </div>
               <div>
                 <dt className="text-sm text-ink-soft">{r.tested.weakest ? 'Weakest tested liquid Brinewright knows' : 'Tested liquid of this product'}</dt>
@@ -91,7 +93,8 @@ export function BrineCalculator({ headingLevel, defaultProduct }: { headingLevel
             </dl>
             <p className="text-xs text-ink-soft">
               Tested liquid: {r.tested.source}
-              {r.tested.confidence === 'memory' ? ' (from memory, not yet confirmed)' : ''}. Dissolved sugar is not counted in the volume, here or in the tested liquid.
+              {r.tested.confidence === 'memory' ? ' (from memory, not yet confirmed)' : ''}. Dissolved sugar is not counted in the volume, here or in the tested
+              liquid.
             </p>
           </div>
         ) : (
@@ -100,11 +103,47 @@ export function BrineCalculator({ headingLevel, defaultProduct }: { headingLevel
       }
     >
       <Select label="Compare with" options={COMPARE_OPTIONS} value={v.product} onChange={set('product')} error={e.product} className="sm:col-span-2" />
-      <TextField label="Vinegar" suffix="mL" inputMode="decimal" autoComplete="off" value={v.vinegarMl} onChange={set('vinegarMl')} error={e.vinegarMl} hint="1 US cup = 236.6 mL" />
-      <TextField label="Vinegar acidity" suffix="%" inputMode="decimal" autoComplete="off" value={v.vinegarAcidityPct} onChange={set('vinegarAcidityPct')} error={e.vinegarAcidityPct} hint="From the label; tested recipes use 5% (USDA Guide 6)" />
+      <TextField
+        label="Vinegar"
+        suffix="mL"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.vinegarMl}
+        onChange={set('vinegarMl')}
+        error={e.vinegarMl}
+        hint="1 US cup = 236.6 mL"
+      />
+      <TextField
+        label="Vinegar acidity"
+        suffix="%"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.vinegarAcidityPct}
+        onChange={set('vinegarAcidityPct')}
+        error={e.vinegarAcidityPct}
+        hint="From the label; tested recipes use 5% (USDA Guide 6)"
+      />
       <TextField label="Water" suffix="mL" inputMode="decimal" autoComplete="off" value={v.waterMl} onChange={set('waterMl')} error={e.waterMl} />
-      <TextField label="Other liquid (optional)" suffix="mL" inputMode="decimal" autoComplete="off" value={v.otherMl} onChange={set('otherMl')} error={e.otherMl} hint="Juice, wine: counted as volume, not as acid" />
-      <TextField label="Produce in the jars (optional)" suffix="g" inputMode="decimal" autoComplete="off" value={v.produceG} onChange={set('produceG')} error={e.produceG} hint="1 lb = 453.6 g" />
+      <TextField
+        label="Other liquid (optional)"
+        suffix="mL"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.otherMl}
+        onChange={set('otherMl')}
+        error={e.otherMl}
+        hint="Juice, wine: counted as volume, not as acid"
+      />
+      <TextField
+        label="Produce in the jars (optional)"
+        suffix="g"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.produceG}
+        onChange={set('produceG')}
+        error={e.produceG}
+        hint="1 lb = 453.6 g"
+      />
       <TextField
         label="Water in the produce (optional)"
         suffix="%"

@@ -119,11 +119,13 @@ describe('BrineCalculator', () => {
     render(<BrineCalculator />);
     await retype(user, screen.getByLabelText('Vinegar'), '100');
     await retype(user, screen.getByLabelText('Water'), '1000');
-    expect(screen.getByTestId('brine-warnings')).toHaveTextContent('0.45% acetic acid, weaker than the weakest tested liquid Brinewright knows, that of quick fresh-pack dill pickles (2.14%)');
+    expect(screen.getByTestId('brine-warnings')).toHaveTextContent(
+      '0.45% acetic acid, weaker than the weakest tested liquid Brinewright knows, that of quick fresh-pack dill pickles (2.14%)',
+    );
     expect(screen.getByTestId('brine-tested')).toHaveTextContent('This liquid is weaker.');
   });
 
-  it('compares with the chosen product\'s tested liquid (pickled hot peppers: 5 cups vinegar to 1 cup water, 4.17 %)', async () => {
+  it("compares with the chosen product's tested liquid (pickled hot peppers: 5 cups vinegar to 1 cup water, 4.17 %)", async () => {
     const user = userEvent.setup();
     render(<BrineCalculator />);
     expect(screen.queryByTestId('brine-warnings')).toBeNull();
@@ -164,7 +166,9 @@ describe('SaltCalculator', () => {
     render(<SaltCalculator />);
     // 3 tbsp = 9 tsp of canning salt at 4.6 (UW-Extension B2267, quoted secondhand) to 6 g/tsp (from memory): 41.4 to 54 g.
     expect(screen.getByTestId('salt-grams')).toHaveTextContent('about 41.4 to 54 g');
-    expect(screen.getByTestId('salt-uncertainty')).toHaveTextContent(/By weight is exact; by spoon or cup is approximate.*University of Wisconsin-Extension B2267/);
+    expect(screen.getByTestId('salt-uncertainty')).toHaveTextContent(
+      /By weight is exact; by spoon or cup is approximate.*University of Wisconsin-Extension B2267/,
+    );
     await retype(user, screen.getByLabelText('Amount of salt'), '1/2');
     await user.selectOptions(screen.getByLabelText('Unit'), 'cup');
     expect(screen.getByTestId('salt-grams')).toHaveTextContent('about 110.4 to 144 g');
@@ -292,7 +296,17 @@ describe('UnitConverter', () => {
 });
 
 describe('every calculator', () => {
-  const all = [BatchPlanner, BoilingPointCalculator, BrineCalculator, CrispingCalculator, HeadspaceCalculator, PressureCalculator, ProcessingTimeCalculator, SaltCalculator, UnitConverter];
+  const all = [
+    BatchPlanner,
+    BoilingPointCalculator,
+    BrineCalculator,
+    CrispingCalculator,
+    HeadspaceCalculator,
+    PressureCalculator,
+    ProcessingTimeCalculator,
+    SaltCalculator,
+    UnitConverter,
+  ];
 
   it('ties every input to a label, has a heading, a live result, a caution and a lesson link', () => {
     for (const Calculator of all) {
@@ -304,7 +318,11 @@ describe('every calculator', () => {
         expect(section.querySelector(`label[for="${CSS.escape(input.id)}"]`), `${Calculator.name} ${input.outerHTML}`).not.toBeNull();
       }
       expect(within(section).getByRole('status')).toHaveAttribute('aria-live', 'polite');
-      expect(within(section).getByRole('link', { name: /^Lesson: / }).getAttribute('href')).toMatch(/^\/learn\/pickling-and-canning\//);
+      expect(
+        within(section)
+          .getByRole('link', { name: /^Lesson: / })
+          .getAttribute('href'),
+      ).toMatch(/^\/learn\/pickling-and-canning\//);
       expect(section.querySelector('svg[data-icon="warning"]')).not.toBeNull();
       unmount();
     }

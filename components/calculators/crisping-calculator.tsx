@@ -33,12 +33,14 @@ export function CrispingCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
             ) : (
               <>
                 <p className="text-sm font-medium" data-testid="crisping-recipe">
-                  For {r.recipeName.toLowerCase()} only: {r.recipes} recipe{r.recipes === 1 ? '' : 's'} of lime water (one for each 6 lb of cucumbers, about 8 pints)
+                  For {r.recipeName.toLowerCase()} only: {r.recipes} recipe{r.recipes === 1 ? '' : 's'} of lime water (one for each 6 lb of cucumbers, about 8
+                  pints)
                 </p>
                 <p className="text-xl font-bold" data-testid="crisping-dose">
-                  {kitchen(r.limeCups)} cup{r.limeCups > 1 ? 's' : ''} of pickling lime and {kitchen(r.saltCups)} cup{r.saltCups > 1 ? 's' : ''} of pickling salt in {kitchen(r.waterGallons)} gallon
-                  {r.waterGallons > 1 ? 's' : ''} of water ({fmt(r.waterGallons * 3.785411784, 1)} L); soak {r.soakHours[0]} to {r.soakHours[1]} hours, then rinse and soak 1 hour in fresh water {r.rinses}{' '}
-                  times
+                  {kitchen(r.limeCups)} cup{r.limeCups > 1 ? 's' : ''} of pickling lime and {kitchen(r.saltCups)} cup{r.saltCups > 1 ? 's' : ''} of pickling
+                  salt in {kitchen(r.waterGallons)} gallon
+                  {r.waterGallons > 1 ? 's' : ''} of water ({fmt(r.waterGallons * 3.785411784, 1)} L); soak {r.soakHours[0]} to {r.soakHours[1]} hours, then
+                  rinse and soak 1 hour in fresh water {r.rinses} times
                 </p>
               </>
             )}
@@ -54,7 +56,13 @@ export function CrispingCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
         )
       }
     >
-      <Select label="Crisping agent" options={AGENT_OPTIONS} value={agent} onChange={(event) => setAgent(event.target.value)} error={outcome.fieldErrors.agent} />
+      <Select
+        label="Crisping agent"
+        options={AGENT_OPTIONS}
+        value={agent}
+        onChange={(event) => setAgent(event.target.value)}
+        error={outcome.fieldErrors.agent}
+      />
       <JarSelect value={jar} onChange={setJar} error={outcome.fieldErrors.jar} />
       <JarsField value={jars} onChange={setJars} error={outcome.fieldErrors.jars} />
     </CalculatorShell>

@@ -48,7 +48,16 @@ export function HeadspaceCalculator({ defaultProduct, headingLevel }: { defaultP
       }
     >
       <ProductSelect value={product} onChange={setProduct} />
-      <TextField label="Measured headspace (optional)" suffix="inches" inputMode="decimal" autoComplete="off" value={measured} onChange={(event) => setMeasured(event.target.value)} error={outcome.fieldErrors.measuredIn} hint="Such as 1/2 or 0.5; 1 inch = 25.4 mm" />
+      <TextField
+        label="Measured headspace (optional)"
+        suffix="inches"
+        inputMode="decimal"
+        autoComplete="off"
+        value={measured}
+        onChange={(event) => setMeasured(event.target.value)}
+        error={outcome.fieldErrors.measuredIn}
+        hint="Such as 1/2 or 0.5; 1 inch = 25.4 mm"
+      />
     </CalculatorShell>
   );
 }

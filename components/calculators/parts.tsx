@@ -76,7 +76,11 @@ export function CalculatorShell({ title, intro, headingLevel = 3, lesson, cautio
   const hydrated = useHydrated();
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
   return (
-    <section aria-labelledby={headingId} className={cn('not-prose my-6 rounded-jar border border-brine-100 bg-white p-5 shadow-shelf', className)} data-calculator>
+    <section
+      aria-labelledby={headingId}
+      className={cn('not-prose my-6 rounded-jar border border-brine-100 bg-white p-5 shadow-shelf', className)}
+      data-calculator
+    >
       <Heading id={headingId} className="font-display text-lg font-bold text-ink">
         {title}
       </Heading>

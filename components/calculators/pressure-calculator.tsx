@@ -15,11 +15,14 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
   const [gauge, setGauge] = useState('dial');
   const [altitude, setAltitude] = useState('0');
   const [unit, setUnit] = useState<AltitudeUnit>('ft');
-  const outcome = calculate((read) => {
-    const altitudeFt = readAltitudeFt(read, altitude, unit);
-    const result = pressureForAltitude({ gauge, altitudeFt });
-    return { ...result, steam: cannerTemperature({ psig: result.pounds, altitudeFt }) };
-  }, ['gauge', ...ALTITUDE_FIELDS]);
+  const outcome = calculate(
+    (read) => {
+      const altitudeFt = readAltitudeFt(read, altitude, unit);
+      const result = pressureForAltitude({ gauge, altitudeFt });
+      return { ...result, steam: cannerTemperature({ psig: result.pounds, altitudeFt }) };
+    },
+    ['gauge', ...ALTITUDE_FIELDS],
+  );
   const r = outcome.result;
   return (
     <CalculatorShell
@@ -37,7 +40,11 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
             <p className="text-sm">
               Steam inside at that pressure: about {fmt(r.steam.fahrenheit, 1)} °F ({fmt(r.steam.celsius, 1)} °C).
             </p>
-            {r.confidence !== 'verified' ? <p className="text-sm font-medium text-honey-700">The USDA tables stop at 8,000 ft for dial gauges: check your tested recipe and your local extension office.</p> : null}
+            {r.confidence !== 'verified' ? (
+              <p className="text-sm font-medium text-honey-700">
+                The USDA tables stop at 8,000 ft for dial gauges: check your tested recipe and your local extension office.
+              </p>
+            ) : null}
             <p className="text-xs text-ink-soft">Source: {r.source}</p>
           </div>
         ) : (
@@ -46,7 +53,13 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       }
     >
       <Select label="Gauge type" options={GAUGE_OPTIONS} value={gauge} onChange={(event) => setGauge(event.target.value)} error={outcome.fieldErrors.gauge} />
-      <AltitudeField value={altitude} onChange={setAltitude} unit={unit} onUnitChange={setUnit} error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM} />
+      <AltitudeField
+        value={altitude}
+        onChange={setAltitude}
+        unit={unit}
+        onUnitChange={setUnit}
+        error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM}
+      />
     </CalculatorShell>
   );
 }

@@ -8,7 +8,11 @@ import { ARITHMETIC_ONLY, CalculatorShell, LESSONS, ResultMessage, calculate, fm
 import { JarSelect, ProductSelect, startProduct } from './product-fields';
 
 const band = (fromFt: number, toFt: number | null) =>
-  fromFt === 6001 ? `above 6,000 ft (table used up to ${fmt(toFt ?? 10000, 0)} ft)` : fromFt === 0 ? `up to ${fmt(toFt ?? 0, 0)} ft (below sea level too)` : `${fmt(fromFt, 0)} to ${fmt(toFt ?? 0, 0)} ft`;
+  fromFt === 6001
+    ? `above 6,000 ft (table used up to ${fmt(toFt ?? 10000, 0)} ft)`
+    : fromFt === 0
+      ? `up to ${fmt(toFt ?? 0, 0)} ft (below sea level too)`
+      : `${fmt(fromFt, 0)} to ${fmt(toFt ?? 0, 0)} ft`;
 
 /** Boiling-water processing minutes for a product, jar size and altitude, from its published table. */
 export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { defaultProduct?: string; headingLevel?: 2 | 3 }) {
@@ -16,7 +20,10 @@ export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { def
   const [jar, setJar] = useState('pint');
   const [altitude, setAltitude] = useState('0');
   const [unit, setUnit] = useState<AltitudeUnit>('ft');
-  const outcome = calculate((read) => processingTime({ product, jar, altitudeFt: readAltitudeFt(read, altitude, unit) }), ['product', 'jar', ...ALTITUDE_FIELDS]);
+  const outcome = calculate(
+    (read) => processingTime({ product, jar, altitudeFt: readAltitudeFt(read, altitude, unit) }),
+    ['product', 'jar', ...ALTITUDE_FIELDS],
+  );
   const r = outcome.result;
   return (
     <CalculatorShell
@@ -39,8 +46,9 @@ export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { def
             ) : null}
             {r.lowTemperaturePasteurization ? (
               <p className="text-sm">
-                The guide also allows low-temperature pasteurization for this product: {r.lowTemperaturePasteurization.waterTempF[0]} to {r.lowTemperaturePasteurization.waterTempF[1]} °F (82 to 85 °C) water for{' '}
-                {r.lowTemperaturePasteurization.minutes} minutes, checked with a thermometer the whole time (USDA Complete Guide to Home Canning, Guide 6).
+                The guide also allows low-temperature pasteurization for this product: {r.lowTemperaturePasteurization.waterTempF[0]} to{' '}
+                {r.lowTemperaturePasteurization.waterTempF[1]} °F (82 to 85 °C) water for {r.lowTemperaturePasteurization.minutes} minutes, checked with a
+                thermometer the whole time (USDA Complete Guide to Home Canning, Guide 6).
               </p>
             ) : null}
             <p className="text-xs text-ink-soft">Source: {r.source}</p>
@@ -52,7 +60,13 @@ export function ProcessingTimeCalculator({ defaultProduct, headingLevel }: { def
     >
       <ProductSelect value={product} onChange={setProduct} error={outcome.fieldErrors.product} />
       <JarSelect value={jar} onChange={setJar} error={outcome.fieldErrors.jar} />
-      <AltitudeField value={altitude} onChange={setAltitude} unit={unit} onUnitChange={setUnit} error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM} />
+      <AltitudeField
+        value={altitude}
+        onChange={setAltitude}
+        unit={unit}
+        onUnitChange={setUnit}
+        error={outcome.fieldErrors.altitudeFt ?? outcome.fieldErrors.altitudeM}
+      />
     </CalculatorShell>
   );
 }

@@ -18,5 +18,7 @@ export function JarSelect({ value, onChange, error }: { value: string; onChange:
 }
 
 export function JarsField({ value, onChange, error }: { value: string; onChange: (value: string) => void; error?: string }) {
-  return <TextField label="Number of jars" inputMode="numeric" autoComplete="off" value={value} onChange={(event) => onChange(event.target.value)} error={error} />;
+  return (
+    <TextField label="Number of jars" inputMode="numeric" autoComplete="off" value={value} onChange={(event) => onChange(event.target.value)} error={error} />
+  );
 }

@@ -47,13 +47,17 @@ export function SaltCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
               </p>
             ) : (
               <p className="text-xl font-bold" data-testid="salt-grams">
-                about {fmt(r.gramsRange[0], 1)} to {fmt(r.gramsRange[1], 1)} g ({fmt(convert(r.gramsRange[0], 'g', 'oz'), 2)} to {fmt(convert(r.gramsRange[1], 'g', 'oz'), 2)} oz)
+                about {fmt(r.gramsRange[0], 1)} to {fmt(r.gramsRange[1], 1)} g ({fmt(convert(r.gramsRange[0], 'g', 'oz'), 2)} to{' '}
+                {fmt(convert(r.gramsRange[1], 'g', 'oz'), 2)} oz)
               </p>
             )}
             {r.brinePct !== undefined ? (
               <p data-testid="salt-brine">
                 Brine strength:{' '}
-                {r.brinePctRange && r.brinePctRange[0] !== r.brinePctRange[1] ? `${fmt(r.brinePctRange[0], 2)} to ${fmt(r.brinePctRange[1], 2)}` : fmt(r.brinePct, 2)}% salt by weight
+                {r.brinePctRange && r.brinePctRange[0] !== r.brinePctRange[1]
+                  ? `${fmt(r.brinePctRange[0], 2)} to ${fmt(r.brinePctRange[1], 2)}`
+                  : fmt(r.brinePct, 2)}
+                % salt by weight
               </p>
             ) : null}
             {r.byWeight ? null : (
@@ -69,9 +73,26 @@ export function SaltCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       }
     >
       <Select label="Kind of salt" options={SALT_OPTIONS} value={v.salt} onChange={set('salt')} error={e.salt} />
-      <TextField label="Amount of salt" inputMode="decimal" autoComplete="off" value={v.amount} onChange={set('amount')} error={e.amount} hint="Fractions such as 1/2 work" />
+      <TextField
+        label="Amount of salt"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.amount}
+        onChange={set('amount')}
+        error={e.amount}
+        hint="Fractions such as 1/2 work"
+      />
       <Select label="Unit" options={UNIT_OPTIONS} value={v.unit} onChange={set('unit')} error={e.unit} />
-      <TextField label="Water (optional)" suffix="mL" inputMode="decimal" autoComplete="off" value={v.waterMl} onChange={set('waterMl')} error={e.waterMl} hint="1 US quart = 946 mL" />
+      <TextField
+        label="Water (optional)"
+        suffix="mL"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.waterMl}
+        onChange={set('waterMl')}
+        error={e.waterMl}
+        hint="1 US quart = 946 mL"
+      />
     </CalculatorShell>
   );
 }

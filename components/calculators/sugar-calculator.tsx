@@ -59,9 +59,26 @@ export function SugarCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       }
     >
       <Select label="Kind of sugar" options={SUGAR_OPTIONS} value={v.sugar} onChange={set('sugar')} error={e.sugar} />
-      <TextField label="Amount of sugar" inputMode="decimal" autoComplete="off" value={v.amount} onChange={set('amount')} error={e.amount} hint="Fractions such as 4 1/2 work" />
+      <TextField
+        label="Amount of sugar"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.amount}
+        onChange={set('amount')}
+        error={e.amount}
+        hint="Fractions such as 4 1/2 work"
+      />
       <Select label="Unit of sugar" options={UNIT_OPTIONS} value={v.unit} onChange={set('unit')} error={e.unit} />
-      <TextField label="Vinegar and water (optional)" suffix="mL" inputMode="decimal" autoComplete="off" value={v.liquidMl} onChange={set('liquidMl')} error={e.liquidMl} hint="1 US cup = 237 mL" />
+      <TextField
+        label="Vinegar and water (optional)"
+        suffix="mL"
+        inputMode="decimal"
+        autoComplete="off"
+        value={v.liquidMl}
+        onChange={set('liquidMl')}
+        error={e.liquidMl}
+        hint="1 US cup = 237 mL"
+      />
     </CalculatorShell>
   );
 }

@@ -32,7 +32,14 @@ export function UnitConverter({ headingLevel }: { headingLevel?: 2 | 3 }) {
         )
       }
     >
-      <TextField label="Value" inputMode="decimal" autoComplete="off" value={value} onChange={(event) => setValue(event.target.value)} error={outcome.fieldErrors.value} />
+      <TextField
+        label="Value"
+        inputMode="decimal"
+        autoComplete="off"
+        value={value}
+        onChange={(event) => setValue(event.target.value)}
+        error={outcome.fieldErrors.value}
+      />
       <Select label="From" options={OPTIONS} value={from} onChange={(event) => setFrom(event.target.value)} error={outcome.fieldErrors.from} />
       <Select label="To" options={OPTIONS} value={to} onChange={(event) => setTo(event.target.value)} error={outcome.fieldErrors.to} />
     </CalculatorShell>

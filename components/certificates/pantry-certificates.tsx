@@ -74,8 +74,8 @@ function RefresherOffer({ expired }: { expired: boolean }) {
     <div className="rounded-jar border-l-4 border-copper-500 bg-copper-50 p-4">
       <p className="font-semibold">{expired ? 'Your certificate has expired.' : 'Your certificate expires soon.'}</p>
       <p className="mt-1 text-sm">
-        The volunteer refresher reviews acidity, processing time and altitude. Completing it issues a new certificate whose validity runs on from the end of your
-        current one{expired ? ', or from the day it is issued if your certificate lapsed more than a year ago' : ''}.
+        The volunteer refresher reviews acidity, processing time and altitude. Completing it issues a new certificate whose validity runs on from the end of
+        your current one{expired ? ', or from the day it is issued if your certificate lapsed more than a year ago' : ''}.
       </p>
       <ButtonLink className="mt-3" size="sm" href={`/courses/${REFRESHER_COURSE_SLUG}`}>
         See the refresher course

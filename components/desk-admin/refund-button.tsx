@@ -52,8 +52,16 @@ export function RefundButton({ enrollmentId, learnerName, amount }: { enrollment
           </>
         }
       >
-        <p className="mb-3 text-sm">The fee goes back to the learner’s card, the enrollment is withdrawn and the workshop seat is released. The learner gets an e-mail.</p>
-        <TextField label="Reason (kept in the audit log)" value={reason} onChange={(e) => setReason(e.target.value)} maxLength={300} error={error ?? undefined} />
+        <p className="mb-3 text-sm">
+          The fee goes back to the learner’s card, the enrollment is withdrawn and the workshop seat is released. The learner gets an e-mail.
+        </p>
+        <TextField
+          label="Reason (kept in the audit log)"
+          value={reason}
+          onChange={(e) => setReason(e.target.value)}
+          maxLength={300}
+          error={error ?? undefined}
+        />
       </Dialog>
     </>
   );

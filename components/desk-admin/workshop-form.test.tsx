@@ -9,14 +9,30 @@ import { WorkshopForm } from './workshop-form';
 const refresh = vi.fn();
 vi.mock('next/navigation', () => ({ useRouter: () => ({ push: vi.fn(), refresh }) }));
 
-const defaults: WorkshopInput = { courseId: '1', date: '', startTime: '09:00', endTime: '14:00', timeZone: 'America/Denver', place: '', seats: 12, instructorId: '', attendanceRequired: true };
+const defaults: WorkshopInput = {
+  courseId: '1',
+  date: '',
+  startTime: '09:00',
+  endTime: '14:00',
+  timeZone: 'America/Denver',
+  place: '',
+  seats: 12,
+  instructorId: '',
+  attendanceRequired: true,
+};
 
 type Save = (id: number | null, input: WorkshopInput) => Promise<SaveState>;
 
 function renderForm(save: Save = vi.fn<Save>(async () => ({ ok: true, id: 5 }))) {
   render(
     <ToastProvider>
-      <WorkshopForm workshopId={null} defaults={defaults} courses={[{ id: 1, title: 'Safe Pickling and Water-Bath Canning' }]} instructors={[{ id: 3, name: 'Tomas Lindqvist' }]} save={save} />
+      <WorkshopForm
+        workshopId={null}
+        defaults={defaults}
+        courses={[{ id: 1, title: 'Safe Pickling and Water-Bath Canning' }]}
+        instructors={[{ id: 3, name: 'Tomas Lindqvist' }]}
+        save={save}
+      />
     </ToastProvider>,
   );
   return save;
@@ -35,13 +51,28 @@ describe('WorkshopForm', () => {
   }, 20_000);
 
   it('sends the values and shows the server’s field errors', async () => {
-    const save = vi.fn<Save>(async () => ({ ok: false, message: 'Please check the highlighted fields.', fields: { seats: ['3 seats are already taken; the workshop cannot have fewer.'] } }));
+    const save = vi.fn<Save>(async () => ({
+      ok: false,
+      message: 'Please check the highlighted fields.',
+      fields: { seats: ['3 seats are already taken; the workshop cannot have fewer.'] },
+    }));
     renderForm(save);
     await userEvent.type(screen.getByLabelText('Date'), '2027-03-13');
     await userEvent.type(screen.getByLabelText('Place'), 'Cedar Hollow Grange Hall');
     await userEvent.selectOptions(screen.getByLabelText('Instructor'), '3');
     await userEvent.click(screen.getByRole('button', { name: 'Add workshop' }));
     expect(await screen.findByText('3 seats are already taken; the workshop cannot have fewer.')).toBeInTheDocument();
-    expect(save).toHaveBeenCalledWith(null, expect.objectContaining({ courseId: 1, date: '2027-03-13', place: 'Cedar Hollow Grange Hall', seats: 12, instructorId: 3, timeZone: 'America/Denver', attendanceRequired: true }));
+    expect(save).toHaveBeenCalledWith(
+      null,
+      expect.objectContaining({
+        courseId: 1,
+        date: '2027-03-13',
+        place: 'Cedar Hollow Grange Hall',
+        seats: 12,
+        instructorId: 3,
+        timeZone: 'America/Denver',
+        attendanceRequired: true,
+      }),
+    );
   }, 20_000);
 });

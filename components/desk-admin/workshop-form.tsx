@@ -48,7 +48,12 @@ export function WorkshopForm({ workshopId, defaults, courses, instructors, save 
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" aria-label={workshopId ? 'Edit workshop' : 'New workshop'}>
-      <Select label="Course" options={[{ value: '', label: 'Choose a course' }, ...courses.map((c) => ({ value: String(c.id), label: c.title }))]} error={err('courseId')} {...register('courseId')} />
+      <Select
+        label="Course"
+        options={[{ value: '', label: 'Choose a course' }, ...courses.map((c) => ({ value: String(c.id), label: c.title }))]}
+        error={err('courseId')}
+        {...register('courseId')}
+      />
       <Select
         label="Instructor"
         options={[{ value: '', label: 'To be announced' }, ...instructors.map((i) => ({ value: String(i.id), label: i.name }))]}
@@ -56,7 +61,13 @@ export function WorkshopForm({ workshopId, defaults, courses, instructors, save 
         {...register('instructorId')}
       />
       <TextField label="Date" type="date" error={err('date')} {...register('date')} />
-      <Select label="Time zone" hint="Times are entered as the clocks at the place show them." options={WORKSHOP_TIME_ZONES} error={err('timeZone')} {...register('timeZone')} />
+      <Select
+        label="Time zone"
+        hint="Times are entered as the clocks at the place show them."
+        options={WORKSHOP_TIME_ZONES}
+        error={err('timeZone')}
+        {...register('timeZone')}
+      />
       <TextField label="Starts at" type="time" error={err('startTime')} {...register('startTime')} />
       <TextField label="Ends at" type="time" error={err('endTime')} {...register('endTime')} />
       <TextField label="Place" hint="Hall or kitchen, street and town." className="sm:col-span-2" error={err('place')} {...register('place')} />
@@ -68,9 +79,7 @@ export function WorkshopForm({ workshopId, defaults, courses, instructors, save 
         </label>
       </div>
       <div className="flex items-center gap-3 sm:col-span-2">
-        <SubmitButton pending={formState.isSubmitting}>
-          {workshopId ? 'Save changes' : 'Add workshop'}
-        </SubmitButton>
+        <SubmitButton pending={formState.isSubmitting}>{workshopId ? 'Save changes' : 'Add workshop'}</SubmitButton>
         <p role="status" aria-live="polite" className="text-sm font-medium text-beet-600">
           {message}
         </p>

@@ -26,7 +26,8 @@ export function ImportForm() {
         </label>
         <input id="import-file" name="file" type="file" accept=".csv,text/csv" required aria-describedby="import-help" />
         <p id="import-help" className="text-sm text-ink-soft">
-          First line: name, email, course, certificate_date, end_date, old_serial (old_serial may be empty). Dates as YYYY-MM-DD; course as its short name, e.g. pickling-and-canning.
+          First line: name, email, course, certificate_date, end_date, old_serial (old_serial may be empty). Dates as YYYY-MM-DD; course as its short name, e.g.
+          pickling-and-canning.
         </p>
         <Button type="submit" variant="secondary" pending={previewing}>
           Preview the import
@@ -74,7 +75,9 @@ export function ImportForm() {
               </Button>
             </form>
           ) : null}
-          {current.step === 'preview' && counts.refuse > 0 ? <p>Correct the refused lines in the file and preview it again: nothing is imported while a line is refused.</p> : null}
+          {current.step === 'preview' && counts.refuse > 0 ? (
+            <p>Correct the refused lines in the file and preview it again: nothing is imported while a line is refused.</p>
+          ) : null}
         </section>
       ) : null}
     </div>

@@ -81,7 +81,10 @@ export function CertificateDesk() {
         skipped += result.existing + result.notEligible + result.notFound;
         setProgress({ done: Math.min(i + batch.length, ids.length), total: ids.length, issued, skipped });
       }
-      toast.show(`${issued} certificate${issued === 1 ? '' : 's'} issued${skipped ? `, ${skipped} skipped (already issued or no longer eligible)` : ''}.`, 'success');
+      toast.show(
+        `${issued} certificate${issued === 1 ? '' : 's'} issued${skipped ? `, ${skipped} skipped (already issued or no longer eligible)` : ''}.`,
+        'success',
+      );
       setSelected(new Map());
     } catch (e) {
       toast.show(e instanceof Error ? e.message : 'Issuing stopped on an error.', 'error');
@@ -102,12 +105,19 @@ export function CertificateDesk() {
   const courseOptions = [{ value: '', label: 'All courses' }, ...(options.data?.courses ?? []).map((c) => ({ value: c.slug, label: c.title }))];
   const workshopOptions = [
     { value: '', label: 'All workshops' },
-    ...(options.data?.workshops ?? []).filter((w) => !filters.course || w.courseSlug === filters.course).map((w) => ({ value: String(w.id), label: `${formatDate(w.startsAt)} · ${w.place.split(',')[0]}` })),
+    ...(options.data?.workshops ?? [])
+      .filter((w) => !filters.course || w.courseSlug === filters.course)
+      .map((w) => ({ value: String(w.id), label: `${formatDate(w.startsAt)} · ${w.place.split(',')[0]}` })),
   ];
 
   return (
     <div className="space-y-4">
-      <form role="search" aria-label="Filter enrollments" className="grid gap-3 rounded-jar border border-brine-100 bg-white p-4 shadow-shelf md:grid-cols-5" onSubmit={(e) => e.preventDefault()}>
+      <form
+        role="search"
+        aria-label="Filter enrollments"
+        className="grid gap-3 rounded-jar border border-brine-100 bg-white p-4 shadow-shelf md:grid-cols-5"
+        onSubmit={(e) => e.preventDefault()}
+      >
         <Select label="Course" value={filters.course} onChange={(e) => setFilter('course', e.target.value)} options={courseOptions} />
         <Select label="Workshop" value={filters.workshop} onChange={(e) => setFilter('workshop', e.target.value)} options={workshopOptions} />
         <Select
@@ -134,7 +144,11 @@ export function CertificateDesk() {
         <p className="text-sm text-ink-soft" aria-live="polite">
           {selected.size} selected{selected.size ? `, ${eligibleSelected.length} eligible` : ''}
         </p>
-        <Button onClick={issueSelected} disabled={eligibleSelected.length === 0 || progress !== null} pending={progress !== null && progress.done < progress.total}>
+        <Button
+          onClick={issueSelected}
+          disabled={eligibleSelected.length === 0 || progress !== null}
+          pending={progress !== null && progress.done < progress.total}
+        >
           Issue certificates{eligibleSelected.length ? ` (${eligibleSelected.length})` : ''}
         </Button>
         <a className={buttonClasses('secondary')} href={rosterHref} download>
@@ -168,7 +182,13 @@ export function CertificateDesk() {
         <THead>
           <TR>
             <TH>
-              <input type="checkbox" aria-label="Select every enrollment on this page" checked={allOnPage} onChange={togglePage} disabled={items.length === 0} />
+              <input
+                type="checkbox"
+                aria-label="Select every enrollment on this page"
+                checked={allOnPage}
+                onChange={togglePage}
+                disabled={items.length === 0}
+              />
             </TH>
             <TH>Learner</TH>
             <TH>Course and workshop</TH>
@@ -186,7 +206,12 @@ export function CertificateDesk() {
             items.map((row) => (
               <TR key={row.id}>
                 <TD>
-                  <input type="checkbox" aria-label={`Select ${row.learnerName}, ${row.courseTitle}`} checked={selected.has(row.id)} onChange={() => toggle(row)} />
+                  <input
+                    type="checkbox"
+                    aria-label={`Select ${row.learnerName}, ${row.courseTitle}`}
+                    checked={selected.has(row.id)}
+                    onChange={() => toggle(row)}
+                  />
                 </TD>
                 <TD>
                   <span className="font-semibold">{row.learnerName}</span>
@@ -194,7 +219,9 @@ export function CertificateDesk() {
                 </TD>
                 <TD>
                   {row.courseTitle}
-                  <span className="block text-xs text-ink-soft">{row.workshop ? `${formatDate(row.workshop.startsAt)} · ${row.workshop.place.split(',')[0]}` : 'No workshop'}</span>
+                  <span className="block text-xs text-ink-soft">
+                    {row.workshop ? `${formatDate(row.workshop.startsAt)} · ${row.workshop.place.split(',')[0]}` : 'No workshop'}
+                  </span>
                 </TD>
                 <TD>
                   <Badge tone={STATUS_TONE[row.status]}>{STATUS_LABEL[row.status]}</Badge>

@@ -4,7 +4,17 @@ import { useState } from 'react';
 import { FetchError, postJson } from '@/lib/fetcher';
 
 /** One learner's attendance checkbox; saves at once and says so in a live region. */
-export function AttendanceToggle({ enrollmentId, learnerName, attended: initial, disabled }: { enrollmentId: number; learnerName: string; attended: boolean; disabled?: boolean }) {
+export function AttendanceToggle({
+  enrollmentId,
+  learnerName,
+  attended: initial,
+  disabled,
+}: {
+  enrollmentId: number;
+  learnerName: string;
+  attended: boolean;
+  disabled?: boolean;
+}) {
   const [attended, setAttended] = useState(initial);
   const [pending, setPending] = useState(false);
   const [message, setMessage] = useState<string | null>(null);
@@ -26,7 +36,15 @@ export function AttendanceToggle({ enrollmentId, learnerName, attended: initial,
 
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <input id={id} type="checkbox" className="h-4 w-4 accent-brine-700" checked={attended} disabled={pending || disabled} onChange={(e) => toggle(e.target.checked)} aria-describedby={`${id}-msg`} />
+      <input
+        id={id}
+        type="checkbox"
+        className="h-4 w-4 accent-brine-700"
+        checked={attended}
+        disabled={pending || disabled}
+        onChange={(e) => toggle(e.target.checked)}
+        aria-describedby={`${id}-msg`}
+      />
       <label htmlFor={id}>
         Attended<span className="sr-only">: {learnerName}</span>
       </label>

@@ -54,13 +54,16 @@ export function CheckoutStatus({ enrollmentId }: { enrollmentId: number }) {
           <>
             <h1 className="font-display text-2xl font-bold text-brine-900">You are enrolled</h1>
             <p className="mt-2 text-ink">
-              {e.courseTitle} is now in your Pantry. {e.waived ? 'Your fee waiver was applied.' : 'A receipt is on its way by e-mail.'} Taking you to your Pantry…
+              {e.courseTitle} is now in your Pantry. {e.waived ? 'Your fee waiver was applied.' : 'A receipt is on its way by e-mail.'} Taking you to your
+              Pantry…
             </p>
           </>
         ) : e.status === 'awaiting_payment' ? (
           <>
             <h1 className="font-display text-2xl font-bold text-brine-900">Confirming your payment…</h1>
-            <p className="mt-2 text-ink">The payment service is telling Brinewright about your payment. This usually takes a few seconds; keep this page open.</p>
+            <p className="mt-2 text-ink">
+              The payment service is telling Brinewright about your payment. This usually takes a few seconds; keep this page open.
+            </p>
           </>
         ) : (
           <>

@@ -27,7 +27,8 @@ function renderFresh() {
   );
 }
 
-const answer = (status: number, body: unknown) => Promise.resolve(new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }));
+const answer = (status: number, body: unknown) =>
+  Promise.resolve(new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }));
 
 afterEach(() => vi.unstubAllGlobals());
 
@@ -51,7 +52,10 @@ describe('CourseWorkshops', () => {
   });
 
   it('says so when there are no workshops, and offers a retry when loading fails', async () => {
-    vi.stubGlobal('fetch', vi.fn(() => answer(200, { workshops: [] })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(() => answer(200, { workshops: [] })),
+    );
     const { unmount } = renderFresh();
     expect(await screen.findByText(/No workshops are scheduled for this course yet/)).toBeInTheDocument();
     unmount();
@@ -67,7 +71,8 @@ describe('CourseWorkshops', () => {
 
   it('shows the server’s answer when the workshop filled up meanwhile, and sends a waiver code when given', async () => {
     const fetchMock = vi.fn((url: string, init?: RequestInit) => {
-      if (url === '/api/enrollments') return answer(409, { error: 'conflict', reason: 'full', message: 'This workshop is full. Please choose another date.', body: init?.body });
+      if (url === '/api/enrollments')
+        return answer(409, { error: 'conflict', reason: 'full', message: 'This workshop is full. Please choose another date.', body: init?.body });
       return answer(200, { workshops: [base] });
     });
     vi.stubGlobal('fetch', fetchMock);

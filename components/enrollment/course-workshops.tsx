@@ -21,7 +21,10 @@ const STATUS_LABEL: Record<string, string> = {
 
 /** Upcoming workshops of a course with seats left, and the enroll action (card payment or a fee waiver code). */
 export function CourseWorkshops({ courseSlug }: { courseSlug: string }) {
-  const { data, error, isLoading, mutate } = useSWR<{ workshops: WorkshopItem[] }, FetchError>(`/api/courses/${encodeURIComponent(courseSlug)}/workshops`, fetchJson);
+  const { data, error, isLoading, mutate } = useSWR<{ workshops: WorkshopItem[] }, FetchError>(
+    `/api/courses/${encodeURIComponent(courseSlug)}/workshops`,
+    fetchJson,
+  );
 
   return (
     <section aria-labelledby="workshops-heading" className="space-y-4">
@@ -99,9 +102,7 @@ function WorkshopRow({ workshop: w, onEnrolled }: { workshop: WorkshopItem; onEn
           {w.attendanceRequired ? <p className="text-sm text-ink-soft">Attendance is required for the certificate.</p> : null}
         </div>
         <div className="flex flex-col items-end gap-2">
-          <Badge tone={full ? 'beet' : w.seatsLeft <= 3 ? 'honey' : 'brine'}>
-            {full ? 'Full' : `${w.seatsLeft} of ${w.seats} seats left`}
-          </Badge>
+          <Badge tone={full ? 'beet' : w.seatsLeft <= 3 ? 'honey' : 'brine'}>{full ? 'Full' : `${w.seatsLeft} of ${w.seats} seats left`}</Badge>
           {w.myStatus ? <Badge tone="copper">{STATUS_LABEL[w.myStatus] ?? w.myStatus}</Badge> : null}
         </div>
       </div>

@@ -14,8 +14,8 @@ export function EnrollOffer() {
       </p>
       <h1 className="text-3xl font-bold">This lesson is for enrolled learners</h1>
       <p className="text-ink-soft">
-        The first lessons of a course are open to everyone; the rest open once you enroll. Choose a workshop date and pay the course fee, or
-        use a fee waiver code from your program coordinator, and this lesson is yours to read.
+        The first lessons of a course are open to everyone; the rest open once you enroll. Choose a workshop date and pay the course fee, or use a fee waiver
+        code from your program coordinator, and this lesson is yours to read.
       </p>
       <div className="flex flex-wrap justify-center gap-3">
         {course ? <ButtonLink href={`/courses/${course}#workshops`}>Enroll in the course</ButtonLink> : null}

@@ -43,7 +43,10 @@ export function LessonPager({ courseSlug, previous, next }: { courseSlug: string
   return (
     <nav aria-label="Previous and next lesson" data-lesson-nav className="grid gap-3 sm:grid-cols-2">
       {previous ? (
-        <Link href={`/learn/${courseSlug}/${previous.slug}`} className="rounded-jar border border-brine-100 bg-white p-4 no-underline shadow-shelf hover:border-brine-300">
+        <Link
+          href={`/learn/${courseSlug}/${previous.slug}`}
+          className="rounded-jar border border-brine-100 bg-white p-4 no-underline shadow-shelf hover:border-brine-300"
+        >
           <span className="block text-xs font-semibold tracking-wide text-ink-soft uppercase">Previous: lesson {previous.order}</span>
           <span className="font-display font-bold text-brine-800">{previous.title}</span>
         </Link>
@@ -51,7 +54,10 @@ export function LessonPager({ courseSlug, previous, next }: { courseSlug: string
         <span />
       )}
       {next ? (
-        <Link href={`/learn/${courseSlug}/${next.slug}`} className="rounded-jar border border-brine-100 bg-white p-4 text-right no-underline shadow-shelf hover:border-brine-300">
+        <Link
+          href={`/learn/${courseSlug}/${next.slug}`}
+          className="rounded-jar border border-brine-100 bg-white p-4 text-right no-underline shadow-shelf hover:border-brine-300"
+        >
           <span className="block text-xs font-semibold tracking-wide text-ink-soft uppercase">Next: lesson {next.order}</span>
           <span className="font-display font-bold text-brine-800">{next.title}</span>
         </Link>

@@ -15,7 +15,9 @@ describe('TableOfContents', () => {
     );
     const nav = screen.getByRole('navigation', { name: 'On this page' });
     const top = within(nav).getAllByRole('list')[0];
-    const items = within(top).getAllByRole('listitem').filter((li) => li.parentElement === top);
+    const items = within(top)
+      .getAllByRole('listitem')
+      .filter((li) => li.parentElement === top);
     expect(items).toHaveLength(2);
     expect(within(items[0]).getByRole('link', { name: 'Ratios' })).toHaveAttribute('href', '#ratios');
     expect(within(items[1]).queryByRole('link', { name: 'Ratios' })).toBeNull();

@@ -14,13 +14,14 @@ export function TableOfContents({ entries, className }: { entries: TocEntry[]; c
     // Named by aria-label rather than by the heading's id: a lesson page renders it twice (after the
     // title on narrow screens, in the side column on wide ones), and an id must be unique.
     <nav aria-label="On this page" data-lesson-nav className={cn('text-sm', className)}>
-      <h2 className="mb-2 font-display text-sm font-bold tracking-wide text-brine-800 uppercase">
-        On this page
-      </h2>
+      <h2 className="mb-2 font-display text-sm font-bold tracking-wide text-brine-800 uppercase">On this page</h2>
       <ol className="space-y-1.5 border-l border-brine-100">
         {groups.map(({ entry, children }) => (
           <li key={entry.id}>
-            <a href={`#${entry.id}`} className="-ml-px block border-l-2 border-transparent pl-3 text-ink-soft no-underline hover:border-brine-500 hover:text-brine-800">
+            <a
+              href={`#${entry.id}`}
+              className="-ml-px block border-l-2 border-transparent pl-3 text-ink-soft no-underline hover:border-brine-500 hover:text-brine-800"
+            >
               {entry.text}
             </a>
             {children.length ? (

@@ -26,14 +26,17 @@ function slot<P extends object>(Calculator: ComponentType<P>, name: string) {
   return CalculatorSlot;
 }
 
-
 const Brine = dynamic(() => import('@/components/calculators/brine-calculator').then((m) => m.BrineCalculator), { loading: CalculatorLoading });
 const Salt = dynamic(() => import('@/components/calculators/salt-calculator').then((m) => m.SaltCalculator), { loading: CalculatorLoading });
 const Sugar = dynamic(() => import('@/components/calculators/sugar-calculator').then((m) => m.SugarCalculator), { loading: CalculatorLoading });
 const Headspace = dynamic(() => import('@/components/calculators/headspace-calculator').then((m) => m.HeadspaceCalculator), { loading: CalculatorLoading });
-const ProcessingTime = dynamic(() => import('@/components/calculators/processing-time-calculator').then((m) => m.ProcessingTimeCalculator), { loading: CalculatorLoading });
+const ProcessingTime = dynamic(() => import('@/components/calculators/processing-time-calculator').then((m) => m.ProcessingTimeCalculator), {
+  loading: CalculatorLoading,
+});
 const Pressure = dynamic(() => import('@/components/calculators/pressure-calculator').then((m) => m.PressureCalculator), { loading: CalculatorLoading });
-const BoilingPoint = dynamic(() => import('@/components/calculators/boiling-point-calculator').then((m) => m.BoilingPointCalculator), { loading: CalculatorLoading });
+const BoilingPoint = dynamic(() => import('@/components/calculators/boiling-point-calculator').then((m) => m.BoilingPointCalculator), {
+  loading: CalculatorLoading,
+});
 const Crisping = dynamic(() => import('@/components/calculators/crisping-calculator').then((m) => m.CrispingCalculator), { loading: CalculatorLoading });
 const Batch = dynamic(() => import('@/components/calculators/batch-planner').then((m) => m.BatchPlanner), { loading: CalculatorLoading });
 const Units = dynamic(() => import('@/components/calculators/unit-converter').then((m) => m.UnitConverter), { loading: CalculatorLoading });

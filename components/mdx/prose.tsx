@@ -73,12 +73,16 @@ export const proseElements = {
   ul: (props: ComponentProps<'ul'>) => <ul className="my-4 list-disc space-y-1.5 pl-6 marker:text-brine-500" {...props} />,
   ol: (props: ComponentProps<'ol'>) => <ol className="my-4 list-decimal space-y-1.5 pl-6 marker:font-semibold marker:text-brine-700" {...props} />,
   li: (props: ComponentProps<'li'>) => <li className="pl-1 leading-relaxed" {...props} />,
-  blockquote: (props: ComponentProps<'blockquote'>) => <blockquote className="my-6 border-l-4 border-brine-300 bg-brine-50 py-2 pr-4 pl-4 italic text-ink-soft" {...props} />,
+  blockquote: (props: ComponentProps<'blockquote'>) => (
+    <blockquote className="my-6 border-l-4 border-brine-300 bg-brine-50 py-2 pr-4 pl-4 italic text-ink-soft" {...props} />
+  ),
   strong: (props: ComponentProps<'strong'>) => <strong className="font-semibold text-ink" {...props} />,
   em: (props: ComponentProps<'em'>) => <em className="italic" {...props} />,
   hr: (props: ComponentProps<'hr'>) => <hr className="my-8 border-brine-100" {...props} />,
   code: (props: ComponentProps<'code'>) => <code className="rounded bg-paper-deep px-1.5 py-0.5 font-mono text-[0.9em]" {...props} />,
-  pre: (props: ComponentProps<'pre'>) => <pre className="my-6 overflow-x-auto rounded-lg bg-ink p-4 text-sm text-paper [&_code]:bg-transparent [&_code]:p-0" {...props} />,
+  pre: (props: ComponentProps<'pre'>) => (
+    <pre className="my-6 overflow-x-auto rounded-lg bg-ink p-4 text-sm text-paper [&_code]:bg-transparent [&_code]:p-0" {...props} />
+  ),
   table: MdxTable,
   thead: (props: ComponentProps<'thead'>) => <thead className="bg-brine-50 text-brine-900" {...props} />,
   tbody: (props: ComponentProps<'tbody'>) => <tbody className="divide-y divide-brine-100" {...props} />,

@@ -35,7 +35,11 @@ export function Jar({ fill, label, className }: { fill: number; label: string; c
         ) : null}
       </g>
       {/* Glass */}
-      <path d="M16 30 Q16 24 22 22 L58 22 Q64 24 64 30 L66 104 Q66 112 58 112 L22 112 Q14 112 14 104 Z" className="fill-brine-50/30 stroke-brine-700" strokeWidth="2.5" />
+      <path
+        d="M16 30 Q16 24 22 22 L58 22 Q64 24 64 30 L66 104 Q66 112 58 112 L22 112 Q14 112 14 104 Z"
+        className="fill-brine-50/30 stroke-brine-700"
+        strokeWidth="2.5"
+      />
       <path d="M22 36 L22 96" className="stroke-white/80" strokeWidth="3" strokeLinecap="round" />
     </svg>
   );

@@ -17,26 +17,43 @@ const shelf = buildShelf({
   passedQuizzes: ['pickling-and-canning--acidity'],
 });
 
-const renderFresh = () => render(<SWRConfig value={{ provider: () => new Map(), dedupingInterval: 0 }}><PantryShelves /></SWRConfig>);
+const renderFresh = () =>
+  render(
+    <SWRConfig value={{ provider: () => new Map(), dedupingInterval: 0 }}>
+      <PantryShelves />
+    </SWRConfig>,
+  );
 afterEach(() => vi.unstubAllGlobals());
 
 describe('PantryShelves', () => {
   it('draws a jar per lesson with its accessible name and fill, and the next step', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Response.json({ shelves: [shelf] })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Response.json({ shelves: [shelf] })),
+    );
     renderFresh();
     const full = await screen.findByRole('img', { name: 'Acidity: read, quiz passed' });
     expect(full).toHaveAttribute('data-fill', '1');
     expect(screen.getByRole('img', { name: 'Why preserving is a safety job: read, quiz not passed yet' })).toHaveAttribute('data-fill', '0.5');
-    expect(screen.getByRole('link', { name: 'Take the quiz for lesson 1: Why preserving is a safety job' })).toHaveAttribute('href', '/quiz/pickling-and-canning--why');
+    expect(screen.getByRole('link', { name: 'Take the quiz for lesson 1: Why preserving is a safety job' })).toHaveAttribute(
+      'href',
+      '/quiz/pickling-and-canning--why',
+    );
     expect(screen.getByText(/1 of 2 jars full/)).toBeInTheDocument();
   }, 20_000);
 
   it('an empty Pantry points to the courses; an error offers a retry', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Response.json({ shelves: [] })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Response.json({ shelves: [] })),
+    );
     const { unmount } = renderFresh();
     expect(await screen.findByRole('link', { name: 'Browse courses' })).toHaveAttribute('href', '/courses');
     unmount();
-    vi.stubGlobal('fetch', vi.fn(async () => Response.json({ error: 'unavailable', message: 'Brinewright cannot reach its database right now.' }, { status: 503 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Response.json({ error: 'unavailable', message: 'Brinewright cannot reach its database right now.' }, { status: 503 })),
+    );
     renderFresh();
     expect(await screen.findByRole('alert')).toHaveTextContent('Brinewright cannot reach its database right now.');
     expect(screen.getByRole('button', { name: 'Try again' })).toBeInTheDocument();

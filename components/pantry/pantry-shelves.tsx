@@ -9,11 +9,18 @@ import { Card } from '@/components/ui/card';
 import type { Shelf } from '@/lib/progress/shelf';
 import { Jar } from './jar';
 
-const STATUS = { awaiting_payment: ['Awaiting payment', 'honey'], active: ['Active', 'brine'], completed: ['Completed', 'copper'], withdrawn: ['Withdrawn', 'beet'] } as const;
+const STATUS = {
+  awaiting_payment: ['Awaiting payment', 'honey'],
+  active: ['Active', 'brine'],
+  completed: ['Completed', 'copper'],
+  withdrawn: ['Withdrawn', 'beet'],
+} as const;
 
 /** The learner's courses as shelves of jars, one jar per lesson, from GET /api/pantry. */
 export function PantryShelves() {
-  const { data, error, isLoading, mutate } = useSWR<{ shelves: Shelf[] }, FetchError>('/api/pantry', (url: string) => fetchJson(url), { revalidateOnFocus: true });
+  const { data, error, isLoading, mutate } = useSWR<{ shelves: Shelf[] }, FetchError>('/api/pantry', (url: string) => fetchJson(url), {
+    revalidateOnFocus: true,
+  });
 
   if (isLoading) {
     return (
@@ -46,7 +53,12 @@ export function PantryShelves() {
   return (
     <div className="space-y-8">
       {shelves.map((shelf) => (
-        <section key={shelf.courseSlug} aria-labelledby={`shelf-${shelf.courseSlug}`} className="rounded-jar border border-brine-100 bg-white p-5 shadow-shelf" data-testid={`shelf-${shelf.courseSlug}`}>
+        <section
+          key={shelf.courseSlug}
+          aria-labelledby={`shelf-${shelf.courseSlug}`}
+          className="rounded-jar border border-brine-100 bg-white p-5 shadow-shelf"
+          data-testid={`shelf-${shelf.courseSlug}`}
+        >
           <div className="mb-4 flex flex-wrap items-start justify-between gap-3">
             <div>
               <h2 id={`shelf-${shelf.courseSlug}`} className="text-xl font-bold">

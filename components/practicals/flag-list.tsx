@@ -32,13 +32,18 @@ export function FlagList({
 }) {
   const Heading = level;
   return (
-    <section aria-label={title} className={cn('rounded-jar border p-4', flags.length ? 'border-honey-500/60 bg-honey-50' : 'border-brine-100 bg-brine-50', className)}>
+    <section
+      aria-label={title}
+      className={cn('rounded-jar border p-4', flags.length ? 'border-honey-500/60 bg-honey-50' : 'border-brine-100 bg-brine-50', className)}
+    >
       <Heading className="text-base font-bold">{title}</Heading>
       <div aria-live={live ? 'polite' : undefined}>
         {flags.length === 0 && notChecked.length > 0 ? (
           <p className="mt-1 text-sm text-ink-soft">No flags so far.</p>
         ) : flags.length === 0 ? (
-          <p className="mt-1 text-sm text-ink-soft">No flags: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested recipe.</p>
+          <p className="mt-1 text-sm text-ink-soft">
+            No flags: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested recipe.
+          </p>
         ) : (
           <ul className="mt-2 space-y-2" data-testid="flags">
             {flags.map((flag, i) => (

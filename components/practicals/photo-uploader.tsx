@@ -43,7 +43,17 @@ function send(courseSlug: string, file: File, onProgress: (fraction: number) => 
  * Each photo is its own upload with its own progress bar; a failed one can be retried or removed
  * without touching the rest of the form. Reports the ids of the uploaded photos, in order.
  */
-export function PhotoUploader({ courseSlug, onChange, describedBy, invalid }: { courseSlug: string; onChange: (ids: number[]) => void; describedBy?: string; invalid?: boolean }) {
+export function PhotoUploader({
+  courseSlug,
+  onChange,
+  describedBy,
+  invalid,
+}: {
+  courseSlug: string;
+  onChange: (ids: number[]) => void;
+  describedBy?: string;
+  invalid?: boolean;
+}) {
   const [items, setItems] = useState<Item[]>([]);
   const input = useRef<HTMLInputElement>(null);
   const patch = useCallback((key: string, change: Partial<Item>) => setItems((all) => all.map((it) => (it.key === key ? { ...it, ...change } : it))), []);
@@ -88,8 +98,8 @@ export function PhotoUploader({ courseSlug, onChange, describedBy, invalid }: { 
           Photos ({items.length} of {MAX_PHOTOS})
         </label>
         <p id="practical-photos-hint" className="text-sm text-ink-soft">
-          2 to 6 photos: the packed jars before processing with the headspace visible, the jars after processing, and a close-up of a lid. JPEG, PNG or WebP, at most 10 MB each.
-          Location and camera details are removed when a photo is saved.
+          2 to 6 photos: the packed jars before processing with the headspace visible, the jars after processing, and a close-up of a lid. JPEG, PNG or WebP, at
+          most 10 MB each. Location and camera details are removed when a photo is saved.
         </p>
         <input
           ref={input}

@@ -69,7 +69,9 @@ describe('PracticalForm', () => {
     // Nothing entered yet: no all-clear, and the box names what it has not checked.
     expect(within(live).getByText('No flags so far.')).toBeInTheDocument();
     expect(within(live).queryByText(/match the published tables/)).toBeNull();
-    expect(within(live).getByTestId('not-checked').textContent).toMatch(/^Not checked yet, until you enter them: Product, Pack, Jar size, Headspace measured, Vinegar used, Water used, Processing method, Altitude, Minutes processed, Jars not sealed\.$/);
+    expect(within(live).getByTestId('not-checked').textContent).toMatch(
+      /^Not checked yet, until you enter them: Product, Pack, Jar size, Headspace measured, Vinegar used, Water used, Processing method, Altitude, Minutes processed, Jars not sealed\.$/,
+    );
     await user.selectOptions(screen.getByLabelText('Product'), 'fresh-pack-dill-pickles');
     await user.selectOptions(screen.getByLabelText('Jar size'), 'quart');
     await user.selectOptions(screen.getByLabelText('Processing method'), 'boiling-water');
@@ -88,7 +90,7 @@ describe('PracticalForm', () => {
     expect(screen.getByLabelText('Product')).toHaveValue('fresh-pack-dill-pickles');
   }, 30_000);
 
-  it('asks fermented pickles for the brine\'s salt and flags a brine weaker by weight than the tested one', async () => {
+  it("asks fermented pickles for the brine's salt and flags a brine weaker by weight than the tested one", async () => {
     const user = userEvent.setup();
     render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
     const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });

@@ -11,12 +11,21 @@ import { SubmitButton } from '@/components/ui/submit-button';
 import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
 import { checkInputsFor, checkPractical, type CheckInput, type Flag } from '@/lib/practicals/checks';
 import { JAR_SIZES, PRODUCT_OPTIONS } from '@/lib/preserving/products';
-import { PROCESSING_METHOD_LABELS, PROCESSING_METHODS, practicalFormSchema, type PracticalForm as FormValues, type PracticalFormInput } from '@/lib/validations/practical';
+import {
+  PROCESSING_METHOD_LABELS,
+  PROCESSING_METHODS,
+  practicalFormSchema,
+  type PracticalForm as FormValues,
+  type PracticalFormInput,
+} from '@/lib/validations/practical';
 import { FlagList } from './flag-list';
 import { PhotoUploader } from './photo-uploader';
 import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
 
-const JAR_OPTIONS = [{ value: '', label: 'Choose a jar size' }, ...JAR_SIZES.map((j) => ({ value: j, label: j === 'half-pint' ? 'Half-pint' : j[0].toUpperCase() + j.slice(1) }))];
+const JAR_OPTIONS = [
+  { value: '', label: 'Choose a jar size' },
+  ...JAR_SIZES.map((j) => ({ value: j, label: j === 'half-pint' ? 'Half-pint' : j[0].toUpperCase() + j.slice(1) })),
+];
 const PRODUCTS = [{ value: '', label: 'Choose the product' }, ...PRODUCT_OPTIONS];
 const PACK_OPTIONS = [
   { value: '', label: 'Choose raw or hot pack' },
@@ -70,10 +79,12 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
   const flags = useMemo(() => checkPractical(values as Parameters<typeof checkPractical>[0]), [values]);
   // The fields the checks read that are still empty: until they are entered, "no flags" means
   // "nothing checked yet", and the box says which ones.
-  const notChecked = checkInputsFor(values.product).filter((name) => {
-    const v = (values as Record<string, unknown>)[name];
-    return v === undefined || v === null || v === '' || (typeof v === 'number' && Number.isNaN(v));
-  }).map((name) => CHECK_INPUT_LABELS[name]);
+  const notChecked = checkInputsFor(values.product)
+    .filter((name) => {
+      const v = (values as Record<string, unknown>)[name];
+      return v === undefined || v === null || v === '' || (typeof v === 'number' && Number.isNaN(v));
+    })
+    .map((name) => CHECK_INPUT_LABELS[name]);
 
   const onSubmit = async (form: FormValues) => {
     setServerError(null);
@@ -107,8 +118,8 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
     <Card title={title}>
       <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-describedby="practical-form-intro">
         <p id="practical-form-intro" className="text-sm text-ink-soft">
-          {round > 1 ? `This is round ${round}. ` : ''}Enter what you actually did. A flag does not stop you from submitting: it tells you and your instructor where
-          the batch differs from the published numbers.
+          {round > 1 ? `This is round ${round}. ` : ''}Enter what you actually did. A flag does not stop you from submitting: it tells you and your instructor
+          where the batch differs from the published numbers.
         </p>
 
         <fieldset className="grid gap-4 md:grid-cols-2">
@@ -116,17 +127,58 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
           <Select label="Product" options={PRODUCTS} error={errors.product?.message} {...register('product')} />
           <Select label="Pack" options={PACK_OPTIONS} error={errors.pack?.message} {...register('pack')} />
           <TextField label="Tested recipe followed" hint="Its title" error={errors.recipeTitle?.message} {...register('recipeTitle')} />
-          <TextField label="Where it is published" hint="Book and page, or the web address" error={errors.recipeSource?.message} {...register('recipeSource')} />
+          <TextField
+            label="Where it is published"
+            hint="Book and page, or the web address"
+            error={errors.recipeSource?.message}
+            {...register('recipeSource')}
+          />
         </fieldset>
 
         <fieldset className="grid gap-4 md:grid-cols-3">
           <legend className="mb-2 font-display text-lg font-bold">Jars and brine</legend>
           <Select label="Jar size" options={JAR_OPTIONS} error={errors.jar?.message} {...register('jar')} />
           <TextField label="Number of jars" type="number" inputMode="numeric" min={1} error={errors.jars?.message} {...register('jars', num)} />
-          <TextField label="Headspace measured" hint="Inches, e.g. 0.5 for ½ inch" type="number" step="0.0625" min={0} suffix="in" error={errors.headspaceIn?.message} {...register('headspaceIn', num)} />
-          <TextField label="Vinegar acidity" hint="From the label" type="number" step="0.1" min={0} suffix="%" error={errors.vinegarAcidityPct?.message} {...register('vinegarAcidityPct', num)} />
-          <TextField label="Vinegar used" hint="1 cup = 237 mL" type="number" step="any" min={0} suffix="mL" error={errors.vinegarMl?.message} {...register('vinegarMl', num)} />
-          <TextField label="Water used" hint="In the brine" type="number" step="any" min={0} suffix="mL" error={errors.waterMl?.message} {...register('waterMl', num)} />
+          <TextField
+            label="Headspace measured"
+            hint="Inches, e.g. 0.5 for ½ inch"
+            type="number"
+            step="0.0625"
+            min={0}
+            suffix="in"
+            error={errors.headspaceIn?.message}
+            {...register('headspaceIn', num)}
+          />
+          <TextField
+            label="Vinegar acidity"
+            hint="From the label"
+            type="number"
+            step="0.1"
+            min={0}
+            suffix="%"
+            error={errors.vinegarAcidityPct?.message}
+            {...register('vinegarAcidityPct', num)}
+          />
+          <TextField
+            label="Vinegar used"
+            hint="1 cup = 237 mL"
+            type="number"
+            step="any"
+            min={0}
+            suffix="mL"
+            error={errors.vinegarMl?.message}
+            {...register('vinegarMl', num)}
+          />
+          <TextField
+            label="Water used"
+            hint="In the brine"
+            type="number"
+            step="any"
+            min={0}
+            suffix="mL"
+            error={errors.waterMl?.message}
+            {...register('waterMl', num)}
+          />
           {values.product === 'fermented-dill-pickles' ? (
             <TextField
               label="Salt in the brine"
@@ -144,11 +196,44 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
         <fieldset className="grid gap-4 md:grid-cols-3">
           <legend className="mb-2 font-display text-lg font-bold">Processing</legend>
           <Select label="Processing method" options={METHOD_OPTIONS} error={errors.method?.message} {...register('method')} />
-          <TextField label="Altitude" hint="Of your kitchen, in feet (1 m = 3.28 ft); below sea level is negative" type="number" inputMode="numeric" min={-1500} suffix="ft" error={errors.altitudeFt?.message} {...register('altitudeFt', num)} />
-          <TextField label="Minutes processed" hint="Counted from the return to a full boil" type="number" inputMode="numeric" min={0} suffix="min" error={errors.minutes?.message} {...register('minutes', num)} />
+          <TextField
+            label="Altitude"
+            hint="Of your kitchen, in feet (1 m = 3.28 ft); below sea level is negative"
+            type="number"
+            inputMode="numeric"
+            min={-1500}
+            suffix="ft"
+            error={errors.altitudeFt?.message}
+            {...register('altitudeFt', num)}
+          />
+          <TextField
+            label="Minutes processed"
+            hint="Counted from the return to a full boil"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            suffix="min"
+            error={errors.minutes?.message}
+            {...register('minutes', num)}
+          />
           <TextField label="Date put up" type="date" error={errors.batchDate?.message} {...register('batchDate')} />
-          <TextField label="Jars sealed" hint="After 12–24 hours" type="number" inputMode="numeric" min={0} error={errors.sealedJars?.message} {...register('sealedJars', num)} />
-          <TextField label="Jars not sealed" type="number" inputMode="numeric" min={0} error={errors.unsealedJars?.message} {...register('unsealedJars', num)} />
+          <TextField
+            label="Jars sealed"
+            hint="After 12–24 hours"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            error={errors.sealedJars?.message}
+            {...register('sealedJars', num)}
+          />
+          <TextField
+            label="Jars not sealed"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            error={errors.unsealedJars?.message}
+            {...register('unsealedJars', num)}
+          />
         </fieldset>
 
         <TextArea label="Notes" id="practical-notes" error={errors.notes?.message} {...register('notes')} />
@@ -166,9 +251,7 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
         <FlagList flags={flags} live notChecked={notChecked} title="Automatic checks (as you type)" />
 
         <FormAlert message={serverError} />
-        <SubmitButton pending={isSubmitting}>
-          Submit round {round} for review
-        </SubmitButton>
+        <SubmitButton pending={isSubmitting}>Submit round {round} for review</SubmitButton>
       </form>
     </Card>
   );

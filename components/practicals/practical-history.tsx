@@ -11,8 +11,8 @@ export function ReviewSummary({ review }: { review: RoundView['reviews'][number]
   return (
     <div className="space-y-2 rounded-lg border border-brine-100 bg-white p-3" data-testid="review-summary">
       <p className="text-sm">
-        <Badge tone={review.decision === 'approved' ? 'brine' : 'beet'}>{review.decision === 'approved' ? 'Approved' : 'Changes requested'}</Badge>{' '}
-        by {review.reviewerName}, {when(review.createdAt)}
+        <Badge tone={review.decision === 'approved' ? 'brine' : 'beet'}>{review.decision === 'approved' ? 'Approved' : 'Changes requested'}</Badge> by{' '}
+        {review.reviewerName}, {when(review.createdAt)}
       </p>
       {review.comment ? (
         <p className="text-sm">
@@ -53,7 +53,13 @@ export function PracticalHistory({ rounds }: { rounds: RoundView[] }) {
               <span className="text-sm text-ink-soft">submitted {when(r.submittedAt)}</span>
             </div>
             <p className="text-sm text-ink-soft">
-              {[r.details.recipeTitle, r.details.jars && r.details.jar ? `${r.details.jars} × ${r.details.jar}` : null, typeof r.details.minutes === 'number' && typeof r.details.altitudeFt === 'number' ? `${r.details.minutes} min at ${r.details.altitudeFt.toLocaleString('en-US')} ft` : null]
+              {[
+                r.details.recipeTitle,
+                r.details.jars && r.details.jar ? `${r.details.jars} × ${r.details.jar}` : null,
+                typeof r.details.minutes === 'number' && typeof r.details.altitudeFt === 'number'
+                  ? `${r.details.minutes} min at ${r.details.altitudeFt.toLocaleString('en-US')} ft`
+                  : null,
+              ]
                 .filter(Boolean)
                 .join(' · ')}
             </p>

@@ -14,16 +14,53 @@ export function ProgramForm({ program, timeZones }: { program: ProgramIdentity; 
       <div aria-live="polite" id="program-form-message" className={state.ok ? 'font-semibold text-brine-700' : 'font-semibold text-beet-600'}>
         {state.message}
       </div>
-      <TextField label="Program name" name="name" defaultValue={program.configured ? program.name : ''} placeholder={program.name} required maxLength={200} error={error('name')} hint="As it appears on certificates and the verification page." />
-      <TextField label="Short name" name="shortName" defaultValue={program.shortName ?? ''} required maxLength={40} error={error('shortName')} hint="Shown in the header next to Brinewright." />
-      <TextField label="Contact e-mail" name="contactEmail" type="email" defaultValue={program.contactEmail ?? ''} maxLength={254} error={error('contactEmail')} />
+      <TextField
+        label="Program name"
+        name="name"
+        defaultValue={program.configured ? program.name : ''}
+        placeholder={program.name}
+        required
+        maxLength={200}
+        error={error('name')}
+        hint="As it appears on certificates and the verification page."
+      />
+      <TextField
+        label="Short name"
+        name="shortName"
+        defaultValue={program.shortName ?? ''}
+        required
+        maxLength={40}
+        error={error('shortName')}
+        hint="Shown in the header next to Brinewright."
+      />
+      <TextField
+        label="Contact e-mail"
+        name="contactEmail"
+        type="email"
+        defaultValue={program.contactEmail ?? ''}
+        maxLength={254}
+        error={error('contactEmail')}
+      />
       <TextField label="Contact phone" name="contactPhone" type="tel" defaultValue={program.contactPhone ?? ''} maxLength={40} error={error('contactPhone')} />
-      <TextArea label="Postal address" name="postalAddress" defaultValue={program.postalAddress ?? ''} maxLength={500} rows={3} error={error('postalAddress')} />
+      <TextArea
+        label="Postal address"
+        name="postalAddress"
+        defaultValue={program.postalAddress ?? ''}
+        maxLength={500}
+        rows={3}
+        error={error('postalAddress')}
+      />
       <div className="space-y-1">
         <label htmlFor="program-time-zone" className="block text-sm font-semibold text-ink">
           Default time zone
         </label>
-        <select id="program-time-zone" name="timeZone" defaultValue={program.timeZone} className="block w-full rounded-lg border border-ink-faint/40 bg-white px-3 py-2" aria-describedby={error('timeZone') ? 'program-time-zone-error' : undefined}>
+        <select
+          id="program-time-zone"
+          name="timeZone"
+          defaultValue={program.timeZone}
+          className="block w-full rounded-lg border border-ink-faint/40 bg-white px-3 py-2"
+          aria-describedby={error('timeZone') ? 'program-time-zone-error' : undefined}
+        >
           {timeZones.map((zone) => (
             <option key={zone} value={zone}>
               {zone}
@@ -43,7 +80,11 @@ export function ProgramForm({ program, timeZones }: { program: ProgramIdentity; 
         <FieldError message={error('logo')} />
         {program.logoKey ? (
           // eslint-disable-next-line @next/next/no-img-element -- a small image from our own route, re-encoded on upload
-          <img src={`/api/program/logo?v=${program.logoKey.slice(-24, -4)}`} alt="Current logo" className="mt-2 h-16 w-auto rounded border border-ink-faint/30 bg-white p-1" />
+          <img
+            src={`/api/program/logo?v=${program.logoKey.slice(-24, -4)}`}
+            alt="Current logo"
+            className="mt-2 h-16 w-auto rounded border border-ink-faint/30 bg-white p-1"
+          />
         ) : null}
       </div>
       <Button type="submit" pending={pending}>

@@ -18,7 +18,12 @@ export function LessonActions({ courseSlug, lessonSlug, quizSlug }: { courseSlug
   // could only be a 401, an error in every visitor's console on the public lessons).
   const session = useSession();
   const key = session.status === 'authenticated' ? `/api/progress?course=${encodeURIComponent(courseSlug)}` : null;
-  const { data, error, isLoading: progressLoading, mutate } = useSWR<Progress, FetchError>(key, (url: string) => fetchJson<Progress>(url), {
+  const {
+    data,
+    error,
+    isLoading: progressLoading,
+    mutate,
+  } = useSWR<Progress, FetchError>(key, (url: string) => fetchJson<Progress>(url), {
     shouldRetryOnError: false,
     revalidateOnFocus: false,
   });

@@ -5,16 +5,31 @@ import { fieldClasses } from '@/components/ui/text-field';
 import { cn } from '@/lib/cn';
 import { unitLabel, type FormValues, type PublicQuestion } from './types';
 
-const optionClasses = 'flex cursor-pointer items-start gap-3 rounded-lg border border-brine-100 bg-white px-3 py-2 hover:bg-brine-50 has-[:checked]:border-brine-500 has-[:checked]:bg-brine-50';
+const optionClasses =
+  'flex cursor-pointer items-start gap-3 rounded-lg border border-brine-100 bg-white px-3 py-2 hover:bg-brine-50 has-[:checked]:border-brine-500 has-[:checked]:bg-brine-50';
 
 /** One question of the form, as a fieldset whose legend is the prompt. */
-export function QuestionField({ question, index, register, error }: { question: PublicQuestion; index: number; register: UseFormRegister<FormValues>; error?: string }) {
+export function QuestionField({
+  question,
+  index,
+  register,
+  error,
+}: {
+  question: PublicQuestion;
+  index: number;
+  register: UseFormRegister<FormValues>;
+  error?: string;
+}) {
   const base = `q.${question.id}` as const;
   const errorId = error ? `${question.id}-error` : undefined;
   const hintId = `${question.id}-hint`;
   const units = question.kind === 'numeric' ? question.units : [];
   return (
-    <fieldset className="rounded-jar border border-brine-100 bg-paper p-4" aria-describedby={[hintId, errorId].filter(Boolean).join(' ')} data-question={question.id}>
+    <fieldset
+      className="rounded-jar border border-brine-100 bg-paper p-4"
+      aria-describedby={[hintId, errorId].filter(Boolean).join(' ')}
+      data-question={question.id}
+    >
       <legend className="px-1 font-semibold">
         <span className="mr-2 text-ink-soft">{index + 1}.</span>
         {question.prompt}

@@ -62,7 +62,10 @@ export function QuestionResultsTable({ stats }: { stats: QuestionStat[] }) {
               <TD>
                 {r.topWrong ? (
                   <span>
-                    {r.topWrong} <span className="text-ink-soft">({r.topWrongCount} of {r.attempts})</span>
+                    {r.topWrong}{' '}
+                    <span className="text-ink-soft">
+                      ({r.topWrongCount} of {r.attempts})
+                    </span>
                   </span>
                 ) : (
                   <span className="text-ink-soft">None</span>

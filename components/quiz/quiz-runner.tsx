@@ -13,7 +13,14 @@ import { QuizResult } from './quiz-result';
 import { forgetAttempt, loadAnswers, openAttemptId, rememberOpenAttempt, saveAnswers } from './storage';
 import { answeredCount, emptyValues, toAnswers, type AttemptView, type FormValues } from './types';
 
-type Intro = { quizSlug: string; title: string; description?: string | null; questionCount: number; timeLimitMinutes: number | null; attemptLimit: { max: number; windowHours: number } | null };
+type Intro = {
+  quizSlug: string;
+  title: string;
+  description?: string | null;
+  questionCount: number;
+  timeLimitMinutes: number | null;
+  attemptLimit: { max: number; windowHours: number } | null;
+};
 
 type Phase = { kind: 'intro' } | { kind: 'starting' } | { kind: 'taking'; attempt: AttemptView } | { kind: 'done'; attempt: AttemptView };
 
@@ -141,9 +148,7 @@ export function QuizRunner({ intro }: { intro: Intro }) {
         </p>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <SubmitButton pending={form.formState.isSubmitting}>
-          Submit answers
-        </SubmitButton>
+        <SubmitButton pending={form.formState.isSubmitting}>Submit answers</SubmitButton>
         {answered < attempt.questions.length ? <p className="text-sm text-ink-soft">Unanswered questions count as wrong.</p> : null}
       </div>
     </form>

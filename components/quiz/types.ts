@@ -30,7 +30,16 @@ export function toAnswers(questions: PublicQuestion[], values: FormValues): { an
 export function emptyValues(questions: PublicQuestion[]): FormValues {
   return {
     q: Object.fromEntries(
-      questions.map((q) => [q.id, q.kind === 'multiple' ? { choices: [] } : q.kind === 'numeric' ? { value: '', unit: q.units[0] } : q.kind === 'true-false' ? { tf: '' } : { choice: '' }]),
+      questions.map((q) => [
+        q.id,
+        q.kind === 'multiple'
+          ? { choices: [] }
+          : q.kind === 'numeric'
+            ? { value: '', unit: q.units[0] }
+            : q.kind === 'true-false'
+              ? { tf: '' }
+              : { choice: '' },
+      ]),
     ),
   };
 }

@@ -6,15 +6,31 @@ import { BatchDetails } from './batch-details';
 
 const cells = (label: string) => {
   const row = screen.getByRole('rowheader', { name: label }).closest('tr')!;
-  return within(row).getAllByRole('cell').map((cell) => cell.textContent);
+  return within(row)
+    .getAllByRole('cell')
+    .map((cell) => cell.textContent);
 };
 
 describe('BatchDetails', () => {
   it('shows a full batch beside the published numbers', () => {
     const details: PracticalDetails = {
-      product: 'fresh-pack-dill-pickles', recipeTitle: 'Quick fresh-pack dill pickles', recipeSource: 'USDA Complete Guide, Guide 6',
-      jar: 'pint', jars: 7, pack: 'raw', vinegarAcidityPct: 5, vinegarMl: 1420, waterMl: 1893, headspaceIn: 0.5, method: 'boiling-water',
-      altitudeFt: 5200, minutes: 15, batchDate: '2026-11-28', sealedJars: 7, unsealedJars: 0, notes: '',
+      product: 'fresh-pack-dill-pickles',
+      recipeTitle: 'Quick fresh-pack dill pickles',
+      recipeSource: 'USDA Complete Guide, Guide 6',
+      jar: 'pint',
+      jars: 7,
+      pack: 'raw',
+      vinegarAcidityPct: 5,
+      vinegarMl: 1420,
+      waterMl: 1893,
+      headspaceIn: 0.5,
+      method: 'boiling-water',
+      altitudeFt: 5200,
+      minutes: 15,
+      batchDate: '2026-11-28',
+      sealedJars: 7,
+      unsealedJars: 0,
+      notes: '',
     } as PracticalDetails;
     render(<BatchDetails details={details} expected={computeExpectations(details)} />);
     expect(cells('Tested recipe')[0]).toBe('Quick fresh-pack dill pickles, USDA Complete Guide, Guide 6');

@@ -38,7 +38,12 @@ export function PhotoViewer({ photos, label = 'Photos' }: { photos: ViewerPhoto[
           Open full size
         </a>
       </div>
-      <div role="region" className="max-h-[70vh] overflow-auto rounded-lg border border-brine-100 bg-ink/5" tabIndex={0} aria-label={`Photo ${index + 1} of ${photos.length}, scroll to pan`}>
+      <div
+        role="region"
+        className="max-h-[70vh] overflow-auto rounded-lg border border-brine-100 bg-ink/5"
+        tabIndex={0}
+        aria-label={`Photo ${index + 1} of ${photos.length}, scroll to pan`}
+      >
         <button
           type="button"
           className={cn('block', scale === 1 ? 'cursor-zoom-in' : 'cursor-zoom-out')}

@@ -94,9 +94,7 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
       />
 
       <FormAlert message={serverError} />
-      <SubmitButton pending={isSubmitting}>
-        Save the review
-      </SubmitButton>
+      <SubmitButton pending={isSubmitting}>Save the review</SubmitButton>
     </form>
   );
 }

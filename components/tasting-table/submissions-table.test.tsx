@@ -38,7 +38,14 @@ describe('the Tasting table filters in the address', () => {
 
   it('reads them from the address with the data route schema, and drops what the form does not offer', () => {
     const from = (q: string) => filtersFromSearch(new URLSearchParams(q), workshops);
-    expect(from('status=approved&workshop=9&flagged=yes&olderThanDays=7&sort=flags&page=3')).toEqual({ page: 3, sort: 'flags', status: 'approved', workshop: '9', flagged: 'yes', olderThanDays: '7' });
+    expect(from('status=approved&workshop=9&flagged=yes&olderThanDays=7&sort=flags&page=3')).toEqual({
+      page: 3,
+      sort: 'flags',
+      status: 'approved',
+      workshop: '9',
+      flagged: 'yes',
+      olderThanDays: '7',
+    });
     // An unknown workshop and an age that is not a choice fall back; a bad sort refuses the whole address.
     expect(from('workshop=77&olderThanDays=5')).toMatchObject({ workshop: '', olderThanDays: '' });
     expect(from('sort=sideways')).toEqual(from(''));
@@ -68,7 +75,10 @@ describe('the Tasting table filters in the address', () => {
       vi.fn(async (url: string) => {
         requested.push(url);
         const page = Number(new URL(url, 'http://x').searchParams.get('page'));
-        return new Response(JSON.stringify({ ...emptyPage, page, total: 4, counts: { submitted: 4, changes_requested: 0, approved: 0 } }), { status: 200, headers: { 'content-type': 'application/json' } });
+        return new Response(JSON.stringify({ ...emptyPage, page, total: 4, counts: { submitted: 4, changes_requested: 0, approved: 0 } }), {
+          status: 200,
+          headers: { 'content-type': 'application/json' },
+        });
       }),
     );
     search.params = new URLSearchParams('page=99');

@@ -104,7 +104,12 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
   const set = (change: Partial<Filters>) => setFilters((f) => ({ ...f, page: 1, ...change }));
   const [now] = useState(() => Date.now());
   const sortHeader = (label: string, sort: TastingSort) => (
-    <button type="button" className="font-semibold underline decoration-dotted underline-offset-2" onClick={() => set({ sort })} aria-pressed={filters.sort === sort}>
+    <button
+      type="button"
+      className="font-semibold underline decoration-dotted underline-offset-2"
+      onClick={() => set({ sort })}
+      aria-pressed={filters.sort === sort}
+    >
       {label}
       {filters.sort === sort ? <span aria-hidden="true"> ▲</span> : null}
     </button>
@@ -122,7 +127,10 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
             className="rounded-full focus-visible:outline-2 focus-visible:outline-copper-500"
           >
             <Badge tone={PRACTICAL_STATUS_TONE[s]} className={filters.status === s ? 'ring-2' : undefined}>
-              {PRACTICAL_STATUS_LABEL[s]}:<span className="ms-1" data-testid={`count-${s}`}>{data ? data.counts[s] : '…'}</span>
+              {PRACTICAL_STATUS_LABEL[s]}:
+              <span className="ms-1" data-testid={`count-${s}`}>
+                {data ? data.counts[s] : '…'}
+              </span>
             </Badge>
           </button>
         ))}
@@ -130,7 +138,12 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
 
       <div className="grid gap-3 md:grid-cols-5">
         <Select label="Status" options={STATUS_OPTIONS} value={filters.status} onChange={(e) => set({ status: e.target.value })} />
-        <Select label="Workshop" options={[{ value: '', label: 'Every workshop' }, ...workshops.map((w) => ({ value: String(w.id), label: w.label }))]} value={filters.workshop} onChange={(e) => set({ workshop: e.target.value })} />
+        <Select
+          label="Workshop"
+          options={[{ value: '', label: 'Every workshop' }, ...workshops.map((w) => ({ value: String(w.id), label: w.label }))]}
+          value={filters.workshop}
+          onChange={(e) => set({ workshop: e.target.value })}
+        />
         <Select label="Flags" options={FLAG_OPTIONS} value={filters.flagged} onChange={(e) => set({ flagged: e.target.value })} />
         <Select label="Age" options={AGE_OPTIONS} value={filters.olderThanDays} onChange={(e) => set({ olderThanDays: e.target.value })} />
         <Select label="Sort" options={SORT_OPTIONS} value={filters.sort} onChange={(e) => set({ sort: e.target.value as TastingSort })} />
@@ -184,7 +197,11 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
                   <Badge tone={PRACTICAL_STATUS_TONE[row.status]}>{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
                 </TD>
                 <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
-                <TD>{row.workshopPlace ? `${new Date(row.workshopStartsAt!).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${row.workshopPlace.split(',')[0]}` : 'Self-paced'}</TD>
+                <TD>
+                  {row.workshopPlace
+                    ? `${new Date(row.workshopStartsAt!).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${row.workshopPlace.split(',')[0]}`
+                    : 'Self-paced'}
+                </TD>
                 <TD>
                   <time dateTime={row.submittedAt}>{age(row.submittedAt, now)}</time>
                 </TD>
@@ -201,7 +218,12 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
         <span>
           Page {data?.page ?? filters.page} of {data?.pageCount ?? '…'}
         </span>
-        <Button size="sm" variant="secondary" disabled={!data || filters.page >= data.pageCount} onClick={() => setFilters((f) => ({ ...f, page: f.page + 1 }))}>
+        <Button
+          size="sm"
+          variant="secondary"
+          disabled={!data || filters.page >= data.pageCount}
+          onClick={() => setFilters((f) => ({ ...f, page: f.page + 1 }))}
+        >
           Next page
         </Button>
       </nav>

@@ -14,7 +14,21 @@ export const fieldClasses =
   'block w-full rounded-lg border bg-white px-3 py-2 text-ink shadow-inner placeholder:text-ink-faint focus:border-brine-600 focus:outline-2 focus:outline-offset-0 focus:outline-brine-300 disabled:bg-paper-deep';
 
 /** The label, hint and error around a field, with the ids that tie them to it for screen readers. */
-function Field({ label, hint, error, id, className, children }: { label: string; hint?: string; error?: string; id?: string; className?: string; children: (aria: FieldAria) => ReactNode }) {
+function Field({
+  label,
+  hint,
+  error,
+  id,
+  className,
+  children,
+}: {
+  label: string;
+  hint?: string;
+  error?: string;
+  id?: string;
+  className?: string;
+  children: (aria: FieldAria) => ReactNode;
+}) {
   const autoId = useId();
   const inputId = id ?? autoId;
   const hintId = hint ? `${inputId}-hint` : undefined;

@@ -33,7 +33,10 @@ export function ToastProvider({ children }: { children: ReactNode }) {
       {children}
       <div aria-live="polite" role="status" className="pointer-events-none fixed right-4 bottom-4 z-50 flex w-80 flex-col gap-2">
         {items.map((t) => (
-          <div key={t.id} className={cn('pointer-events-auto flex items-start justify-between gap-3 rounded-lg border-l-4 px-4 py-3 shadow-shelf', toneClasses[t.tone])}>
+          <div
+            key={t.id}
+            className={cn('pointer-events-auto flex items-start justify-between gap-3 rounded-lg border-l-4 px-4 py-3 shadow-shelf', toneClasses[t.tone])}
+          >
             <p className="text-sm">{t.message}</p>
             <button type="button" className="text-sm underline" onClick={() => dismiss(t.id)}>
               Dismiss

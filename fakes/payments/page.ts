@@ -5,7 +5,15 @@ export function money(cents: number, currency: string): string {
   return new Intl.NumberFormat('en-US', { style: 'currency', currency: currency.toUpperCase() }).format(cents / 100);
 }
 
-type PageSession = { id: string; amount_total: number; currency: string; customer_email: string | null; cancel_url: string | null; status: string; line_items_name: string };
+type PageSession = {
+  id: string;
+  amount_total: number;
+  currency: string;
+  customer_email: string | null;
+  cancel_url: string | null;
+  status: string;
+  line_items_name: string;
+};
 
 export function checkoutPage(session: PageSession, options: { error?: string; values?: Record<string, string> } = {}): string {
   const v = options.values ?? {};
@@ -27,7 +35,10 @@ export function checkoutPage(session: PageSession, options: { error?: string; va
 <h1>${esc(session.line_items_name)}</h1>
 <p class="amount">${esc(money(session.amount_total, session.currency))}</p>
 ${session.customer_email ? `<p class="note">Receipt to ${esc(session.customer_email)}</p>` : ''}
-${closed ? `<p class="error" role="alert">This checkout is ${esc(session.status === 'complete' ? 'already paid' : 'no longer open')}.</p>` : `
+${
+  closed
+    ? `<p class="error" role="alert">This checkout is ${esc(session.status === 'complete' ? 'already paid' : 'no longer open')}.</p>`
+    : `
 ${options.error ? `<p class="error" role="alert" id="pay-error">${esc(options.error)}</p>` : ''}
 <form method="post" action="/pay/${esc(session.id)}" novalidate>
  <label for="card">Card number</label>
@@ -40,7 +51,8 @@ ${options.error ? `<p class="error" role="alert" id="pay-error">${esc(options.er
  <input id="name" name="name" autocomplete="cc-name" value="${esc(v.name ?? '')}">
  <button type="submit">Pay ${esc(money(session.amount_total, session.currency))}</button>
 </form>
-<p class="note">Test cards: 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined. Any future expiry and any 3 digits.</p>`}
+<p class="note">Test cards: 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined. Any future expiry and any 3 digits.</p>`
+}
 ${session.cancel_url ? `<p><a href="${esc(session.cancel_url)}">Cancel and go back</a></p>` : ''}
 </main></body></html>`;
 }

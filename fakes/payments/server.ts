@@ -35,7 +35,17 @@ export type FakeSession = {
   line_items_name: string;
 };
 
-export type FakeRefund = { id: string; object: 'refund'; amount: number; currency: string; payment_intent: string; status: 'succeeded'; reason: string | null; metadata: Record<string, string>; created: number };
+export type FakeRefund = {
+  id: string;
+  object: 'refund';
+  amount: number;
+  currency: string;
+  payment_intent: string;
+  status: 'succeeded';
+  reason: string | null;
+  metadata: Record<string, string>;
+  created: number;
+};
 
 export type Delivery = {
   eventId: string;
@@ -210,7 +220,16 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       request: { id: null, idempotency_key: null },
       type,
     };
-    const delivery: Delivery = { eventId: event.id, type, payload: JSON.stringify(event, null, 2), attempts: 0, delivered: false, lastStatus: null, lastError: null, nextAt: Date.now() };
+    const delivery: Delivery = {
+      eventId: event.id,
+      type,
+      payload: JSON.stringify(event, null, 2),
+      attempts: 0,
+      delivered: false,
+      lastStatus: null,
+      lastError: null,
+      nextAt: Date.now(),
+    };
     deliveries.push(delivery);
     later(() => void attempt(delivery), 0);
     return delivery;
@@ -236,7 +255,8 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     if (s.status !== 'open') return { ok: false, error: `This checkout is ${s.status === 'complete' ? 'already paid' : 'no longer open'}.` };
     const number = digits(card);
     if (number === CARDS.declined) return { ok: false, error: 'Your card was declined. Try another card.' };
-    if (number !== CARDS.pays) return { ok: false, error: 'This test server accepts only its test cards: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined.' };
+    if (number !== CARDS.pays)
+      return { ok: false, error: 'This test server accepts only its test cards: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined.' };
     const intent = randomId('pi');
     intents.set(intent, { id: intent, amount: s.amount_total, currency: s.currency, refunded: 0, session: s.id });
     s.status = 'complete';
@@ -250,8 +270,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
 
   function createSession(params: Record<string, unknown>): { status: number; body: unknown } {
     const items = (params.line_items as Array<Record<string, unknown>> | undefined) ?? [];
-    if (params.mode !== 'payment') return { status: 400, body: { error: { type: 'invalid_request_error', message: 'This server supports mode=payment only.', param: 'mode' } } };
-    if (!items.length) return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Missing required param: line_items.', param: 'line_items' } } };
+    if (params.mode !== 'payment')
+      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'This server supports mode=payment only.', param: 'mode' } } };
+    if (!items.length)
+      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Missing required param: line_items.', param: 'line_items' } } };
     let total = 0;
     let currency = '';
     const names: string[] = [];
@@ -260,17 +282,24 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       const amount = Number(price?.unit_amount);
       const quantity = Number(item.quantity ?? 1);
       if (!price || !Number.isInteger(amount) || amount < 0 || !price.currency) {
-        return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Each line item needs price_data with currency and unit_amount.', param: 'line_items' } } };
+        return {
+          status: 400,
+          body: { error: { type: 'invalid_request_error', message: 'Each line item needs price_data with currency and unit_amount.', param: 'line_items' } },
+        };
       }
       total += amount * quantity;
       currency = String(price.currency).toLowerCase();
       names.push(String((price.product_data as Record<string, unknown> | undefined)?.name ?? 'Item'));
     }
-    if (!params.success_url) return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Missing required param: success_url.', param: 'success_url' } } };
+    if (!params.success_url)
+      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Missing required param: success_url.', param: 'success_url' } } };
     const created = now();
     const expiresAt = params.expires_at ? Number(params.expires_at) : created + 24 * 3600;
     if (expiresAt < created + 30 * 60 - 5 || expiresAt > created + 24 * 3600 + 5) {
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'expires_at must be between 30 minutes and 24 hours from now.', param: 'expires_at' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'expires_at must be between 30 minutes and 24 hours from now.', param: 'expires_at' } },
+      };
     }
     const id = randomId('cs');
     const email = (params.customer_email as string | undefined) ?? null;
@@ -304,11 +333,23 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   function createRefund(params: Record<string, unknown>): { status: number; body: unknown } {
     const intentId = String(params.payment_intent ?? '');
     const intent = intents.get(intentId);
-    if (!intent) return { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such payment_intent: '${intentId}'`, param: 'payment_intent' } } };
+    if (!intent)
+      return {
+        status: 404,
+        body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such payment_intent: '${intentId}'`, param: 'payment_intent' } },
+      };
     const left = intent.amount - intent.refunded;
     const amount = params.amount === undefined ? left : Number(params.amount);
-    if (left <= 0) return { status: 400, body: { error: { type: 'invalid_request_error', code: 'charge_already_refunded', message: 'This payment has already been refunded.' } } };
-    if (!Number.isInteger(amount) || amount <= 0 || amount > left) return { status: 400, body: { error: { type: 'invalid_request_error', code: 'amount_too_large', message: `Refund amount must be between 1 and ${left}.`, param: 'amount' } } };
+    if (left <= 0)
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', code: 'charge_already_refunded', message: 'This payment has already been refunded.' } },
+      };
+    if (!Number.isInteger(amount) || amount <= 0 || amount > left)
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', code: 'amount_too_large', message: `Refund amount must be between 1 and ${left}.`, param: 'amount' } },
+      };
     intent.refunded += amount;
     const refund: FakeRefund = {
       id: randomId('re'),
@@ -323,7 +364,14 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     };
     refunds.set(refund.id, refund);
     // The hosted service also announces refunds; the app does not need this event and answers 200.
-    emit('charge.refunded', { id: randomId('ch'), object: 'charge', amount: intent.amount, amount_refunded: intent.refunded, payment_intent: intent.id, refunded: intent.refunded >= intent.amount });
+    emit('charge.refunded', {
+      id: randomId('ch'),
+      object: 'charge',
+      amount: intent.amount,
+      amount_refunded: intent.refunded,
+      payment_intent: intent.id,
+      refunded: intent.refunded >= intent.amount,
+    });
     return { status: 200, body: refund };
   }
 
@@ -344,11 +392,23 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     if (req.method === 'POST' && path === '/v1/checkout/sessions') result = createSession(params);
     else if (req.method === 'GET' && (m = /^\/v1\/checkout\/sessions\/([\w-]+)$/.exec(path))) {
       const s = sessions.get(m[1]);
-      result = s ? { status: 200, body: publicSession(s) } : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such checkout.session: '${m[1]}'` } } };
+      result = s
+        ? { status: 200, body: publicSession(s) }
+        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such checkout.session: '${m[1]}'` } } };
     } else if (req.method === 'POST' && (m = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(path))) {
       const s = sessions.get(m[1]);
-      if (!s) result = { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such checkout.session: '${m[1]}'` } } };
-      else if (s.status !== 'open') result = { status: 400, body: { error: { type: 'invalid_request_error', message: `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${s.status}".` } } };
+      if (!s)
+        result = { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such checkout.session: '${m[1]}'` } } };
+      else if (s.status !== 'open')
+        result = {
+          status: 400,
+          body: {
+            error: {
+              type: 'invalid_request_error',
+              message: `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${s.status}".`,
+            },
+          },
+        };
       else {
         expire(s.id);
         result = { status: 200, body: publicSession(s) };
@@ -356,11 +416,24 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     } else if (req.method === 'POST' && path === '/v1/refunds') result = createRefund(params);
     else if (req.method === 'GET' && (m = /^\/v1\/refunds\/([\w-]+)$/.exec(path))) {
       const r = refunds.get(m[1]);
-      result = r ? { status: 200, body: r } : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such refund: '${m[1]}'` } } };
+      result = r
+        ? { status: 200, body: r }
+        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such refund: '${m[1]}'` } } };
     } else if (req.method === 'GET' && (m = /^\/v1\/payment_intents\/([\w-]+)$/.exec(path))) {
       const p = intents.get(m[1]);
       result = p
-        ? { status: 200, body: { id: p.id, object: 'payment_intent', amount: p.amount, amount_received: p.amount, currency: p.currency, status: 'succeeded', latest_charge: null } }
+        ? {
+            status: 200,
+            body: {
+              id: p.id,
+              object: 'payment_intent',
+              amount: p.amount,
+              amount_received: p.amount,
+              currency: p.currency,
+              status: 'succeeded',
+              latest_charge: null,
+            },
+          }
         : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such payment_intent: '${m[1]}'` } } };
     }
     if (!result) return stripeError(res, 404, 'invalid_request_error', `Unrecognized request URL (${req.method}: ${path}).`);
@@ -374,7 +447,11 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       res.writeHead(status, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' });
       res.end(body);
     };
-    if (!s) return html('<!doctype html><html lang="en"><head><title>Checkout not found</title></head><body><main><h1>Checkout not found</h1></main></body></html>', 404);
+    if (!s)
+      return html(
+        '<!doctype html><html lang="en"><head><title>Checkout not found</title></head><body><main><h1>Checkout not found</h1></main></body></html>',
+        404,
+      );
     if (req.method === 'GET') return html(checkoutPage(s));
     const values = Object.fromEntries(new URLSearchParams(await readBody(req))) as Record<string, string>;
     const invalid = s.status === 'open' ? cardCheck(values) : null;
@@ -421,7 +498,13 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
 
   const server = http.createServer((req, res) => {
     const path = new URL(req.url ?? '/', 'http://fake').pathname;
-    const handler = path.startsWith('/v1/') ? api(req, res, path) : path.startsWith('/pay/') ? page(req, res, path.slice(5)) : path.startsWith('/_fake/') ? control(req, res, path) : null;
+    const handler = path.startsWith('/v1/')
+      ? api(req, res, path)
+      : path.startsWith('/pay/')
+        ? page(req, res, path.slice(5))
+        : path.startsWith('/_fake/')
+          ? control(req, res, path)
+          : null;
     if (!handler) {
       res.writeHead(404, { 'content-type': 'text/plain' });
       res.end('Local test payment server: nothing here.');

@@ -58,7 +58,10 @@ export function verifySignature(
   now = Date.now(),
 ): void {
   const authorization = String(request.headers.authorization ?? '');
-  const match = /^AWS4-HMAC-SHA256 Credential=([^/\s,]+)\/(\d{8})\/([^/\s,]+)\/s3\/aws4_request,\s*SignedHeaders=([a-z0-9;-]+),\s*Signature=([0-9a-f]{64})$/.exec(authorization);
+  const match =
+    /^AWS4-HMAC-SHA256 Credential=([^/\s,]+)\/(\d{8})\/([^/\s,]+)\/s3\/aws4_request,\s*SignedHeaders=([a-z0-9;-]+),\s*Signature=([0-9a-f]{64})$/.exec(
+      authorization,
+    );
   if (!match) throw new S3Error(403, 'AccessDenied', 'Requests must be signed with AWS Signature Version 4.');
   const [, accessKeyId, day, region, signedHeaderList, signature] = match;
   if (accessKeyId !== credentials.accessKeyId) throw new S3Error(403, 'InvalidAccessKeyId', 'The access key id you provided does not exist in our records.');
@@ -66,13 +69,15 @@ export function verifySignature(
   const dated = /^(\d{4})(\d{2})(\d{2})T(\d{2})(\d{2})(\d{2})Z$/.exec(amzDate);
   if (!dated || !amzDate.startsWith(day)) throw new S3Error(403, 'AccessDenied', 'x-amz-date is missing or does not match the credential scope.');
   const signedAt = Date.UTC(+dated[1], +dated[2] - 1, +dated[3], +dated[4], +dated[5], +dated[6]);
-  if (Math.abs(now - signedAt) > MAX_SKEW_MS) throw new S3Error(403, 'RequestTimeTooSkewed', 'The difference between the request time and the current time is too large.');
+  if (Math.abs(now - signedAt) > MAX_SKEW_MS)
+    throw new S3Error(403, 'RequestTimeTooSkewed', 'The difference between the request time and the current time is too large.');
 
   const signedHeaders = signedHeaderList.split(';');
   if (!signedHeaders.includes('host') || !signedHeaders.includes('x-amz-date')) throw new S3Error(403, 'AccessDenied', 'host and x-amz-date must be signed.');
   const payloadHash = String(request.headers['x-amz-content-sha256'] ?? '');
   if (payloadHash !== 'UNSIGNED-PAYLOAD') {
-    if (!/^[0-9a-f]{64}$/.test(payloadHash)) throw new S3Error(400, 'InvalidArgument', 'x-amz-content-sha256 must be the hex SHA-256 of the body or UNSIGNED-PAYLOAD.');
+    if (!/^[0-9a-f]{64}$/.test(payloadHash))
+      throw new S3Error(400, 'InvalidArgument', 'x-amz-content-sha256 must be the hex SHA-256 of the body or UNSIGNED-PAYLOAD.');
     if (payloadHash !== sha256(request.body)) throw new S3Error(400, 'XAmzContentSHA256Mismatch', 'The body does not match x-amz-content-sha256.');
   }
   const canonicalHeaders = signedHeaders
@@ -94,7 +99,11 @@ export function verifySignature(
   const key = hmac(hmac(hmac(hmac(`AWS4${credentials.secretAccessKey}`, day), region), 's3'), 'aws4_request');
   const expected = createHmac('sha256', key).update(stringToSign).digest();
   if (!timingSafeEqual(expected, Buffer.from(signature, 'hex'))) {
-    throw new S3Error(403, 'SignatureDoesNotMatch', 'The request signature we calculated does not match the signature you provided. Check your key and signing method.');
+    throw new S3Error(
+      403,
+      'SignatureDoesNotMatch',
+      'The request signature we calculated does not match the signature you provided. Check your key and signing method.',
+    );
   }
 }
 
@@ -156,7 +165,8 @@ export async function startFakeS3(options: FakeS3Options): Promise<FakeS3> {
     if (key === '') {
       if (method === 'PUT') {
         count('CreateBucket');
-        if (await exists(bucketDir(bucket))) throw new S3Error(409, 'BucketAlreadyOwnedByYou', 'Your previous request to create the named bucket succeeded and you already own it.');
+        if (await exists(bucketDir(bucket)))
+          throw new S3Error(409, 'BucketAlreadyOwnedByYou', 'Your previous request to create the named bucket succeeded and you already own it.');
         await fs.mkdir(path.join(bucketDir(bucket), 'objects'), { recursive: true });
         res.writeHead(200, { location: `/${bucket}` }).end();
         return;
@@ -170,7 +180,7 @@ export async function startFakeS3(options: FakeS3Options): Promise<FakeS3> {
       throw new S3Error(501, 'NotImplemented', `${method} on a bucket is not part of this fake.`);
     }
     if (!rest.every((segment) => KEY_SEGMENT.test(segment)) || rest.some((s) => s === '.' || s === '..') || key.length > 1024) {
-      throw new S3Error(400, 'InvalidArgument', 'This fake accepts keys of letters, digits, / and !_.*\'()- only.');
+      throw new S3Error(400, 'InvalidArgument', "This fake accepts keys of letters, digits, / and !_.*'()- only.");
     }
     await requireBucket(bucket);
     if (method === 'PUT') {

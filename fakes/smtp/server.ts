@@ -33,7 +33,8 @@ export type FakeSmtp = {
 };
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
-const addresses = (a: AddressObject | AddressObject[] | undefined) => (a ? (Array.isArray(a) ? a : [a]).flatMap((x) => x.value.map((v) => v.address ?? '')) : []);
+const addresses = (a: AddressObject | AddressObject[] | undefined) =>
+  a ? (Array.isArray(a) ? a : [a]).flatMap((x) => x.value.map((v) => v.address ?? '')) : [];
 
 function layout(title: string, body: string) {
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${esc(title)}</title>
@@ -121,7 +122,10 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
     if (url.pathname === '/') {
       const rows = [...messages]
         .reverse()
-        .map((m) => `<tr><td>${esc(new Date(m.receivedAt).toLocaleString('en-US', { timeZone: 'UTC' }))} UTC</td><td>${esc(m.to.join(', '))}</td><td><a href="/messages/${m.id}">${esc(m.subject || '(no subject)')}</a></td></tr>`)
+        .map(
+          (m) =>
+            `<tr><td>${esc(new Date(m.receivedAt).toLocaleString('en-US', { timeZone: 'UTC' }))} UTC</td><td>${esc(m.to.join(', '))}</td><td><a href="/messages/${m.id}">${esc(m.subject || '(no subject)')}</a></td></tr>`,
+        )
         .join('');
       return html(
         200,
@@ -136,7 +140,10 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
     const message = m ? messages.find((x) => x.id === Number(m[1])) : undefined;
     if (message && m?.[2]) {
       // The HTML part alone, for the sandboxed frame.
-      res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'content-security-policy': "default-src 'none'; style-src 'unsafe-inline'; img-src data:" });
+      res.writeHead(200, {
+        'content-type': 'text/html; charset=utf-8',
+        'content-security-policy': "default-src 'none'; style-src 'unsafe-inline'; img-src data:",
+      });
       return res.end(message.html ?? '');
     }
     if (message) {

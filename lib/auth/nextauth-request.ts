@@ -19,7 +19,15 @@ function isHttpUrl(value: string, base: string): boolean {
   }
 }
 
-const TYPE_BY_STATUS: Record<number, ErrorType> = { 400: 'bad_request', 401: 'unauthorized', 403: 'forbidden', 404: 'not_found', 413: 'too_large', 415: 'unsupported_media', 429: 'rate_limit' };
+const TYPE_BY_STATUS: Record<number, ErrorType> = {
+  400: 'bad_request',
+  401: 'unauthorized',
+  403: 'forbidden',
+  404: 'not_found',
+  413: 'too_large',
+  415: 'unsupported_media',
+  429: 'rate_limit',
+};
 
 /** next-auth answers some 4xx with plain text or an empty `{}`: give them the app's JSON shape. */
 export async function withClearError(response: Response): Promise<Response> {
@@ -37,7 +45,10 @@ export async function withClearError(response: Response): Promise<Response> {
   if (body && typeof body.url === 'string') {
     // A failed sign-in (json=true): the client reads `url` (its ?error= code), so it stays.
     const code = URL.canParse(body.url) ? new URL(body.url).searchParams.get('error') : null;
-    const message = code === 'Throttled' ? 'Too many sign-in attempts. Please wait a few minutes and try again.' : 'That e-mail address and password do not match an account.';
+    const message =
+      code === 'Throttled'
+        ? 'Too many sign-in attempts. Please wait a few minutes and try again.'
+        : 'That e-mail address and password do not match an account.';
     answer = Response.json({ ...body, error: type, message }, { status: response.status });
   } else {
     answer = new AppError(type, 'Sign-in does not accept that request. Use the sign-in form.').toResponse({ status: response.status });
@@ -54,7 +65,8 @@ export async function checkNextAuthRequest(request: NextRequest, params: { nexta
   if (callbackUrls.some((url) => url && !isHttpUrl(url, base))) throw new AppError('bad_request', BAD_CALLBACK, { fields: { callbackUrl: [BAD_CALLBACK] } });
   for (const name of CALLBACK_COOKIES) {
     const value = request.cookies.get(name)?.value;
-    if (value && !isHttpUrl(value, base)) throw new AppError('bad_request', `${BAD_CALLBACK} Clear this site's cookies and sign in again.`, { fields: { callbackUrl: [BAD_CALLBACK] } });
+    if (value && !isHttpUrl(value, base))
+      throw new AppError('bad_request', `${BAD_CALLBACK} Clear this site's cookies and sign in again.`, { fields: { callbackUrl: [BAD_CALLBACK] } });
   }
   // next-auth copies the error code into a Location header unencoded: a character beyond
   // Latin-1 there makes the Response constructor throw.

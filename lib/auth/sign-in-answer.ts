@@ -7,7 +7,10 @@ import 'server-only';
  */
 export async function asTooManyAttempts(response: Response, refusals: number[]): Promise<Response> {
   if (!refusals.length || response.status !== 401) return response;
-  const body = (await response.clone().json().catch(() => ({}))) as Record<string, unknown>;
+  const body = (await response
+    .clone()
+    .json()
+    .catch(() => ({}))) as Record<string, unknown>;
   const retryAfter = Math.max(...refusals);
   const answer = Response.json(
     { ...body, error: 'rate_limit', message: 'Too many sign-in attempts. Please wait a few minutes and try again.', retryAfterSeconds: retryAfter },

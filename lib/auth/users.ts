@@ -55,7 +55,12 @@ export async function registerLearner(input: RegisterInput): Promise<SessionUser
  * parallel guesses cannot race past the limit; a wrong password and an unknown e-mail give the same
  * null after the same bcrypt work; a right one takes its attempt back.
  */
-export async function verifyCredentials(emailAddress: string, plain: string, address: string, options: { sleep?: (ms: number) => Promise<void> } = {}): Promise<SessionUser | null> {
+export async function verifyCredentials(
+  emailAddress: string,
+  plain: string,
+  address: string,
+  options: { sleep?: (ms: number) => Promise<void> } = {},
+): Promise<SessionUser | null> {
   const takeBack = await countSignInAttempt({ email: emailAddress, address }, options);
   const user = await db().User.findOne({ where: { email: emailAddress } });
   const ok = await bcrypt.compare(plain, user?.passwordHash ?? DUMMY_HASH);

@@ -118,8 +118,21 @@ describe('requirementsFromContent', () => {
       { slug: 'acid-and-ph-review', quiz: 'volunteer-refresher--quiz' },
       { slug: 'time-and-altitude-review', quiz: 'volunteer-refresher--quiz' },
     ]);
-    expect(r).toMatchObject({ lessonSlugs: ['acid-and-ph-review', 'time-and-altitude-review'], quizSlugs: ['volunteer-refresher--quiz'], finalExam: null, practicalRequired: false, priorCertificateRequired: true });
-    const f = requirementsFromContent({ slug: 'pickling-and-canning', finalExam: 'pickling-and-canning--final-exam', workshopRequired: true }, [{ slug: 'acidity', quiz: 'pickling-and-canning--acidity' }]);
-    expect(f).toMatchObject({ quizSlugs: ['pickling-and-canning--acidity'], finalExam: 'pickling-and-canning--final-exam', practicalRequired: true, workshopRequired: true });
+    expect(r).toMatchObject({
+      lessonSlugs: ['acid-and-ph-review', 'time-and-altitude-review'],
+      quizSlugs: ['volunteer-refresher--quiz'],
+      finalExam: null,
+      practicalRequired: false,
+      priorCertificateRequired: true,
+    });
+    const f = requirementsFromContent({ slug: 'pickling-and-canning', finalExam: 'pickling-and-canning--final-exam', workshopRequired: true }, [
+      { slug: 'acidity', quiz: 'pickling-and-canning--acidity' },
+    ]);
+    expect(f).toMatchObject({
+      quizSlugs: ['pickling-and-canning--acidity'],
+      finalExam: 'pickling-and-canning--final-exam',
+      practicalRequired: true,
+      workshopRequired: true,
+    });
   });
 });

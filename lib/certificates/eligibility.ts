@@ -91,7 +91,10 @@ export function checkEligibility(course: CourseRequirements, facts: EnrollmentFa
     key: 'quizzes',
     label: 'Every quiz passed',
     met: failedQuizzes.length === 0,
-    detail: failedQuizzes.length === 0 ? `All ${plural(lessonQuizzes.length, 'quiz', 'quizzes')} passed.` : `${plural(failedQuizzes.length, 'quiz', 'quizzes')} not passed yet.`,
+    detail:
+      failedQuizzes.length === 0
+        ? `All ${plural(lessonQuizzes.length, 'quiz', 'quizzes')} passed.`
+        : `${plural(failedQuizzes.length, 'quiz', 'quizzes')} not passed yet.`,
     missing: failedQuizzes,
   });
 

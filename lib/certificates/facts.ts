@@ -32,7 +32,13 @@ export type EnrollmentRow = {
   certificate: CertificateRow | null;
 };
 
-export type EnrollmentStanding = { row: EnrollmentRow; facts: EnrollmentFacts; requirements: CourseRequirements; eligibility: Eligibility; prior: PriorCertificate[] };
+export type EnrollmentStanding = {
+  row: EnrollmentRow;
+  facts: EnrollmentFacts;
+  requirements: CourseRequirements;
+  eligibility: Eligibility;
+  prior: PriorCertificate[];
+};
 
 type Options = { transaction?: Transaction; now?: Date };
 
@@ -89,7 +95,14 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
     certificate:
       r.certId === null || r.certId === undefined
         ? null
-        : { id: Number(r.certId), serial: String(r.serial), issuedAt: asDate(r.issuedAt)!, validUntil: asDate(r.validUntil)!, revokedAt: asDate(r.revokedAt), revokeReason: (r.revokeReason as string | null) ?? null },
+        : {
+            id: Number(r.certId),
+            serial: String(r.serial),
+            issuedAt: asDate(r.issuedAt)!,
+            validUntil: asDate(r.validUntil)!,
+            revokedAt: asDate(r.revokedAt),
+            revokeReason: (r.revokeReason as string | null) ?? null,
+          },
   }));
 
   const userIds = [...new Set(rows.map((r) => r.userId))];

@@ -91,12 +91,26 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
         const serial = generateSerial();
         const validUntil = validUntilFor({ courseSlug: row.courseSlug, validityMonths: row.validityMonths, issuedAt: now, prior: standing.prior });
         // What the certificate says is fixed here: later renames never reach it (a correction is a reissue).
-        const wording = { holderName: row.learnerName, courseTitle: row.courseTitle, programName: await programName(transaction), ...(await signerFor(actorId, transaction)) };
-        const certificate = await Certificate.create({ enrollmentId, userId: row.userId, issuedById: actorId, serial, issuedAt: now, validUntil, ...wording }, { transaction });
+        const wording = {
+          holderName: row.learnerName,
+          courseTitle: row.courseTitle,
+          programName: await programName(transaction),
+          ...(await signerFor(actorId, transaction)),
+        };
+        const certificate = await Certificate.create(
+          { enrollmentId, userId: row.userId, issuedById: actorId, serial, issuedAt: now, validUntil, ...wording },
+          { transaction },
+        );
         // Through the one state machine (it audits the move as well).
         if (row.status === 'active') await transitionEnrollment(enrollmentId, 'completed', { transaction, actorId, reason: 'certificate', data: { serial } });
         await audit(
-          { actorId, action: 'certificate.issued', subjectType: 'certificate', subjectId: certificate.id, data: { enrollmentId, serial, validUntil: validUntil.toISOString() } },
+          {
+            actorId,
+            action: 'certificate.issued',
+            subjectType: 'certificate',
+            subjectId: certificate.id,
+            data: { enrollmentId, serial, validUntil: validUntil.toISOString() },
+          },
           { transaction },
         );
         await queueCertificateEmail({ to: row.learnerEmail, wording, serial, issuedAt: now, validUntil }, transaction);
@@ -119,7 +133,12 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
  * with today's wording (the holder's name as given or as the account has it now, the course title
  * and program name of today, the reissuing coordinator as signer). Its dates stay as certified.
  */
-export async function reissueCertificate(certificateId: number, actorId: number, input: { reason: string; holderName?: string | null }, options: { now?: Date } = {}) {
+export async function reissueCertificate(
+  certificateId: number,
+  actorId: number,
+  input: { reason: string; holderName?: string | null },
+  options: { now?: Date } = {},
+) {
   const { sequelize, Certificate, CertificateVersion, User, Course, Enrollment } = db();
   for (let attempt = 0; attempt < 3; attempt++) {
     try {
@@ -150,13 +169,27 @@ export async function reissueCertificate(certificateId: number, actorId: number,
           },
           { transaction },
         );
-        const wording: Wording = { holderName: input.holderName?.trim() || holder.name, courseTitle: course.title, programName: await programName(transaction), ...(await signerFor(actorId, transaction)) };
+        const wording: Wording = {
+          holderName: input.holderName?.trim() || holder.name,
+          courseTitle: course.title,
+          programName: await programName(transaction),
+          ...(await signerFor(actorId, transaction)),
+        };
         await certificate.update({ ...wording, serial: generateSerial(), version: certificate.version + 1 }, { transaction });
         await audit(
-          { actorId, action: 'certificate.reissued', subjectType: 'certificate', subjectId: certificate.id, data: { fromSerial: previous.serial, toSerial: certificate.serial, version: certificate.version, reason: input.reason } },
+          {
+            actorId,
+            action: 'certificate.reissued',
+            subjectType: 'certificate',
+            subjectId: certificate.id,
+            data: { fromSerial: previous.serial, toSerial: certificate.serial, version: certificate.version, reason: input.reason },
+          },
           { transaction },
         );
-        await queueCertificateEmail({ to: holder.email, wording, serial: certificate.serial, issuedAt: certificate.issuedAt, validUntil: certificate.validUntil }, transaction);
+        await queueCertificateEmail(
+          { to: holder.email, wording, serial: certificate.serial, issuedAt: certificate.issuedAt, validUntil: certificate.validUntil },
+          transaction,
+        );
         return { id: certificate.id, serial: certificate.serial, version: certificate.version, replacedSerial: previous.serial };
       });
     } catch (error) {
@@ -171,7 +204,11 @@ export async function reissueCertificate(certificateId: number, actorId: number,
  * Issues for many enrollments, a few at a time so the connection pool is shared fairly; every
  * enrollment has its own transaction, so one failure does not undo the others.
  */
-export async function issueCertificates(enrollmentIds: readonly number[], actorId: number | null, options: { concurrency?: number; now?: Date } = {}): Promise<IssueOutcome[]> {
+export async function issueCertificates(
+  enrollmentIds: readonly number[],
+  actorId: number | null,
+  options: { concurrency?: number; now?: Date } = {},
+): Promise<IssueOutcome[]> {
   const ids = [...new Set(enrollmentIds)];
   const results: IssueOutcome[] = new Array(ids.length);
   let next = 0;
@@ -196,9 +233,15 @@ export async function revokeCertificate(certificateId: number, actorId: number, 
     certificate.revokedAt = now;
     certificate.revokeReason = reason;
     await certificate.save({ transaction });
-    await audit({ actorId, action: 'certificate.revoked', subjectType: 'certificate', subjectId: certificate.id, data: { serial: certificate.serial, reason } }, { transaction });
+    await audit(
+      { actorId, action: 'certificate.revoked', subjectType: 'certificate', subjectId: certificate.id, data: { serial: certificate.serial, reason } },
+      { transaction },
+    );
     const holder = (await db().User.findByPk(certificate.userId, { attributes: ['email'], transaction }))!;
-    await enqueueEmail(certificateRevokedEmail({ to: holder.email, name: certificate.holderName, courseTitle: certificate.courseTitle, serial: certificate.serial, reason }), { transaction });
+    await enqueueEmail(
+      certificateRevokedEmail({ to: holder.email, name: certificate.holderName, courseTitle: certificate.courseTitle, serial: certificate.serial, reason }),
+      { transaction },
+    );
     return { id: certificate.id, serial: certificate.serial, revokedAt: now };
   });
 }
@@ -213,7 +256,8 @@ export async function claimRefresherCertificate(enrollmentId: number, learnerId:
     { replacements: { enrollmentId }, type: QueryTypes.SELECT },
   );
   if (!row || Number(row.userId) !== learnerId) throw new AppError('not_found', 'You have no such enrollment.');
-  if (row.slug !== REFRESHER_COURSE_SLUG) throw new AppError('forbidden', 'Only the refresher certificate can be claimed by the learner; the coordinator issues the others.');
+  if (row.slug !== REFRESHER_COURSE_SLUG)
+    throw new AppError('forbidden', 'Only the refresher certificate can be claimed by the learner; the coordinator issues the others.');
   const outcome = await issueCertificate(enrollmentId, learnerId);
   if (outcome.outcome === 'not_eligible') throw new AppError('conflict', 'The refresher is not complete yet.', { extra: { missing: outcome.missing } });
   return outcome;

@@ -51,15 +51,27 @@ const WORDING = 'holderName, courseTitle, programName, signerName, signerTitle';
 async function findBySerial(serial: string, legacy = false): Promise<CertificateRecord | null> {
   // An imported certificate is also found by the serial of the program's earlier records.
   const [row] = await db().sequelize.query<CertificateRecord>(
-    `SELECT ${STORED}, ce.serial, ${WORDING.split(', ').map((f) => `ce.${f}`).join(', ')}, NULL AS replacedAt FROM certificates ce WHERE ce.${legacy ? 'legacySerial' : 'serial'} = :serial
+    `SELECT ${STORED}, ce.serial, ${WORDING.split(', ')
+      .map((f) => `ce.${f}`)
+      .join(', ')}, NULL AS replacedAt FROM certificates ce WHERE ce.${legacy ? 'legacySerial' : 'serial'} = :serial
      UNION ALL
-     SELECT ${STORED}, v.serial, ${WORDING.split(', ').map((f) => `v.${f}`).join(', ')}, v.replacedAt FROM certificate_versions v JOIN certificates ce ON ce.id = v.certificateId WHERE v.serial = :serial
+     SELECT ${STORED}, v.serial, ${WORDING.split(', ')
+       .map((f) => `v.${f}`)
+       .join(', ')}, v.replacedAt FROM certificate_versions v JOIN certificates ce ON ce.id = v.certificateId WHERE v.serial = :serial
      LIMIT 1`,
     { replacements: { serial }, type: QueryTypes.SELECT },
   );
   if (!row) return null;
   const d = (v: unknown) => (v === null ? null : new Date(v as string));
-  return { ...row, id: Number(row.id), userId: Number(row.userId), issuedAt: d(row.issuedAt)!, validUntil: d(row.validUntil)!, revokedAt: d(row.revokedAt), replacedAt: d(row.replacedAt) };
+  return {
+    ...row,
+    id: Number(row.id),
+    userId: Number(row.userId),
+    issuedAt: d(row.issuedAt)!,
+    validUntil: d(row.validUntil)!,
+    revokedAt: d(row.revokedAt),
+    replacedAt: d(row.replacedAt),
+  };
 }
 
 /** Looks a serial up for the public check; no throttle (see verifyForAddress). */
@@ -108,7 +120,8 @@ export async function certificatePdfFor(serialInput: string, viewer: SessionUser
   const cert = serial ? await findBySerial(serial) : null;
   const staff = roleAllows(viewer.role, ['coordinator']);
   // An earlier wording is not handed out again: the current serial's PDF replaces it.
-  if (!cert || cert.replacedAt || (!staff && cert.userId !== viewer.id)) throw new AppError('not_found', 'There is no certificate with that serial for your account.');
+  if (!cert || cert.replacedAt || (!staff && cert.userId !== viewer.id))
+    throw new AppError('not_found', 'There is no certificate with that serial for your account.');
   if (cert.revokedAt && !staff) throw new AppError('conflict', 'This certificate was revoked, so it can no longer be downloaded.');
   const env = getEnv();
   const pdf = await renderCertificatePdf({
@@ -125,7 +138,16 @@ export async function certificatePdfFor(serialInput: string, viewer: SessionUser
   return { serial: cert.serial, pdf };
 }
 
-export type LearnerCertificate = { id: number; serial: string; courseSlug: string; courseTitle: string; issuedAt: Date; validUntil: Date; revokedAt: Date | null; state: CertificateState };
+export type LearnerCertificate = {
+  id: number;
+  serial: string;
+  courseSlug: string;
+  courseTitle: string;
+  issuedAt: Date;
+  validUntil: Date;
+  revokedAt: Date | null;
+  state: CertificateState;
+};
 
 /** A learner's certificates, newest first, for the Pantry. */
 export async function fetchLearnerCertificates({ userId, now = new Date() }: { userId: number; now?: Date }): Promise<LearnerCertificate[]> {
@@ -136,7 +158,13 @@ export async function fetchLearnerCertificates({ userId, now = new Date() }: { u
     { replacements: { userId }, type: QueryTypes.SELECT },
   );
   return rows.map((r) => {
-    const cert = { ...r, id: Number(r.id), issuedAt: new Date(r.issuedAt), validUntil: new Date(r.validUntil), revokedAt: r.revokedAt ? new Date(r.revokedAt) : null };
+    const cert = {
+      ...r,
+      id: Number(r.id),
+      issuedAt: new Date(r.issuedAt),
+      validUntil: new Date(r.validUntil),
+      revokedAt: r.revokedAt ? new Date(r.revokedAt) : null,
+    };
     return { ...cert, state: certificateState(cert, now) };
   });
 }

@@ -87,7 +87,10 @@ describe('renderCertificatePdf', { timeout: 30_000 }, () => {
     const url = verificationUrl(data.appUrl, data.serial);
     expect(url).toBe(`http://127.0.0.1:3170/verify/${data.serial}`);
 
-    const decoded = await sharp(await qrPng(url)).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
+    const decoded = await sharp(await qrPng(url))
+      .ensureAlpha()
+      .raw()
+      .toBuffer({ resolveWithObject: true });
     expect(jsQR(new Uint8ClampedArray(decoded.data), decoded.info.width, decoded.info.height)?.data).toBe(url);
 
     const content = await pageContent(await renderCertificatePdf(data));

@@ -66,7 +66,9 @@ function fontSet(): FontSet {
  */
 const cachingFontkit = {
   create(data: Uint8Array, postscriptName?: string): FontkitFont {
-    const face = [...fontSet().regular, ...fontSet().bold].find((f) => f.bytes.length === data.length && Buffer.compare(f.bytes, Buffer.from(data.buffer, data.byteOffset, data.byteLength)) === 0);
+    const face = [...fontSet().regular, ...fontSet().bold].find(
+      (f) => f.bytes.length === data.length && Buffer.compare(f.bytes, Buffer.from(data.buffer, data.byteOffset, data.byteLength)) === 0,
+    );
     return face ? face.font : fontkit.create(data, postscriptName);
   },
 };
@@ -144,7 +146,8 @@ export async function renderCertificatePdf(input: CertificatePdfInput): Promise<
   await centred(set.regular, 'has completed the course', height - 268, 13);
   await centred(set.bold, input.courseTitle, height - 302, 18);
   await centred(set.regular, `Issued ${formatDate(input.issuedAt)}  ·  Valid until ${formatDate(input.validUntil)}`, height - 344, 12);
-  if (input.signerName) await centred(set.regular, `Signed by ${input.signerName}${input.signerTitle ? `, ${input.signerTitle}` : ''}`, height - 372, 11, INK, width - 380);
+  if (input.signerName)
+    await centred(set.regular, `Signed by ${input.signerName}${input.signerTitle ? `, ${input.signerTitle}` : ''}`, height - 372, 11, INK, width - 380);
 
   const url = verificationUrl(input.appUrl, input.serial);
   drawQr(page, qrMatrix(url), { x: width - 60 - 118, y: 56, size: 118 });

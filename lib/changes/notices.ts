@@ -41,11 +41,14 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
       const claimed: CourseChange[] = [];
       for (const change of published.filter((c) => !seen.has(c.id))) {
         // After the lock, an id another worker committed is ignored here (0 rows).
-        const [, inserted] = (await sequelize.query('INSERT IGNORE INTO change_notices (changeId, courseSlug, recipients, createdAt) VALUES (:id, :course, 0, :now)', {
-          replacements: { id: change.id, course: course.slug, now },
-          type: QueryTypes.INSERT,
-          transaction,
-        })) as unknown as [unknown, number];
+        const [, inserted] = (await sequelize.query(
+          'INSERT IGNORE INTO change_notices (changeId, courseSlug, recipients, createdAt) VALUES (:id, :course, 0, :now)',
+          {
+            replacements: { id: change.id, course: course.slug, now },
+            type: QueryTypes.INSERT,
+            transaction,
+          },
+        )) as unknown as [unknown, number];
         if (inserted === 1) claimed.push(change);
       }
       if (claimed.length === 0) return { changes: 0, emails: 0 };
@@ -60,7 +63,13 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
       );
       for (const holder of holders) {
         await enqueueEmail(
-          courseChangesEmail({ to: holder.email, name: holder.name, courseTitle: course.title, changes: claimed, changesUrl: `${appUrl}/courses/${course.slug}/changes` }),
+          courseChangesEmail({
+            to: holder.email,
+            name: holder.name,
+            courseTitle: course.title,
+            changes: claimed,
+            changesUrl: `${appUrl}/courses/${course.slug}/changes`,
+          }),
           { transaction },
         );
       }

@@ -9,10 +9,7 @@ import { contentSlugSchema } from './schema';
 
 const text = z.string().trim().min(1, 'must not be empty');
 // YAML reads an unquoted 2026-12-04 as a Date; either form becomes the same day string.
-const day = z.preprocess(
-  (v) => (v instanceof Date ? v.toISOString().slice(0, 10) : v),
-  z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'use YYYY-MM-DD'),
-);
+const day = z.preprocess((v) => (v instanceof Date ? v.toISOString().slice(0, 10) : v), z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'use YYYY-MM-DD'));
 
 export const changeSchema = z
   .object({
@@ -43,9 +40,7 @@ export function loadChanges(root: string, courseSlug: string): CourseChanges | n
     const issue = result.error.issues[0];
     throw new Error(`${shown}: front matter field "${issue.path.join('.')}" is not valid: ${issue.message}`);
   }
-  const changes = result.data.changes
-    .map((c) => ({ ...c, courseSlug }))
-    .sort((a, b) => (a.date === b.date ? 0 : a.date < b.date ? 1 : -1));
+  const changes = result.data.changes.map((c) => ({ ...c, courseSlug })).sort((a, b) => (a.date === b.date ? 0 : a.date < b.date ? 1 : -1));
   return { courseSlug, intro: parsed.content.trim(), changes, file: shown };
 }
 

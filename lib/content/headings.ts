@@ -21,7 +21,6 @@ function textOf(node: ElementContent | RootContent): string {
   return '';
 }
 
-
 /**
  * A rehype plugin that gives every h2/h3 a unique id (kept if the author set one) and records
  * them, in order, in `toc`: the table of contents is built from the same pass that sets the ids,

@@ -2,12 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import matter from 'gray-matter';
 import type { ZodError, ZodType } from 'zod';
-import {
-  courseFrontMatterSchema,
-  lessonFrontMatterSchema,
-  type CourseContent,
-  type LessonContent,
-} from './schema';
+import { courseFrontMatterSchema, lessonFrontMatterSchema, type CourseContent, type LessonContent } from './schema';
 
 /** A content file that cannot be used: names the file and the field that is wrong. */
 export class ContentError extends Error {

@@ -53,7 +53,9 @@ describe('compiled MDX', () => {
   });
 
   it('names the file when the MDX does not compile, and does not cache the failure', async () => {
-    await expect(compileContent({ file: 'test/broken.mdx', body: '<KeyPoint>never closed', components })).rejects.toThrow(/^test\/broken\.mdx: the MDX does not compile/);
+    await expect(compileContent({ file: 'test/broken.mdx', body: '<KeyPoint>never closed', components })).rejects.toThrow(
+      /^test\/broken\.mdx: the MDX does not compile/,
+    );
     const runs = mdxCompileRuns();
     await expect(compileContent({ file: 'test/broken.mdx', body: '<KeyPoint>never closed', components })).rejects.toThrow(/broken\.mdx/);
     expect(mdxCompileRuns()).toBe(runs + 1);

@@ -9,7 +9,12 @@ const root = path.join(__dirname, '../../content');
 describe('the members-only lesson rewrites', () => {
   it('list exactly the lessons the validated loader says are not previews, course by course', () => {
     const expected = loadCourses(root)
-      .map((course) => ({ course: course.slug, lessons: loadLessons(root, course.slug).filter((l) => !l.preview).map((l) => l.slug) }))
+      .map((course) => ({
+        course: course.slug,
+        lessons: loadLessons(root, course.slug)
+          .filter((l) => !l.preview)
+          .map((l) => l.slug),
+      }))
       .filter(({ lessons }) => lessons.length > 0)
       .sort((a, b) => a.course.localeCompare(b.course));
     expect(membersLessonRoutes(root)).toEqual(expected);

@@ -1,11 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { lessonsForVersion, requirementText } from './versions';
 
-const lessons = [
-  { slug: 'acidity', since: 1 },
-  { slug: 'processing' },
-  { slug: 'fermented-pickles-and-sauerkraut', since: 2 },
-];
+const lessons = [{ slug: 'acidity', since: 1 }, { slug: 'processing' }, { slug: 'fermented-pickles-and-sauerkraut', since: 2 }];
 
 describe('lessonsForVersion', () => {
   it('holds an enrollment begun under version 1 to the lessons of version 1 only', () => {

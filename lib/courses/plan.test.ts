@@ -11,7 +11,16 @@ describe('planCourseSync', () => {
 
   it('updates only the fields that differ, naming old and new values', () => {
     const plan = planCourseSync([{ ...flagship, feeCents: 5000, title: 'Flagship, revised' }], [row(flagship)]);
-    expect(plan.update).toEqual([{ id: 1, slug: 'flagship', changes: [{ field: 'title', from: 'Flagship', to: 'Flagship, revised' }, { field: 'feeCents', from: 4500, to: 5000 }] }]);
+    expect(plan.update).toEqual([
+      {
+        id: 1,
+        slug: 'flagship',
+        changes: [
+          { field: 'title', from: 'Flagship', to: 'Flagship, revised' },
+          { field: 'feeCents', from: 4500, to: 5000 },
+        ],
+      },
+    ]);
     expect(describePlan(plan)).toEqual(['updated flagship: title Flagship -> Flagship, revised, feeCents 4500 -> 5000']);
   });
 
@@ -20,7 +29,14 @@ describe('planCourseSync', () => {
   });
 
   it('never removes a course with enrollments or other rows pointing at it, and removes an unused one', () => {
-    const plan = planCourseSync([], [row({ ...flagship, slug: 'taught' }, { id: 2, enrollments: 3 }), row({ ...flagship, slug: 'planned' }, { id: 3, otherReferences: 1 }), row({ ...flagship, slug: 'unused' }, { id: 4 })]);
+    const plan = planCourseSync(
+      [],
+      [
+        row({ ...flagship, slug: 'taught' }, { id: 2, enrollments: 3 }),
+        row({ ...flagship, slug: 'planned' }, { id: 3, otherReferences: 1 }),
+        row({ ...flagship, slug: 'unused' }, { id: 4 }),
+      ],
+    );
     expect(plan.keep.map((k) => k.slug)).toEqual(['taught', 'planned']);
     expect(plan.keep[0].reason).toBe('3 enrollment(s)');
     expect(plan.remove).toEqual([{ id: 4, slug: 'unused' }]);

@@ -39,7 +39,14 @@ export function planCourseSync(content: readonly CourseFields[], rows: readonly 
   return plan;
 }
 
-const pick = (c: CourseFields): CourseFields => ({ slug: c.slug, title: c.title, feeCents: c.feeCents, currency: c.currency, passMarkPct: c.passMarkPct, validityMonths: c.validityMonths });
+const pick = (c: CourseFields): CourseFields => ({
+  slug: c.slug,
+  title: c.title,
+  feeCents: c.feeCents,
+  currency: c.currency,
+  passMarkPct: c.passMarkPct,
+  validityMonths: c.validityMonths,
+});
 
 /** One line per change, for the migrate command's output and the server log. */
 export function describePlan(plan: SyncPlan): string[] {

@@ -15,7 +15,11 @@ export type SyncReport = SyncPlan & { lines: string[] };
 export async function syncCourses(sequelize: Sequelize, options: { contentRoot?: string; lockWaitSeconds?: number } = {}): Promise<SyncReport> {
   const content = loadCourses(options.contentRoot ?? path.join(process.env.BRINEWRIGHT_ROOT ?? process.cwd(), 'content'));
   return sequelize.transaction(async (lockHolder) => {
-    const [got] = await sequelize.query<{ ok: number | null }>('SELECT GET_LOCK(?, ?) AS ok', { replacements: [LOCK_NAME, options.lockWaitSeconds ?? 60], type: QueryTypes.SELECT, transaction: lockHolder });
+    const [got] = await sequelize.query<{ ok: number | null }>('SELECT GET_LOCK(?, ?) AS ok', {
+      replacements: [LOCK_NAME, options.lockWaitSeconds ?? 60],
+      type: QueryTypes.SELECT,
+      transaction: lockHolder,
+    });
     if (Number(got?.ok) !== 1) throw new Error(`the course sync waited ${options.lockWaitSeconds ?? 60} s for another process's sync and gave up`);
     try {
       const plan = await sequelize.transaction(async (transaction) => {
@@ -29,14 +33,25 @@ export async function syncCourses(sequelize: Sequelize, options: { contentRoot?:
         );
         const plan = planCourseSync(
           content,
-          rows.map((r) => ({ ...r, id: Number(r.id), feeCents: Number(r.feeCents), passMarkPct: Number(r.passMarkPct), validityMonths: Number(r.validityMonths), enrollments: Number(r.enrollments), otherReferences: Number(r.otherReferences) })),
+          rows.map((r) => ({
+            ...r,
+            id: Number(r.id),
+            feeCents: Number(r.feeCents),
+            passMarkPct: Number(r.passMarkPct),
+            validityMonths: Number(r.validityMonths),
+            enrollments: Number(r.enrollments),
+            otherReferences: Number(r.otherReferences),
+          })),
         );
         const now = new Date();
         for (const course of plan.insert) {
-          await sequelize.query('INSERT INTO courses (slug, title, feeCents, currency, passMarkPct, validityMonths, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?, ?)', {
-            replacements: [course.slug, course.title, course.feeCents, course.currency, course.passMarkPct, course.validityMonths, now, now],
-            transaction,
-          });
+          await sequelize.query(
+            'INSERT INTO courses (slug, title, feeCents, currency, passMarkPct, validityMonths, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
+            {
+              replacements: [course.slug, course.title, course.feeCents, course.currency, course.passMarkPct, course.validityMonths, now, now],
+              transaction,
+            },
+          );
         }
         for (const update of plan.update) {
           const course = content.find((c) => c.slug === update.slug)!;

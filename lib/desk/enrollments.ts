@@ -17,7 +17,15 @@ export type DeskEnrollment = {
   status: EnrollmentStatus;
   eligible: boolean;
   checks: Check[];
-  certificate: { id: number; serial: string; issuedAt: string; validUntil: string; revokedAt: string | null; revokeReason: string | null; state: CertificateState } | null;
+  certificate: {
+    id: number;
+    serial: string;
+    issuedAt: string;
+    validUntil: string;
+    revokedAt: string | null;
+    revokeReason: string | null;
+    state: CertificateState;
+  } | null;
 };
 
 export type DeskPage = { items: DeskEnrollment[]; total: number; page: number; pageSize: number; pages: number };
@@ -86,7 +94,8 @@ export function toDeskEnrollment(s: EnrollmentStanding, now = new Date()): DeskE
     learnerEmail: row.learnerEmail,
     courseSlug: row.courseSlug,
     courseTitle: row.courseTitle,
-    workshop: row.workshopId && row.workshopStartsAt ? { id: row.workshopId, startsAt: row.workshopStartsAt.toISOString(), place: row.workshopPlace ?? '' } : null,
+    workshop:
+      row.workshopId && row.workshopStartsAt ? { id: row.workshopId, startsAt: row.workshopStartsAt.toISOString(), place: row.workshopPlace ?? '' } : null,
     status: row.status,
     eligible: s.eligibility.eligible && !row.certificate,
     checks: s.eligibility.checks,
@@ -126,5 +135,8 @@ export async function fetchDeskOptions(): Promise<DeskOptions> {
       { type: QueryTypes.SELECT },
     ),
   ]);
-  return { courses, workshops: workshops.map((w) => ({ id: Number(w.id), courseSlug: w.courseSlug, startsAt: new Date(w.startsAt).toISOString(), place: w.place })) };
+  return {
+    courses,
+    workshops: workshops.map((w) => ({ id: Number(w.id), courseSlug: w.courseSlug, startsAt: new Date(w.startsAt).toISOString(), place: w.place })),
+  };
 }

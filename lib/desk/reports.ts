@@ -44,8 +44,13 @@ export async function fetchDeskReports({ months = 12, now = new Date() }: { mont
         GROUP BY w.id, w.startsAt, w.place, c.title
         ORDER BY w.startsAt`,
     ),
-    q<{ month: string; n: number }>("SELECT DATE_FORMAT(issuedAt, '%Y-%m') AS month, COUNT(*) AS n FROM certificates WHERE issuedAt >= :since GROUP BY month", { since }),
-    q<{ month: string; n: number }>("SELECT DATE_FORMAT(revokedAt, '%Y-%m') AS month, COUNT(*) AS n FROM certificates WHERE revokedAt >= :since GROUP BY month", { since }),
+    q<{ month: string; n: number }>("SELECT DATE_FORMAT(issuedAt, '%Y-%m') AS month, COUNT(*) AS n FROM certificates WHERE issuedAt >= :since GROUP BY month", {
+      since,
+    }),
+    q<{ month: string; n: number }>(
+      "SELECT DATE_FORMAT(revokedAt, '%Y-%m') AS month, COUNT(*) AS n FROM certificates WHERE revokedAt >= :since GROUP BY month",
+      { since },
+    ),
     q<{ month: string; currency: string; collected: number; refunded: number }>(
       `SELECT DATE_FORMAT(paidAt, '%Y-%m') AS month, currency, SUM(amountCents) AS collected, SUM(refundedCents) AS refunded
          FROM payments WHERE paidAt IS NOT NULL AND status IN ('paid', 'refunded') AND paidAt >= :since
@@ -70,7 +75,14 @@ export async function fetchDeskReports({ months = 12, now = new Date() }: { mont
       const enrolled = Number(w.enrolled ?? 0);
       const completed = Number(w.completed ?? 0);
       const date = new Date(w.startsAt).toISOString().slice(0, 10);
-      return { id: Number(w.id), label: `${date} · ${w.place.split(',')[0]}`, enrolled, completed, certified: Number(w.certified ?? 0), completionPct: enrolled ? Math.round((completed / enrolled) * 1000) / 10 : 0 };
+      return {
+        id: Number(w.id),
+        label: `${date} · ${w.place.split(',')[0]}`,
+        enrolled,
+        completed,
+        certified: Number(w.certified ?? 0),
+        completionPct: enrolled ? Math.round((completed / enrolled) * 1000) / 10 : 0,
+      };
     }),
     certificatesByMonth: monthList.map((month) => ({ month, issued: issued.get(month) ?? 0, revoked: revoked.get(month) ?? 0 })),
     fees,

@@ -35,7 +35,10 @@ export function rosterCsv(rows: readonly DeskEnrollment[]): string {
     workshopPlace: neutralise(r.workshop?.place ?? ''),
     status: r.status,
     eligible: r.certificate ? 'certified' : r.eligible ? 'yes' : 'no',
-    missing: r.checks.filter((c) => !c.met).map((c) => c.label).join('; '),
+    missing: r.checks
+      .filter((c) => !c.met)
+      .map((c) => c.label)
+      .join('; '),
     serial: r.certificate?.serial ?? '',
     issued: day(r.certificate?.issuedAt),
     validUntil: day(r.certificate?.validUntil),

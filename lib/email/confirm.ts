@@ -9,7 +9,11 @@ export type ConfirmOutcome = 'confirmed' | 'already' | 'expired' | 'invalid';
 /** Confirms the e-mail address a token names (sets users.emailVerifiedAt once). */
 export async function confirmEmailAddress(token: string): Promise<ConfirmOutcome> {
   const { User } = db();
-  const check = await checkConfirmationToken(token, getEnv().NEXTAUTH_SECRET, async (id) => (await User.findByPk(id, { attributes: ['email'] }))?.email ?? null);
+  const check = await checkConfirmationToken(
+    token,
+    getEnv().NEXTAUTH_SECRET,
+    async (id) => (await User.findByPk(id, { attributes: ['email'] }))?.email ?? null,
+  );
   if (!check.ok) return check.reason === 'expired' ? 'expired' : 'invalid';
   const user = (await User.findByPk(check.userId))!;
   if (user.emailVerifiedAt) return 'already';

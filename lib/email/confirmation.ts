@@ -12,7 +12,12 @@ export function confirmationToken({ userId, email, secret, expiresAt }: { userId
 export type TokenCheck = { ok: true; userId: number } | { ok: false; reason: 'malformed' | 'expired' | 'mismatch' };
 
 /** Reads a token; `emailFor` gives the current address of the user it names. */
-export async function checkConfirmationToken(token: string, secret: string, emailFor: (userId: number) => Promise<string | null>, now = new Date()): Promise<TokenCheck> {
+export async function checkConfirmationToken(
+  token: string,
+  secret: string,
+  emailFor: (userId: number) => Promise<string | null>,
+  now = new Date(),
+): Promise<TokenCheck> {
   const m = /^(\d+)\.(\d+)\.([\w-]{43})$/.exec(token);
   if (!m) return { ok: false, reason: 'malformed' };
   const userId = Number(m[1]);

@@ -26,8 +26,13 @@ export async function queueWorkshopReminders(now = new Date()): Promise<number> 
         const already = await AuditLog.count({ where: { subjectType: 'enrollment', subjectId: String(id), action: 'workshop.reminder_queued' }, transaction });
         if (already) return false;
         const [course, learner] = await Promise.all([Course.findByPk(enrollment.courseId, { transaction }), User.findByPk(enrollment.userId, { transaction })]);
-        await enqueueEmail(workshopReminderEmail({ to: learner!.email, name: learner!.name, courseTitle: course!.title, workshop, appUrl: getEnv().APP_URL }), { transaction });
-        await audit({ actorId: null, action: 'workshop.reminder_queued', subjectType: 'enrollment', subjectId: id, data: { workshopId: workshop.id } }, { transaction });
+        await enqueueEmail(workshopReminderEmail({ to: learner!.email, name: learner!.name, courseTitle: course!.title, workshop, appUrl: getEnv().APP_URL }), {
+          transaction,
+        });
+        await audit(
+          { actorId: null, action: 'workshop.reminder_queued', subjectType: 'enrollment', subjectId: id, data: { workshopId: workshop.id } },
+          { transaction },
+        );
         return true;
       });
       if (done) queued += 1;

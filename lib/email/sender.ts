@@ -65,13 +65,20 @@ const DUE = `((status = 'pending' AND nextAttemptAt <= :now) OR (status = 'sendi
 export async function lockDueIds(transaction: Transaction, options: { limit: number; now: Date; staleClaimMs: number }): Promise<number[]> {
   const { sequelize } = db();
   const replacements = { now: options.now, stale: new Date(options.now.getTime() - options.staleClaimMs), limit: options.limit, candidates: options.limit * 4 };
-  const candidates = await sequelize.query<{ id: number }>(`SELECT id FROM outbox_emails WHERE ${DUE} ORDER BY id LIMIT :candidates`, { replacements, type: QueryTypes.SELECT, transaction });
-  if (!candidates.length) return [];
-  const locked = await sequelize.query<{ id: number }>(`SELECT id FROM outbox_emails FORCE INDEX (PRIMARY) WHERE id IN (:ids) AND ${DUE} ORDER BY id LIMIT :limit FOR UPDATE SKIP LOCKED`, {
-    replacements: { ...replacements, ids: candidates.map((r) => r.id) },
+  const candidates = await sequelize.query<{ id: number }>(`SELECT id FROM outbox_emails WHERE ${DUE} ORDER BY id LIMIT :candidates`, {
+    replacements,
     type: QueryTypes.SELECT,
     transaction,
   });
+  if (!candidates.length) return [];
+  const locked = await sequelize.query<{ id: number }>(
+    `SELECT id FROM outbox_emails FORCE INDEX (PRIMARY) WHERE id IN (:ids) AND ${DUE} ORDER BY id LIMIT :limit FOR UPDATE SKIP LOCKED`,
+    {
+      replacements: { ...replacements, ids: candidates.map((r) => r.id) },
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
   return locked.map((r) => r.id);
 }
 
@@ -85,11 +92,14 @@ export async function claimDue(token: string, options: Required<Pick<SenderOptio
   return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
     const ids = await lockDueIds(transaction, { limit: options.batchSize, now: options.now, staleClaimMs: options.staleClaimMs });
     if (!ids.length) return [];
-    await sequelize.query(`UPDATE outbox_emails SET status = 'sending', claimedBy = :token, claimedAt = :now, attempts = attempts + 1, updatedAt = :now WHERE id IN (:ids)`, {
-      replacements: { token, now: options.now, ids },
-      type: QueryTypes.UPDATE,
-      transaction,
-    });
+    await sequelize.query(
+      `UPDATE outbox_emails SET status = 'sending', claimedBy = :token, claimedAt = :now, attempts = attempts + 1, updatedAt = :now WHERE id IN (:ids)`,
+      {
+        replacements: { token, now: options.now, ids },
+        type: QueryTypes.UPDATE,
+        transaction,
+      },
+    );
     return OutboxEmail.findAll({ where: { id: { [Op.in]: ids } }, order: [['id', 'ASC']], transaction });
   });
 }

@@ -11,7 +11,8 @@ describe('smtpTlsOptions', () => {
     expect(smtpTlsOptions({ ...base, SMTP_REQUIRE_TLS: false })).toEqual({ secure: false, requireTLS: false, ignoreTLS: false });
   });
   it('keeps the loopback relay (the local fake) in the clear', () => {
-    for (const host of ['127.0.0.1', 'localhost', '::1', '127.0.0.2']) expect(smtpTlsOptions({ ...base, SMTP_HOST: host, SMTP_PORT: 2525 })).toMatchObject({ requireTLS: false, ignoreTLS: true });
+    for (const host of ['127.0.0.1', 'localhost', '::1', '127.0.0.2'])
+      expect(smtpTlsOptions({ ...base, SMTP_HOST: host, SMTP_PORT: 2525 })).toMatchObject({ requireTLS: false, ignoreTLS: true });
   });
   it('uses implicit TLS on port 465 or with SMTP_SECURE=true', () => {
     expect(smtpTlsOptions({ ...base, SMTP_PORT: 465 })).toEqual({ secure: true, requireTLS: false, ignoreTLS: false });

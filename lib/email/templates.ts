@@ -11,9 +11,11 @@ const iso = (d: Date | string) => (typeof d === 'string' ? d : d.toISOString());
 const trimUrl = (u: string) => u.replace(/\/$/, '');
 
 const SIGN_OFF = 'The Brinewright team';
-const FOOTER = 'Brinewright teaches and checks arithmetic; it never calls a recipe safe. Follow tested recipes from a recognised food-safety authority and your local guidance.';
+const FOOTER =
+  'Brinewright teaches and checks arithmetic; it never calls a recipe safe. Follow tested recipes from a recognised food-safety authority and your local guidance.';
 
-type Block = { kind: 'p'; text: string } | { kind: 'facts'; rows: [string, string][] } | { kind: 'button'; label: string; href: string } | { kind: 'note'; text: string };
+type Block =
+  { kind: 'p'; text: string } | { kind: 'facts'; rows: [string, string][] } | { kind: 'button'; label: string; href: string } | { kind: 'note'; text: string };
 
 /** One layout for every message: the same blocks rendered as text and as simple, inline-styled HTML. */
 function compose(kind: string, to: string, subject: string, greeting: string, blocks: Block[], attachments?: OutgoingAttachment[]): OutgoingEmail {
@@ -42,7 +44,10 @@ ${blocks
     if (b.kind === 'note') return `<p style="margin:0 0 16px;font-size:14px;color:#5b6660">${esc(b.text)}</p>`;
     if (b.kind === 'facts')
       return `<table role="presentation" style="border-collapse:collapse;margin:0 0 16px">${b.rows
-        .map(([k, v]) => `<tr><th scope="row" style="text-align:left;padding:4px 16px 4px 0;vertical-align:top">${esc(k)}</th><td style="padding:4px 0">${esc(v)}</td></tr>`)
+        .map(
+          ([k, v]) =>
+            `<tr><th scope="row" style="text-align:left;padding:4px 16px 4px 0;vertical-align:top">${esc(k)}</th><td style="padding:4px 0">${esc(v)}</td></tr>`,
+        )
         .join('')}</table>`;
     return `<p style="margin:0 0 16px"><a href="${esc(b.href)}" style="display:inline-block;background:#b4572b;color:#ffffff;padding:10px 18px;border-radius:8px;text-decoration:none;font-weight:bold">${esc(b.label)}</a></p>`;
   })
@@ -78,7 +83,10 @@ function workshopRows(workshop: WorkshopFacts | null | undefined): [string, stri
 /** Sent at registration: welcome, and the link that confirms the e-mail address. */
 export function welcomeEmail({ to, name, confirmUrl }: { to: string; name: string; confirmUrl: string }): OutgoingEmail {
   return compose('user.welcome', to, 'Welcome to Brinewright — please confirm your e-mail address', `Hello ${name},`, [
-    { kind: 'p', text: 'Your Brinewright account is ready. Lessons, calculators and quizzes are waiting in your Pantry, and workshop dates are listed on each course page.' },
+    {
+      kind: 'p',
+      text: 'Your Brinewright account is ready. Lessons, calculators and quizzes are waiting in your Pantry, and workshop dates are listed on each course page.',
+    },
     { kind: 'p', text: 'Please confirm that this address is yours, so that receipts, workshop reminders and your certificate reach you:' },
     { kind: 'button', label: 'Confirm my e-mail address', href: confirmUrl },
     { kind: 'note', text: 'If you did not create this account, you can ignore this message; nothing more will be sent.' },
@@ -115,7 +123,21 @@ export function enrollmentReceiptEmail({
 }
 
 /** Sent when the coordinator refunds a course fee. */
-export function refundEmail({ to, name, courseTitle, workshop, amountCents, currency }: { to: string; name: string; courseTitle: string; workshop: WorkshopFacts | null; amountCents: number; currency: string }): OutgoingEmail {
+export function refundEmail({
+  to,
+  name,
+  courseTitle,
+  workshop,
+  amountCents,
+  currency,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  workshop: WorkshopFacts | null;
+  amountCents: number;
+  currency: string;
+}): OutgoingEmail {
   return compose('payment.refunded', to, `Refund issued: ${courseTitle}`, `Hello ${name},`, [
     { kind: 'p', text: `We have refunded your course fee for ${courseTitle}, and your workshop seat has been released.` },
     { kind: 'facts', rows: [['Refunded', formatMoney(amountCents, currency)], ...workshopRows(workshop)] },
@@ -124,20 +146,68 @@ export function refundEmail({ to, name, courseTitle, workshop, amountCents, curr
 }
 
 /** Sent to every coordinator when a paid checkout's amount or currency differs from the enrollment's fee. */
-export function paymentMismatchEmail({ to, name, learnerEmail, courseTitle, enrollmentId, paidCents, paidCurrency, feeCents, feeCurrency, appUrl }: { to: string; name: string; learnerEmail: string; courseTitle: string; enrollmentId: number; paidCents: number; paidCurrency: string; feeCents: number; feeCurrency: string; appUrl: string }): OutgoingEmail {
+export function paymentMismatchEmail({
+  to,
+  name,
+  learnerEmail,
+  courseTitle,
+  enrollmentId,
+  paidCents,
+  paidCurrency,
+  feeCents,
+  feeCurrency,
+  appUrl,
+}: {
+  to: string;
+  name: string;
+  learnerEmail: string;
+  courseTitle: string;
+  enrollmentId: number;
+  paidCents: number;
+  paidCurrency: string;
+  feeCents: number;
+  feeCurrency: string;
+  appUrl: string;
+}): OutgoingEmail {
   return compose('payment.amount_mismatch', to, `Payment does not match the fee: enrollment ${enrollmentId}`, `Hello ${name},`, [
-    { kind: 'p', text: `A card payment for ${courseTitle} arrived with a different amount or currency than the enrollment's fee, so the enrollment was not activated. Check the payment with the provider, then refund it or settle the difference.` },
-    { kind: 'facts', rows: [['Learner', learnerEmail], ['Enrollment', String(enrollmentId)], ['Paid', formatMoney(paidCents, paidCurrency)], ['Fee', formatMoney(feeCents, feeCurrency)]] },
+    {
+      kind: 'p',
+      text: `A card payment for ${courseTitle} arrived with a different amount or currency than the enrollment's fee, so the enrollment was not activated. Check the payment with the provider, then refund it or settle the difference.`,
+    },
+    {
+      kind: 'facts',
+      rows: [
+        ['Learner', learnerEmail],
+        ['Enrollment', String(enrollmentId)],
+        ['Paid', formatMoney(paidCents, paidCurrency)],
+        ['Fee', formatMoney(feeCents, feeCurrency)],
+      ],
+    },
     { kind: 'button', label: 'Open the Certificate desk', href: `${trimUrl(appUrl)}/desk` },
   ]);
 }
 
 /** Sent a day before a workshop. */
-export function workshopReminderEmail({ to, name, courseTitle, workshop, appUrl }: { to: string; name: string; courseTitle: string; workshop: WorkshopFacts; appUrl: string }): OutgoingEmail {
+export function workshopReminderEmail({
+  to,
+  name,
+  courseTitle,
+  workshop,
+  appUrl,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  workshop: WorkshopFacts;
+  appUrl: string;
+}): OutgoingEmail {
   return compose('workshop.reminder', to, `Tomorrow: your ${courseTitle} workshop`, `Hello ${name},`, [
     { kind: 'p', text: 'This is a reminder that your hands-on workshop is tomorrow.' },
     { kind: 'facts', rows: workshopRows(workshop) },
-    { kind: 'p', text: 'Tie back long hair and bring an apron. If you live above 1,000 feet, note your altitude: the processing times you will practise depend on it.' },
+    {
+      kind: 'p',
+      text: 'Tie back long hair and bring an apron. If you live above 1,000 feet, note your altitude: the processing times you will practise depend on it.',
+    },
     { kind: 'button', label: 'Review the lessons', href: `${trimUrl(appUrl)}/pantry` },
   ]);
 }
@@ -165,17 +235,23 @@ export function practicalReviewedEmail({
     const r = review.rubric[id];
     return [label, `${r.verdict === 'met' ? 'met' : 'not met'}${r.comment ? ` (${r.comment})` : ''}`];
   });
-  return compose('practical.reviewed', to, approved ? `Your practical batch is approved — ${courseTitle}` : `Your practical batch needs changes — ${courseTitle}`, `Hello ${name},`, [
-    {
-      kind: 'p',
-      text: approved
-        ? `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and approved it.`
-        : `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and asks for changes before it can be approved.`,
-    },
-    ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'What to change'}: ${review.comment}` }] : []),
-    { kind: 'facts', rows: rubric },
-    { kind: 'button', label: approved ? 'See the review' : 'See the review and submit a new round', href: url },
-  ]);
+  return compose(
+    'practical.reviewed',
+    to,
+    approved ? `Your practical batch is approved — ${courseTitle}` : `Your practical batch needs changes — ${courseTitle}`,
+    `Hello ${name},`,
+    [
+      {
+        kind: 'p',
+        text: approved
+          ? `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and approved it.`
+          : `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and asks for changes before it can be approved.`,
+      },
+      ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'What to change'}: ${review.comment}` }] : []),
+      { kind: 'facts', rows: rubric },
+      { kind: 'button', label: approved ? 'See the review' : 'See the review and submit a new round', href: url },
+    ],
+  );
 }
 
 /** Sent when a certificate is issued (hook for the certificates feature); the PDF may be attached. */
@@ -204,7 +280,13 @@ export function certificateIssuedEmail({
     `Hello ${name},`,
     [
       { kind: 'p', text: `Congratulations — you have completed ${courseTitle}, and the program coordinator has issued your certificate.` },
-      { kind: 'facts', rows: [['Serial', serial], ['Valid until', until]] },
+      {
+        kind: 'facts',
+        rows: [
+          ['Serial', serial],
+          ['Valid until', until],
+        ],
+      },
       { kind: 'p', text: 'Anyone can check the certificate by its serial on the verification page:' },
       { kind: 'button', label: 'Verify the certificate', href: verifyUrl },
     ],
@@ -213,7 +295,19 @@ export function certificateIssuedEmail({
 }
 
 /** Sent to the holder when the coordinator revokes a certificate, with the reason given. */
-export function certificateRevokedEmail({ to, name, courseTitle, serial, reason }: { to: string; name: string; courseTitle: string; serial: string; reason: string }): OutgoingEmail {
+export function certificateRevokedEmail({
+  to,
+  name,
+  courseTitle,
+  serial,
+  reason,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  serial: string;
+  reason: string;
+}): OutgoingEmail {
   return compose('certificate.revoked', to, `Certificate revoked: ${courseTitle}`, `Hello ${name},`, [
     { kind: 'p', text: `Your certificate ${serial} for ${courseTitle} has been revoked.` },
     { kind: 'facts', rows: [['Reason given', reason]] },
@@ -222,9 +316,24 @@ export function certificateRevokedEmail({ to, name, courseTitle, serial, reason 
 }
 
 /** Sent to a certificate holder when a course's "what changed" record publishes new entries. */
-export function courseChangesEmail({ to, name, courseTitle, changes, changesUrl }: { to: string; name: string; courseTitle: string; changes: { date: string; summary: string; source: string }[]; changesUrl: string }): OutgoingEmail {
+export function courseChangesEmail({
+  to,
+  name,
+  courseTitle,
+  changes,
+  changesUrl,
+}: {
+  to: string;
+  name: string;
+  courseTitle: string;
+  changes: { date: string; summary: string; source: string }[];
+  changesUrl: string;
+}): OutgoingEmail {
   return compose('course.changes', to, `What changed in ${courseTitle}`, `Hello ${name},`, [
-    { kind: 'p', text: `You hold a certificate for ${courseTitle}. ${changes.length === 1 ? 'One change to its safety figures or advice has' : `${changes.length} changes to its safety figures or advice have`} been published, so that volunteers teach from the current figures:` },
+    {
+      kind: 'p',
+      text: `You hold a certificate for ${courseTitle}. ${changes.length === 1 ? 'One change to its safety figures or advice has' : `${changes.length} changes to its safety figures or advice have`} been published, so that volunteers teach from the current figures:`,
+    },
     ...changes.map((c): Block => ({ kind: 'note', text: `${c.date}: ${c.summary} (Source: ${c.source})` })),
     { kind: 'button', label: 'Read what changed', href: changesUrl },
   ]);

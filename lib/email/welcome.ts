@@ -10,7 +10,12 @@ const CONFIRM_DAYS = 7;
 /** The address a learner opens to confirm their e-mail address (valid for a week). */
 export function confirmUrlFor(user: { id: number; email: string }, now = new Date()): string {
   const env = getEnv();
-  const token = confirmationToken({ userId: user.id, email: user.email, secret: env.NEXTAUTH_SECRET, expiresAt: new Date(now.getTime() + CONFIRM_DAYS * 86_400_000) });
+  const token = confirmationToken({
+    userId: user.id,
+    email: user.email,
+    secret: env.NEXTAUTH_SECRET,
+    expiresAt: new Date(now.getTime() + CONFIRM_DAYS * 86_400_000),
+  });
   return `${env.APP_URL.replace(/\/$/, '')}/confirm-email?token=${encodeURIComponent(token)}`;
 }
 

@@ -21,7 +21,16 @@ export async function saveWorkshop({ id, values, actorId }: { id?: number; value
     if (!instructor || !roleAllows(instructor.role, ['instructor'])) throw fieldError('instructorId', 'Choose someone with the instructor role.');
   }
   return sequelize.transaction(async (transaction) => {
-    const fields = { courseId: values.courseId, instructorId: values.instructorId, startsAt, endsAt, timeZone: values.timeZone, place: values.place, seats: values.seats, attendanceRequired: values.attendanceRequired };
+    const fields = {
+      courseId: values.courseId,
+      instructorId: values.instructorId,
+      startsAt,
+      endsAt,
+      timeZone: values.timeZone,
+      place: values.place,
+      seats: values.seats,
+      attendanceRequired: values.attendanceRequired,
+    };
     if (!id) {
       if (startsAt.getTime() <= Date.now()) throw fieldError('date', 'A new workshop must start in the future.');
       const created = await Workshop.create(fields, { transaction });
@@ -47,12 +56,23 @@ export async function markAttendance({ enrollmentId, attended, actor }: { enroll
     const enrollment = await Enrollment.findByPk(enrollmentId, { transaction, lock: transaction.LOCK.UPDATE });
     const workshop = enrollment?.workshopId ? await Workshop.findByPk(enrollment.workshopId, { transaction }) : null;
     if (!enrollment || !workshop) throw new AppError('not_found', 'That enrollment is not in a workshop.');
-    if (workshop.instructorId !== actor.id && !roleAllows(actor.role, ['coordinator'])) throw new AppError('forbidden', 'Only the workshop’s instructor or a coordinator marks attendance.');
+    if (workshop.instructorId !== actor.id && !roleAllows(actor.role, ['coordinator']))
+      throw new AppError('forbidden', 'Only the workshop’s instructor or a coordinator marks attendance.');
     if (enrollment.status !== 'active' && enrollment.status !== 'completed') throw new AppError('conflict', 'Attendance is kept only for enrolled learners.');
-    if (attended && workshop.startsAt.getTime() > Date.now() + 12 * 3600_000) throw new AppError('conflict', 'Attendance can be marked from the day of the workshop.');
+    if (attended && workshop.startsAt.getTime() > Date.now() + 12 * 3600_000)
+      throw new AppError('conflict', 'Attendance can be marked from the day of the workshop.');
     const attendedAt = attended ? (enrollment.attendedAt ?? new Date()) : null;
     await enrollment.update({ attendedAt }, { transaction });
-    await audit({ actorId: actor.id, action: attended ? 'enrollment.attended' : 'enrollment.attendance_cleared', subjectType: 'enrollment', subjectId: enrollment.id, data: { workshopId: workshop.id } }, { transaction });
+    await audit(
+      {
+        actorId: actor.id,
+        action: attended ? 'enrollment.attended' : 'enrollment.attendance_cleared',
+        subjectType: 'enrollment',
+        subjectId: enrollment.id,
+        data: { workshopId: workshop.id },
+      },
+      { transaction },
+    );
     return attendedAt;
   });
 }

@@ -12,9 +12,7 @@ import { auditCreated, transitionEnrollment } from './state';
 import { SEAT_HOLDING_STATUSES } from './transitions';
 import { checkWaiverCode, redeemWaiver } from './waivers';
 
-export type EnrollResult =
-  | { outcome: 'checkout'; enrollmentId: number; url: string }
-  | { outcome: 'active'; enrollmentId: number; url: string };
+export type EnrollResult = { outcome: 'checkout'; enrollmentId: number; url: string } | { outcome: 'active'; enrollmentId: number; url: string };
 
 export class WorkshopFullError extends AppError {
   constructor() {
@@ -39,7 +37,17 @@ async function countHolders(workshopId: number, transaction: Transaction): Promi
  * With a valid waiver code (or a free course) the enrollment is active at once; otherwise it awaits
  * payment and the answer carries the checkout page's address.
  */
-export async function enrollInWorkshop({ user, workshopId, waiverCode, address }: { user: SessionUser; workshopId: number; waiverCode?: string | null; address: string }): Promise<EnrollResult> {
+export async function enrollInWorkshop({
+  user,
+  workshopId,
+  waiverCode,
+  address,
+}: {
+  user: SessionUser;
+  workshopId: number;
+  waiverCode?: string | null;
+  address: string;
+}): Promise<EnrollResult> {
   const { Workshop, Course, Enrollment, User, sequelize } = db();
   const appUrl = getEnv().APP_URL.replace(/\/$/, '');
   const superseded: number[] = [];
@@ -66,7 +74,9 @@ export async function enrollInWorkshop({ user, workshopId, waiverCode, address }
     });
     for (const e of mine) {
       if (e.status !== 'awaiting_payment') {
-        throw new AppError('conflict', e.status === 'completed' ? 'You have already completed this course.' : 'You are already enrolled in this course.', { extra: { reason: 'enrolled', enrollmentId: e.id } });
+        throw new AppError('conflict', e.status === 'completed' ? 'You have already completed this course.' : 'You are already enrolled in this course.', {
+          extra: { reason: 'enrolled', enrollmentId: e.id },
+        });
       }
       if (e.workshopId === workshop.id && !waiverCode) return { kind: 'resume' as const, enrollment: e, course, workshop };
       // Changing workshop (or switching to a waiver): the unpaid place elsewhere is given up.
@@ -82,15 +92,45 @@ export async function enrollInWorkshop({ user, workshopId, waiverCode, address }
     if (!content) throw new AppError('conflict', 'This course is no longer offered.');
     const fee = content.feeCents;
     const enrollment = await Enrollment.create(
-      { userId: user.id, courseId: course.id, workshopId: workshop.id, runKey: String(workshop.id), status: 'awaiting_payment', feeCents: waiver ? 0 : fee, feeWaiverId: waiver?.id ?? null, contentVersion: content.version },
+      {
+        userId: user.id,
+        courseId: course.id,
+        workshopId: workshop.id,
+        runKey: String(workshop.id),
+        status: 'awaiting_payment',
+        feeCents: waiver ? 0 : fee,
+        feeWaiverId: waiver?.id ?? null,
+        contentVersion: content.version,
+      },
       { transaction },
     );
-    await auditCreated(enrollment, { transaction, actorId: user.id, data: { workshopId: workshop.id, feeCents: enrollment.feeCents, waiverId: waiver?.id ?? null } });
+    await auditCreated(enrollment, {
+      transaction,
+      actorId: user.id,
+      data: { workshopId: workshop.id, feeCents: enrollment.feeCents, waiverId: waiver?.id ?? null },
+    });
 
     if (waiver || fee === 0) {
-      await transitionEnrollment(enrollment, 'active', { transaction, actorId: user.id, reason: waiver ? 'waiver' : 'free', data: waiver ? { waiverCode: waiver.code } : undefined });
+      await transitionEnrollment(enrollment, 'active', {
+        transaction,
+        actorId: user.id,
+        reason: waiver ? 'waiver' : 'free',
+        data: waiver ? { waiverCode: waiver.code } : undefined,
+      });
       const learner = (await User.findByPk(user.id, { transaction }))!;
-      await enqueueEmail(enrollmentReceiptEmail({ to: learner.email, name: learner.name, courseTitle: course.title, workshop, amountCents: 0, currency: course.currency, waived: Boolean(waiver), appUrl }), { transaction });
+      await enqueueEmail(
+        enrollmentReceiptEmail({
+          to: learner.email,
+          name: learner.name,
+          courseTitle: course.title,
+          workshop,
+          amountCents: 0,
+          currency: course.currency,
+          waived: Boolean(waiver),
+          appUrl,
+        }),
+        { transaction },
+      );
       return { kind: 'active' as const, enrollment, course, workshop };
     }
     return { kind: 'checkout' as const, enrollment, course, workshop };
@@ -98,13 +138,24 @@ export async function enrollInWorkshop({ user, workshopId, waiverCode, address }
 
   for (const id of superseded) void expireCheckoutQuietly(id);
 
-  if (step.kind === 'active') return { outcome: 'active', enrollmentId: step.enrollment.id, url: `${appUrl}/checkout/success?enrollment=${step.enrollment.id}` };
+  if (step.kind === 'active')
+    return { outcome: 'active', enrollmentId: step.enrollment.id, url: `${appUrl}/checkout/success?enrollment=${step.enrollment.id}` };
   const url = await checkoutOrRelease({ enrollment: step.enrollment, course: step.course, workshop: step.workshop, user });
   return { outcome: 'checkout', enrollmentId: step.enrollment.id, url };
 }
 
 /** Creates (or reuses) the checkout session; when the payment service cannot be reached, the seat is released. */
-async function checkoutOrRelease({ enrollment, course, workshop, user }: { enrollment: Enrollment; course: Course; workshop: Workshop; user: SessionUser }): Promise<string> {
+async function checkoutOrRelease({
+  enrollment,
+  course,
+  workshop,
+  user,
+}: {
+  enrollment: Enrollment;
+  course: Course;
+  workshop: Workshop;
+  user: SessionUser;
+}): Promise<string> {
   try {
     return await createCheckoutForEnrollment({ enrollment, course, workshop, email: user.email });
   } catch (error) {
@@ -113,9 +164,14 @@ async function checkoutOrRelease({ enrollment, course, workshop, user }: { enrol
     // Only a fresh enrollment without any session is given up; one with a session waits for its webhook.
     const sessions = await Payment.count({ where: { enrollmentId: enrollment.id } });
     if (sessions === 0) {
-      await sequelize.transaction((transaction) => transitionEnrollment(enrollment.id, 'withdrawn', { transaction, actorId: user.id, reason: 'checkout-unavailable' })).catch(() => undefined);
+      await sequelize
+        .transaction((transaction) => transitionEnrollment(enrollment.id, 'withdrawn', { transaction, actorId: user.id, reason: 'checkout-unavailable' }))
+        .catch(() => undefined);
       throw new AppError('unavailable', 'Card payments are not available right now, so your seat was not kept. Please try again in a few minutes.');
     }
-    throw new AppError('unavailable', 'Card payments are not available right now. Your seat is held while your checkout is open; please try again in a few minutes.');
+    throw new AppError(
+      'unavailable',
+      'Card payments are not available right now. Your seat is held while your checkout is open; please try again in a few minutes.',
+    );
   }
 }

@@ -6,7 +6,9 @@ export function formatWorkshopDate(iso: string, timeZone: string): string {
 /** "9:00 AM – 2:00 PM MST" in the workshop's own time zone. */
 export function formatWorkshopTimes(startIso: string, endIso: string, timeZone: string): string {
   const time = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '2-digit', timeZone });
-  const zone = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' }).formatToParts(new Date(startIso)).find((p) => p.type === 'timeZoneName')?.value;
+  const zone = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' })
+    .formatToParts(new Date(startIso))
+    .find((p) => p.type === 'timeZoneName')?.value;
   return `${time.format(new Date(startIso))} – ${time.format(new Date(endIso))}${zone ? ` ${zone}` : ''}`;
 }
 

@@ -33,7 +33,9 @@ export async function fetchEnrollmentStatus({ id }: { id: number }): Promise<Enr
     courseTitle: course!.title,
     feeCents: e.feeCents,
     waived: e.feeWaiverId !== null,
-    workshop: workshop ? { startsAt: workshop.startsAt.toISOString(), endsAt: workshop.endsAt.toISOString(), timeZone: workshop.timeZone, place: workshop.place } : null,
+    workshop: workshop
+      ? { startsAt: workshop.startsAt.toISOString(), endsAt: workshop.endsAt.toISOString(), timeZone: workshop.timeZone, place: workshop.place }
+      : null,
     payment: payment ? { status: payment.status, amountCents: payment.amountCents, currency: payment.currency } : null,
   };
 }
@@ -99,7 +101,11 @@ export async function fetchCourseOptions(): Promise<{ id: number; title: string;
 }
 
 export async function fetchInstructorOptions(): Promise<{ id: number; name: string }[]> {
-  const users = await db().User.findAll({ where: { role: { [Op.in]: ['instructor', 'coordinator', 'admin'] } }, order: [['name', 'ASC']], attributes: ['id', 'name'] });
+  const users = await db().User.findAll({
+    where: { role: { [Op.in]: ['instructor', 'coordinator', 'admin'] } },
+    order: [['name', 'ASC']],
+    attributes: ['id', 'name'],
+  });
   return users.map((u) => ({ id: u.id, name: u.name }));
 }
 
@@ -155,7 +161,17 @@ export async function fetchPaymentsForDesk({ limit = 200 }: { limit?: number } =
     limit,
   });
   return rows.map((p) => {
-    const e = (p as unknown as { enrollment: { id: number; status: string; user: { name: string; email: string }; course: { title: string }; workshop: { startsAt: Date; timeZone: string } | null } }).enrollment;
+    const e = (
+      p as unknown as {
+        enrollment: {
+          id: number;
+          status: string;
+          user: { name: string; email: string };
+          course: { title: string };
+          workshop: { startsAt: Date; timeZone: string } | null;
+        };
+      }
+    ).enrollment;
     return {
       paymentId: p.id,
       enrollmentId: e.id,
@@ -175,7 +191,16 @@ export async function fetchPaymentsForDesk({ limit = 200 }: { limit?: number } =
   });
 }
 
-export type WaiverRow = { id: number; code: string; courseTitle: string | null; maxUses: number; uses: number; expiresAt: string; note: string | null; expired: boolean };
+export type WaiverRow = {
+  id: number;
+  code: string;
+  courseTitle: string | null;
+  maxUses: number;
+  uses: number;
+  expiresAt: string;
+  note: string | null;
+  expired: boolean;
+};
 
 export async function fetchWaivers(): Promise<WaiverRow[]> {
   const { FeeWaiver, Course } = db();

@@ -10,7 +10,10 @@ export { ENROLLMENT_STATUSES, type EnrollmentStatus };
 export { TRANSITIONS, SEAT_HOLDING_STATUSES, canTransition, holdsSeat } from './transitions';
 
 export class TransitionError extends AppError {
-  constructor(readonly from: EnrollmentStatus, readonly to: EnrollmentStatus) {
+  constructor(
+    readonly from: EnrollmentStatus,
+    readonly to: EnrollmentStatus,
+  ) {
     super('conflict', `An enrollment that is ${from.replace('_', ' ')} cannot become ${to.replace('_', ' ')}.`, { extra: { from, to } });
     this.name = 'TransitionError';
   }
@@ -57,7 +60,13 @@ export async function transitionEnrollment(enrollmentOrId: Enrollment | number, 
 /** Records a new enrollment (always awaiting payment) in the audit log; used by enroll(). */
 export async function auditCreated(enrollment: Enrollment, options: Omit<TransitionOptions, 'reason'> & { reason?: string }): Promise<void> {
   await audit(
-    { actorId: options.actorId, action: 'enrollment.created', subjectType: 'enrollment', subjectId: enrollment.id, data: { to: enrollment.status, reason: options.reason ?? 'enroll', ...(options.data ?? {}) } },
+    {
+      actorId: options.actorId,
+      action: 'enrollment.created',
+      subjectType: 'enrollment',
+      subjectId: enrollment.id,
+      data: { to: enrollment.status, reason: options.reason ?? 'enroll', ...(options.data ?? {}) },
+    },
     { transaction: options.transaction },
   );
 }

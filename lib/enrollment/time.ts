@@ -4,7 +4,15 @@ type Parts = { year: number; month: number; day: number; hour: number; minute: n
 
 /** The wall-clock date and time an instant shows in a time zone. */
 export function zonedParts(instant: Date, timeZone: string): Parts {
-  const fmt = new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit' });
+  const fmt = new Intl.DateTimeFormat('en-US', {
+    timeZone,
+    hourCycle: 'h23',
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+    hour: '2-digit',
+    minute: '2-digit',
+  });
   const get = (type: string) => Number(fmt.formatToParts(instant).find((p) => p.type === type)?.value);
   return { year: get('year'), month: get('month'), day: get('day'), hour: get('hour') % 24, minute: get('minute') };
 }

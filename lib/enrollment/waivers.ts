@@ -14,14 +14,29 @@ export const WAIVER_REFUSED = 'That waiver code cannot be used for this course. 
 const refused = () => new AppError('bad_request', WAIVER_REFUSED, { fields: { waiverCode: [WAIVER_REFUSED] } });
 
 const usable = (waiver: FeeWaiver | null, courseId: number, now: Date): waiver is FeeWaiver =>
-  Boolean(waiver) && waiver!.expiresAt.getTime() > now.getTime() && (waiver!.courseId === null || waiver!.courseId === courseId) && waiver!.uses < waiver!.maxUses;
+  Boolean(waiver) &&
+  waiver!.expiresAt.getTime() > now.getTime() &&
+  (waiver!.courseId === null || waiver!.courseId === courseId) &&
+  waiver!.uses < waiver!.maxUses;
 
 /**
  * Checks a typed code before any row is locked: the attempt is counted per account and per client
  * address first (WAIVER_MAX_PER_ACCOUNT / WAIVER_MAX_PER_ADDRESS per WAIVER_WINDOW_MINUTES, 429
  * past either), a usable code takes its attempt back, so only wrong codes add up. Returns its id.
  */
-export async function checkWaiverCode({ code, courseId, userId, address, now = new Date() }: { code: string; courseId: number; userId: number; address: string; now?: Date }): Promise<number> {
+export async function checkWaiverCode({
+  code,
+  courseId,
+  userId,
+  address,
+  now = new Date(),
+}: {
+  code: string;
+  courseId: number;
+  userId: number;
+  address: string;
+  now?: Date;
+}): Promise<number> {
   const env = getEnv();
   const windowSeconds = env.WAIVER_WINDOW_MINUTES * 60;
   const limits = [
@@ -39,7 +54,17 @@ export async function checkWaiverCode({ code, courseId, userId, address, now = n
  * Uses one redemption of a checked waiver inside the caller's transaction. The waiver row is locked
  * and checked again, so two learners using the last remaining use cannot both get it.
  */
-export async function redeemWaiver({ waiverId, courseId, transaction, now = new Date() }: { waiverId: number; courseId: number; transaction: Transaction; now?: Date }): Promise<FeeWaiver> {
+export async function redeemWaiver({
+  waiverId,
+  courseId,
+  transaction,
+  now = new Date(),
+}: {
+  waiverId: number;
+  courseId: number;
+  transaction: Transaction;
+  now?: Date;
+}): Promise<FeeWaiver> {
   const waiver = await db().FeeWaiver.findByPk(waiverId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!usable(waiver, courseId, now)) throw refused();
   await waiver.increment('uses', { by: 1, transaction });
@@ -61,15 +86,29 @@ export function generateWaiverCode(): string {
 export async function createWaiver(input: z.output<typeof WaiverSchema>, actorId: number): Promise<FeeWaiver> {
   const { FeeWaiver, sequelize } = db();
   const expiresAt = new Date(`${input.expiresOn}T23:59:59.000Z`);
-  if (expiresAt.getTime() <= Date.now()) throw new AppError('bad_request', 'The last day must be today or later.', { fields: { expiresOn: ['The last day must be today or later.'] } });
+  if (expiresAt.getTime() <= Date.now())
+    throw new AppError('bad_request', 'The last day must be today or later.', { fields: { expiresOn: ['The last day must be today or later.'] } });
   try {
     return await sequelize.transaction(async (transaction) => {
-      const waiver = await FeeWaiver.create({ code: input.code ?? generateWaiverCode(), courseId: input.courseId, createdById: actorId, maxUses: input.maxUses, expiresAt, note: input.note }, { transaction });
-      await audit({ actorId, action: 'waiver.created', subjectType: 'fee_waiver', subjectId: waiver.id, data: { code: waiver.code, maxUses: waiver.maxUses, courseId: waiver.courseId } }, { transaction });
+      const waiver = await FeeWaiver.create(
+        { code: input.code ?? generateWaiverCode(), courseId: input.courseId, createdById: actorId, maxUses: input.maxUses, expiresAt, note: input.note },
+        { transaction },
+      );
+      await audit(
+        {
+          actorId,
+          action: 'waiver.created',
+          subjectType: 'fee_waiver',
+          subjectId: waiver.id,
+          data: { code: waiver.code, maxUses: waiver.maxUses, courseId: waiver.courseId },
+        },
+        { transaction },
+      );
       return waiver;
     });
   } catch (error) {
-    if (error instanceof UniqueConstraintError) throw new AppError('conflict', 'That code already exists; choose another.', { fields: { code: ['That code already exists.'] } });
+    if (error instanceof UniqueConstraintError)
+      throw new AppError('conflict', 'That code already exists; choose another.', { fields: { code: ['That code already exists.'] } });
     throw error;
   }
 }

@@ -31,7 +31,15 @@ export async function seatsTaken(workshopIds: number[], transaction?: Transactio
 }
 
 /** Upcoming workshops of a course (those that have not started), soonest first; null when the course is unknown. */
-export async function fetchUpcomingWorkshops({ courseSlug, userId, now = new Date() }: { courseSlug: string; userId?: number | null; now?: Date }): Promise<PublicWorkshop[] | null> {
+export async function fetchUpcomingWorkshops({
+  courseSlug,
+  userId,
+  now = new Date(),
+}: {
+  courseSlug: string;
+  userId?: number | null;
+  now?: Date;
+}): Promise<PublicWorkshop[] | null> {
   const { Course, Workshop, User, Enrollment } = db();
   const course = await Course.findOne({ where: { slug: courseSlug }, attributes: ['id', 'slug'] });
   if (!course) return null;
@@ -44,7 +52,11 @@ export async function fetchUpcomingWorkshops({ courseSlug, userId, now = new Dat
   const taken = await seatsTaken(ids);
   const mine = new Map<number, string>();
   if (userId && ids.length) {
-    const own = await Enrollment.findAll({ where: { userId, workshopId: { [Op.in]: ids } }, attributes: ['workshopId', 'status'], order: [['updatedAt', 'ASC']] });
+    const own = await Enrollment.findAll({
+      where: { userId, workshopId: { [Op.in]: ids } },
+      attributes: ['workshopId', 'status'],
+      order: [['updatedAt', 'ASC']],
+    });
     for (const e of own) if (e.workshopId) mine.set(e.workshopId, e.status);
   }
   return workshops.map((w) => {

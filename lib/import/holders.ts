@@ -46,7 +46,12 @@ export function parseHolderFile(input: string): Parsed[] {
   const missing = REQUIRED_HOLDER_COLUMNS.filter((c) => !header.includes(c));
   const unknown = header.filter((c) => !(HOLDER_COLUMNS as readonly string[]).includes(c));
   if (missing.length || unknown.length) {
-    throw new AppError('bad_request', [missing.length ? `missing column(s): ${missing.join(', ')}` : '', unknown.length ? `unknown column(s): ${unknown.join(', ')}` : ''].filter(Boolean).join('; ') + `. The first line must name the columns ${HOLDER_COLUMNS.join(', ')} (old_serial may be left out).`);
+    throw new AppError(
+      'bad_request',
+      [missing.length ? `missing column(s): ${missing.join(', ')}` : '', unknown.length ? `unknown column(s): ${unknown.join(', ')}` : '']
+        .filter(Boolean)
+        .join('; ') + `. The first line must name the columns ${HOLDER_COLUMNS.join(', ')} (old_serial may be left out).`,
+    );
   }
   return rows.map((r) => ({ line: r.info.lines, raw: r.record }));
 }
@@ -56,7 +61,8 @@ type Planned = PreviewLine & { data?: HolderLine; courseId?: number; courseTitle
 /** Decides each line against the database: create, skip as a duplicate, or refuse with the reason. */
 async function plan(parsed: Parsed[], transaction?: Transaction): Promise<Planned[]> {
   const { sequelize } = db();
-  const q = <T extends object>(sql: string, replacements: Record<string, unknown>) => sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction });
+  const q = <T extends object>(sql: string, replacements: Record<string, unknown>) =>
+    sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction });
   const courses = await q<{ id: number; slug: string; title: string }>('SELECT id, slug, title FROM courses', {});
   const checked = parsed.map((p) => ({ ...p, result: HolderLineSchema.safeParse(p.raw) }));
   const emails = [...new Set(checked.flatMap((c) => (c.result.success ? [c.result.data.email] : [])))];
@@ -69,41 +75,69 @@ async function plan(parsed: Parsed[], transaction?: Transaction): Promise<Planne
       )
     : [];
   const legacy = checked.flatMap((c) => (c.result.success && c.result.data.old_serial ? [c.result.data.old_serial] : []));
-  const takenLegacy = new Set(legacy.length ? (await q<{ legacySerial: string }>('SELECT legacySerial FROM certificates WHERE legacySerial IN (:legacy)', { legacy })).map((r) => r.legacySerial) : []);
+  const takenLegacy = new Set(
+    legacy.length
+      ? (await q<{ legacySerial: string }>('SELECT legacySerial FROM certificates WHERE legacySerial IN (:legacy)', { legacy })).map((r) => r.legacySerial)
+      : [],
+  );
 
   const seen = new Map<string, number>();
   const newAccounts = new Set<string>();
   const seenLegacy = new Map<string, number>();
   return checked.map(({ line, raw, result }) => {
     const shown = { line, name: String(raw.name ?? ''), email: String(raw.email ?? ''), course: String(raw.course ?? ''), newAccount: false };
-    if (!result.success) return { ...shown, outcome: 'refuse', reason: result.error.issues.map((i) => (i.message.includes(':') ? i.message : `${i.path.join('.')}: ${i.message}`)).join('; ') };
+    if (!result.success)
+      return {
+        ...shown,
+        outcome: 'refuse',
+        reason: result.error.issues.map((i) => (i.message.includes(':') ? i.message : `${i.path.join('.')}: ${i.message}`)).join('; '),
+      };
     const data = result.data;
     const course = courses.find((c) => c.slug === data.course);
-    if (!course) return { ...shown, outcome: 'refuse', reason: `course: no course "${data.course}" (the courses are ${courses.map((c) => c.slug).join(', ')})` };
+    if (!course)
+      return { ...shown, outcome: 'refuse', reason: `course: no course "${data.course}" (the courses are ${courses.map((c) => c.slug).join(', ')})` };
     const key = `${data.email} ${data.course}`;
     if (seen.has(key)) return { ...shown, outcome: 'skip', reason: `duplicate of line ${seen.get(key)} (same e-mail and course)` };
     seen.set(key, line);
     const user = users.find((u) => u.email === data.email);
     const existing = user ? held.find((h) => Number(h.userId) === Number(user.id) && Number(h.courseId) === course.id) : undefined;
     if (existing) {
-      const sameImport = existing.importedAt && new Date(existing.issuedAt).toISOString().slice(0, 10) === data.certificate_date && (existing.legacySerial ?? null) === data.old_serial;
+      const sameImport =
+        existing.importedAt &&
+        new Date(existing.issuedAt).toISOString().slice(0, 10) === data.certificate_date &&
+        (existing.legacySerial ?? null) === data.old_serial;
       if (sameImport) return { ...shown, outcome: 'skip', reason: `already imported (serial ${existing.serial})` };
       return { ...shown, outcome: 'refuse', reason: `${data.email} already holds a certificate for ${data.course} (serial ${existing.serial})` };
     }
     if (data.old_serial) {
-      if (takenLegacy.has(data.old_serial)) return { ...shown, outcome: 'refuse', reason: `old_serial ${data.old_serial} already belongs to another certificate` };
-      if (seenLegacy.has(data.old_serial)) return { ...shown, outcome: 'refuse', reason: `old_serial ${data.old_serial} is also on line ${seenLegacy.get(data.old_serial)}` };
+      if (takenLegacy.has(data.old_serial))
+        return { ...shown, outcome: 'refuse', reason: `old_serial ${data.old_serial} already belongs to another certificate` };
+      if (seenLegacy.has(data.old_serial))
+        return { ...shown, outcome: 'refuse', reason: `old_serial ${data.old_serial} is also on line ${seenLegacy.get(data.old_serial)}` };
       seenLegacy.set(data.old_serial, line);
     }
     const newAccount = !user && !newAccounts.has(data.email);
     if (!user) newAccounts.add(data.email);
-    return { ...shown, outcome: 'create', reason: null, newAccount, data, courseId: course.id, courseTitle: course.title, userId: user ? Number(user.id) : null };
+    return {
+      ...shown,
+      outcome: 'create',
+      reason: null,
+      newAccount,
+      data,
+      courseId: course.id,
+      courseTitle: course.title,
+      userId: user ? Number(user.id) : null,
+    };
   });
 }
 
 const summarize = (lines: Planned[]): ImportPreview => ({
   lines: lines.map(({ line, outcome, reason, name, email, course, newAccount }) => ({ line, outcome, reason, name, email, course, newAccount })),
-  counts: { create: lines.filter((l) => l.outcome === 'create').length, skip: lines.filter((l) => l.outcome === 'skip').length, refuse: lines.filter((l) => l.outcome === 'refuse').length },
+  counts: {
+    create: lines.filter((l) => l.outcome === 'create').length,
+    skip: lines.filter((l) => l.outcome === 'skip').length,
+    refuse: lines.filter((l) => l.outcome === 'refuse').length,
+  },
 });
 
 /** What an import of the file would do, line by line; writes nothing. */
@@ -126,24 +160,55 @@ export async function importHolders(text: string, actorId: number): Promise<Impo
     await sequelize.query('SELECT id FROM courses FOR UPDATE', { transaction });
     const lines = await plan(parsed, transaction);
     const preview = summarize(lines);
-    if (preview.counts.refuse > 0) throw new AppError('unprocessable', `Nothing was imported: ${preview.counts.refuse} line(s) are refused. Correct them and upload the file again.`, { extra: { preview } });
+    if (preview.counts.refuse > 0)
+      throw new AppError('unprocessable', `Nothing was imported: ${preview.counts.refuse} line(s) are refused. Correct them and upload the file again.`, {
+        extra: { preview },
+      });
     const program = await programName(transaction);
     const now = new Date();
     const created = new Map<string, number>();
     for (const l of lines) {
       if (l.outcome !== 'create' || !l.data) continue;
       const d = l.data;
-      const userId = l.userId ?? created.get(d.email) ?? (await User.create({ email: d.email, name: d.name, role: 'learner', passwordHash: unusable, emailVerifiedAt: null }, { transaction })).id;
+      const userId =
+        l.userId ??
+        created.get(d.email) ??
+        (await User.create({ email: d.email, name: d.name, role: 'learner', passwordHash: unusable, emailVerifiedAt: null }, { transaction })).id;
       created.set(d.email, userId);
       const issuedAt = new Date(`${d.certificate_date}T12:00:00Z`);
-      const enrollment = await Enrollment.create({ userId, courseId: l.courseId!, workshopId: null, runKey: 'imported', status: 'completed', feeCents: 0, completedAt: issuedAt }, { transaction });
-      const certificate = await Certificate.create(
-        { enrollmentId: enrollment.id, userId, issuedById: actorId, serial: generateSerial(), issuedAt, validUntil: new Date(`${d.end_date}T12:00:00Z`), holderName: d.name, courseTitle: l.courseTitle!, programName: program, signerName: null, signerTitle: null, legacySerial: d.old_serial, importedAt: now },
+      const enrollment = await Enrollment.create(
+        { userId, courseId: l.courseId!, workshopId: null, runKey: 'imported', status: 'completed', feeCents: 0, completedAt: issuedAt },
         { transaction },
       );
-      await audit({ actorId, action: 'certificate.imported', subjectType: 'certificate', subjectId: certificate.id, data: { line: l.line, legacySerial: d.old_serial, serial: certificate.serial, newAccount: l.newAccount } }, { transaction });
+      const certificate = await Certificate.create(
+        {
+          enrollmentId: enrollment.id,
+          userId,
+          issuedById: actorId,
+          serial: generateSerial(),
+          issuedAt,
+          validUntil: new Date(`${d.end_date}T12:00:00Z`),
+          holderName: d.name,
+          courseTitle: l.courseTitle!,
+          programName: program,
+          signerName: null,
+          signerTitle: null,
+          legacySerial: d.old_serial,
+          importedAt: now,
+        },
+        { transaction },
+      );
+      await audit(
+        {
+          actorId,
+          action: 'certificate.imported',
+          subjectType: 'certificate',
+          subjectId: certificate.id,
+          data: { line: l.line, legacySerial: d.old_serial, serial: certificate.serial, newAccount: l.newAccount },
+        },
+        { transaction },
+      );
     }
     return preview;
   });
 }
-

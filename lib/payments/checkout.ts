@@ -10,7 +10,17 @@ import { stripe } from './stripe';
  * otherwise a new session (one per enrollment attempt, with an idempotency key so a retried request
  * never makes two).
  */
-export async function createCheckoutForEnrollment({ enrollment, course, workshop, email }: { enrollment: Enrollment; course: Course; workshop: Workshop; email: string }): Promise<string> {
+export async function createCheckoutForEnrollment({
+  enrollment,
+  course,
+  workshop,
+  email,
+}: {
+  enrollment: Enrollment;
+  course: Course;
+  workshop: Workshop;
+  email: string;
+}): Promise<string> {
   const { Payment } = db();
   const env = getEnv();
   const appUrl = env.APP_URL.replace(/\/$/, '');
@@ -46,7 +56,13 @@ export async function createCheckoutForEnrollment({ enrollment, course, workshop
     { idempotencyKey: `brinewright-enrollment-${enrollment.id}-${enrollment.createdAt.getTime()}-checkout-${previous.length + 1}` },
   );
   try {
-    await Payment.create({ enrollmentId: enrollment.id, checkoutSessionId: session.id, amountCents: session.amount_total ?? enrollment.feeCents, currency: session.currency ?? course.currency, status: 'pending' });
+    await Payment.create({
+      enrollmentId: enrollment.id,
+      checkoutSessionId: session.id,
+      amountCents: session.amount_total ?? enrollment.feeCents,
+      currency: session.currency ?? course.currency,
+      status: 'pending',
+    });
   } catch (error) {
     // The webhook got here first and recorded the session already.
     if (!(error instanceof UniqueConstraintError)) throw error;

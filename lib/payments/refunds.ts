@@ -14,11 +14,20 @@ export type RefundResult = { paymentId: number; refundId: string; amountCents: n
  * refunded, withdraws the enrollment (its seat is released) and queues the refund e-mail.
  * The idempotency key is per payment, so pressing the button twice refunds once.
  */
-export async function refundEnrollment({ enrollmentId, actorId, reason }: { enrollmentId: number; actorId: number; reason?: string | null }): Promise<RefundResult> {
+export async function refundEnrollment({
+  enrollmentId,
+  actorId,
+  reason,
+}: {
+  enrollmentId: number;
+  actorId: number;
+  reason?: string | null;
+}): Promise<RefundResult> {
   const { Enrollment, Payment, Course, Workshop, User, sequelize } = db();
   const enrollment = await Enrollment.findByPk(enrollmentId);
   if (!enrollment) throw new AppError('not_found', 'That enrollment does not exist.');
-  if (enrollment.status === 'completed') throw new AppError('conflict', 'This learner has completed the course; a completed enrollment is not refunded from here.');
+  if (enrollment.status === 'completed')
+    throw new AppError('conflict', 'This learner has completed the course; a completed enrollment is not refunded from here.');
   const payment = await Payment.findOne({ where: { enrollmentId, status: 'paid' }, order: [['id', 'DESC']] });
   if (!payment) throw new AppError('conflict', 'There is no card payment to refund for this enrollment.');
   if (!payment.paymentIntentId) throw new AppError('conflict', 'This payment has no payment reference to refund against.');
@@ -26,7 +35,11 @@ export async function refundEnrollment({ enrollmentId, actorId, reason }: { enro
   let refund;
   try {
     refund = await stripe().refunds.create(
-      { payment_intent: payment.paymentIntentId, reason: 'requested_by_customer', metadata: { enrollmentId: String(enrollmentId), paymentId: String(payment.id) } },
+      {
+        payment_intent: payment.paymentIntentId,
+        reason: 'requested_by_customer',
+        metadata: { enrollmentId: String(enrollmentId), paymentId: String(payment.id) },
+      },
       { idempotencyKey: `brinewright-refund-payment-${payment.id}-${payment.createdAt.getTime()}` },
     );
   } catch (error) {
@@ -41,7 +54,16 @@ export async function refundEnrollment({ enrollmentId, actorId, reason }: { enro
     const current = (await Enrollment.findByPk(enrollmentId, { transaction, lock: transaction.LOCK.UPDATE }))!;
     if (locked.status === 'refunded') return { paymentId: locked.id, refundId: refund.id, amountCents: locked.refundedCents, enrollmentStatus: current.status };
     await locked.update({ status: 'refunded', refundedCents: refund.amount }, { transaction });
-    await audit({ actorId, action: 'payment.refunded', subjectType: 'payment', subjectId: locked.id, data: { refundId: refund.id, amountCents: refund.amount, enrollmentId, reason: reason ?? null } }, { transaction });
+    await audit(
+      {
+        actorId,
+        action: 'payment.refunded',
+        subjectType: 'payment',
+        subjectId: locked.id,
+        data: { refundId: refund.id, amountCents: refund.amount, enrollmentId, reason: reason ?? null },
+      },
+      { transaction },
+    );
     if (current.status === 'active' || current.status === 'awaiting_payment') {
       await transitionEnrollment(current, 'withdrawn', { transaction, actorId, reason: 'refund', data: { paymentId: locked.id, refundId: refund.id } });
     }
@@ -50,7 +72,10 @@ export async function refundEnrollment({ enrollmentId, actorId, reason }: { enro
       current.workshopId ? Workshop.findByPk(current.workshopId, { transaction }) : null,
       User.findByPk(current.userId, { transaction }),
     ]);
-    await enqueueEmail(refundEmail({ to: learner!.email, name: learner!.name, courseTitle: course!.title, workshop, amountCents: refund.amount, currency: locked.currency }), { transaction });
+    await enqueueEmail(
+      refundEmail({ to: learner!.email, name: learner!.name, courseTitle: course!.title, workshop, amountCents: refund.amount, currency: locked.currency }),
+      { transaction },
+    );
     return { paymentId: locked.id, refundId: refund.id, amountCents: refund.amount, enrollmentStatus: current.status };
   });
 }

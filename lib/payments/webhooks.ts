@@ -25,7 +25,17 @@ export function verifyEvent(rawBody: string, signature: string | null): Stripe.E
   // payment_events columns) is refused before anything is stored.
   const e = event as unknown as { id?: unknown; type?: unknown; data?: { object?: unknown } | null };
   const object = e && typeof e === 'object' && e.data && typeof e.data === 'object' ? e.data.object : undefined;
-  if (typeof e?.id !== 'string' || !e.id || e.id.length > 255 || typeof e.type !== 'string' || !e.type || e.type.length > 100 || !object || typeof object !== 'object' || Array.isArray(object)) {
+  if (
+    typeof e?.id !== 'string' ||
+    !e.id ||
+    e.id.length > 255 ||
+    typeof e.type !== 'string' ||
+    !e.type ||
+    e.type.length > 100 ||
+    !object ||
+    typeof object !== 'object' ||
+    Array.isArray(object)
+  ) {
     throw new AppError('bad_request', 'The webhook body is not an event: it needs an id, a type and data.object.');
   }
   return event;
@@ -39,7 +49,10 @@ export async function handleEvent(event: Stripe.Event): Promise<WebhookOutcome> 
   const { PaymentEvent, sequelize } = db();
   try {
     return await sequelize.transaction(async (transaction) => {
-      const row = await PaymentEvent.create({ providerEventId: event.id, type: event.type, payload: event as unknown as Record<string, unknown> }, { transaction });
+      const row = await PaymentEvent.create(
+        { providerEventId: event.id, type: event.type, payload: event as unknown as Record<string, unknown> },
+        { transaction },
+      );
       let handled = false;
       if (event.type === 'checkout.session.completed' || event.type === 'checkout.session.async_payment_succeeded') {
         handled = await sessionPaid(event.data.object as Stripe.Checkout.Session, event.id, transaction);
@@ -60,7 +73,10 @@ async function lockPayment(session: Stripe.Checkout.Session, enrollmentId: numbe
   const { Payment } = db();
   const found = await Payment.findOne({ where: { checkoutSessionId: session.id }, transaction, lock: transaction.LOCK.UPDATE });
   if (found) return found;
-  await Payment.create({ enrollmentId, checkoutSessionId: session.id, amountCents: session.amount_total ?? 0, currency: session.currency ?? 'usd', status: 'pending' }, { transaction });
+  await Payment.create(
+    { enrollmentId, checkoutSessionId: session.id, amountCents: session.amount_total ?? 0, currency: session.currency ?? 'usd', status: 'pending' },
+    { transaction },
+  );
   return (await Payment.findOne({ where: { checkoutSessionId: session.id }, transaction, lock: transaction.LOCK.UPDATE }))!;
 }
 
@@ -90,12 +106,27 @@ async function sessionPaid(session: Stripe.Checkout.Session, eventId: string, tr
     return true;
   }
   const paymentIntent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
-  await payment.update({ status: 'paid', paidAt: new Date(), paymentIntentId: paymentIntent, amountCents: session.amount_total ?? payment.amountCents }, { transaction });
-  await audit({ actorId: null, action: 'payment.paid', subjectType: 'payment', subjectId: payment.id, data: { eventId, enrollmentId: enrollment.id, amountCents: payment.amountCents } }, { transaction });
+  await payment.update(
+    { status: 'paid', paidAt: new Date(), paymentIntentId: paymentIntent, amountCents: session.amount_total ?? payment.amountCents },
+    { transaction },
+  );
+  await audit(
+    {
+      actorId: null,
+      action: 'payment.paid',
+      subjectType: 'payment',
+      subjectId: payment.id,
+      data: { eventId, enrollmentId: enrollment.id, amountCents: payment.amountCents },
+    },
+    { transaction },
+  );
 
   if (enrollment.status !== 'awaiting_payment') {
     // Paid for a place that was given up meanwhile (another workshop chosen): the desk refunds it.
-    await audit({ actorId: null, action: 'payment.needs_refund', subjectType: 'payment', subjectId: payment.id, data: { enrollmentStatus: enrollment.status } }, { transaction });
+    await audit(
+      { actorId: null, action: 'payment.needs_refund', subjectType: 'payment', subjectId: payment.id, data: { enrollmentStatus: enrollment.status } },
+      { transaction },
+    );
     return true;
   }
   await transitionEnrollment(enrollment, 'active', { transaction, actorId: null, reason: 'paid', data: { paymentId: payment.id, eventId } });
@@ -104,21 +135,57 @@ async function sessionPaid(session: Stripe.Checkout.Session, eventId: string, tr
     User.findByPk(enrollment.userId, { transaction }),
   ]);
   await enqueueEmail(
-    enrollmentReceiptEmail({ to: learner!.email, name: learner!.name, courseTitle: course.title, workshop, amountCents: payment.amountCents, currency: payment.currency, waived: false, appUrl: getEnv().APP_URL }),
+    enrollmentReceiptEmail({
+      to: learner!.email,
+      name: learner!.name,
+      courseTitle: course.title,
+      workshop,
+      amountCents: payment.amountCents,
+      currency: payment.currency,
+      waived: false,
+      appUrl: getEnv().APP_URL,
+    }),
     { transaction },
   );
   return true;
 }
 
 /** A paid session whose amount or currency is not the fee: audited, every coordinator told, the enrollment left waiting. */
-async function amountMismatch({ session, eventId, enrollment, course, paidCents, paidCurrency, paymentId, transaction }: { session: Stripe.Checkout.Session; eventId: string; enrollment: Enrollment; course: Course | null; paidCents: number; paidCurrency: string; paymentId: number; transaction: Transaction }) {
+async function amountMismatch({
+  session,
+  eventId,
+  enrollment,
+  course,
+  paidCents,
+  paidCurrency,
+  paymentId,
+  transaction,
+}: {
+  session: Stripe.Checkout.Session;
+  eventId: string;
+  enrollment: Enrollment;
+  course: Course | null;
+  paidCents: number;
+  paidCurrency: string;
+  paymentId: number;
+  transaction: Transaction;
+}) {
   const { User, Payment } = db();
   const feeCurrency = course?.currency ?? '';
   // The money did arrive: the row says so (what was paid), so the desk can refund it.
   const paymentIntent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
-  await Payment.update({ status: 'paid', paidAt: new Date(), paymentIntentId: paymentIntent, amountCents: Math.max(0, paidCents), currency: paidCurrency.slice(0, 3) || 'usd' }, { where: { id: paymentId }, transaction });
+  await Payment.update(
+    { status: 'paid', paidAt: new Date(), paymentIntentId: paymentIntent, amountCents: Math.max(0, paidCents), currency: paidCurrency.slice(0, 3) || 'usd' },
+    { where: { id: paymentId }, transaction },
+  );
   await audit(
-    { actorId: null, action: 'payment.amount_mismatch', subjectType: 'payment', subjectId: paymentId, data: { eventId, checkoutSessionId: session.id, enrollmentId: enrollment.id, paidCents, paidCurrency, feeCents: enrollment.feeCents, feeCurrency } },
+    {
+      actorId: null,
+      action: 'payment.amount_mismatch',
+      subjectType: 'payment',
+      subjectId: paymentId,
+      data: { eventId, checkoutSessionId: session.id, enrollmentId: enrollment.id, paidCents, paidCurrency, feeCents: enrollment.feeCents, feeCurrency },
+    },
     { transaction },
   );
   const [learner, coordinators] = await Promise.all([
@@ -127,7 +194,18 @@ async function amountMismatch({ session, eventId, enrollment, course, paidCents,
   ]);
   for (const to of coordinators) {
     await enqueueEmail(
-      paymentMismatchEmail({ to: to.email, name: to.name, learnerEmail: learner?.email ?? '(account removed)', courseTitle: course?.title ?? 'an unknown course', enrollmentId: enrollment.id, paidCents: Math.max(0, paidCents), paidCurrency: paidCurrency || '?', feeCents: enrollment.feeCents, feeCurrency, appUrl: getEnv().APP_URL }),
+      paymentMismatchEmail({
+        to: to.email,
+        name: to.name,
+        learnerEmail: learner?.email ?? '(account removed)',
+        courseTitle: course?.title ?? 'an unknown course',
+        enrollmentId: enrollment.id,
+        paidCents: Math.max(0, paidCents),
+        paidCurrency: paidCurrency || '?',
+        feeCents: enrollment.feeCents,
+        feeCurrency,
+        appUrl: getEnv().APP_URL,
+      }),
       { transaction },
     );
   }
@@ -152,6 +230,11 @@ async function sessionEnded(session: Stripe.Checkout.Session, eventId: string, t
   const { Payment } = db();
   const stillOpen = await Payment.count({ where: { enrollmentId: enrollment.id, status: 'pending' }, transaction });
   if (stillOpen > 0) return true;
-  await transitionEnrollment(enrollment, 'withdrawn', { transaction, actorId: null, reason: 'checkout-expired', data: { checkoutSessionId: session.id, eventId } });
+  await transitionEnrollment(enrollment, 'withdrawn', {
+    transaction,
+    actorId: null,
+    reason: 'checkout-expired',
+    data: { checkoutSessionId: session.id, eventId },
+  });
   return true;
 }

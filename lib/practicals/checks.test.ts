@@ -82,9 +82,9 @@ describe('checkPractical', () => {
     const short = checkPractical({ ...good, method: 'low-temperature-pasteurization', minutes: 20 });
     expect(short.map((f) => f.check)).toEqual(['processing-time']);
     expect(short[0].expected).toBe('30 min at 180–185 °F');
-    expect(checks({ product: 'pickled-beets', pack: 'hot', method: 'low-temperature-pasteurization', minutes: 30, vinegarMl: 2 * 236.6, waterMl: 236.6 })).toEqual([
-      'processing-method',
-    ]);
+    expect(
+      checks({ product: 'pickled-beets', pack: 'hot', method: 'low-temperature-pasteurization', minutes: 30, vinegarMl: 2 * 236.6, waterMl: 236.6 }),
+    ).toEqual(['processing-method']);
   });
 
   it('flags headspace beyond 1/8 inch of the recommended 1/2 inch either way', () => {
@@ -105,7 +105,7 @@ describe('checkPractical', () => {
     expect(checks({ vinegarAcidityPct: 5 })).toEqual([]);
   });
 
-  it('flags a brine more dilute than its product\'s tested liquid, and accepts that recipe itself', () => {
+  it("flags a brine more dilute than its product's tested liquid, and accepts that recipe itself", () => {
     // Quick fresh-pack dill liquid: 6 cups 5 % vinegar in 14 cups = 2.142857… % acetic acid (computed from USDA Guide 6).
     expect(testedAceticAcidPct(PRODUCTS['fresh-pack-dill-pickles'].testedLiquid)).toBeCloseTo(2.142857, 6);
     expect(checks({})).toEqual([]);
@@ -132,7 +132,9 @@ describe('checkPractical', () => {
 
   it('skips the checks whose inputs are still missing, as the form calls it while typing', () => {
     expect(checkPractical({})).toEqual([]);
-    expect(checkPractical({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: 7000, method: 'boiling-water', minutes: 15 }).map((f) => f.check)).toEqual(['processing-time']);
+    expect(
+      checkPractical({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: 7000, method: 'boiling-water', minutes: 15 }).map((f) => f.check),
+    ).toEqual(['processing-time']);
   });
 });
 
@@ -157,13 +159,22 @@ describe('checkPractical: each product against its own tested liquid', () => {
 
   // The review's reproductions, each against USDA Complete Guide to Home Canning (rev. 2015), Guide 6.
   it('flags hot peppers at 2.5 % (tested 5 cups vinegar to 1 cup water: 4.17 %)', () => {
-    expect(dilution(batchOf('pickled-hot-peppers', 1, 1))[0]).toMatchObject({ expected: '≥ 4.17 % acetic acid', actual: expect.stringMatching(/^2.5 % acetic acid/) });
+    expect(dilution(batchOf('pickled-hot-peppers', 1, 1))[0]).toMatchObject({
+      expected: '≥ 4.17 % acetic acid',
+      actual: expect.stringMatching(/^2.5 % acetic acid/),
+    });
   });
   it('flags beets at 2.27 % (tested 4 cups vinegar to 2 cups water: 3.33 %; recipe from memory)', () => {
-    expect(dilution(batchOf('pickled-beets', 1, 1.2))[0]).toMatchObject({ expected: '≥ 3.33 % acetic acid', actual: expect.stringMatching(/^2.27 % acetic acid/) });
+    expect(dilution(batchOf('pickled-beets', 1, 1.2))[0]).toMatchObject({
+      expected: '≥ 3.33 % acetic acid',
+      actual: expect.stringMatching(/^2.27 % acetic acid/),
+    });
   });
   it('flags bread-and-butter at 2.14 % (tested 4 cups vinegar, no water: 5 %; its sugar not counted in the volume)', () => {
-    expect(dilution(batchOf('bread-and-butter-pickles', 6, 8))[0]).toMatchObject({ expected: '≥ 5 % acetic acid', actual: expect.stringMatching(/^2.14 % acetic acid/) });
+    expect(dilution(batchOf('bread-and-butter-pickles', 6, 8))[0]).toMatchObject({
+      expected: '≥ 5 % acetic acid',
+      actual: expect.stringMatching(/^2.14 % acetic acid/),
+    });
   });
 
   it('with no product chosen, compares with the weakest tested liquid (quick fresh-pack dill, 2.14 %)', () => {
@@ -181,9 +192,16 @@ describe('checkPractical: fermented pickles by brine strength', () => {
   // USDA Guide 6 fermented dill pickles, per gallon: 1/2 cup canning salt, 1/4 cup vinegar, 8 cups water.
   // Salt by weight computed (C) with canning salt at 4.6–6 g per tsp (no published figure; see salt.ts):
   // 110.4 g / (110.4 + 1,951.85) = 5.35 %, 144 g / (144 + 1,951.85) = 6.87 %.
-  const fermented = { ...good, product: 'fermented-dill-pickles' as const, jar: 'quart' as const, minutes: 15, vinegarMl: 0.25 * mlPer('cup'), waterMl: 8 * mlPer('cup') };
+  const fermented = {
+    ...good,
+    product: 'fermented-dill-pickles' as const,
+    jar: 'quart' as const,
+    minutes: 15,
+    vinegarMl: 0.25 * mlPer('cup'),
+    waterMl: 8 * mlPer('cup'),
+  };
 
-  it('computes the tested brine\'s span', () => {
+  it("computes the tested brine's span", () => {
     expect(FERMENTED_BRINE.minPct).toBeCloseTo(5.353, 3);
     expect(FERMENTED_BRINE.maxPct).toBeCloseTo(6.871, 3);
   });

@@ -11,7 +11,8 @@ import type { PracticalDetails } from '@/lib/validations/practical';
 // where the batch departs from the published numbers. Brinewright checks arithmetic only: passing
 // every check does not make a batch safe.
 
-export type FlagCheck = 'processing-time' | 'processing-method' | 'sterilized-jars' | 'pack' | 'headspace' | 'vinegar-acidity' | 'dilution' | 'brine-strength' | 'seals';
+export type FlagCheck =
+  'processing-time' | 'processing-method' | 'sterilized-jars' | 'pack' | 'headspace' | 'vinegar-acidity' | 'dilution' | 'brine-strength' | 'seals';
 
 export type Flag = {
   check: FlagCheck;
@@ -46,7 +47,8 @@ const pct2 = (n: number) => Math.round(n * 100) / 100;
 
 const JAR_LABEL: Record<string, string> = { 'half-pint': 'half-pint', pint: 'pint', quart: 'quart' };
 const fmt = (n: number, digits = 2) => String(Number(n.toFixed(digits)));
-const band = (b: { fromFt: number; toFt: number | null }) => (b.toFt === null ? `above ${b.fromFt.toLocaleString('en-US')} ft` : `${b.fromFt.toLocaleString('en-US')}–${b.toFt.toLocaleString('en-US')} ft`);
+const band = (b: { fromFt: number; toFt: number | null }) =>
+  b.toFt === null ? `above ${b.fromFt.toLocaleString('en-US')} ft` : `${b.fromFt.toLocaleString('en-US')}–${b.toFt.toLocaleString('en-US')} ft`;
 const isNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
 function productOf(id: unknown) {
@@ -86,10 +88,23 @@ export function computeExpectations(input: Input): Expectations {
     const liquid = (isNumber(input.waterMl) ? input.waterMl : 0) + (isNumber(input.vinegarMl) ? input.vinegarMl : 0);
     const saltPct = isNumber(input.saltG) && input.saltG > 0 && liquid > 0 ? saltPctOf(input.saltG, liquid) : undefined;
     out.brineStrength = { saltPct, minPct: FERMENTED_BRINE.minPct, maxPct: FERMENTED_BRINE.maxPct, source: FERMENTED_BRINE.source };
-  } else if (isNumber(input.vinegarMl) && isNumber(input.vinegarAcidityPct) && isNumber(input.waterMl) && input.vinegarMl > 0 && input.vinegarAcidityPct > 0 && input.waterMl >= 0) {
+  } else if (
+    isNumber(input.vinegarMl) &&
+    isNumber(input.vinegarAcidityPct) &&
+    isNumber(input.waterMl) &&
+    input.vinegarMl > 0 &&
+    input.vinegarAcidityPct > 0 &&
+    input.waterMl >= 0
+  ) {
     try {
       const b = brineAcidity({ vinegarMl: input.vinegarMl, vinegarAcidityPct: input.vinegarAcidityPct, waterMl: input.waterMl, product: product?.id });
-      out.brine = { aceticAcidPct: b.aceticAcidPct, vinegarShare: b.vinegarShare, testedAceticAcidPct: b.tested.aceticAcidPct, testedName: b.tested.name, source: b.tested.source };
+      out.brine = {
+        aceticAcidPct: b.aceticAcidPct,
+        vinegarShare: b.vinegarShare,
+        testedAceticAcidPct: b.tested.aceticAcidPct,
+        testedName: b.tested.name,
+        source: b.tested.source,
+      };
     } catch (error) {
       if (!(error instanceof PreservingError)) throw error;
     }
@@ -98,7 +113,20 @@ export function computeExpectations(input: Input): Expectations {
 }
 
 /** The batch fields checkPractical reads (a check whose fields are empty is skipped, not passed). */
-export const CHECK_INPUTS = ['product', 'pack', 'jar', 'headspaceIn', 'vinegarAcidityPct', 'vinegarMl', 'waterMl', 'saltG', 'method', 'altitudeFt', 'minutes', 'unsealedJars'] as const satisfies readonly (keyof PracticalDetails)[];
+export const CHECK_INPUTS = [
+  'product',
+  'pack',
+  'jar',
+  'headspaceIn',
+  'vinegarAcidityPct',
+  'vinegarMl',
+  'waterMl',
+  'saltG',
+  'method',
+  'altitudeFt',
+  'minutes',
+  'unsealedJars',
+] as const satisfies readonly (keyof PracticalDetails)[];
 export type CheckInput = (typeof CHECK_INPUTS)[number];
 
 /** The check inputs that matter for a product: the brine's salt is read for fermented pickles only. */
@@ -108,7 +136,7 @@ export const checkInputsFor = (product: unknown): readonly CheckInput[] => CHECK
 export function checkPractical(input: Input): Flag[] {
   const flags: Flag[] = [];
   const product = productOf(input.product);
-  const jar = input.jar ? JAR_LABEL[input.jar] ?? input.jar : '';
+  const jar = input.jar ? (JAR_LABEL[input.jar] ?? input.jar) : '';
 
   // Processing time for the product, jar and altitude (the product's published table).
   if (product && input.jar && isNumber(input.altitudeFt) && input.method) {
@@ -222,7 +250,9 @@ export function checkPractical(input: Input): Flag[] {
     try {
       const b = brineAcidity({ vinegarMl: input.vinegarMl, vinegarAcidityPct: input.vinegarAcidityPct, waterMl: input.waterMl, product: product?.id });
       if (b.belowTested) {
-        const tested = b.tested.weakest ? `the weakest tested liquid Brinewright lists (${b.tested.name.toLowerCase()})` : `the tested liquid of ${b.tested.name.toLowerCase()}`;
+        const tested = b.tested.weakest
+          ? `the weakest tested liquid Brinewright lists (${b.tested.name.toLowerCase()})`
+          : `the tested liquid of ${b.tested.name.toLowerCase()}`;
         flags.push({
           check: 'dilution',
           message: `The brine is ${fmt(b.aceticAcidPct)} % acetic acid, weaker than ${tested}, ${fmt(b.tested.aceticAcidPct)} %. Never add water beyond the tested recipe's proportions.`,

@@ -134,7 +134,14 @@ export async function fetchWorkshopOptions(): Promise<WorkshopOption[]> {
 }
 
 export type RubricEntry = { verdict: 'met' | 'not_met'; comment: string };
-export type ReviewView = { id: number; decision: 'approved' | 'changes_requested'; rubric: Record<string, RubricEntry>; comment: string | null; reviewerName: string; createdAt: string };
+export type ReviewView = {
+  id: number;
+  decision: 'approved' | 'changes_requested';
+  rubric: Record<string, RubricEntry>;
+  comment: string | null;
+  reviewerName: string;
+  createdAt: string;
+};
 export type PhotoView = { id: number; url: string; thumbnailUrl: string; width: number; height: number; caption: string | null };
 export type RoundView = {
   id: number;
@@ -159,7 +166,10 @@ async function roundsWhere(where: Record<string, unknown>): Promise<RoundView[]>
     ],
   });
   return practicals.map((p) => {
-    const withIncludes = p as typeof p & { photos: InstanceType<typeof PracticalPhoto>[]; reviews: (InstanceType<typeof Review> & { reviewer?: { name: string } })[] };
+    const withIncludes = p as typeof p & {
+      photos: InstanceType<typeof PracticalPhoto>[];
+      reviews: (InstanceType<typeof Review> & { reviewer?: { name: string } })[];
+    };
     return {
       id: p.id,
       round: p.round,
@@ -169,7 +179,14 @@ async function roundsWhere(where: Record<string, unknown>): Promise<RoundView[]>
       submittedAt: p.submittedAt.toISOString(),
       photos: [...withIncludes.photos]
         .sort((a, b) => a.id - b.id)
-        .map((ph) => ({ id: ph.id, url: photoUrl(ph.id), thumbnailUrl: photoUrl(ph.id, 'thumb'), width: ph.width, height: ph.height, caption: ph.caption ?? null })),
+        .map((ph) => ({
+          id: ph.id,
+          url: photoUrl(ph.id),
+          thumbnailUrl: photoUrl(ph.id, 'thumb'),
+          width: ph.width,
+          height: ph.height,
+          caption: ph.caption ?? null,
+        })),
       reviews: [...withIncludes.reviews]
         .sort((a, b) => a.id - b.id)
         .map((r) => ({

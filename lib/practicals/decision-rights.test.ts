@@ -1,7 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { decisionRight } from './decision-rights';
 
-const facts = (viewer: { id: number; role: 'learner' | 'instructor' | 'coordinator' | 'admin' }, over: Partial<{ learnerId: number; workshopInstructorId: number | null; claimedById: number | null }> = {}) => ({
+const facts = (
+  viewer: { id: number; role: 'learner' | 'instructor' | 'coordinator' | 'admin' },
+  over: Partial<{ learnerId: number; workshopInstructorId: number | null; claimedById: number | null }> = {},
+) => ({
   viewer,
   learnerId: 1,
   workshopInstructorId: 2,

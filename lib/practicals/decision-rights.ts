@@ -8,8 +8,7 @@ export type DecisionFacts = {
 };
 
 export type DecisionRight =
-  | { may: true; as: 'coordinator' | 'workshop instructor' | 'claimant' }
-  | { may: false; reason: 'own' | 'not_instructor' | 'claim_first' | 'claimed_by_other' };
+  { may: true; as: 'coordinator' | 'workshop instructor' | 'claimant' } | { may: false; reason: 'own' | 'not_instructor' | 'claim_first' | 'claimed_by_other' };
 
 /**
  * Who may approve or ask for changes on a round: a coordinator, the instructor of the learner's

@@ -42,7 +42,8 @@ export type ProcessedPhoto = {
  * thumbnail. Throws PhotoRejected for anything that is not a readable JPEG, PNG or WebP.
  */
 export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
-  if (input.length > MAX_PHOTO_BYTES) throw new PhotoRejected('too-large', 'That photo is larger than 10 MB. Choose a smaller one or lower the camera resolution.');
+  if (input.length > MAX_PHOTO_BYTES)
+    throw new PhotoRejected('too-large', 'That photo is larger than 10 MB. Choose a smaller one or lower the camera resolution.');
   const format = sniffFormat(input);
   if (!format) throw new PhotoRejected('unsupported', UNSUPPORTED_MESSAGE);
   let metadataFormat: string | undefined;

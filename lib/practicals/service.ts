@@ -27,7 +27,15 @@ async function requireEnrollment(user: SessionUser, courseSlug: string) {
   return enrollment;
 }
 
-export type AcceptedPhoto = { id: number; receivedAs: 'jpeg' | 'png' | 'webp'; width: number; height: number; bytes: number; url: string; thumbnailUrl: string };
+export type AcceptedPhoto = {
+  id: number;
+  receivedAs: 'jpeg' | 'png' | 'webp';
+  width: number;
+  height: number;
+  bytes: number;
+  url: string;
+  thumbnailUrl: string;
+};
 
 export const photoUrl = (id: number, size: 'full' | 'thumb' = 'full') => `/api/photos/${id}${size === 'thumb' ? '?size=thumb' : ''}`;
 
@@ -61,7 +69,15 @@ export async function acceptPhoto(user: SessionUser, courseSlug: string, input: 
       height: processed.image.height,
       bytes: processed.image.data.length,
     });
-    return { id: row.id, receivedAs: processed.format, width: row.width, height: row.height, bytes: row.bytes, url: photoUrl(row.id), thumbnailUrl: photoUrl(row.id, 'thumb') };
+    return {
+      id: row.id,
+      receivedAs: processed.format,
+      width: row.width,
+      height: row.height,
+      bytes: row.bytes,
+      url: photoUrl(row.id),
+      thumbnailUrl: photoUrl(row.id, 'thumb'),
+    };
   } catch (error) {
     // Keep the store and the database in step: no row, no files (deleting a key never stored is a no-op).
     await Promise.allSettled([storage.delete(storageKey), storage.delete(thumbnailKey)]);
@@ -121,7 +137,8 @@ export async function submitPractical(user: SessionUser, courseSlug: string, for
   const flags = checkPractical(details);
   return sequelize.transaction(async (transaction) => {
     const latest = await Practical.findOne({ where: { enrollmentId: enrollment.id }, order: [['round', 'DESC']], lock: transaction.LOCK.UPDATE, transaction });
-    if (latest?.status === 'submitted') throw new AppError('conflict', 'Your last round is still waiting at the Tasting table; you can submit again once it is reviewed.');
+    if (latest?.status === 'submitted')
+      throw new AppError('conflict', 'Your last round is still waiting at the Tasting table; you can submit again once it is reviewed.');
     if (latest?.status === 'approved') throw new AppError('conflict', 'Your practical is already approved.');
     const photos = await PracticalPhoto.findAll({
       where: { id: { [Op.in]: photoIds }, userId: user.id, practicalId: null },
@@ -151,7 +168,13 @@ export async function submitPractical(user: SessionUser, courseSlug: string, for
       await PracticalPhoto.update({ practicalId: practical.id, caption: `Photo ${index + 1}` }, { where: { id }, transaction });
     }
     await audit(
-      { actorId: user.id, action: 'practical.submitted', subjectType: 'practical', subjectId: practical.id, data: { round: practical.round, flags: flags.map((f) => f.check) } },
+      {
+        actorId: user.id,
+        action: 'practical.submitted',
+        subjectType: 'practical',
+        subjectId: practical.id,
+        data: { round: practical.round, flags: flags.map((f) => f.check) },
+      },
       { transaction },
     );
     return { id: practical.id, round: practical.round, flags };
@@ -176,7 +199,12 @@ function requireDecisionRight(viewer: SessionUser, practical: Practical, worksho
 export async function decisionRightFor(viewer: SessionUser, practicalId: number) {
   const practical = await db().Practical.findByPk(practicalId, { attributes: ['id', 'userId', 'enrollmentId', 'claimedById'] });
   if (!practical) return null;
-  return decisionRight({ viewer, learnerId: practical.userId, workshopInstructorId: await workshopInstructorOf(practical.enrollmentId), claimedById: practical.claimedById ?? null });
+  return decisionRight({
+    viewer,
+    learnerId: practical.userId,
+    workshopInstructorId: await workshopInstructorOf(practical.enrollmentId),
+    claimedById: practical.claimedById ?? null,
+  });
 }
 
 /** An instructor takes a waiting round to decide on it; one claimant at a time (409 while another holds it). */
@@ -190,7 +218,10 @@ export async function claimPractical(viewer: SessionUser, practicalId: number) {
     if (practical.claimedById === viewer.id) return { practicalId: practical.id, claimedById: viewer.id };
     if (practical.claimedById !== null) throw new AppError('conflict', REFUSAL.claimed_by_other);
     await practical.update({ claimedById: viewer.id, claimedAt: new Date() }, { transaction });
-    await audit({ actorId: viewer.id, action: 'practical.claimed', subjectType: 'practical', subjectId: practical.id, data: { round: practical.round } }, { transaction });
+    await audit(
+      { actorId: viewer.id, action: 'practical.claimed', subjectType: 'practical', subjectId: practical.id, data: { round: practical.round } },
+      { transaction },
+    );
     return { practicalId: practical.id, claimedById: viewer.id };
   });
 }
@@ -207,7 +238,10 @@ export async function releasePractical(viewer: SessionUser, practicalId: number)
     }
     const from = practical.claimedById;
     await practical.update({ claimedById: null, claimedAt: null }, { transaction });
-    await audit({ actorId: viewer.id, action: 'practical.released', subjectType: 'practical', subjectId: practical.id, data: { claimedById: from } }, { transaction });
+    await audit(
+      { actorId: viewer.id, action: 'practical.released', subjectType: 'practical', subjectId: practical.id, data: { claimedById: from } },
+      { transaction },
+    );
     return { practicalId: practical.id, claimedById: null };
   });
 }
@@ -245,7 +279,13 @@ export async function reviewPractical(reviewer: SessionUser, practicalId: number
     });
     await enqueueEmail(message, { transaction });
     await audit(
-      { actorId: reviewer.id, action: `practical.${input.decision}`, subjectType: 'practical', subjectId: practical.id, data: { round: practical.round, reviewId: review.id } },
+      {
+        actorId: reviewer.id,
+        action: `practical.${input.decision}`,
+        subjectType: 'practical',
+        subjectId: practical.id,
+        data: { round: practical.round, reviewId: review.id },
+      },
       { transaction },
     );
     return { id: review.id, practicalId: practical.id, status: input.decision };

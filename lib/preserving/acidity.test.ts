@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { ACETIC_ACID_MOLAR_MASS, ACETIC_ACID_PKA, MAX_TABLE_VINEGAR_ACIDITY_PCT, MIN_FOOD_VINEGAR_ACIDITY_PCT, MIN_VINEGAR_ACIDITY_PCT, PH_CAUTION, aceticAcidPh, brineAcidity } from './acidity';
+import {
+  ACETIC_ACID_MOLAR_MASS,
+  ACETIC_ACID_PKA,
+  MAX_TABLE_VINEGAR_ACIDITY_PCT,
+  MIN_FOOD_VINEGAR_ACIDITY_PCT,
+  MIN_VINEGAR_ACIDITY_PCT,
+  PH_CAUTION,
+  aceticAcidPh,
+  brineAcidity,
+} from './acidity';
 import { PRODUCTS, PRODUCT_IDS, WEAKEST_TESTED, testedAceticAcidPct } from './products';
 import { mlPer } from './units';
 
@@ -62,7 +71,10 @@ describe('brineAcidity', () => {
     expect(r).not.toHaveProperty('equilibratedPh');
     expect(r.warnings.join(' ')).toMatch(/buffers/);
     // The default produce water is the cucumber figure (about 95 %; USDA FoodData Central SR Legacy, from memory).
-    expect(brineAcidity({ vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, produceG: 1000 }).equilibratedAcidityPct).toBeCloseTo(r.equilibratedAcidityPct!, 10);
+    expect(brineAcidity({ vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, produceG: 1000 }).equilibratedAcidityPct).toBeCloseTo(
+      r.equilibratedAcidityPct!,
+      10,
+    );
   });
 
   it('presents the pH as the liquid before the produce, with the caution beside it', () => {
@@ -77,7 +89,9 @@ describe('brineAcidity', () => {
     expect(four[0]).toMatch(/below 5% acidity/);
     expect(four.join(' ')).not.toMatch(/labelled below 4%/);
     expect(MIN_FOOD_VINEGAR_ACIDITY_PCT).toBe(4);
-    expect(brineAcidity({ vinegarMl: 500, vinegarAcidityPct: 3, waterMl: 0 }).warnings[0]).toMatch(/No food vinegar is labelled below 4% acidity \(FDA Compliance Policy Guide Sec. 525.825\)/);
+    expect(brineAcidity({ vinegarMl: 500, vinegarAcidityPct: 3, waterMl: 0 }).warnings[0]).toMatch(
+      /No food vinegar is labelled below 4% acidity \(FDA Compliance Policy Guide Sec. 525.825\)/,
+    );
   });
 
   it('warns about vinegar above 7 % (common practice: table and pickling vinegars are sold at 4 % to about 7 %)', () => {
@@ -101,7 +115,9 @@ describe('brineAcidity against the tested liquids', () => {
     expect(tenth.aceticAcidPct).toBeCloseTo(0.4545, 4);
     expect(tenth.belowTested).toBe(true);
     expect(tenth.tested).toMatchObject({ product: 'fresh-pack-dill-pickles', weakest: true, sugarCountsInVolume: false });
-    expect(tenth.warnings.join(' ')).toContain('0.45% acetic acid, weaker than the weakest tested liquid Brinewright knows, that of quick fresh-pack dill pickles (2.14%)');
+    expect(tenth.warnings.join(' ')).toContain(
+      '0.45% acetic acid, weaker than the weakest tested liquid Brinewright knows, that of quick fresh-pack dill pickles (2.14%)',
+    );
     const fifth = brineAcidity({ vinegarMl: 200, vinegarAcidityPct: 5, waterMl: 1000 });
     expect(fifth.aceticAcidPct).toBeCloseTo(0.8333, 4);
     expect(fifth.warnings.join(' ')).toMatch(/0.83% acetic acid, weaker than the weakest tested liquid/);
@@ -109,7 +125,7 @@ describe('brineAcidity against the tested liquids', () => {
     expect(brineAcidity({ vinegarMl: 6 * CUP, vinegarAcidityPct: 5, waterMl: 8 * CUP }).belowTested).toBe(false);
   });
 
-  it('compares with the chosen product\'s own tested liquid (USDA Guide 6 recipes)', () => {
+  it("compares with the chosen product's own tested liquid (USDA Guide 6 recipes)", () => {
     // Hot peppers: 5 cups vinegar (5 %), 1 cup water → 4.17 %; a 2.5 % mix warns.
     const peppers = brineAcidity({ vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: 'pickled-hot-peppers' });
     expect(peppers.tested.aceticAcidPct).toBeCloseTo(4.1667, 4);
@@ -127,14 +143,19 @@ describe('brineAcidity against the tested liquids', () => {
     expect(bnb.warnings.join(' ')).toContain('4 cups vinegar (5 %), 4 1/2 cups sugar, no water');
   });
 
-  it('gives no below-tested warning for any product\'s own tested liquid, and warns 0.01 % below it', () => {
+  it("gives no below-tested warning for any product's own tested liquid, and warns 0.01 % below it", () => {
     for (const id of PRODUCT_IDS) {
       const l = PRODUCTS[id].testedLiquid;
       const own = brineAcidity({ vinegarMl: l.vinegarCups * CUP, vinegarAcidityPct: l.vinegarAcidityPct, waterMl: l.waterCups * CUP, product: id });
       expect(own.belowTested, id).toBe(false);
       expect(own.aceticAcidPct).toBeCloseTo(testedAceticAcidPct(l), 10);
       // 1.5 % more water lowers every liquid here by at least 0.01 % at the precision shown.
-      const thinner = brineAcidity({ vinegarMl: l.vinegarCups * CUP, vinegarAcidityPct: 5, waterMl: l.waterCups * CUP + (l.vinegarCups + l.waterCups) * CUP * 0.015, product: id });
+      const thinner = brineAcidity({
+        vinegarMl: l.vinegarCups * CUP,
+        vinegarAcidityPct: 5,
+        waterMl: l.waterCups * CUP + (l.vinegarCups + l.waterCups) * CUP * 0.015,
+        product: id,
+      });
       if (id !== 'fermented-dill-pickles') expect(thinner.belowTested, id).toBe(true);
     }
   });
@@ -145,7 +166,9 @@ describe('brineAcidity against the tested liquids', () => {
   });
 
   it('answers not-found for an unknown product', () => {
-    expect(() => brineAcidity({ vinegarMl: 1, vinegarAcidityPct: 5, waterMl: 1, product: 'pickled-okra' })).toThrow(/There is no product called "pickled-okra"/);
+    expect(() => brineAcidity({ vinegarMl: 1, vinegarAcidityPct: 5, waterMl: 1, product: 'pickled-okra' })).toThrow(
+      /There is no product called "pickled-okra"/,
+    );
   });
 
   it('refuses negative or missing volumes naming the parameter', () => {

@@ -26,7 +26,7 @@ export const MAX_TABLE_VINEGAR_ACIDITY_PCT = 7;
 
 /** Shown beside every estimated pH: it is the liquid's, before the produce goes in. */
 export const PH_CAUTION =
-  "This is the pH of the liquid alone, before the produce goes in (weak-acid equation, acetic acid pKa 4.756, CRC Handbook). Produce buffers the acid, so the jar settles higher: only the tested recipe, or a calibrated pH meter, tells you the finished pH.";
+  'This is the pH of the liquid alone, before the produce goes in (weak-acid equation, acetic acid pKa 4.756, CRC Handbook). Produce buffers the acid, so the jar settles higher: only the tested recipe, or a calibrated pH meter, tells you the finished pH.';
 
 export type BrineAcidityInput = {
   vinegarMl: number;
@@ -88,11 +88,27 @@ const shownPct = (n: number) => pct2(n).toLocaleString('en-US', { maximumFractio
 function comparisonFor(productId: string | undefined): TestedComparison {
   if (productId === undefined) {
     const { product, aceticAcidPct } = WEAKEST_TESTED;
-    return { product: product.id, name: product.name, aceticAcidPct, weakest: true, sugarCountsInVolume: false, source: product.testedLiquid.source, confidence: product.testedLiquid.confidence };
+    return {
+      product: product.id,
+      name: product.name,
+      aceticAcidPct,
+      weakest: true,
+      sugarCountsInVolume: false,
+      source: product.testedLiquid.source,
+      confidence: product.testedLiquid.confidence,
+    };
   }
   const product = getProduct(productId);
   const l = product.testedLiquid;
-  return { product: product.id, name: product.name, aceticAcidPct: testedAceticAcidPct(l), weakest: false, sugarCountsInVolume: false, source: l.source, confidence: l.confidence };
+  return {
+    product: product.id,
+    name: product.name,
+    aceticAcidPct: testedAceticAcidPct(l),
+    weakest: false,
+    sugarCountsInVolume: false,
+    source: l.source,
+    confidence: l.confidence,
+  };
 }
 
 /** Acidity of a vinegar/water/other-liquid mix compared with a tested liquid, the liquid's estimated pH
@@ -111,14 +127,24 @@ export function brineAcidity(input: BrineAcidityInput): BrineAcidityResult {
   const aceticAcidPct = (acidG / totalMl) * 100;
   const estimatedPh = aceticAcidPh(molarFromPct(aceticAcidPct));
   const belowTested = pct2(aceticAcidPct) < pct2(tested.aceticAcidPct);
-  const result: BrineAcidityResult = { aceticAcidPct, vinegarShare: vinegarMl / totalMl, estimatedPh, phCaution: PH_CAUTION, tested, belowTested, warnings: [] };
+  const result: BrineAcidityResult = {
+    aceticAcidPct,
+    vinegarShare: vinegarMl / totalMl,
+    estimatedPh,
+    phCaution: PH_CAUTION,
+    tested,
+    belowTested,
+    warnings: [],
+  };
 
   if (acidity < MIN_FOOD_VINEGAR_ACIDITY_PCT) {
     result.warnings.push(
       `No food vinegar is labelled below ${MIN_FOOD_VINEGAR_ACIDITY_PCT}% acidity (FDA Compliance Policy Guide Sec. 525.825): check the label, and never pickle with a vinegar of unknown strength. Tested recipes call for ${MIN_VINEGAR_ACIDITY_PCT}% (USDA Complete Guide to Home Canning, Guide 6).`,
     );
   } else if (acidity < MIN_VINEGAR_ACIDITY_PCT) {
-    result.warnings.push(`This vinegar is below ${MIN_VINEGAR_ACIDITY_PCT}% acidity. Tested pickle recipes call for vinegar of at least 5% acidity (USDA Complete Guide to Home Canning, Guide 6); weaker vinegar cannot be made up by guessing.`);
+    result.warnings.push(
+      `This vinegar is below ${MIN_VINEGAR_ACIDITY_PCT}% acidity. Tested pickle recipes call for vinegar of at least 5% acidity (USDA Complete Guide to Home Canning, Guide 6); weaker vinegar cannot be made up by guessing.`,
+    );
   }
   if (acidity > MAX_TABLE_VINEGAR_ACIDITY_PCT) {
     result.warnings.push(
@@ -129,20 +155,23 @@ export function brineAcidity(input: BrineAcidityInput): BrineAcidityResult {
     const which = tested.weakest
       ? `weaker than the weakest tested liquid Brinewright knows, that of ${tested.name.toLowerCase()} (${shownPct(tested.aceticAcidPct)}%)`
       : `weaker than the tested liquid of ${tested.name.toLowerCase()} (${shownPct(tested.aceticAcidPct)}%)`;
-    result.warnings.push(`This liquid is ${shownPct(aceticAcidPct)}% acetic acid, ${which}. Never dilute a pickling liquid below its tested recipe. Source: ${tested.source}.`);
+    result.warnings.push(
+      `This liquid is ${shownPct(aceticAcidPct)}% acetic acid, ${which}. Never dilute a pickling liquid below its tested recipe. Source: ${tested.source}.`,
+    );
   }
   if (tested.product === 'fermented-dill-pickles') {
-    result.warnings.push('Fermented pickles take their acid from the fermentation, not from this vinegar: follow the tested recipe, and check the brine\'s salt by weight with the salt calculator.');
+    result.warnings.push(
+      "Fermented pickles take their acid from the fermentation, not from this vinegar: follow the tested recipe, and check the brine's salt by weight with the salt calculator.",
+    );
   }
   if (input.produceG !== undefined) {
     const produceG = checkNumber(input.produceG, RULES.produceG);
-    const waterPct =
-      input.produceWaterPct === undefined ? DEFAULT_PRODUCE_WATER_PCT : checkNumber(input.produceWaterPct, RULES.produceWaterPct);
+    const waterPct = input.produceWaterPct === undefined ? DEFAULT_PRODUCE_WATER_PCT : checkNumber(input.produceWaterPct, RULES.produceWaterPct);
     // 1 g of produce water taken as 1 mL (water is 0.998 g/mL at 20 °C).
     const produceWaterMl = (produceG * waterPct) / 100;
     result.equilibratedAcidityPct = (acidG / (totalMl + produceWaterMl)) * 100;
     result.warnings.push(
-      'The produce\'s water dilutes the acid and the produce buffers it, so the jar settles weaker and at a higher pH than the liquid alone. Only the tested recipe, or a calibrated pH meter, tells you the finished pH.',
+      "The produce's water dilutes the acid and the produce buffers it, so the jar settles weaker and at a higher pH than the liquid alone. Only the tested recipe, or a calibrated pH meter, tells you the finished pH.",
     );
   }
   return result;

@@ -64,7 +64,8 @@ export const RECIPES: Record<ProductId, Recipe> = {
   'dilly-beans': {
     yieldPints: 4,
     produceLb: 2,
-    source: 'University of Georgia Extension, So Easy to Preserve, 6th edition (2014), "Pickled dilly beans" (2 lb beans, 4 pints), as reproduced by University of Minnesota Extension',
+    source:
+      'University of Georgia Extension, So Easy to Preserve, 6th edition (2014), "Pickled dilly beans" (2 lb beans, 4 pints), as reproduced by University of Minnesota Extension',
     ingredients: [
       { name: 'green or yellow beans, 5 to 6 inch', amount: 2, unit: 'lb' },
       { name: 'water', amount: 2.5, unit: 'cup', brine: true },
@@ -155,7 +156,7 @@ export function planBatch({ product, jar, jars }: { product: string; jar: JarSiz
     const scaled = amount * scale;
     if (COUNTED.includes(unit)) return { name, amount: Math.ceil(scaled - 1e-9), unit };
     if (unit === 'lb') return { name, amount: round2(scaled), unit, metric: { amount: round2(convert(scaled, 'lb', 'kg')), unit: 'kg' } };
-    const ml = scaled * mlPer(unit as "cup" | "tbsp" | "tsp" | "gallon");
+    const ml = scaled * mlPer(unit as 'cup' | 'tbsp' | 'tsp' | 'gallon');
     return { name, amount: round2(scaled), unit, metric: ml >= 1000 ? { amount: round2(ml / 1000), unit: 'L' } : { amount: Math.round(ml), unit: 'mL' } };
   });
   const produceLb = recipe.produceLb === null ? null : recipe.produceLb * scale;
@@ -178,7 +179,10 @@ function sterilizeNote(id: ProductId, size: JarSize): Pick<BatchPlan, 'sterilize
   const short = product.bands.map((band, i) => ({ band, minutes: row[i] })).filter((b) => b.minutes < STERILIZE_BELOW_MINUTES);
   if (!short.length) return {};
   const where = short
-    .map(({ band, minutes }) => `${minutes} minutes at ${band.fromFt === 0 ? 'up to' : `${band.fromFt.toLocaleString('en-US')} to`} ${(band.toFt ?? MAX_TABLE_ALTITUDE_FT).toLocaleString('en-US')} ft`)
+    .map(
+      ({ band, minutes }) =>
+        `${minutes} minutes at ${band.fromFt === 0 ? 'up to' : `${band.fromFt.toLocaleString('en-US')} to`} ${(band.toFt ?? MAX_TABLE_ALTITUDE_FT).toLocaleString('en-US')} ft`,
+    )
     .join(', ');
   return {
     sterilizeJars: {

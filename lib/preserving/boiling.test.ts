@@ -101,6 +101,7 @@ describe('cannerTemperature', () => {
       [14, 8000, 239.9],
       [15, 10000, 240.3],
     ];
-    for (const [psig, ft, f] of rows) expect(Math.abs(cannerTemperature({ psig, altitudeFt: ft }).fahrenheit - f), `${psig} psig at ${ft} ft`).toBeLessThan(0.06);
+    for (const [psig, ft, f] of rows)
+      expect(Math.abs(cannerTemperature({ psig, altitudeFt: ft }).fahrenheit - f), `${psig} psig at ${ft} ft`).toBeLessThan(0.06);
   });
 });

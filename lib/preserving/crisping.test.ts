@@ -33,14 +33,16 @@ describe('crispingPlan: pickling lime', () => {
     expect(plan.cautions.join(' ')).toMatch(/bread-and-butter pickles only/);
   });
 
-  it('makes lime water by whole recipes of the tested bread-and-butter pickles, never by a fraction of the guide\'s gallon', () => {
+  it("makes lime water by whole recipes of the tested bread-and-butter pickles, never by a fraction of the guide's gallon", () => {
     // 9 quarts = 18 pints: three recipes of about 8 pints, three gallons.
     expect(crispingPlan({ agent: 'pickling-lime', jar: 'quart', jars: 9 })).toMatchObject({ recipes: 3, limeCups: 3, saltCups: 1.5, waterGallons: 3 });
     expect(crispingPlan({ agent: 'pickling-lime', jar: 'pint', jars: 1 })).toMatchObject({ recipes: 1, limeCups: 1, saltCups: 0.5, waterGallons: 1 });
   });
 
   it('answers outside-table for a jar size the bread-and-butter recipe does not use', () => {
-    expect(() => crispingPlan({ agent: 'pickling-lime', jar: 'half-pint', jars: 8 })).toThrow(/bread-and-butter pickles, which is canned in pint and quart jars only.*local extension office/);
+    expect(() => crispingPlan({ agent: 'pickling-lime', jar: 'half-pint', jars: 8 })).toThrow(
+      /bread-and-butter pickles, which is canned in pint and quart jars only.*local extension office/,
+    );
   });
 
   it('refuses bad input naming the parameter', () => {

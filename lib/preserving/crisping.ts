@@ -15,10 +15,19 @@ export const CALCIUM_CHLORIDE_TSP: Partial<Record<JarSize, number>> = { pint: 0.
  * 12–24 hours, then rinses and resoaks them 1 hour in fresh cold water three times in all (USDA
  * Complete Guide to Home Canning, rev. 2015, Guide 6, "Bread-and-butter pickles"; read in the
  * Michigan State University Extension reproduction of Guide 6:19). */
-export const LIME = { recipe: 'bread-and-butter-pickles' as const, cupsPerGallon: 1, saltCupsPerGallon: 0.5, pintsPerGallon: 8, soakHours: [12, 24] as [number, number], rinses: 3 };
-export const LIME_SOURCE = 'USDA Complete Guide to Home Canning (rev. 2015), Guide 6, "Bread-and-butter pickles", variation for firmer pickles (1 cup pickling lime and 1/2 cup salt per gallon of water, for the recipe\'s 6 lb of cucumbers, about 8 pints)';
+export const LIME = {
+  recipe: 'bread-and-butter-pickles' as const,
+  cupsPerGallon: 1,
+  saltCupsPerGallon: 0.5,
+  pintsPerGallon: 8,
+  soakHours: [12, 24] as [number, number],
+  rinses: 3,
+};
+export const LIME_SOURCE =
+  'USDA Complete Guide to Home Canning (rev. 2015), Guide 6, "Bread-and-butter pickles", variation for firmer pickles (1 cup pickling lime and 1/2 cup salt per gallon of water, for the recipe\'s 6 lb of cucumbers, about 8 pints)';
 /** Calcium chloride label directions, as quoted in extension material (secondary source). */
-export const CALCIUM_CHLORIDE_SOURCE = 'Calcium chloride label directions (rounded 1/8 tsp per pint, 1/4 tsp per quart), as quoted in extension material (secondary source)';
+export const CALCIUM_CHLORIDE_SOURCE =
+  'Calcium chloride label directions (rounded 1/8 tsp per pint, 1/4 tsp per quart), as quoted in extension material (secondary source)';
 
 const COMMON_CAUTION = "A crisping agent only firms texture: it does not replace the tested recipe's vinegar, salt or processing time.";
 
@@ -62,7 +71,10 @@ export function crispingPlan({ agent, jar, jars }: { agent: CrispingAgent | stri
   }
   const recipe = PRODUCTS[LIME.recipe];
   if (!recipe.jars.includes(size)) {
-    throw outsideTable(`Pickling lime belongs to one tested recipe, ${recipe.name.toLowerCase()}, which is canned in ${recipe.jars.join(' and ')} jars only, not ${size} jars.`, 'jar');
+    throw outsideTable(
+      `Pickling lime belongs to one tested recipe, ${recipe.name.toLowerCase()}, which is canned in ${recipe.jars.join(' and ')} jars only, not ${size} jars.`,
+      'jar',
+    );
   }
   const pints = count * JAR_PINTS[size];
   // One gallon of lime water per whole recipe (6 lb cucumbers, about 8 pints): the guide gives no other amount.

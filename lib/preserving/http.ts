@@ -53,18 +53,17 @@ export function choiceParam<T extends string>(choices: readonly T[], param: stri
  * feet. Both or neither is a 400 naming them.
  */
 export function withAltitude<S extends z.ZodRawShape>(shape: S) {
-  return z
-    .object({ ...shape, altitudeFt: optionalNumberParam(RULES.altitudeFt), altitudeM: optionalNumberParam(RULES.altitudeM) })
-    .transform((query, ctx) => {
-      const { altitudeFt, altitudeM, ...rest } = query as { altitudeFt?: number; altitudeM?: number } & Record<string, unknown>;
-      if ((altitudeFt === undefined) === (altitudeM === undefined)) {
-        // Neither: the same sentence as a missing feet value; both: refused rather than one silently winning.
-        const message = altitudeFt === undefined ? `Enter ${RULES.altitudeFt.label} as a number.` : 'Give the altitude once: altitudeFt in feet, or altitudeM in metres.';
-        ctx.addIssue({ code: 'custom', path: ['altitudeFt'], message });
-        return z.NEVER;
-      }
-      return { ...(rest as z.infer<z.ZodObject<S>>), altitudeFt: altitudeFt ?? altitudeInFeet(altitudeM as number, 'm') };
-    });
+  return z.object({ ...shape, altitudeFt: optionalNumberParam(RULES.altitudeFt), altitudeM: optionalNumberParam(RULES.altitudeM) }).transform((query, ctx) => {
+    const { altitudeFt, altitudeM, ...rest } = query as { altitudeFt?: number; altitudeM?: number } & Record<string, unknown>;
+    if ((altitudeFt === undefined) === (altitudeM === undefined)) {
+      // Neither: the same sentence as a missing feet value; both: refused rather than one silently winning.
+      const message =
+        altitudeFt === undefined ? `Enter ${RULES.altitudeFt.label} as a number.` : 'Give the altitude once: altitudeFt in feet, or altitudeM in metres.';
+      ctx.addIssue({ code: 'custom', path: ['altitudeFt'], message });
+      return z.NEVER;
+    }
+    return { ...(rest as z.infer<z.ZodObject<S>>), altitudeFt: altitudeFt ?? altitudeInFeet(altitudeM as number, 'm') };
+  });
 }
 
 /** A product id: must be given (400); an unknown one is the function's 404. */
@@ -76,7 +75,11 @@ export const optionalProductParam = z
   .transform((raw) => (raw === undefined || raw === null || raw.trim() === '' ? undefined : raw.trim()));
 
 /** A free-text unit name, checked by the function it is passed to. */
-export const unitParam = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, `Choose ${what}.`);
+export const unitParam = (what: string) =>
+  z
+    .string({ error: `Choose ${what}.` })
+    .trim()
+    .min(1, `Choose ${what}.`);
 
 /** Turns a PreservingError into the API's answer: 400 naming the field, 404, or 422. */
 export function toAppError(error: PreservingError): AppError {

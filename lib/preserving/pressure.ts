@@ -36,7 +36,10 @@ export function pressureForAltitude({ gauge, altitudeFt }: { gauge: Gauge | stri
   const type = checkChoice(gauge, GAUGES, 'gauge', 'a gauge type');
   const altitude = checkNumber(altitudeFt, ALTITUDE_RULE);
   if (altitude > MAX_TABLE_ALTITUDE_FT) {
-    throw outsideTable(`The published pressure tables go up to ${MAX_TABLE_ALTITUDE_FT.toLocaleString('en-US')} ft; ${altitude.toLocaleString('en-US')} ft is above them.`, 'altitudeFt');
+    throw outsideTable(
+      `The published pressure tables go up to ${MAX_TABLE_ALTITUDE_FT.toLocaleString('en-US')} ft; ${altitude.toLocaleString('en-US')} ft is above them.`,
+      'altitudeFt',
+    );
   }
   // A fraction of a foot above a band's top belongs to the next band (the safer reading).
   const row = PRESSURE_TABLE[type].find((r) => altitude <= (r.toFt ?? Infinity))!;
@@ -44,7 +47,8 @@ export function pressureForAltitude({ gauge, altitudeFt }: { gauge: Gauge | stri
     pounds: row.pounds,
     gauge: type,
     altitudeBand: { fromFt: row.fromFt, toFt: row.toFt },
-    source: row.confidence === 'secondary' ? `${SOURCE}; the 8,001–10,000 ft dial row is not in the USDA tables (a jar maker's altitude chart, unconfirmed)` : SOURCE,
+    source:
+      row.confidence === 'secondary' ? `${SOURCE}; the 8,001–10,000 ft dial row is not in the USDA tables (a jar maker's altitude chart, unconfirmed)` : SOURCE,
     confidence: row.confidence,
   };
 }

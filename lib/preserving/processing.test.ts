@@ -75,7 +75,10 @@ describe('processingTime', () => {
 
   it('gives the low-temperature pasteurization option (180–185 °F for 30 min) where the guide allows it', () => {
     // USDA Complete Guide, rev. 2015, Guide 6, "Low-temperature pasteurization treatment".
-    expect(processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: 0 }).lowTemperaturePasteurization).toEqual({ waterTempF: [180, 185], minutes: 30 });
+    expect(processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: 0 }).lowTemperaturePasteurization).toEqual({
+      waterTempF: [180, 185],
+      minutes: 30,
+    });
     expect(processingTime({ product: 'pickle-relish', jar: 'pint', altitudeFt: 0 }).lowTemperaturePasteurization).toBeUndefined();
   });
 
@@ -94,9 +97,19 @@ describe('processingTime', () => {
   });
 
   it('refuses invalid input naming the parameter, and unknown products as not-found', () => {
-    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: -1501 }))).toMatchObject({ kind: 'invalid', param: 'altitudeFt', message: 'The altitude in feet must be at least -1,500.' });
-    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: Number.NaN }))).toMatchObject({ kind: 'invalid', param: 'altitudeFt' });
-    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'gallon', altitudeFt: 0 }))).toMatchObject({ kind: 'invalid', param: 'jar' });
+    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: -1501 }))).toMatchObject({
+      kind: 'invalid',
+      param: 'altitudeFt',
+      message: 'The altitude in feet must be at least -1,500.',
+    });
+    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'pint', altitudeFt: Number.NaN }))).toMatchObject({
+      kind: 'invalid',
+      param: 'altitudeFt',
+    });
+    expect(catchError(() => processingTime({ product: 'fresh-pack-dill-pickles', jar: 'gallon', altitudeFt: 0 }))).toMatchObject({
+      kind: 'invalid',
+      param: 'jar',
+    });
     expect(catchError(() => processingTime({ product: 'okra', jar: 'pint', altitudeFt: 0 }))).toMatchObject({ kind: 'not-found', param: 'product' });
   });
 

@@ -42,7 +42,10 @@ export function sterilizeJarsFor(minutes: number, altitudeFt: number): Sterilize
 export function altitudeBandIndex(altitudeFt: number, bands: readonly AltitudeBand[] = ALTITUDE_BANDS): number {
   checkNumber(altitudeFt, ALTITUDE_RULE);
   if (altitudeFt > MAX_TABLE_ALTITUDE_FT) {
-    throw outsideTable(`The published processing tables go up to ${MAX_TABLE_ALTITUDE_FT.toLocaleString('en-US')} ft; ${altitudeFt.toLocaleString('en-US')} ft is above them.`, 'altitudeFt');
+    throw outsideTable(
+      `The published processing tables go up to ${MAX_TABLE_ALTITUDE_FT.toLocaleString('en-US')} ft; ${altitudeFt.toLocaleString('en-US')} ft is above them.`,
+      'altitudeFt',
+    );
   }
   const index = bands.findIndex((band) => altitudeFt <= (band.toFt ?? MAX_TABLE_ALTITUDE_FT));
   return index === -1 ? bands.length - 1 : index;
@@ -73,4 +76,3 @@ export function isProcessedLongEnough(input: ProcessingTimeInput & { processedMi
   const processed = checkNumber(input.processedMinutes, RULES.processedMinutes);
   return processed >= processingTime(input).minutes;
 }
-

@@ -26,7 +26,11 @@ export type ProductId = (typeof PRODUCT_IDS)[number];
 export const JAR_SIZES = ['half-pint', 'pint', 'quart'] as const;
 export type JarSize = (typeof JAR_SIZES)[number];
 
-export const JAR_LABELS: Record<JarSize, string> = { 'half-pint': 'half-pint (8 fl oz, 237 mL)', pint: 'pint (16 fl oz, 473 mL)', quart: 'quart (32 fl oz, 946 mL)' };
+export const JAR_LABELS: Record<JarSize, string> = {
+  'half-pint': 'half-pint (8 fl oz, 237 mL)',
+  pint: 'pint (16 fl oz, 473 mL)',
+  quart: 'quart (32 fl oz, 946 mL)',
+};
 
 export type AltitudeBand = { fromFt: number; toFt: number | null };
 
@@ -92,7 +96,11 @@ export type TestedLiquid = {
 
 const GUIDE6 = 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 6';
 
-const liquid = (l: Omit<TestedLiquid, 'vinegarAcidityPct' | 'sugarCountsInVolume'>): TestedLiquid => ({ vinegarAcidityPct: 5, sugarCountsInVolume: false, ...l });
+const liquid = (l: Omit<TestedLiquid, 'vinegarAcidityPct' | 'sugarCountsInVolume'>): TestedLiquid => ({
+  vinegarAcidityPct: 5,
+  sugarCountsInVolume: false,
+  ...l,
+});
 
 export const PRODUCTS: Record<ProductId, Product> = {
   'fresh-pack-dill-pickles': {
@@ -108,7 +116,14 @@ export const PRODUCTS: Record<ProductId, Product> = {
     lowTemperaturePasteurization: true,
     // 1 1/2 qt vinegar (5 %), 2 qt water, 1/2 cup salt, 1/4 cup sugar (Guide 6:20 as reproduced by
     // Michigan State University Extension, 1997, from the 1994 edition).
-    testedLiquid: liquid({ vinegarCups: 6, waterCups: 8, sugarCups: 0.25, saltCups: 0.5, source: `${GUIDE6}, "Quick fresh-pack dill pickles": 1 1/2 qt vinegar (5 %), 2 qt water, 1/4 cup sugar, 1/2 cup salt`, confidence: 'verified' }),
+    testedLiquid: liquid({
+      vinegarCups: 6,
+      waterCups: 8,
+      sugarCups: 0.25,
+      saltCups: 0.5,
+      source: `${GUIDE6}, "Quick fresh-pack dill pickles": 1 1/2 qt vinegar (5 %), 2 qt water, 1/4 cup sugar, 1/2 cup salt`,
+      confidence: 'verified',
+    }),
   },
   'bread-and-butter-pickles': {
     id: 'bread-and-butter-pickles',
@@ -122,7 +137,13 @@ export const PRODUCTS: Record<ProductId, Product> = {
     confidence: 'verified',
     lowTemperaturePasteurization: true,
     // 4 cups vinegar (5 %), 4 1/2 cups sugar, no water (Guide 6:19, Michigan State University Extension reproduction).
-    testedLiquid: liquid({ vinegarCups: 4, waterCups: 0, sugarCups: 4.5, source: `${GUIDE6}, "Bread-and-butter pickles": 4 cups vinegar (5 %), 4 1/2 cups sugar, no water`, confidence: 'verified' }),
+    testedLiquid: liquid({
+      vinegarCups: 4,
+      waterCups: 0,
+      sugarCups: 4.5,
+      source: `${GUIDE6}, "Bread-and-butter pickles": 4 cups vinegar (5 %), 4 1/2 cups sugar, no water`,
+      confidence: 'verified',
+    }),
   },
   'pickle-relish': {
     id: 'pickle-relish',
@@ -134,7 +155,13 @@ export const PRODUCTS: Record<ProductId, Product> = {
     times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
     source: `${GUIDE6}, "Pickle relish", recommended process time table`,
     confidence: 'verified',
-    testedLiquid: liquid({ vinegarCups: 6, waterCups: 0, sugarCups: 2, source: `${GUIDE6}, "Pickle relish": 6 cups white vinegar (5 %), 2 cups sugar, no water (from memory; the batch planner's recipe has the same)`, confidence: 'memory' }),
+    testedLiquid: liquid({
+      vinegarCups: 6,
+      waterCups: 0,
+      sugarCups: 2,
+      source: `${GUIDE6}, "Pickle relish": 6 cups white vinegar (5 %), 2 cups sugar, no water (from memory; the batch planner's recipe has the same)`,
+      confidence: 'memory',
+    }),
   },
   'dilly-beans': {
     id: 'dilly-beans',
@@ -149,7 +176,14 @@ export const PRODUCTS: Record<ProductId, Product> = {
     // Equal parts vinegar and water: So Easy to Preserve, 6th ed., as reproduced by University of
     // Minnesota Extension (2 1/2 cups each, read there); Guide 6's own version has 4 cups each (from
     // memory, also on secondary pages). The batch planner scales the same recipe.
-    testedLiquid: liquid({ vinegarCups: 2.5, waterCups: 2.5, saltCups: 0.25, source: 'So Easy to Preserve, 6th ed. (University of Georgia Extension, 2014), "Pickled dilly beans": 2 1/2 cups white vinegar (5 %), 2 1/2 cups water, as reproduced by University of Minnesota Extension', confidence: 'secondary' }),
+    testedLiquid: liquid({
+      vinegarCups: 2.5,
+      waterCups: 2.5,
+      saltCups: 0.25,
+      source:
+        'So Easy to Preserve, 6th ed. (University of Georgia Extension, 2014), "Pickled dilly beans": 2 1/2 cups white vinegar (5 %), 2 1/2 cups water, as reproduced by University of Minnesota Extension',
+      confidence: 'secondary',
+    }),
   },
   'pickled-beets': {
     id: 'pickled-beets',
@@ -163,7 +197,13 @@ export const PRODUCTS: Record<ProductId, Product> = {
     // 1,001–3,000 ft, the other prints 45 there, out of order with the rest (a misprint, taken as 35).
     source: `${GUIDE6}, "Pickled beets", recommended process time table (four altitude bands)`,
     confidence: 'secondary',
-    testedLiquid: liquid({ vinegarCups: 4, waterCups: 2, sugarCups: 2, source: `${GUIDE6}, "Pickled beets": 4 cups vinegar (5 %), 2 cups water, 2 cups sugar (from memory, not confirmed here)`, confidence: 'memory' }),
+    testedLiquid: liquid({
+      vinegarCups: 4,
+      waterCups: 2,
+      sugarCups: 2,
+      source: `${GUIDE6}, "Pickled beets": 4 cups vinegar (5 %), 2 cups water, 2 cups sugar (from memory, not confirmed here)`,
+      confidence: 'memory',
+    }),
   },
   'pickled-hot-peppers': {
     id: 'pickled-hot-peppers',
@@ -175,7 +215,13 @@ export const PRODUCTS: Record<ProductId, Product> = {
     times: { 'half-pint': [10, 15, 20], pint: [10, 15, 20] },
     source: `${GUIDE6}, "Pickled hot peppers", recommended process time table`,
     confidence: 'verified',
-    testedLiquid: liquid({ vinegarCups: 5, waterCups: 1, sugarCups: 0.125, source: `${GUIDE6}, "Pickled hot peppers": 5 cups vinegar (5 %), 1 cup water, 2 tbsp sugar (read on secondary pages quoting the National Center for Home Food Preservation)`, confidence: 'secondary' }),
+    testedLiquid: liquid({
+      vinegarCups: 5,
+      waterCups: 1,
+      sugarCups: 0.125,
+      source: `${GUIDE6}, "Pickled hot peppers": 5 cups vinegar (5 %), 1 cup water, 2 tbsp sugar (read on secondary pages quoting the National Center for Home Food Preservation)`,
+      confidence: 'secondary',
+    }),
   },
   'fermented-dill-pickles': {
     id: 'fermented-dill-pickles',
@@ -190,7 +236,13 @@ export const PRODUCTS: Record<ProductId, Product> = {
     lowTemperaturePasteurization: true,
     // Per gallon of crock: 1/2 cup salt, 1/4 cup vinegar (5 %), 8 cups water. Its acid comes from the
     // fermentation, so the check that fits it is the brine's salt by weight (BRINE_BY_WEIGHT below).
-    testedLiquid: liquid({ vinegarCups: 0.25, waterCups: 8, saltCups: 0.5, source: `${GUIDE6}, "Dill pickles" (fermented): per gallon, 1/2 cup salt, 1/4 cup vinegar (5 %), 8 cups water`, confidence: 'verified' }),
+    testedLiquid: liquid({
+      vinegarCups: 0.25,
+      waterCups: 8,
+      saltCups: 0.5,
+      source: `${GUIDE6}, "Dill pickles" (fermented): per gallon, 1/2 cup salt, 1/4 cup vinegar (5 %), 8 cups water`,
+      confidence: 'verified',
+    }),
   },
 };
 
@@ -223,6 +275,7 @@ export function testedAceticAcidPct(l: TestedLiquid): number {
 export const VINEGAR_PICKLED_IDS = PRODUCT_IDS.filter((id) => id !== 'fermented-dill-pickles');
 
 /** The weakest tested vinegar liquid in the product table (quick fresh-pack dill pickles, 6 : 8). */
-export const WEAKEST_TESTED = VINEGAR_PICKLED_IDS.map((id) => ({ product: PRODUCTS[id], aceticAcidPct: testedAceticAcidPct(PRODUCTS[id].testedLiquid) })).reduce((a, b) =>
-  b.aceticAcidPct < a.aceticAcidPct ? b : a,
-);
+export const WEAKEST_TESTED = VINEGAR_PICKLED_IDS.map((id) => ({
+  product: PRODUCTS[id],
+  aceticAcidPct: testedAceticAcidPct(PRODUCTS[id].testedLiquid),
+})).reduce((a, b) => (b.aceticAcidPct < a.aceticAcidPct ? b : a));

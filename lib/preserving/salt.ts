@@ -22,7 +22,8 @@ export const SALTS: Record<SaltKind, SaltInfo> = {
     // Low end: University of Wisconsin-Extension B2267 (quoted secondhand) equates 220 g of flake salt
     // with 1 cup of canning salt, i.e. about 4.6 g per tsp; high end: about 6 g per tsp, as fine table salt.
     gPerTspRange: [4.6, 6],
-    gPerTspSource: 'no published figure found: 4.6 g (University of Wisconsin-Extension B2267, 220 g per cup, quoted secondhand) to about 6 g per teaspoon (as fine table salt, from memory); weigh it',
+    gPerTspSource:
+      'no published figure found: 4.6 g (University of Wisconsin-Extension B2267, 220 g per cup, quoted secondhand) to about 6 g per teaspoon (as fine table salt, from memory); weigh it',
     suitable: true,
     why: 'Canning or pickling salt is pure salt with no anti-caking agent or iodine: it is what tested pickle recipes are measured with.',
   },
@@ -81,7 +82,8 @@ export type SaltToGramsResult = {
 };
 
 /** Said beside every salt or sugar amount converted from a spoon or cup. */
-export const BY_SPOON_NOTE = 'By weight is exact; by spoon or cup is approximate (brand, crystal and how the spoon is filled change it): weigh it when it matters.';
+export const BY_SPOON_NOTE =
+  'By weight is exact; by spoon or cup is approximate (brand, crystal and how the spoon is filled change it): weigh it when it matters.';
 
 const brine = (grams: number, waterMl: number) => (grams / (grams + waterMl * WATER_G_PER_ML)) * 100;
 
@@ -92,8 +94,19 @@ export function saltToGrams({ salt, amount, unit, waterMl }: SaltToGramsInput): 
   const value = checkNumber(amount, RULES.amount);
   const grams = gramsOf(value, unit, info.gPerTsp * 48, 'the salt');
   const byWeight = isUnit(unit) && unitKind(unit) === 'mass';
-  const gramsRange: [number, number] = byWeight ? [grams, grams] : [(grams * info.gPerTspRange[0]) / info.gPerTsp, (grams * info.gPerTspRange[1]) / info.gPerTsp];
-  const result: SaltToGramsResult = { grams, gramsRange, byWeight, suitable: info.suitable, why: info.why, gPerTsp: info.gPerTsp, gPerTspRange: info.gPerTspRange, source: info.gPerTspSource };
+  const gramsRange: [number, number] = byWeight
+    ? [grams, grams]
+    : [(grams * info.gPerTspRange[0]) / info.gPerTsp, (grams * info.gPerTspRange[1]) / info.gPerTsp];
+  const result: SaltToGramsResult = {
+    grams,
+    gramsRange,
+    byWeight,
+    suitable: info.suitable,
+    why: info.why,
+    gPerTsp: info.gPerTsp,
+    gPerTspRange: info.gPerTspRange,
+    source: info.gPerTspSource,
+  };
   if (waterMl !== undefined) {
     const water = checkNumber(waterMl, RULES.waterMl);
     if (grams + water <= 0) throw new PreservingError('invalid', 'Enter some salt or water: both are 0.', 'waterMl');
@@ -104,11 +117,15 @@ export function saltToGrams({ salt, amount, unit, waterMl }: SaltToGramsInput): 
 }
 
 /** Salt for a brine of a given strength by weight (salt ÷ (salt + water) × 100). */
-export function saltForBrine({ salt, waterMl, brinePct }: { salt: SaltKind | string; waterMl: number; brinePct: number }): { grams: number; teaspoons: number; teaspoonsRange: [number, number] } {
+export function saltForBrine({ salt, waterMl, brinePct }: { salt: SaltKind | string; waterMl: number; brinePct: number }): {
+  grams: number;
+  teaspoons: number;
+  teaspoonsRange: [number, number];
+} {
   const kind = checkChoice(salt, SALT_KINDS, 'salt', 'a kind of salt');
   const water = checkNumber(waterMl, RULES.waterMl);
   const pct = checkNumber(brinePct, RULES.brinePct);
-  const grams = ((pct / (100 - pct)) * water * WATER_G_PER_ML);
+  const grams = (pct / (100 - pct)) * water * WATER_G_PER_ML;
   const [low, high] = SALTS[kind].gPerTspRange;
   return { grams, teaspoons: grams / SALTS[kind].gPerTsp, teaspoonsRange: [grams / high, grams / low] };
 }
@@ -124,5 +141,9 @@ export const FERMENTED_BRINE = (() => {
   const liquidG = (l.vinegarCups + l.waterCups) * mlPer('cup') * WATER_G_PER_ML;
   const saltTsp = (l.saltCups ?? 0) * 48;
   const [low, high] = SALTS.canning.gPerTspRange.map((g) => brine(saltTsp * g, liquidG));
-  return { minPct: low, maxPct: high, source: `${l.source}; salt by weight computed with canning salt at ${SALTS.canning.gPerTspRange.join(' to ')} g per teaspoon` };
+  return {
+    minPct: low,
+    maxPct: high,
+    source: `${l.source}; salt by weight computed with canning salt at ${SALTS.canning.gPerTspRange.join(' to ')} g per teaspoon`,
+  };
 })();

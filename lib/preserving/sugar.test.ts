@@ -10,7 +10,7 @@ describe('sugarToGrams', () => {
     expect(sugarToGrams({ sugar: 'brown-packed', amount: 1, unit: 'cup' }).grams).toBeCloseTo(220, 9);
   });
 
-  it('gives about 4.2 g for a teaspoon of granulated sugar, the same table\'s teaspoon portion (from memory), ±2 %', () => {
+  it("gives about 4.2 g for a teaspoon of granulated sugar, the same table's teaspoon portion (from memory), ±2 %", () => {
     const grams = sugarToGrams({ sugar: 'granulated', amount: 1, unit: 'tsp' }).grams;
     expect(grams).toBeGreaterThan(4.2 * 0.98);
     expect(grams).toBeLessThan(4.2 * 1.02);

@@ -49,8 +49,23 @@ describe('convert: cross-checked against the convert-units package (npm, 2.3.4)'
   // convert-units rounds some definitions (lb = 453.592 g, oz = 28.3495 g; its US volumes and the
   // foot carry about 3e-9 relative error), so the tolerance is relative 2e-6.
   const names: Partial<Record<Unit, string>> = {
-    cup: 'cup', tbsp: 'Tbs', tsp: 'tsp', 'fl-oz': 'fl-oz', pint: 'pnt', quart: 'qt', gallon: 'gal', mL: 'ml', L: 'l',
-    g: 'g', kg: 'kg', oz: 'oz', lb: 'lb', F: 'F', C: 'C', ft: 'ft', m: 'm',
+    cup: 'cup',
+    tbsp: 'Tbs',
+    tsp: 'tsp',
+    'fl-oz': 'fl-oz',
+    pint: 'pnt',
+    quart: 'qt',
+    gallon: 'gal',
+    mL: 'ml',
+    L: 'l',
+    g: 'g',
+    kg: 'kg',
+    oz: 'oz',
+    lb: 'lb',
+    F: 'F',
+    C: 'C',
+    ft: 'ft',
+    m: 'm',
   };
   it('agrees for every pair of units of the same kind over random values', () => {
     const pairs = UNITS.flatMap((a) => UNITS.filter((b) => unitKind(a) === unitKind(b)).map((b) => [a, b] as const));

@@ -26,8 +26,27 @@ export const DEFAULT_TIME_ZONE = 'America/Denver';
 /** The program's identity, or the fallback from CERTIFICATE_PROGRAM_NAME when the page was never saved. */
 export async function getProgramIdentity(options: { transaction?: Transaction } = {}): Promise<ProgramIdentity> {
   const row = await db().ProgramSetting.findByPk(ROW_ID, { raw: true, transaction: options.transaction });
-  if (!row) return { name: getEnv().CERTIFICATE_PROGRAM_NAME, shortName: null, contactEmail: null, contactPhone: null, postalAddress: null, timeZone: DEFAULT_TIME_ZONE, logoKey: null, configured: false };
-  return { name: row.name, shortName: row.shortName, contactEmail: row.contactEmail, contactPhone: row.contactPhone, postalAddress: row.postalAddress, timeZone: row.timeZone, logoKey: row.logoKey ?? null, configured: true };
+  if (!row)
+    return {
+      name: getEnv().CERTIFICATE_PROGRAM_NAME,
+      shortName: null,
+      contactEmail: null,
+      contactPhone: null,
+      postalAddress: null,
+      timeZone: DEFAULT_TIME_ZONE,
+      logoKey: null,
+      configured: false,
+    };
+  return {
+    name: row.name,
+    shortName: row.shortName,
+    contactEmail: row.contactEmail,
+    contactPhone: row.contactPhone,
+    postalAddress: row.postalAddress,
+    timeZone: row.timeZone,
+    logoKey: row.logoKey ?? null,
+    configured: true,
+  };
 }
 
 /** Saves the program page (and a new logo, re-encoded, when one is given); the change is audited with what changed. */
@@ -46,7 +65,10 @@ export async function saveProgramSettings(actorId: number, input: ProgramSetting
     const changed = Object.keys(input).filter((k) => !row || row.get(k as keyof ProgramSettingsInput) !== input[k as keyof ProgramSettingsInput]);
     if (row) await row.update(next, { transaction });
     else await ProgramSetting.create({ id: ROW_ID, ...next }, { transaction });
-    await audit({ actorId, action: 'program.settings_saved', subjectType: 'program', subjectId: ROW_ID, data: { changed, logo: logoKey ?? null } }, { transaction });
+    await audit(
+      { actorId, action: 'program.settings_saved', subjectType: 'program', subjectId: ROW_ID, data: { changed, logo: logoKey ?? null } },
+      { transaction },
+    );
   });
 }
 

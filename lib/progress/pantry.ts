@@ -43,7 +43,12 @@ export async function fetchPantry(userId: number): Promise<Shelf[]> {
       status: e.status,
       finalExam: content?.finalExam ?? null,
       // The jars of the lessons in force when the enrollment began.
-      lessons: lessonsForVersion(getLessons(e.courseSlug), Number(e.contentVersion)).map((l) => ({ slug: l.slug, title: l.title, order: l.order, quiz: l.quiz })),
+      lessons: lessonsForVersion(getLessons(e.courseSlug), Number(e.contentVersion)).map((l) => ({
+        slug: l.slug,
+        title: l.title,
+        order: l.order,
+        quiz: l.quiz,
+      })),
       read,
       passedQuizzes: passed.filter((q) => q.startsWith(`${e.courseSlug}--`)),
     });

@@ -11,7 +11,11 @@ const base = { slug: 'c', title: 'Course', status: 'active' as const, finalExam:
 describe('buildShelf', () => {
   it('orders jars by lesson and fills each half for reading, half for the quiz', () => {
     const shelf = buildShelf({ ...base, read: { why: '2026-12-01T00:00:00Z', acidity: '2026-12-01T00:00:00Z' }, passedQuizzes: ['c--acidity', 'c--salt'] });
-    expect(shelf.jars.map((j) => [j.lessonSlug, j.fill])).toEqual([['why', 0.5], ['acidity', 1], ['salt', 0.5]]);
+    expect(shelf.jars.map((j) => [j.lessonSlug, j.fill])).toEqual([
+      ['why', 0.5],
+      ['acidity', 1],
+      ['salt', 0.5],
+    ]);
     expect(shelf.filled).toBe(1);
     expect(shelf.jars[1].label).toBe('Acidity: read, quiz passed');
     expect(shelf.jars[0].label).toBe('Why: read, quiz not passed yet');
@@ -28,7 +32,7 @@ describe('buildShelf', () => {
     expect(exam.next?.href).toBe('/courses/c');
   });
 
-  it('a course whose final exam is also its lessons\' quiz shows no separate exam; payment and withdrawal steps', () => {
+  it("a course whose final exam is also its lessons' quiz shows no separate exam; payment and withdrawal steps", () => {
     expect(buildShelf({ ...base, finalExam: 'c--why' }).finalExam).toBeNull();
     expect(buildShelf({ ...base, status: 'awaiting_payment' }).next?.label).toMatch(/paying/);
     expect(buildShelf({ ...base, status: 'withdrawn' }).next?.label).toMatch(/withdrew/);

@@ -47,7 +47,16 @@ export function buildShelf(input: ShelfCourseInput): Shelf {
     .map((l): Jar => {
       const read = Boolean(input.read[l.slug]);
       const quizPassed = passed.has(l.quiz);
-      return { lessonSlug: l.slug, title: l.title, order: l.order, quizSlug: l.quiz, read, quizPassed, fill: read && quizPassed ? 1 : read || quizPassed ? 0.5 : 0, label: jarLabel(l.title, read, quizPassed) };
+      return {
+        lessonSlug: l.slug,
+        title: l.title,
+        order: l.order,
+        quizSlug: l.quiz,
+        read,
+        quizPassed,
+        fill: read && quizPassed ? 1 : read || quizPassed ? 0.5 : 0,
+        label: jarLabel(l.title, read, quizPassed),
+      };
     });
   const lessonQuizzes = new Set(jars.map((j) => j.quizSlug));
   const finalExam = input.finalExam && !lessonQuizzes.has(input.finalExam) ? { quizSlug: input.finalExam, passed: passed.has(input.finalExam) } : null;

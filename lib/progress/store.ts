@@ -18,7 +18,8 @@ export async function courseIdFor(courseSlug: string): Promise<number> {
  */
 export async function markLessonRead(userId: number, courseSlug: string, lessonSlug: string): Promise<{ readAt: Date; created: boolean }> {
   const courseId = await courseIdFor(courseSlug);
-  if (!getLesson(courseSlug, lessonSlug)) throw new AppError('not_found', 'There is no such lesson in this course.', { fields: { lessonSlug: ['no such lesson'] } });
+  if (!getLesson(courseSlug, lessonSlug))
+    throw new AppError('not_found', 'There is no such lesson in this course.', { fields: { lessonSlug: ['no such lesson'] } });
   if (!(await isEnrolled(userId, courseSlug))) {
     throw new AppError('forbidden', 'Enroll in this course to keep track of the lessons you read.');
   }

@@ -7,7 +7,18 @@ import { AppError } from '@/lib/errors';
 import { roleAllows } from '@/lib/roles';
 import { db } from '@/models';
 import { convertUnits, getBank } from './bank';
-import { checkAnswers, drawQuestions, gradeAttempt, publicQuestions, responseTokens, rightAnswer, type Answers, type Drawn, type Grade, type PublicQuestion } from './grading';
+import {
+  checkAnswers,
+  drawQuestions,
+  gradeAttempt,
+  publicQuestions,
+  responseTokens,
+  rightAnswer,
+  type Answers,
+  type Drawn,
+  type Grade,
+  type PublicQuestion,
+} from './grading';
 import type { Bank } from './schema';
 
 // Starting, submitting and reading quiz attempts. Every rule is enforced here, on the server.
@@ -122,7 +133,11 @@ function view(row: AttemptRow, bank: Bank, passMarkPct: number, withResult: bool
         if (!q || !d) return [];
         const raw = stored.given[r.id];
         const given =
-          raw === undefined ? null : q.kind === 'single' || q.kind === 'multiple' ? responseTokens(d, r.response) : (raw as boolean | { value: number; unit: string });
+          raw === undefined
+            ? null
+            : q.kind === 'single' || q.kind === 'multiple'
+              ? responseTokens(d, r.response)
+              : (raw as boolean | { value: number; unit: string });
         return [{ id: r.id, correct: r.correct, answered: r.answered, given, right: rightAnswer(q, d), explanation: q.explanation }];
       }),
     };
@@ -183,10 +198,7 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
     const pool = questionPool(bank, enrollment.contentVersion);
     const drawn = drawQuestions(pool, bank.draw, random);
     const deadlineAt = bank.timeLimitMinutes ? new Date(now.getTime() + bank.timeLimitMinutes * 60_000) : null;
-    const row = await QuizAttempt.create(
-      { userId: user.id, courseId: course.id, quizSlug, drawn, startedAt: now, deadlineAt },
-      { transaction },
-    );
+    const row = await QuizAttempt.create({ userId: user.id, courseId: course.id, quizSlug, drawn, startedAt: now, deadlineAt }, { transaction });
     const plain = row.get({ plain: true }) as unknown as AttemptRow;
     return { attempt: view(plain, bank, passMarkFor(bank.course), false), created: true };
   });
@@ -290,7 +302,10 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
 
 /** An attempt for its owner, an instructor or a coordinator; the result only once submitted. */
 export async function readAttempt(user: SessionUser, attemptId: number): Promise<AttemptView> {
-  const rows = await db().sequelize.query<AttemptRow>('SELECT * FROM quiz_attempts WHERE id = :id', { replacements: { id: attemptId }, type: QueryTypes.SELECT });
+  const rows = await db().sequelize.query<AttemptRow>('SELECT * FROM quiz_attempts WHERE id = :id', {
+    replacements: { id: attemptId },
+    type: QueryTypes.SELECT,
+  });
   const row = rows[0];
   if (!row) throw new AppError('not_found', 'There is no such attempt.');
   const staff = roleAllows(user.role, ['instructor']);

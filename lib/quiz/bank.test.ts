@@ -54,18 +54,47 @@ describe('bank validation', () => {
   const minimal = { slug: 'pickling-and-canning--x', course: 'pickling-and-canning', title: 'X' };
 
   it('names the file and the field of a broken question', () => {
-    expect(() => parseBankFile({ ...minimal, questions: [{ id: 'q', kind: 'single', prompt: 'P', explanation: 'E', choices: [{ id: 'a', text: 'A' }, { id: 'b', text: 'B' }], answer: 'z' }] }, 'x.json')).toThrow(
-      /x\.json: questions\.0\.answer: the answer must be one of the choices/,
-    );
-    expect(() => parseBankFile({ ...minimal, questions: [{ id: 'q', kind: 'numeric', prompt: 'P', explanation: 'E', units: ['furlong'], answer: 1 }] }, 'x.json')).toThrow(/^x\.json: questions\.0/);
+    expect(() =>
+      parseBankFile(
+        {
+          ...minimal,
+          questions: [
+            {
+              id: 'q',
+              kind: 'single',
+              prompt: 'P',
+              explanation: 'E',
+              choices: [
+                { id: 'a', text: 'A' },
+                { id: 'b', text: 'B' },
+              ],
+              answer: 'z',
+            },
+          ],
+        },
+        'x.json',
+      ),
+    ).toThrow(/x\.json: questions\.0\.answer: the answer must be one of the choices/);
+    expect(() =>
+      parseBankFile({ ...minimal, questions: [{ id: 'q', kind: 'numeric', prompt: 'P', explanation: 'E', units: ['furlong'], answer: 1 }] }, 'x.json'),
+    ).toThrow(/^x\.json: questions\.0/);
   });
 
   it('refuses a draw larger than the bank, a duplicate id, an unknown include and a failing compute', () => {
     const q = { id: 'q', kind: 'true-false', prompt: 'P', explanation: 'E', answer: true };
     expect(() => resolveBanks([parseBankFile({ ...minimal, draw: 2, questions: [q] }, 'x')], COMPUTE_FNS)).toThrow(BankError);
     expect(() => resolveBanks([parseBankFile({ ...minimal, questions: [q, q] }, 'x')], COMPUTE_FNS)).toThrow(/appears twice/);
-    expect(() => resolveBanks([parseBankFile({ ...minimal, include: ['pickling-and-canning--nope'], questions: [q] }, 'x')], COMPUTE_FNS)).toThrow(/unknown quiz/);
-    const bad = { id: 'n', kind: 'numeric', prompt: 'P', explanation: 'E', units: ['min'], answer: { compute: 'processingTime', args: { product: 'no-such', jar: 'pint', altitudeFt: 0 }, field: 'minutes' } };
+    expect(() => resolveBanks([parseBankFile({ ...minimal, include: ['pickling-and-canning--nope'], questions: [q] }, 'x')], COMPUTE_FNS)).toThrow(
+      /unknown quiz/,
+    );
+    const bad = {
+      id: 'n',
+      kind: 'numeric',
+      prompt: 'P',
+      explanation: 'E',
+      units: ['min'],
+      answer: { compute: 'processingTime', args: { product: 'no-such', jar: 'pint', altitudeFt: 0 }, field: 'minutes' },
+    };
     expect(() => resolveBanks([parseBankFile({ ...minimal, questions: [bad] }, 'x')], COMPUTE_FNS)).toThrow(/processingTime failed/);
   });
 });

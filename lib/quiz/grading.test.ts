@@ -8,8 +8,30 @@ import type { ResolvedQuestion } from './schema';
 const convertUnitsLib = createRequire(import.meta.url)('convert-units') as (v: number) => { from: (u: string) => { to: (u: string) => number } };
 
 const questions: ResolvedQuestion[] = [
-  { id: 'one', kind: 'single', prompt: 'Pick b', explanation: 'x', choices: [{ id: 'a', text: 'A' }, { id: 'b', text: 'B' }, { id: 'c', text: 'C' }], answer: 'b' },
-  { id: 'many', kind: 'multiple', prompt: 'Pick a and c', explanation: 'x', choices: [{ id: 'a', text: 'A' }, { id: 'b', text: 'B' }, { id: 'c', text: 'C' }], answer: ['a', 'c'] },
+  {
+    id: 'one',
+    kind: 'single',
+    prompt: 'Pick b',
+    explanation: 'x',
+    choices: [
+      { id: 'a', text: 'A' },
+      { id: 'b', text: 'B' },
+      { id: 'c', text: 'C' },
+    ],
+    answer: 'b',
+  },
+  {
+    id: 'many',
+    kind: 'multiple',
+    prompt: 'Pick a and c',
+    explanation: 'x',
+    choices: [
+      { id: 'a', text: 'A' },
+      { id: 'b', text: 'B' },
+      { id: 'c', text: 'C' },
+    ],
+    answer: ['a', 'c'],
+  },
   { id: 'tf', kind: 'true-false', prompt: 'False', explanation: 'x', answer: false },
   { id: 'num', kind: 'numeric', prompt: '15 min', explanation: 'x', units: ['min'], answer: 15, tolerance: { abs: 0 } },
   { id: 'grams', kind: 'numeric', prompt: '52.63 g ±2 %', explanation: 'x', units: ['g', 'oz'], answer: 52.63, tolerance: { pct: 2 } },
@@ -17,14 +39,7 @@ const questions: ResolvedQuestion[] = [
 ];
 // A fixed draw (no shuffling) so the tokens are known: choice token cN is the N-th choice shown.
 const drawn: Drawn = {
-  questions: [
-    { id: 'one', choices: ['c', 'b', 'a'] },
-    { id: 'many', choices: ['a', 'b', 'c'] },
-    { id: 'tf' },
-    { id: 'num' },
-    { id: 'grams' },
-    { id: 'temp' },
-  ],
+  questions: [{ id: 'one', choices: ['c', 'b', 'a'] }, { id: 'many', choices: ['a', 'b', 'c'] }, { id: 'tf' }, { id: 'num' }, { id: 'grams' }, { id: 'temp' }],
 };
 const grade = (answers: Parameters<typeof gradeAttempt>[2]) => gradeAttempt(questions, drawn, answers, 80, convertUnits);
 const result = (answers: Parameters<typeof gradeAttempt>[2], id: string) => grade(answers).results.find((r) => r.id === id)!;
@@ -112,7 +127,9 @@ describe('units', () => {
 describe('checkAnswers', () => {
   it('refuses an answer to a question that was not drawn, naming it', () => {
     const partial: Drawn = { questions: [{ id: 'tf' }] };
-    expect(() => checkAnswers(questions, partial, { tf: true, num: { value: 1, unit: 'min' } })).toThrowError(expect.objectContaining({ type: 'bad_request', fields: { 'answers.num': [expect.any(String)] } }));
+    expect(() => checkAnswers(questions, partial, { tf: true, num: { value: 1, unit: 'min' } })).toThrowError(
+      expect.objectContaining({ type: 'bad_request', fields: { 'answers.num': [expect.any(String)] } }),
+    );
   });
 
   it('refuses answers that do not fit their kind', () => {
@@ -143,7 +160,16 @@ describe('drawing and the public view', () => {
     const view = publicQuestions(questions, drawn);
     const text = JSON.stringify(view);
     for (const key of ['answer', 'tolerance', 'explanation', 'computedFrom']) expect(text).not.toContain(`"${key}"`);
-    expect(view[0]).toEqual({ id: 'one', kind: 'single', prompt: 'Pick b', choices: [{ id: 'c1', text: 'C' }, { id: 'c2', text: 'B' }, { id: 'c3', text: 'A' }] });
+    expect(view[0]).toEqual({
+      id: 'one',
+      kind: 'single',
+      prompt: 'Pick b',
+      choices: [
+        { id: 'c1', text: 'C' },
+        { id: 'c2', text: 'B' },
+        { id: 'c3', text: 'A' },
+      ],
+    });
   });
 
   it('rightAnswer maps the key back to the shown tokens', () => {

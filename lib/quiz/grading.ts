@@ -32,7 +32,17 @@ function shuffle<T>(items: readonly T[], random: Random): T[] {
 export function drawQuestions(questions: readonly ResolvedQuestion[], count: number, random: Random = Math.random): Drawn {
   const picked = shuffle(questions, random).slice(0, Math.min(count, questions.length));
   return {
-    questions: picked.map((q) => (q.kind === 'single' || q.kind === 'multiple' ? { id: q.id, choices: shuffle(q.choices.map((c) => c.id), random) } : { id: q.id })),
+    questions: picked.map((q) =>
+      q.kind === 'single' || q.kind === 'multiple'
+        ? {
+            id: q.id,
+            choices: shuffle(
+              q.choices.map((c) => c.id),
+              random,
+            ),
+          }
+        : { id: q.id },
+    ),
   };
 }
 
@@ -57,7 +67,6 @@ export function publicQuestions(questions: readonly ResolvedQuestion[], drawn: D
     return [{ id: q.id, kind: 'numeric', prompt: q.prompt, units: q.units }];
   });
 }
-
 
 export type Converter = (value: number, from: string, to: string) => number;
 
@@ -90,7 +99,8 @@ export function checkAnswers(questions: readonly ResolvedQuestion[], drawn: Draw
     if (q.kind === 'single') {
       if (typeof answer !== 'string' || !tokens.has(answer)) wrong(qid, 'Choose one of the choices shown.');
     } else if (q.kind === 'multiple') {
-      if (!Array.isArray(answer) || answer.some((a) => !tokens.has(a)) || new Set(answer).size !== answer.length) wrong(qid, 'Choose among the choices shown, each once.');
+      if (!Array.isArray(answer) || answer.some((a) => !tokens.has(a)) || new Set(answer).size !== answer.length)
+        wrong(qid, 'Choose among the choices shown, each once.');
     } else if (q.kind === 'true-false') {
       if (typeof answer !== 'boolean') wrong(qid, 'Answer true or false.');
     } else if (typeof answer !== 'object' || Array.isArray(answer) || answer === null) {
@@ -140,7 +150,13 @@ export function gradeAttempt(questions: readonly ResolvedQuestion[], drawn: Draw
       const { value, unit } = answer as { value: number; unit: string };
       const target = q.units[0];
       const inUnit = unit === target ? value : convert(value, unit, target);
-      results.push({ id: q.id, correct: withinTolerance(inUnit, q.answer, q.tolerance), answered: true, response: `${value} ${unit}`, ...(unit === target ? {} : { valueInUnit: inUnit }) });
+      results.push({
+        id: q.id,
+        correct: withinTolerance(inUnit, q.answer, q.tolerance),
+        answered: true,
+        response: `${value} ${unit}`,
+        ...(unit === target ? {} : { valueInUnit: inUnit }),
+      });
     }
   }
   const correct = results.filter((r) => r.correct).length;
@@ -150,7 +166,10 @@ export function gradeAttempt(questions: readonly ResolvedQuestion[], drawn: Draw
 }
 
 /** The right answer of a question, for the learner once the attempt is submitted, in the shown tokens. */
-export function rightAnswer(q: ResolvedQuestion, d: DrawnQuestion): { choices?: string[]; value?: boolean | number; unit?: string; tolerance?: { abs?: number; pct?: number } } {
+export function rightAnswer(
+  q: ResolvedQuestion,
+  d: DrawnQuestion,
+): { choices?: string[]; value?: boolean | number; unit?: string; tolerance?: { abs?: number; pct?: number } } {
   if (q.kind === 'single' || q.kind === 'multiple') {
     const right = q.kind === 'single' ? [q.answer] : q.answer;
     return { choices: (d.choices ?? []).map((cid, i) => (right.includes(cid) ? token(i) : null)).filter((t): t is string => t !== null) };

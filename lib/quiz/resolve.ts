@@ -29,7 +29,8 @@ export function computeAnswer(spec: ComputeSpec, fns: ComputeFns, where: string)
   if (spec.field) {
     for (const part of spec.field.split('.')) value = value && typeof value === 'object' ? (value as Record<string, unknown>)[part] : undefined;
   }
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new BankError(`${where}: ${spec.compute}${spec.field ? `.${spec.field}` : ''} is not a number`);
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw new BankError(`${where}: ${spec.compute}${spec.field ? `.${spec.field}` : ''} is not a number`);
   return value;
 }
 

@@ -13,7 +13,10 @@ export const ResultsFilterSchema = z
     workshop: z.coerce.number().int().positive().optional(),
     from: day.optional(),
     to: day.optional(),
-    quiz: z.string().regex(/^[a-z0-9-]+$/).optional(),
+    quiz: z
+      .string()
+      .regex(/^[a-z0-9-]+$/)
+      .optional(),
   })
   .refine((f) => !f.from || !f.to || f.from <= f.to, { message: 'The start date must not be after the end date.', path: ['to'] });
 export type ResultsFilter = z.infer<typeof ResultsFilterSchema>;
@@ -31,7 +34,15 @@ export type QuestionStat = {
   topWrongCount: number;
 };
 
-type Row = { quizSlug: string; questionId: string; attempts: number | string; rightCount: number | string; unanswered: number | string; topWrong: string | null; topWrongCount: number | string | null };
+type Row = {
+  quizSlug: string;
+  questionId: string;
+  attempts: number | string;
+  rightCount: number | string;
+  unanswered: number | string;
+  topWrong: string | null;
+  topWrongCount: number | string | null;
+};
 
 /**
  * Every question's figures in ONE aggregated query: answers, % right, unanswered, and the most

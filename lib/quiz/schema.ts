@@ -41,7 +41,30 @@ const multipleQuestion = z
 const trueFalseQuestion = z.object({ ...base, kind: z.literal('true-false'), answer: z.boolean() }).strict();
 
 /** Units a numeric answer may be given in; the first of `units` is the one the question asks for. */
-export const NUMERIC_UNITS = ['min', 'psi', 'F', 'C', 'in', 'g', 'oz', 'lb', 'kg', 'mL', 'L', 'cup', 'tbsp', 'tsp', 'fl-oz', 'pint', 'quart', 'gallon', 'ft', 'm', '%', 'pH'] as const;
+export const NUMERIC_UNITS = [
+  'min',
+  'psi',
+  'F',
+  'C',
+  'in',
+  'g',
+  'oz',
+  'lb',
+  'kg',
+  'mL',
+  'L',
+  'cup',
+  'tbsp',
+  'tsp',
+  'fl-oz',
+  'pint',
+  'quart',
+  'gallon',
+  'ft',
+  'm',
+  '%',
+  'pH',
+] as const;
 export type NumericUnit = (typeof NUMERIC_UNITS)[number];
 
 const numericQuestion = z

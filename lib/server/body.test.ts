@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { isJsonMediaType, JSON_BODY_LIMIT, readBodyBytes, readJson } from './body';
 
-const post = (body: BodyInit | null, headers: Record<string, string> = { 'content-type': 'application/json' }) => new Request('http://x/', { method: 'POST', headers, body, ...(body instanceof ReadableStream ? { duplex: 'half' } : {}) } as RequestInit);
+const post = (body: BodyInit | null, headers: Record<string, string> = { 'content-type': 'application/json' }) =>
+  new Request('http://x/', { method: 'POST', headers, body, ...(body instanceof ReadableStream ? { duplex: 'half' } : {}) } as RequestInit);
 
 /** A body streamed in 64 KB chunks with no Content-Length, counting how much of it was pulled. */
 function streamed(totalBytes: number) {
@@ -28,7 +29,15 @@ describe('readJson', () => {
     await expect(readJson(post('{"a":'))).rejects.toMatchObject({ status: 400 });
     await expect(readJson(post(''))).rejects.toMatchObject({ status: 400 });
     // Browsers send these from another site's page without a preflight.
-    for (const type of ['text/plain', 'text/plain; application/json', 'application/x-www-form-urlencoded', 'multipart/form-data; boundary=x', 'application/jsonp', 'application/vnd.api+json', '']) {
+    for (const type of [
+      'text/plain',
+      'text/plain; application/json',
+      'application/x-www-form-urlencoded',
+      'multipart/form-data; boundary=x',
+      'application/jsonp',
+      'application/vnd.api+json',
+      '',
+    ]) {
       await expect(readJson(post('{"a":1}', { 'content-type': type })), type).rejects.toMatchObject({ status: 415 });
     }
   });

@@ -26,7 +26,12 @@ beforeAll(async () => {
   fake = await startFakeS3({ root: path.join(folder, 's3'), accessKeyId: ACCESS_KEY, secretAccessKey: SECRET });
   s3Options = { bucket: BUCKET, region: 'us-east-1', accessKeyId: ACCESS_KEY, secretAccessKey: SECRET, endpoint: fake.url, forcePathStyle: true };
   // The bucket is made through the SDK, as an operator would with any S3 client.
-  const client = new S3Client({ region: 'us-east-1', endpoint: fake.url, forcePathStyle: true, credentials: { accessKeyId: ACCESS_KEY, secretAccessKey: SECRET } });
+  const client = new S3Client({
+    region: 'us-east-1',
+    endpoint: fake.url,
+    forcePathStyle: true,
+    credentials: { accessKeyId: ACCESS_KEY, secretAccessKey: SECRET },
+  });
   await client.send(new CreateBucketCommand({ Bucket: BUCKET }));
   await client.send(new HeadBucketCommand({ Bucket: BUCKET }));
   client.destroy();
@@ -90,7 +95,15 @@ describe.each(drivers)('the %s driver', (name, make) => {
   it('refuses keys that could leave its folder or bucket prefix, before touching the store', async () => {
     const storage = make();
     const before = { ...fake.counts };
-    for (const key of ['../escape.jpg', 'photos/../../etc.jpg', '/absolute.jpg', 'photos//double.jpg', 'photos/no-extension', 'photos/UPPER.jpg', 'photos/x.exe']) {
+    for (const key of [
+      '../escape.jpg',
+      'photos/../../etc.jpg',
+      '/absolute.jpg',
+      'photos//double.jpg',
+      'photos/no-extension',
+      'photos/UPPER.jpg',
+      'photos/x.exe',
+    ]) {
       await expect(storage.put(key, jpegLike(5, 10), 'image/jpeg'), key).rejects.toThrow(/Invalid storage key/);
       await expect(storage.get(key), key).rejects.toThrow(/Invalid storage key/);
       await expect(storage.delete(key), key).rejects.toThrow(/Invalid storage key/);
@@ -130,7 +143,9 @@ describe('the S3 driver against the fake', () => {
 
   it('fails when the access key is unknown, or the bucket does not exist', async () => {
     await expect(s3Driver({ ...s3Options, accessKeyId: 'SOMEONEELSESKEY00000' }).get('photos/11/a.jpg')).rejects.toMatchObject({ name: 'InvalidAccessKeyId' });
-    await expect(s3Driver({ ...s3Options, bucket: 'no-such-bucket' }).put('photos/11/a.jpg', jpegLike(1, 5), 'image/jpeg')).rejects.toMatchObject({ name: 'NoSuchBucket' });
+    await expect(s3Driver({ ...s3Options, bucket: 'no-such-bucket' }).put('photos/11/a.jpg', jpegLike(1, 5), 'image/jpeg')).rejects.toMatchObject({
+      name: 'NoSuchBucket',
+    });
   });
 
   it('answers 503 (AppError unavailable) when the store is not there, without hanging', async () => {
@@ -141,7 +156,11 @@ describe('the S3 driver against the fake', () => {
     const storage = s3Driver({ ...s3Options, endpoint: `http://127.0.0.1:${port}` });
     const started = Date.now();
     await expect(storage.put('photos/13/down.jpg', jpegLike(1, 5), 'image/jpeg')).rejects.toMatchObject({ name: 'AppError', status: 503 });
-    await expect(storage.get('photos/13/down.jpg')).rejects.toMatchObject({ name: 'AppError', status: 503, message: expect.stringMatching(/photo store cannot be reached/) });
+    await expect(storage.get('photos/13/down.jpg')).rejects.toMatchObject({
+      name: 'AppError',
+      status: 503,
+      message: expect.stringMatching(/photo store cannot be reached/),
+    });
     expect(Date.now() - started).toBeLessThan(10_000);
   });
 
@@ -150,7 +169,9 @@ describe('the S3 driver against the fake', () => {
     const failing = http.createServer((req, res) => {
       calls++;
       req.resume();
-      res.writeHead(503, { 'content-type': 'application/xml' }).end('<?xml version="1.0" encoding="UTF-8"?><Error><Code>SlowDown</Code><Message>Please reduce your request rate.</Message></Error>');
+      res
+        .writeHead(503, { 'content-type': 'application/xml' })
+        .end('<?xml version="1.0" encoding="UTF-8"?><Error><Code>SlowDown</Code><Message>Please reduce your request rate.</Message></Error>');
     });
     await new Promise<void>((resolve) => failing.listen(0, '127.0.0.1', () => resolve()));
     try {
@@ -199,7 +220,9 @@ describe('choosing the driver from the configuration', () => {
   });
 
   it('names each S3 variable that STORAGE_DRIVER=s3 is missing, and malformed values', () => {
-    expect(() => parseEnv({ ...base, STORAGE_DRIVER: 's3' })).toThrow(/S3_BUCKET is missing[\s\S]*S3_ACCESS_KEY_ID is missing[\s\S]*S3_SECRET_ACCESS_KEY is missing/);
+    expect(() => parseEnv({ ...base, STORAGE_DRIVER: 's3' })).toThrow(
+      /S3_BUCKET is missing[\s\S]*S3_ACCESS_KEY_ID is missing[\s\S]*S3_SECRET_ACCESS_KEY is missing/,
+    );
     expect(() => parseEnv({ ...base, STORAGE_DRIVER: 'ftp' })).toThrow(/STORAGE_DRIVER must be disk or s3/);
     expect(() => parseEnv({ ...base, S3_BUCKET: 'Not_A_Bucket' })).toThrow(/S3_BUCKET is malformed/);
     expect(() => parseEnv({ ...base, S3_ENDPOINT: 'not a url' })).toThrow(/S3_ENDPOINT is malformed/);

@@ -18,7 +18,9 @@ export function defaultPhotoRoot(): string {
 }
 
 /** The driver a configuration asks for. */
-export function storageFromEnv(env: Pick<Env, 'STORAGE_DRIVER' | 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>): StorageDriver {
+export function storageFromEnv(
+  env: Pick<Env, 'STORAGE_DRIVER' | 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>,
+): StorageDriver {
   if (env.STORAGE_DRIVER !== 's3') return diskDriver(defaultPhotoRoot());
   // lib/env.ts has already refused an s3 configuration without these.
   return s3Driver({

@@ -6,9 +6,7 @@ import { AdminCreateSchema, type AdminCreateInput } from '@/lib/validations/user
 import { db } from '@/models';
 
 export type AdminCreateResult =
-  | { outcome: 'created'; userId: number }
-  | { outcome: 'promoted'; userId: number; previousRole: Role }
-  | { outcome: 'unchanged'; userId: number };
+  { outcome: 'created'; userId: number } | { outcome: 'promoted'; userId: number; previousRole: Role } | { outcome: 'unchanged'; userId: number };
 
 /** Whether an account exists for the address, so the command asks for a password only when it will create one. */
 export async function accountExists(email: string): Promise<boolean> {
@@ -29,13 +27,28 @@ export async function createOrPromoteAdmin(raw: AdminCreateInput): Promise<Admin
       if (existing.role === 'admin') return { outcome: 'unchanged', userId: existing.id };
       const previousRole = existing.role;
       await existing.update({ role: 'admin' }, { transaction });
-      await AuditLog.create({ actorId: null, action: 'user.role_changed', subjectType: 'user', subjectId: String(existing.id), data: { from: previousRole, to: 'admin', by: 'admin:create' } }, { transaction });
+      await AuditLog.create(
+        {
+          actorId: null,
+          action: 'user.role_changed',
+          subjectType: 'user',
+          subjectId: String(existing.id),
+          data: { from: previousRole, to: 'admin', by: 'admin:create' },
+        },
+        { transaction },
+      );
       return { outcome: 'promoted', userId: existing.id, previousRole };
     }
     if (!input.password) throw new AppError('bad_request', 'A new admin account needs a password: set ADMIN_PASSWORD or type one when asked.');
     // The person running the command on the server vouches for the address.
-    const user = await User.create({ email: input.email, name: input.name, role: 'admin', passwordHash: await hashPassword(input.password), emailVerifiedAt: new Date() }, { transaction });
-    await AuditLog.create({ actorId: null, action: 'user.admin_created', subjectType: 'user', subjectId: String(user.id), data: { by: 'admin:create' } }, { transaction });
+    const user = await User.create(
+      { email: input.email, name: input.name, role: 'admin', passwordHash: await hashPassword(input.password), emailVerifiedAt: new Date() },
+      { transaction },
+    );
+    await AuditLog.create(
+      { actorId: null, action: 'user.admin_created', subjectType: 'user', subjectId: String(user.id), data: { by: 'admin:create' } },
+      { transaction },
+    );
     return { outcome: 'created', userId: user.id };
   });
 }

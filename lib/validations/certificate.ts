@@ -16,7 +16,14 @@ export type RevokeInput = z.infer<typeof RevokeSchema>;
 const optionalId = z.preprocess((v) => (v === '' || v === null ? undefined : v), z.coerce.number().int().positive().optional());
 
 export const DeskFilterSchema = z.object({
-  course: z.preprocess((v) => (v === '' ? undefined : v), z.string().max(80).regex(/^[a-z0-9-]+$/).optional()),
+  course: z.preprocess(
+    (v) => (v === '' ? undefined : v),
+    z
+      .string()
+      .max(80)
+      .regex(/^[a-z0-9-]+$/)
+      .optional(),
+  ),
   workshop: optionalId,
   status: z.preprocess((v) => (v === '' ? undefined : v), z.enum(ENROLLMENT_STATUSES).optional()),
   eligible: z.preprocess((v) => (v === '' ? undefined : v), z.enum(['yes', 'no', 'certified']).optional()),
@@ -37,7 +44,14 @@ export const SerialParamSchema = z.string().trim().min(1).max(40);
 
 /** A correction of an issued certificate: why, and the holder's name as it should read (default: the account's name today). */
 export const ReissueSchema = z.object({
-  reason: z.string({ error: 'Say what the correction is.' }).trim().min(5, 'Give a reason of at least 5 characters.').max(500, 'Keep the reason under 500 characters.'),
-  holderName: z.preprocess((v) => (v === '' || v === null ? undefined : v), z.string().trim().min(1).max(120, 'Use at most 120 characters for the name.').optional()),
+  reason: z
+    .string({ error: 'Say what the correction is.' })
+    .trim()
+    .min(5, 'Give a reason of at least 5 characters.')
+    .max(500, 'Keep the reason under 500 characters.'),
+  holderName: z.preprocess(
+    (v) => (v === '' || v === null ? undefined : v),
+    z.string().trim().min(1).max(120, 'Use at most 120 characters for the name.').optional(),
+  ),
 });
 export type ReissueInput = z.infer<typeof ReissueSchema>;

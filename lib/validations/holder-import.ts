@@ -19,7 +19,10 @@ export const HolderLineSchema = z
     course: z.string().trim().min(1, 'course: empty').max(80),
     certificate_date: day('certificate_date'),
     end_date: day('end_date'),
-    old_serial: z.preprocess((v) => (typeof v === 'string' && v.trim() === '' ? null : v), z.string().trim().max(40, 'old_serial: longer than 40 characters').nullable().default(null)),
+    old_serial: z.preprocess(
+      (v) => (typeof v === 'string' && v.trim() === '' ? null : v),
+      z.string().trim().max(40, 'old_serial: longer than 40 characters').nullable().default(null),
+    ),
   })
   .refine((l) => l.end_date > l.certificate_date, { message: 'end_date: must be after certificate_date', path: ['end_date'] });
 export type HolderLine = z.infer<typeof HolderLineSchema>;

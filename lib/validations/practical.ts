@@ -21,7 +21,6 @@ const number = (label: string, min: number, max: number, unit = '') =>
     .max(max, `The ${label} must be at most ${max.toLocaleString('en-US')}${unit}.`);
 const whole = (label: string, min: number, max: number, unit = '') => number(label, min, max, unit).int(`Enter the ${label} as a whole number.`);
 
-
 export const practicalFormSchema = z
   .object({
     product: z.enum(PRODUCT_IDS, { error: 'Choose the product you put up.' }),
@@ -73,7 +72,6 @@ export const practicalSubmissionSchema = z.object({
   course: z.string().regex(/^[a-z0-9-]{1,80}$/, 'Unknown course.'),
   practical: practicalFormSchema,
 });
-
 
 // The rubric an instructor fills in for each round.
 export const RUBRIC_CRITERIA = [

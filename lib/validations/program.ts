@@ -1,7 +1,10 @@
 import { z } from 'zod';
 
 const optional = (max: number, label: string) =>
-  z.preprocess((v) => (typeof v === 'string' && v.trim() === '' ? null : v), z.string().trim().max(max, `Use at most ${max} characters for the ${label}.`).nullable().default(null));
+  z.preprocess(
+    (v) => (typeof v === 'string' && v.trim() === '' ? null : v),
+    z.string().trim().max(max, `Use at most ${max} characters for the ${label}.`).nullable().default(null),
+  );
 
 /** An IANA time-zone name the runtime knows (workshop times and dates are shown in it). */
 export const timeZone = z
@@ -23,7 +26,14 @@ export const ProgramSettingsSchema = z.object({
   shortName: z.string({ error: 'Enter a short name.' }).trim().min(1, 'Enter a short name.').max(40, 'Use at most 40 characters for the short name.'),
   contactEmail: z.preprocess(
     (v) => (typeof v === 'string' && v.trim() === '' ? null : v),
-    z.string().trim().toLowerCase().max(254).pipe(z.email({ error: 'Enter a valid e-mail address, like name@example.org.' })).nullable().default(null),
+    z
+      .string()
+      .trim()
+      .toLowerCase()
+      .max(254)
+      .pipe(z.email({ error: 'Enter a valid e-mail address, like name@example.org.' }))
+      .nullable()
+      .default(null),
   ),
   contactPhone: optional(40, 'phone number').refine((v) => v === null || /^[0-9+()\-.\s]{3,40}$/.test(v), 'Use digits, spaces and + ( ) - . only.'),
   postalAddress: optional(500, 'postal address'),

@@ -11,7 +11,11 @@ export const WORKSHOP_TIME_ZONES = [
   { value: 'Pacific/Honolulu', label: 'Hawaii (Honolulu)' },
 ] as const;
 
-const id = (what: string) => z.coerce.number({ error: `Choose ${what}.` }).int(`Choose ${what}.`).positive(`Choose ${what}.`);
+const id = (what: string) =>
+  z.coerce
+    .number({ error: `Choose ${what}.` })
+    .int(`Choose ${what}.`)
+    .positive(`Choose ${what}.`);
 
 /** The coordinator's workshop form, shared by the client form and the server action. */
 export const WorkshopSchema = z
@@ -22,7 +26,11 @@ export const WorkshopSchema = z
     endTime: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Enter the end time as HH:MM.'),
     timeZone: z.string().refine(isTimeZone, 'Choose a time zone.'),
     place: z.string().trim().min(3, 'Enter the place (at least 3 characters).').max(300, 'Use at most 300 characters for the place.'),
-    seats: z.coerce.number({ error: 'Enter the number of seats.' }).int('Seats must be a whole number.').min(1, 'A workshop needs at least 1 seat.').max(200, 'At most 200 seats.'),
+    seats: z.coerce
+      .number({ error: 'Enter the number of seats.' })
+      .int('Seats must be a whole number.')
+      .min(1, 'A workshop needs at least 1 seat.')
+      .max(200, 'At most 200 seats.'),
     instructorId: z.union([z.literal(''), z.null(), id('an instructor')]).transform((v) => (v === '' || v === null ? null : v)),
     attendanceRequired: z.boolean(),
   })

@@ -19,14 +19,23 @@ describe('the authorization matrix covers app/', () => {
     const discovered = new Set(discoveredKeys());
     const listed = new Set(MATRIX.map(rowKey));
     expect(discovered.size).toBeGreaterThan(50);
-    expect([...discovered].filter((k) => !listed.has(k)), 'in app/ but not in tests/e2e/support/authorization-matrix.ts').toEqual([]);
-    expect([...listed].filter((k) => !discovered.has(k)), 'in the matrix but no longer in app/').toEqual([]);
+    expect(
+      [...discovered].filter((k) => !listed.has(k)),
+      'in app/ but not in tests/e2e/support/authorization-matrix.ts',
+    ).toEqual([]);
+    expect(
+      [...listed].filter((k) => !discovered.has(k)),
+      'in the matrix but no longer in app/',
+    ).toEqual([]);
   });
 
   it('gives every row an answer for each of the six people, and requests at least one column', () => {
     for (const row of MATRIX) {
       expect(row.expect, rowKey(row)).toHaveLength(SUBJECTS.length);
-      expect(row.expect.some((e) => e !== 'n/a'), rowKey(row)).toBe(true);
+      expect(
+        row.expect.some((e) => e !== 'n/a'),
+        rowKey(row),
+      ).toBe(true);
     }
   });
 });
@@ -65,7 +74,10 @@ describe('the authorization matrix against the running app', () => {
       if (expected === 'signin') {
         const location = response.headers.get('location') ?? '';
         const target = new URL(location, 'http://x');
-        got = [302, 303, 307, 308].includes(response.status) && target.pathname === '/signin' && target.searchParams.get('callbackUrl') ? 'signin' : `${response.status} ${location}`;
+        got =
+          [302, 303, 307, 308].includes(response.status) && target.pathname === '/signin' && target.searchParams.get('callbackUrl')
+            ? 'signin'
+            : `${response.status} ${location}`;
       }
       const body = await response.text();
       const wanted = row.kind === 'page' ? row.bodyIncludes?.[subject] : undefined;
@@ -145,9 +157,13 @@ describe('the authorization matrix against the running app', () => {
         }
         refusedCompared += 1;
         const plain = await send(request.path, { jar: jars[subject], headers });
-        for (const [kind, status, body] of [['plain load', plain.status, await plain.text()], ['router request', router.status, routerBody]] as const) {
+        for (const [kind, status, body] of [
+          ['plain load', plain.status, await plain.text()],
+          ['router request', router.status, routerBody],
+        ] as const) {
           const leaked = sentences.filter((sentence) => body.includes(sentence));
-          if (leaked.length) wrong.push(`${where}: the ${kind} (${status}) carries ${leaked.length} of ${sentences.length} sentences of the page, e.g. “${leaked[0]}”`);
+          if (leaked.length)
+            wrong.push(`${where}: the ${kind} (${status}) carries ${leaked.length} of ${sentences.length} sentences of the page, e.g. “${leaked[0]}”`);
         }
       }
     }

@@ -107,7 +107,10 @@ describe('the client address in the demo’s setup (nginx in front of the app on
     // client (127.0.0.1) has used its 3 checks; the fourth is refused whatever address it claims.
     expect(statuses.slice(0, LIMIT).every((s) => s === 400 || s === 404)).toBe(true);
     expect(statuses[LIMIT]).toBe(429);
-    const [rows] = (await sequelize.query("SELECT bucket, hits FROM rate_limits WHERE bucket LIKE 'verify:203.0.113.%' OR bucket IN ('verify:127.0.0.1')")) as [{ bucket: string; hits: number }[], unknown];
+    const [rows] = (await sequelize.query("SELECT bucket, hits FROM rate_limits WHERE bucket LIKE 'verify:203.0.113.%' OR bucket IN ('verify:127.0.0.1')")) as [
+      { bucket: string; hits: number }[],
+      unknown,
+    ];
     expect(rows).toEqual([{ bucket: 'verify:127.0.0.1', hits: LIMIT + 1 }]);
   });
 });

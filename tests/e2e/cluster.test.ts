@@ -106,17 +106,25 @@ beforeAll(async () => {
   // Two seats: the uploader holds one, two learners race for the other.
   await sequelize.query(
     'INSERT INTO workshops (courseId, instructorId, startsAt, endsAt, timeZone, place, seats, attendanceRequired, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, 2, 1, ?, ?)',
-    { replacements: [courseId, instructor.id, startsAt, new Date(startsAt.getTime() + 5 * 3600_000), 'America/Denver', `Cluster test kitchen ${run}`, now, now] },
+    {
+      replacements: [courseId, instructor.id, startsAt, new Date(startsAt.getTime() + 5 * 3600_000), 'America/Denver', `Cluster test kitchen ${run}`, now, now],
+    },
   );
   [{ id: workshopId }] = await query<{ id: number }>('SELECT id FROM workshops WHERE place = ?', [`Cluster test kitchen ${run}`]);
-  await sequelize.query('INSERT INTO fee_waivers (code, courseId, createdById, maxUses, uses, expiresAt, note, createdAt, updatedAt) VALUES (?, ?, NULL, 10, 0, ?, ?, ?, ?)', {
-    replacements: [WAIVER, courseId, startsAt, 'cluster browser test', now, now],
-  });
+  await sequelize.query(
+    'INSERT INTO fee_waivers (code, courseId, createdById, maxUses, uses, expiresAt, note, createdAt, updatedAt) VALUES (?, ?, NULL, 10, 0, ?, ?, ?, ?)',
+    {
+      replacements: [WAIVER, courseId, startsAt, 'cluster browser test', now, now],
+    },
+  );
   [{ id: waiverId }] = await query<{ id: number }>('SELECT id FROM fee_waivers WHERE code = ?', [WAIVER]);
   for (const label of ['uploader', 'locked', 'racerA', 'racerB'] as const) learners[label] = await makeLearner(label.toLowerCase());
-  await sequelize.query("INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, feeWaiverId, createdAt, updatedAt) VALUES (?, ?, ?, ?, 'active', 0, ?, ?, ?)", {
-    replacements: [learners.uploader.id, courseId, workshopId, String(workshopId), waiverId, now, now],
-  });
+  await sequelize.query(
+    "INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, feeWaiverId, createdAt, updatedAt) VALUES (?, ?, ?, ?, 'active', 0, ?, ?, ?)",
+    {
+      replacements: [learners.uploader.id, courseId, workshopId, String(workshopId), waiverId, now, now],
+    },
+  );
 
   fake = await startFakeS3({ root: path.join(work, 's3'), accessKeyId: ACCESS_KEY, secretAccessKey: SECRET, buckets: [BUCKET] });
   const [portA, portB, nginxPort] = [await freePort(), await freePort(), await freePort()];
@@ -150,7 +158,10 @@ beforeAll(async () => {
     SIGNIN_MAX_PER_ACCOUNT_ADDRESS: '3',
     AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
   };
-  for (const [name, port] of [['A', portA], ['B', portB]] as const) {
+  for (const [name, port] of [
+    ['A', portA],
+    ['B', portB],
+  ] as const) {
     const child = startAppServer(port, env);
     apps.push({ name, url: `http://127.0.0.1:${port}`, child });
   }
@@ -178,7 +189,10 @@ afterAll(async () => {
           await q('DELETE FROM outbox_emails WHERE toAddress IN (?)', [Object.values(learners).map((l) => l.email)]);
           await q('DELETE FROM users WHERE id IN (?)', [ids]);
         }
-        await q("DELETE FROM rate_limits WHERE bucket LIKE ? OR bucket LIKE ? OR bucket LIKE 'signin:address:198.51.100.%'", [`signin:%-${run}@cluster.test.example`, 'signin:pair:198.51.100.%']);
+        await q("DELETE FROM rate_limits WHERE bucket LIKE ? OR bucket LIKE ? OR bucket LIKE 'signin:address:198.51.100.%'", [
+          `signin:%-${run}@cluster.test.example`,
+          'signin:pair:198.51.100.%',
+        ]);
         if (workshopId) await q('DELETE FROM workshops WHERE id = ?', [workshopId]);
         if (waiverId) await q('DELETE FROM fee_waivers WHERE id = ?', [waiverId]);
         await q('SET FOREIGN_KEY_CHECKS = 1', []);
@@ -199,7 +213,9 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
     const folder = path.join(work, 'upload');
     fs.mkdirSync(folder);
     const file = path.join(folder, 'cluster-jars.jpg');
-    await sharp({ create: { width: 900, height: 600, channels: 3, background: '#4d7a5a' } }).jpeg().toFile(file);
+    await sharp({ create: { width: 900, height: 600, channels: 3, background: '#4d7a5a' } })
+      .jpeg()
+      .toFile(file);
 
     const browser = await openBrowser(nginxUrl);
     try {
@@ -242,7 +258,10 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
     expect([meta.format, meta.width, meta.height]).toEqual(['jpeg', 900, 600]);
 
     // The bytes live in the bucket, not on either server's disk.
-    const [row] = await query<{ storageKey: string; thumbnailKey: string; userId: number }>('SELECT storageKey, thumbnailKey, userId FROM practical_photos WHERE id = ?', [photo.id]);
+    const [row] = await query<{ storageKey: string; thumbnailKey: string; userId: number }>(
+      'SELECT storageKey, thumbnailKey, userId FROM practical_photos WHERE id = ?',
+      [photo.id],
+    );
     expect(row.userId).toBe(learners.uploader.id);
     expect(fs.readFileSync(path.join(work, 's3', BUCKET, 'objects', ...row.storageKey.split('/'))).equals(bytes)).toBe(true);
     expect(fs.existsSync(path.join(work, 's3', BUCKET, 'objects', ...row.thumbnailKey.split('/')))).toBe(true);
@@ -259,7 +278,9 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
       const session = (await (await fetch(`${app.url}/api/auth/session`, { headers: { cookie } })).json()) as { user?: { email: string; role: string } };
       expect(session.user, `server ${app.name}`).toMatchObject({ email: learners.uploader.email, role: 'learner' });
     }
-    const tables = await query<{ name: string }>("SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() AND table_name LIKE '%session%'");
+    const tables = await query<{ name: string }>(
+      "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() AND table_name LIKE '%session%'",
+    );
     expect(tables).toEqual([]);
   });
 
@@ -271,7 +292,8 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
       const attempt = await apiSignIn(app.url, email, `wrong-password-${i}`, from);
       expect(attempt, `failure ${i + 1} on ${app.name}`).toEqual({ cookie: null, status: 401 });
     }
-    const attempts = async () => Number((await query<{ hits: number }>('SELECT hits FROM rate_limits WHERE bucket = ?', [`signin:pair:${from}|${email}`]))[0]?.hits);
+    const attempts = async () =>
+      Number((await query<{ hits: number }>('SELECT hits FROM rate_limits WHERE bucket = ?', [`signin:pair:${from}|${email}`]))[0]?.hits);
     expect(await attempts()).toBe(3);
     // Now the right password is refused (429) on B and on A alike. It is the shared count that
     // refuses it, before the password is checked: each refused attempt is counted too.
@@ -288,12 +310,18 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
     const b = await apiSignIn(apps[1].url, learners.racerB.email, PASSWORD, address(13));
     expect(a.cookie && b.cookie).toBeTruthy();
     const enroll = (app: App, session: string) =>
-      fetch(`${app.url}/api/enrollments`, { method: 'POST', headers: { 'content-type': 'application/json', cookie: session }, body: JSON.stringify({ workshopId, waiverCode: WAIVER }) });
+      fetch(`${app.url}/api/enrollments`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', cookie: session },
+        body: JSON.stringify({ workshopId, waiverCode: WAIVER }),
+      });
     const answers = await Promise.all([enroll(apps[0], a.cookie!), enroll(apps[1], b.cookie!)]);
     expect(answers.map((r) => r.status).sort()).toEqual([201, 409]);
     const refused = answers.find((r) => r.status === 409)!;
     expect(JSON.stringify(await refused.json())).toContain('This workshop is full');
-    const [holders] = await query<{ n: number }>("SELECT COUNT(*) AS n FROM enrollments WHERE workshopId = ? AND status IN ('awaiting_payment', 'active')", [workshopId]);
+    const [holders] = await query<{ n: number }>("SELECT COUNT(*) AS n FROM enrollments WHERE workshopId = ? AND status IN ('awaiting_payment', 'active')", [
+      workshopId,
+    ]);
     expect(Number(holders.n)).toBe(2);
   });
 

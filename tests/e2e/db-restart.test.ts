@@ -96,7 +96,10 @@ async function signInCookie(email: string): Promise<string> {
     headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar.join('; ') },
     body: new URLSearchParams({ csrfToken, email, password: PASSWORD, json: 'true' }),
   });
-  const session = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.includes('session-token'));
+  const session = signIn.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .find((c) => c.includes('session-token'));
   if (!session) throw new Error(`sign-in of ${email} failed (${signIn.status})`);
   return session;
 }
@@ -107,7 +110,7 @@ type PublicQuestion = { id: string; kind: 'single' | 'multiple' | 'true-false' |
 function answersFor(questions: PublicQuestion[]) {
   const answers: Record<string, unknown> = {};
   for (const q of questions) {
-    const pick = <T,>(xs: T[]) => xs[Math.floor(Math.random() * xs.length)];
+    const pick = <T>(xs: T[]) => xs[Math.floor(Math.random() * xs.length)];
     if (q.kind === 'single') answers[q.id] = pick(q.choices!).id;
     else if (q.kind === 'multiple') answers[q.id] = [pick(q.choices!).id];
     else if (q.kind === 'true-false') answers[q.id] = Math.random() < 0.5;
@@ -124,7 +127,14 @@ async function firstConnection(starting: Promise<unknown>): Promise<number> {
   for (;;) {
     if (failed) throw failed;
     try {
-      const conn = await mariadb.createConnection({ host: url.hostname, port: Number(url.port), user: decodeURIComponent(url.username), password: decodeURIComponent(url.password), database: url.pathname.slice(1), connectTimeout: 250 });
+      const conn = await mariadb.createConnection({
+        host: url.hostname,
+        port: Number(url.port),
+        user: decodeURIComponent(url.username),
+        password: decodeURIComponent(url.password),
+        database: url.pathname.slice(1),
+        connectTimeout: 250,
+      });
       const at = Date.now();
       await conn.end();
       return at;
@@ -255,8 +265,17 @@ describe('the database restarted during a load of quiz submissions', () => {
         while (Date.now() < stopAt) {
           const submitted = await call('submit', `${appUrl}/api/attempts/${attempt.id}/submit`, cookie, { answers });
           if (submitted.status === 200) {
-            const r = (submitted.body as { attempt: { result: { scorePct: number; passed: boolean; correct: number; total: number; questions: unknown[] } } }).attempt.result;
-            const ack: Ack = { attemptId: attempt.id, scorePct: r.scorePct, passed: r.passed, correct: r.correct, total: r.total, questions: r.questions.length, userId: index };
+            const r = (submitted.body as { attempt: { result: { scorePct: number; passed: boolean; correct: number; total: number; questions: unknown[] } } })
+              .attempt.result;
+            const ack: Ack = {
+              attemptId: attempt.id,
+              scorePct: r.scorePct,
+              passed: r.passed,
+              correct: r.correct,
+              total: r.total,
+              questions: r.questions.length,
+              userId: index,
+            };
             const before = acks.get(attempt.id);
             // A repeated submit must give back the stored result, never a second grading.
             if (before) expect(ack).toEqual(before);
@@ -347,7 +366,12 @@ describe('the database restarted during a load of quiz submissions', () => {
       const missing: unknown[] = [];
       for (const ack of acks.values()) {
         const row = byId.get(ack.attemptId);
-        const ok = row && row.submittedAt !== null && Number(row.scorePct) === ack.scorePct && Boolean(row.passed) === ack.passed && Number(row.answers) === ack.questions;
+        const ok =
+          row &&
+          row.submittedAt !== null &&
+          Number(row.scorePct) === ack.scorePct &&
+          Boolean(row.passed) === ack.passed &&
+          Number(row.answers) === ack.questions;
         if (!ok) missing.push({ ack, row });
       }
       expect(missing).toEqual([]);

@@ -83,7 +83,11 @@ describe('enrolling and paying in the browser', () => {
     // The course page now shows the learner's place and one seat fewer.
     await page.goto('/courses/pickling-and-canning');
     await workshops.getByText('You are enrolled').first().waitFor();
-    const seatsAfter = await workshops.getByRole('listitem').first().getByText(/seats left|Full/).textContent();
+    const seatsAfter = await workshops
+      .getByRole('listitem')
+      .first()
+      .getByText(/seats left|Full/)
+      .textContent();
     expect(Number(seatsAfter!.split(' ')[0])).toBe(Number(seatsBefore!.split(' ')[0]) - 1);
 
     // The fake mailbox has the welcome message with its confirmation link, and the receipt.

@@ -22,14 +22,15 @@ describe('the fermenting lesson in the browser', () => {
     const conn = await connect();
     try {
       const now = new Date();
-      const user = await conn.query("INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt) VALUES (?, 'Noor Fermenter', ?, 'learner', ?, ?, ?)", [email, bcrypt.hashSync(PASSWORD, 10), now, now, now]);
+      const user = await conn.query(
+        "INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt) VALUES (?, 'Noor Fermenter', ?, 'learner', ?, ?, ?)",
+        [email, bcrypt.hashSync(PASSWORD, 10), now, now, now],
+      );
       const [course] = (await conn.query("SELECT id FROM courses WHERE slug = 'pickling-and-canning'")) as { id: number }[];
-      await conn.query("INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, contentVersion, createdAt, updatedAt) VALUES (?, ?, NULL, 'self-paced', 'active', 0, 2, ?, ?)", [
-        Number(user.insertId),
-        course.id,
-        now,
-        now,
-      ]);
+      await conn.query(
+        "INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, contentVersion, createdAt, updatedAt) VALUES (?, ?, NULL, 'self-paced', 'active', 0, 2, ?, ?)",
+        [Number(user.insertId), course.id, now, now],
+      );
     } finally {
       await conn.end();
     }
@@ -99,7 +100,10 @@ describe('the fermenting lesson in the browser', () => {
     expect(await list.getByRole('listitem').count()).toBeGreaterThan(3);
     expect(await list.textContent()).toContain('New lesson 8, Fermented pickles and sauerkraut');
     expect(await list.textContent()).toContain('NCHFP fact sheet Using Atmospheric Steam Canners');
-    await list.getByRole('link', { name: `Lesson 8: ${LESSON.title}` }).first().waitFor();
+    await list
+      .getByRole('link', { name: `Lesson 8: ${LESSON.title}` })
+      .first()
+      .waitFor();
     expect(await seriousViolations(page)).toEqual([]);
     await page.close();
   });

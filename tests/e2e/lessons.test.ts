@@ -145,7 +145,9 @@ describe('lessons in the browser', () => {
     await page.getByRole('heading', { level: 1, name: membersOnly.title }).waitFor();
     expect(await page.getByRole('heading', { level: 1, name: membersOnly.title }).count()).toBe(1);
     expect(await page.getByText(membersOnly.objectives[0]).count()).toBe(1);
-    expect(await page.getByRole('link', { name: /Previous: lesson/ }).getAttribute('href')).toBe(`/learn/pickling-and-canning/${lessons[membersOnly.order - 2].slug}`);
+    expect(await page.getByRole('link', { name: /Previous: lesson/ }).getAttribute('href')).toBe(
+      `/learn/pickling-and-canning/${lessons[membersOnly.order - 2].slug}`,
+    );
     await browser.network.quiet();
     expect(await seriousViolations(page)).toEqual([]);
   });
@@ -219,7 +221,9 @@ describe('lessons in the browser', () => {
     await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
     const actions = page.getByTestId('lesson-actions');
     await actions.getByText('to keep track of the lessons you read').waitFor();
-    expect(await actions.getByRole('link', { name: 'Sign in' }).getAttribute('href')).toBe(`/signin?callbackUrl=${encodeURIComponent(`/learn/pickling-and-canning/${preview.slug}`)}`);
+    expect(await actions.getByRole('link', { name: 'Sign in' }).getAttribute('href')).toBe(
+      `/signin?callbackUrl=${encodeURIComponent(`/learn/pickling-and-canning/${preview.slug}`)}`,
+    );
     expect(failed).toEqual([]);
     await page.close();
   });

@@ -18,7 +18,9 @@ describe('practical batch from the learner to the Tasting table', () => {
     photos = [];
     for (const [i, colour] of ['#3f6f4f', '#b5651d'].entries()) {
       const file = path.join(folder, `jars-${i + 1}.jpg`);
-      await sharp({ create: { width: 900, height: 600, channels: 3, background: colour } }).jpeg().toFile(file);
+      await sharp({ create: { width: 900, height: 600, channels: 3, background: colour } })
+        .jpeg()
+        .toFile(file);
       photos.push(file);
     }
   });
@@ -70,7 +72,12 @@ describe('practical batch from the learner to the Tasting table', () => {
     // The page itself now shows the round waiting, with its flag, and no form.
     await page.reload();
     await page.getByTestId('practical-status').getByText('Waiting at the Tasting table').waitFor();
-    expect(await page.getByTestId('round-1').getByText(/shorter than the published 15 min/).count()).toBe(1);
+    expect(
+      await page
+        .getByTestId('round-1')
+        .getByText(/shorter than the published 15 min/)
+        .count(),
+    ).toBe(1);
     expect(await page.getByRole('button', { name: /Submit round/ }).count()).toBe(0);
     expect(await seriousViolations(page)).toEqual([]);
   });
@@ -101,9 +108,21 @@ describe('practical batch from the learner to the Tasting table', () => {
     await page.getByRole('heading', { name: 'Maren Osei, round 1' }).waitFor();
     // And the page's own link back returns to the same view.
     await expect.poll(() => page.getByRole('link', { name: '← All submissions' }).getAttribute('href')).toBe('/tasting-table?flagged=yes');
-    expect(await page.getByRole('region', { name: 'Automatic flags' }).getByText(/shorter than the published 15 min/).count()).toBe(1);
+    expect(
+      await page
+        .getByRole('region', { name: 'Automatic flags' })
+        .getByText(/shorter than the published 15 min/)
+        .count(),
+    ).toBe(1);
     // The photo comes through the checked route and is shown.
-    await expect.poll(() => page.locator('[data-testid="photo-viewer"] img').first().evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(900);
+    await expect
+      .poll(() =>
+        page
+          .locator('[data-testid="photo-viewer"] img')
+          .first()
+          .evaluate((img: HTMLImageElement) => img.naturalWidth),
+      )
+      .toBe(900);
     await page.getByRole('button', { name: 'Zoom in', exact: true }).click();
     expect(await page.getByTestId('zoom-level').textContent()).toBe('150 %');
     expect(await seriousViolations(page)).toEqual([]);
@@ -112,7 +131,10 @@ describe('practical batch from the learner to the Tasting table', () => {
     await page.getByLabel('Approve this round').check();
     await page.getByRole('button', { name: 'Save the review' }).click();
     expect(await page.getByText('Choose met or not met.').count()).toBeGreaterThan(0);
-    for (const group of await page.getByRole('group').filter({ has: page.getByRole('radio', { name: 'Met', exact: true }) }).all()) {
+    for (const group of await page
+      .getByRole('group')
+      .filter({ has: page.getByRole('radio', { name: 'Met', exact: true }) })
+      .all()) {
       await group.getByRole('radio', { name: 'Met', exact: true }).check();
     }
     await page.getByLabel('Comment for the learner').fill('Clean rims and good seals. Next time process for the full 15 minutes at your altitude.');
@@ -129,7 +151,12 @@ describe('practical batch from the learner to the Tasting table', () => {
     await signIn(page, 'learner@cedarhollow.example', 'demo-learner-pass');
     await page.goto('/learn/pickling-and-canning/practical');
     await page.getByTestId('practical-status').getByText('Approved').waitFor();
-    expect(await page.getByTestId('round-1').getByText(/Clean rims and good seals/).count()).toBe(1);
+    expect(
+      await page
+        .getByTestId('round-1')
+        .getByText(/Clean rims and good seals/)
+        .count(),
+    ).toBe(1);
     expect(await seriousViolations(page)).toEqual([]);
 
     // The Pantry shows the same review beside the course.

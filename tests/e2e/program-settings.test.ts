@@ -11,7 +11,9 @@ describe('the program settings page', () => {
 
   beforeAll(async () => {
     browser = await openBrowser();
-    await sharp({ create: { width: 600, height: 300, channels: 4, background: '#b4572b' } }).png().toFile(logoFile);
+    await sharp({ create: { width: 600, height: 300, channels: 4, background: '#b4572b' } })
+      .png()
+      .toFile(logoFile);
   });
   afterAll(async () => {
     await browser?.close();

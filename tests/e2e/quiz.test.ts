@@ -54,7 +54,12 @@ describe('quiz, progress and the Pantry in the browser', () => {
     await page.locator('fieldset[data-question]').first().waitFor();
     expect(await page.locator('fieldset[data-question="acid-two-to-one"]').getByLabel('Your answer').inputValue()).toBe('3.3');
     const tf = bank.questions.find((q) => q.kind === 'true-false')!;
-    expect(await page.locator(`fieldset[data-question="${tf.id}"]`).getByLabel(tf.answer ? 'True' : 'False', { exact: true }).isChecked()).toBe(true);
+    expect(
+      await page
+        .locator(`fieldset[data-question="${tf.id}"]`)
+        .getByLabel(tf.answer ? 'True' : 'False', { exact: true })
+        .isChecked(),
+    ).toBe(true);
 
     await page.getByRole('button', { name: 'Submit answers' }).click();
     const result = page.getByTestId('quiz-result');

@@ -97,7 +97,11 @@ describe('requests from other sites', () => {
     const csrf = await send('/api/auth/csrf');
     const { csrfToken } = (await csrf.json()) as { csrfToken: string };
     const form = new URLSearchParams({ csrfToken, email: 'learner@cedarhollow.example', password: 'demo-learner-pass', json: 'true' }).toString();
-    const crossSite = await send('/api/auth/callback/credentials', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded', origin: 'https://evil.example', 'x-forwarded-for': '203.0.113.50' } });
+    const crossSite = await send('/api/auth/callback/credentials', {
+      method: 'POST',
+      body: form,
+      headers: { 'content-type': 'application/x-www-form-urlencoded', origin: 'https://evil.example', 'x-forwarded-for': '203.0.113.50' },
+    });
     expect(crossSite.status).toBe(403);
     expect(crossSite.headers.getSetCookie().some((c) => c.includes('session-token'))).toBe(false);
     // A read is never refused for its origin.
@@ -107,12 +111,22 @@ describe('requests from other sites', () => {
   it('reads a JSON body only as application/json (415 for text/plain, which needs no preflight)', async () => {
     const { jar } = await signInHttp('learner@cedarhollow.example', 'demo-learner-pass');
     for (const type of ['text/plain', 'text/plain; application/json', 'application/x-www-form-urlencoded']) {
-      const response = await send('/api/progress', { method: 'POST', jar, body: JSON.stringify({ courseSlug: 'pickling-and-canning', lessonSlug: 'no-such-lesson' }), headers: { 'content-type': type } });
+      const response = await send('/api/progress', {
+        method: 'POST',
+        jar,
+        body: JSON.stringify({ courseSlug: 'pickling-and-canning', lessonSlug: 'no-such-lesson' }),
+        headers: { 'content-type': type },
+      });
       expect(response.status, type).toBe(415);
       expect(await response.json()).toMatchObject({ error: 'unsupported_media' });
     }
     // With a charset the body is read and reaches validation (a lesson that does not exist; no demo data changes).
-    const json = await send('/api/progress', { method: 'POST', jar, body: { courseSlug: 'pickling-and-canning', lessonSlug: 'no-such-lesson' }, headers: { 'content-type': 'application/json; charset=utf-8' } });
+    const json = await send('/api/progress', {
+      method: 'POST',
+      jar,
+      body: { courseSlug: 'pickling-and-canning', lessonSlug: 'no-such-lesson' },
+      headers: { 'content-type': 'application/json; charset=utf-8' },
+    });
     expect([400, 404]).toContain(json.status);
     expect(await json.json()).not.toMatchObject({ error: 'unsupported_media' });
   });

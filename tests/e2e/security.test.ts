@@ -16,7 +16,17 @@ describe('security headers, session cookies and the server actions origin check'
     const asset = html.match(/\/_next\/static\/[^"']+\.(?:js|css)/)?.[0];
     expect(asset, 'the home page links a static asset').toBeTruthy();
     const responses: [string, Response][] = [['/', home]];
-    for (const p of ['/courses', '/learn/pickling-and-canning/acidity', '/signin', '/api/health', '/api/tools/boiling-point?altitudeFt=1000', '/pantry', '/api/pantry', '/no-such-page', asset!]) {
+    for (const p of [
+      '/courses',
+      '/learn/pickling-and-canning/acidity',
+      '/signin',
+      '/api/health',
+      '/api/tools/boiling-point?altitudeFt=1000',
+      '/pantry',
+      '/api/pantry',
+      '/no-such-page',
+      asset!,
+    ]) {
       responses.push([p, await send(p)]);
     }
     const statuses = Object.fromEntries(responses.map(([p, r]) => [p, r.status]));
@@ -57,7 +67,9 @@ describe('security headers, session cookies and the server actions origin check'
     const manifest = JSON.parse(fs.readFileSync(path.join(root, distDir, 'server/server-reference-manifest.json'), 'utf8')) as {
       node: Record<string, { workers: Record<string, unknown>; exportedName?: string; filename?: string }>;
     };
-    const entry = Object.entries(manifest.node).find(([, v]) => Object.keys(v.workers).some((w) => w.includes('desk/workshops')) && (v.exportedName ?? 'saveWorkshopAction') === 'saveWorkshopAction');
+    const entry = Object.entries(manifest.node).find(
+      ([, v]) => Object.keys(v.workers).some((w) => w.includes('desk/workshops')) && (v.exportedName ?? 'saveWorkshopAction') === 'saveWorkshopAction',
+    );
     expect(entry, 'saveWorkshopAction is in the server reference manifest').toBeTruthy();
     const actionId = entry![0];
     const { jar } = await signInHttp('coordinator@cedarhollow.example', 'demo-coordinator-pass');
@@ -69,7 +81,13 @@ describe('security headers, session cookies and the server actions origin check'
         method: 'POST',
         jar,
         body,
-        headers: { 'next-action': actionId, origin, accept: 'text/x-component', 'content-type': 'text/plain;charset=UTF-8', 'next-router-state-tree': '%5B%22%22%2C%7B%7D%5D' },
+        headers: {
+          'next-action': actionId,
+          origin,
+          accept: 'text/x-component',
+          'content-type': 'text/plain;charset=UTF-8',
+          'next-router-state-tree': '%5B%22%22%2C%7B%7D%5D',
+        },
       });
 
     const own = await post(base.origin);
@@ -184,7 +202,10 @@ describe('the content security policy in the browser', () => {
     await page.getByRole('heading', { level: 1 }).waitFor();
     await check('quiz');
     await page.goto('/learn/pickling-and-canning/processing');
-    await page.getByRole('region', { name: /processing time/i }).first().waitFor();
+    await page
+      .getByRole('region', { name: /processing time/i })
+      .first()
+      .waitFor();
     await check('members-only lesson with three calculators');
 
     await page.getByRole('button', { name: 'Sign out' }).click();

@@ -15,7 +15,10 @@ async function adminCreate(args: string[], password?: string): Promise<{ code: n
   delete env.ADMIN_PASSWORD;
   if (password !== undefined) env.ADMIN_PASSWORD = password;
   try {
-    const { stdout, stderr } = await run(path.join(ROOT, 'node_modules/.bin/tsx'), ['--conditions=react-server', 'scripts/admin-create.ts', ...args], { cwd: ROOT, env });
+    const { stdout, stderr } = await run(path.join(ROOT, 'node_modules/.bin/tsx'), ['--conditions=react-server', 'scripts/admin-create.ts', ...args], {
+      cwd: ROOT,
+      env,
+    });
     return { code: 0, stdout, stderr };
   } catch (error) {
     const e = error as { code: number; stdout: string; stderr: string };

@@ -95,7 +95,11 @@ describe('changeRole', () => {
     await expect(requireRole('coordinator')).resolves.toMatchObject({ role: 'coordinator' });
     // The browser's session (/api/auth/session runs the jwt callback) follows as well.
     const jwt = authOptions().callbacks!.jwt!;
-    const token = await jwt({ token: { uid: instructor.id, role: 'instructor', email: instructor.email, name: instructor.name }, user: undefined as never, account: null });
+    const token = await jwt({
+      token: { uid: instructor.id, role: 'instructor', email: instructor.email, name: instructor.name },
+      user: undefined as never,
+      account: null,
+    });
     expect(token.role).toBe('coordinator');
     await db().User.destroy({ where: { id: instructor.id } });
     await expect(requireRole()).rejects.toMatchObject({ status: 401 });

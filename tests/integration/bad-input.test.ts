@@ -45,7 +45,9 @@ const MAY_WRITE: Record<string, { table: string; why: string }[]> = {
 type Handler = (request: Request, context: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
 type Target = { key: string; file: string; pattern: string; method: string };
 
-const targets: Target[] = discoverRoutes().flatMap((r) => (r.kind === 'route' ? r.methods.map((method) => ({ key: `${r.file}#${method}`, file: r.file, pattern: r.pattern, method })) : []));
+const targets: Target[] = discoverRoutes().flatMap((r) =>
+  r.kind === 'route' ? r.methods.map((method) => ({ key: `${r.file}#${method}`, file: r.file, pattern: r.pattern, method })) : [],
+);
 
 let sent = 0;
 const users: Partial<Record<Who, SessionUser>> = {};
@@ -77,7 +79,10 @@ function parseCookies(header: string | null): { name: string; value: string }[] 
 beforeAll(async () => {
   storage = useTemporaryStorage();
   nextHeaders.headers = async () => new Headers(current?.headers);
-  nextHeaders.cookies = async () => ({ getAll: () => parseCookies(current?.headers.get('cookie') ?? null), get: (n: string) => parseCookies(current?.headers.get('cookie') ?? null).find((c) => c.name === n) });
+  nextHeaders.cookies = async () => ({
+    getAll: () => parseCookies(current?.headers.get('cookie') ?? null),
+    get: (n: string) => parseCookies(current?.headers.get('cookie') ?? null).find((c) => c.name === n),
+  });
 
   await resetDatabase();
   const { flagship } = await createCourses();
@@ -100,12 +105,16 @@ beforeAll(async () => {
   current = csrfRequest;
   const csrf = await GET(csrfRequest, { params: Promise.resolve({ nextauth: ['csrf'] }) });
   expect(csrf.status).toBe(200);
-  const csrfCookie = csrf.headers.getSetCookie().find((c) => c.startsWith('next-auth.csrf-token='))!.split(';')[0];
+  const csrfCookie = csrf.headers
+    .getSetCookie()
+    .find((c) => c.startsWith('next-auth.csrf-token='))!
+    .split(';')[0];
   nextAuth = { csrfToken: (await csrf.json()).csrfToken, csrfCookie, sessionCookies, knownEmail: users.learner.email };
 
   const stripe = new Stripe('sk_test_sweep', { telemetry: false });
   const webhookSecret = getEnv().STRIPE_WEBHOOK_SECRET;
-  sign = (payload, options = {}) => stripe.webhooks.generateTestHeaderString({ payload, secret: options.secret ?? webhookSecret, timestamp: options.timestamp });
+  sign = (payload, options = {}) =>
+    stripe.webhooks.generateTestHeaderString({ payload, secret: options.secret ?? webhookSecret, timestamp: options.timestamp });
   console.log(`[bad-input] seed ${SEED}, ${RUNS} runs per handler, ${targets.length} handlers (replay: BAD_INPUT_SEED=${SEED})`);
 });
 
@@ -127,14 +136,16 @@ function requestsFor(target: Target, spec: SweepSpec): fc.Arbitrary<Generated> {
   else {
     const params = fc.record(spec.params ?? {}) as fc.Arbitrary<Record<string, string>>;
     const body: fc.Arbitrary<BadBody | null> = target.method === 'GET' || !spec.body ? fc.constant(null) : spec.body;
-    raw = fc.record({ params, query: spec.query ?? fc.constant<[string, string][]>([]), headers: spec.headers ?? fc.constant<Record<string, string>>({}), body }).map(({ params, query, headers, body }): RawRequest => ({
-      params,
-      query,
-      headers,
-      body: body?.body ?? null,
-      contentType: body?.contentType ?? null,
-      kind: body?.kind ?? 'query/params',
-    }));
+    raw = fc
+      .record({ params, query: spec.query ?? fc.constant<[string, string][]>([]), headers: spec.headers ?? fc.constant<Record<string, string>>({}), body })
+      .map(({ params, query, headers, body }): RawRequest => ({
+        params,
+        query,
+        headers,
+        body: body?.body ?? null,
+        contentType: body?.contentType ?? null,
+        kind: body?.kind ?? 'query/params',
+      }));
   }
   return fc.record({ who, raw });
 }
@@ -150,7 +161,14 @@ function urlOf(pattern: string, params: Record<string, string | string[]>, query
 }
 
 function describeRequest(target: Target, g: Generated): string {
-  const body = g.raw.body instanceof FormData ? '[multipart form]' : typeof g.raw.body === 'string' ? JSON.stringify(g.raw.body.slice(0, 300)) : g.raw.body ? `[${g.raw.body.length} bytes]` : 'none';
+  const body =
+    g.raw.body instanceof FormData
+      ? '[multipart form]'
+      : typeof g.raw.body === 'string'
+        ? JSON.stringify(g.raw.body.slice(0, 300))
+        : g.raw.body
+          ? `[${g.raw.body.length} bytes]`
+          : 'none';
   return `${target.method} ${target.pattern} as ${g.who} (${g.raw.kind}) params=${JSON.stringify(g.raw.params ?? {}).slice(0, 200)} query=${JSON.stringify(g.raw.query).slice(0, 200)} type=${g.raw.contentType} headers=${JSON.stringify(g.raw.headers).slice(0, 200)} body=${body}`;
 }
 
@@ -161,7 +179,11 @@ async function send(target: Target, handler: Handler, g: Generated): Promise<Res
   for (const [k, v] of Object.entries(g.raw.headers)) headers.set(k, v);
   if (g.raw.contentType !== null) headers.set('content-type', g.raw.contentType);
   const hasBody = target.method !== 'GET' && g.raw.body !== null;
-  const request = new NextRequest(urlOf(target.pattern, g.raw.params ?? {}, g.raw.query), { method: target.method, headers, body: hasBody ? (g.raw.body as BodyInit) : undefined });
+  const request = new NextRequest(urlOf(target.pattern, g.raw.params ?? {}, g.raw.query), {
+    method: target.method,
+    headers,
+    body: hasBody ? (g.raw.body as BodyInit) : undefined,
+  });
   current = request;
   try {
     return await handler(request, { params: Promise.resolve(g.raw.params ?? {}) });
@@ -174,7 +196,8 @@ async function send(target: Target, handler: Handler, g: Generated): Promise<Res
 /** A 4xx must explain itself: JSON { error, message } with a sentence a person can read. */
 async function unclearReason(response: Response): Promise<string | null> {
   const text = await response.text();
-  if (!(response.headers.get('content-type') ?? '').includes('application/json')) return `not JSON (${response.headers.get('content-type')}): ${text.slice(0, 200)}`;
+  if (!(response.headers.get('content-type') ?? '').includes('application/json'))
+    return `not JSON (${response.headers.get('content-type')}): ${text.slice(0, 200)}`;
   let body: unknown;
   try {
     body = JSON.parse(text);
@@ -184,7 +207,8 @@ async function unclearReason(response: Response): Promise<string | null> {
   const { error, message } = (body ?? {}) as { error?: unknown; message?: unknown };
   if (typeof error !== 'string' || !error) return `no "error" code: ${text.slice(0, 200)}`;
   if (typeof message !== 'string') return `no "message": ${text.slice(0, 200)}`;
-  if (message.length < 10 || message.length > 1_000 || !/\p{L}{3,}\s+\p{L}{2,}/u.test(message)) return `message is not a readable sentence: ${JSON.stringify(message.slice(0, 300))}`;
+  if (message.length < 10 || message.length > 1_000 || !/\p{L}{3,}\s+\p{L}{2,}/u.test(message))
+    return `message is not a readable sentence: ${JSON.stringify(message.slice(0, 300))}`;
   if (/\n\s+at |SequelizeError|TypeError|undefined is not|Cannot read prop/.test(message)) return `message leaks internals: ${message.slice(0, 300)}`;
   return null;
 }
@@ -212,7 +236,11 @@ describe('bad-input sweep', () => {
   it('keeps the url of a failed sign-in (the sign-in form reads its error code) beside the message', async () => {
     const { POST } = (await import('@/app/api/auth/[...nextauth]/route')) as unknown as { POST: Handler };
     const body = `csrfToken=${encode(nextAuth.csrfToken)}&email=${encode(users.instructor!.email)}&password=wrong-password-1&callbackUrl=%2Fpantry&json=true`;
-    const request = new NextRequest('http://localhost:3000/api/auth/callback/credentials', { method: 'POST', headers: { cookie: nextAuth.csrfCookie, 'content-type': 'application/x-www-form-urlencoded' }, body });
+    const request = new NextRequest('http://localhost:3000/api/auth/callback/credentials', {
+      method: 'POST',
+      headers: { cookie: nextAuth.csrfCookie, 'content-type': 'application/x-www-form-urlencoded' },
+      body,
+    });
     current = request;
     const response = await POST(request, { params: Promise.resolve({ nextauth: ['callback', 'credentials'] }) });
     expect(response.status).toBe(401);
@@ -238,8 +266,13 @@ describe('bad-input sweep', () => {
         statuses.set(response.status, (statuses.get(response.status) ?? 0) + 1);
         const what = describeRequest(target, g);
         if (response.status >= 500) throw new Error(`${response.status} for ${what}\n${(await response.text()).slice(0, 1_500)}`);
-        if (response.status < 400 && !spec.mayAnswerOk) throw new Error(`bad input accepted with ${response.status}: ${what}\n${(await response.text()).slice(0, 500)}`);
-        if (process.env.BAD_INPUT_DEBUG && response.status >= 400) messages.set(`${response.status} ${(await response.clone().text()).slice(0, 120)}`, (messages.get(`${response.status} ${(await response.clone().text()).slice(0, 120)}`) ?? 0) + 1);
+        if (response.status < 400 && !spec.mayAnswerOk)
+          throw new Error(`bad input accepted with ${response.status}: ${what}\n${(await response.text()).slice(0, 500)}`);
+        if (process.env.BAD_INPUT_DEBUG && response.status >= 400)
+          messages.set(
+            `${response.status} ${(await response.clone().text()).slice(0, 120)}`,
+            (messages.get(`${response.status} ${(await response.clone().text()).slice(0, 120)}`) ?? 0) + 1,
+          );
         if (response.status >= 400) {
           const reason = await unclearReason(response);
           if (reason) throw new Error(`${response.status} without a clear message (${reason}) for ${what}`);
@@ -249,19 +282,31 @@ describe('bad-input sweep', () => {
         await fc.assert(property, { seed: SEED, numRuns: RUNS, endOnFailure: true });
       } catch (error) {
         const cause = (error as { cause?: unknown }).cause;
-        throw new Error(`[bad-input] ${target.method} ${target.pattern} failed; replay with BAD_INPUT_SEED=${SEED}\n${(error as Error).message}${cause instanceof Error ? `\nReason: ${cause.message}` : ''}`);
+        throw new Error(
+          `[bad-input] ${target.method} ${target.pattern} failed; replay with BAD_INPUT_SEED=${SEED}\n${(error as Error).message}${cause instanceof Error ? `\nReason: ${cause.message}` : ''}`,
+        );
       }
       const after = await fingerprint(exclude);
       expect(changedTables(before, after), `tables written by bad requests to ${target.method} ${target.pattern}`).toEqual([]);
-      if (process.env.BAD_INPUT_DEBUG) console.log([...messages].sort((a, b) => b[1] - a[1]).slice(0, 12).map(([m, n]) => `${n}× ${m}`).join('\n'));
+      if (process.env.BAD_INPUT_DEBUG)
+        console.log(
+          [...messages]
+            .sort((a, b) => b[1] - a[1])
+            .slice(0, 12)
+            .map(([m, n]) => `${n}× ${m}`)
+            .join('\n'),
+        );
       const allowed = changedTables(beforeAll, await fingerprint());
-      console.log(`[bad-input] ${target.method} ${target.pattern}: ${JSON.stringify(Object.fromEntries([...statuses].sort((a, b) => a[0] - b[0])))}${allowed.length ? `; allowed writes: ${allowed.join(', ')}` : ''}`);
+      console.log(
+        `[bad-input] ${target.method} ${target.pattern}: ${JSON.stringify(Object.fromEntries([...statuses].sort((a, b) => a[0] - b[0])))}${allowed.length ? `; allowed writes: ${allowed.join(', ')}` : ''}`,
+      );
 
       // The bad input must reach validation: most answers are not the role check's 401/403.
       const total = [...statuses.values()].reduce((a, b) => a + b, 0);
       const guarded = (statuses.get(401) ?? 0) + (statuses.get(403) ?? 0);
       expect(total).toBeGreaterThanOrEqual(RUNS);
-      if (!spec.who.includes('visitor')) expect(guarded / total, `share of 401/403 for ${target.key}: ${JSON.stringify(Object.fromEntries(statuses))}`).toBeLessThan(0.5);
+      if (!spec.who.includes('visitor'))
+        expect(guarded / total, `share of 401/403 for ${target.key}: ${JSON.stringify(Object.fromEntries(statuses))}`).toBeLessThan(0.5);
     }, 120_000);
   }
 

@@ -42,7 +42,14 @@ describe('what an issued certificate says', () => {
   it('stores the holder, course, program and signer at issue; renames afterwards change neither the verification nor the PDF', async () => {
     const { coordinator, userId, certificateId, serial } = await issued('Ada Lindqvist');
     const cert = (await db().Certificate.findByPk(certificateId))!;
-    expect({ holderName: cert.holderName, courseTitle: cert.courseTitle, programName: cert.programName, signerName: cert.signerName, signerTitle: cert.signerTitle, version: cert.version }).toEqual({
+    expect({
+      holderName: cert.holderName,
+      courseTitle: cert.courseTitle,
+      programName: cert.programName,
+      signerName: cert.signerName,
+      signerTitle: cert.signerTitle,
+      version: cert.version,
+    }).toEqual({
       holderName: 'Ada Lindqvist',
       courseTitle: 'Safe Pickling and Water-Bath Canning',
       programName: process.env.CERTIFICATE_PROGRAM_NAME ?? 'Cedar Hollow County home-preserving program',
@@ -69,7 +76,10 @@ describe('what an issued certificate says', () => {
     await db().User.update({ name: 'Ada Lindqvist' }, { where: { id: userId } });
 
     actAs(coordinator);
-    const response = await reissueRoute(jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'Misspelt surname' }), params({ id: String(certificateId) }));
+    const response = await reissueRoute(
+      jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'Misspelt surname' }),
+      params({ id: String(certificateId) }),
+    );
     expect(response.status).toBe(200);
     const { certificate } = (await response.json()) as { certificate: { serial: string; version: number; replacedSerial: string } };
     expect(certificate.version).toBe(2);
@@ -95,12 +105,18 @@ describe('what an issued certificate says', () => {
     const { coordinator, certificateId } = await issued('Ada Lindqvist');
     await db().Certificate.update({ revokedAt: new Date(), revokeReason: 'test' }, { where: { id: certificateId } });
     actAs(coordinator);
-    const revoked = await reissueRoute(jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'Misspelt surname' }), params({ id: String(certificateId) }));
+    const revoked = await reissueRoute(
+      jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'Misspelt surname' }),
+      params({ id: String(certificateId) }),
+    );
     expect(revoked.status).toBe(409);
     const bad = await reissueRoute(jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'x' }), params({ id: String(certificateId) }));
     expect(bad.status).toBe(400);
     actAs(await createUser('learner'));
-    const learner = await reissueRoute(jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'Misspelt surname' }), params({ id: String(certificateId) }));
+    const learner = await reissueRoute(
+      jsonRequest(`/api/desk/certificates/${certificateId}/reissue`, { reason: 'Misspelt surname' }),
+      params({ id: String(certificateId) }),
+    );
     expect(learner.status).toBe(403);
     expect(await db().CertificateVersion.count()).toBe(0);
   });

@@ -92,7 +92,17 @@ describe('issuing', () => {
     const { enrollmentId, userId } = await eligibleEnrollment(courses.flagship);
     await issueCertificate(enrollmentId, null);
     await expect(
-      db().Certificate.create({ enrollmentId, userId, issuedById: null, serial: 'ZZZZ-ZZZZ-ZZZZ-ZZZZ', holderName: 'Twice', courseTitle: 'Twice', programName: 'Twice', issuedAt: new Date(), validUntil: new Date() }),
+      db().Certificate.create({
+        enrollmentId,
+        userId,
+        issuedById: null,
+        serial: 'ZZZZ-ZZZZ-ZZZZ-ZZZZ',
+        holderName: 'Twice',
+        courseTitle: 'Twice',
+        programName: 'Twice',
+        issuedAt: new Date(),
+        validUntil: new Date(),
+      }),
     ).rejects.toMatchObject({ name: 'SequelizeUniqueConstraintError' });
   });
 
@@ -138,7 +148,10 @@ describe('revoking', () => {
     const empty = await revokeRoute(jsonRequest(url, { reason: '' }), params({ id: String(issued.certificateId) }));
     expect(empty.status).toBe(400);
     expect((await empty.json()).fields.reason).toBeDefined();
-    const ok = await revokeRoute(jsonRequest(url, { reason: 'Practical photos were not the learner’s own batch.' }), params({ id: String(issued.certificateId) }));
+    const ok = await revokeRoute(
+      jsonRequest(url, { reason: 'Practical photos were not the learner’s own batch.' }),
+      params({ id: String(issued.certificateId) }),
+    );
     expect(ok.status).toBe(200);
     const again = await revokeRoute(jsonRequest(url, { reason: 'Second attempt at revoking.' }), params({ id: String(issued.certificateId) }));
     expect(again.status).toBe(409);

@@ -34,7 +34,11 @@ async function certify(enrollmentId: number, userId: number, { revoked = false, 
   );
 }
 
-const outbox = () => db().sequelize.query<{ toAddress: string; kind: string; subject: string; textBody: string }>('SELECT toAddress, kind, subject, textBody FROM outbox_emails ORDER BY id', { type: QueryTypes.SELECT });
+const outbox = () =>
+  db().sequelize.query<{ toAddress: string; kind: string; subject: string; textBody: string }>(
+    'SELECT toAddress, kind, subject, textBody FROM outbox_emails ORDER BY id',
+    { type: QueryTypes.SELECT },
+  );
 
 describe('requirements in force when the enrollment began', () => {
   it('an enrollment of content version 1 is eligible without the fermenting lesson; one of version 2 is not', async () => {
@@ -64,7 +68,7 @@ describe('requirements in force when the enrollment began', () => {
 });
 
 describe('the final exam of an enrollment begun before the fermenting lesson', () => {
-  it('draws no question of that lesson\'s quiz; a new enrollment\'s exam may', async () => {
+  it("draws no question of that lesson's quiz; a new enrollment's exam may", async () => {
     const exam = getBank(`${FLAGSHIP}--final-exam`)!;
     const lessonQuiz = getBank(`${FLAGSHIP}--${NEW_LESSON}`)!;
     const newIds = new Set(lessonQuiz.questions.map((q) => q.id));

@@ -30,7 +30,11 @@ function contentWith(edit: (slug: string, text: string) => string | null): strin
   return root;
 }
 
-const rows = () => db().sequelize.query<{ id: number; slug: string; title: string; feeCents: number; passMarkPct: number; validityMonths: number }>('SELECT id, slug, title, feeCents, passMarkPct, validityMonths FROM courses ORDER BY slug', { type: QueryTypes.SELECT });
+const rows = () =>
+  db().sequelize.query<{ id: number; slug: string; title: string; feeCents: number; passMarkPct: number; validityMonths: number }>(
+    'SELECT id, slug, title, feeCents, passMarkPct, validityMonths FROM courses ORDER BY slug',
+    { type: QueryTypes.SELECT },
+  );
 
 afterAll(() => {
   for (const dir of temps) fs.rmSync(dir, { recursive: true, force: true });
@@ -45,7 +49,12 @@ describe('course sync', () => {
     const stored = await rows();
     for (const course of content) {
       const row = stored.find((r) => r.slug === course.slug)!;
-      expect({ title: row.title, feeCents: Number(row.feeCents), passMarkPct: Number(row.passMarkPct), validityMonths: Number(row.validityMonths) }).toEqual({ title: course.title, feeCents: course.feeCents, passMarkPct: course.passMarkPct, validityMonths: course.validityMonths });
+      expect({ title: row.title, feeCents: Number(row.feeCents), passMarkPct: Number(row.passMarkPct), validityMonths: Number(row.validityMonths) }).toEqual({
+        title: course.title,
+        feeCents: course.feeCents,
+        passMarkPct: course.passMarkPct,
+        validityMonths: course.validityMonths,
+      });
     }
     const second = await syncCourses(db().sequelize);
     expect(second.lines).toEqual([]);
@@ -55,15 +64,32 @@ describe('course sync', () => {
     await syncCourses(db().sequelize);
     const [before] = (await rows()).filter((r) => r.slug === 'pickling-and-canning');
     const coordinator = await createUser('coordinator');
-    await db().sequelize.query('INSERT INTO course_settings (courseId, refundPolicy, updatedById, createdAt, updatedAt) VALUES (?, ?, ?, NOW(), NOW())', { replacements: [before.id, 'Full refund up to 7 days before the workshop.', coordinator.id] });
+    await db().sequelize.query('INSERT INTO course_settings (courseId, refundPolicy, updatedById, createdAt, updatedAt) VALUES (?, ?, ?, NOW(), NOW())', {
+      replacements: [before.id, 'Full refund up to 7 days before the workshop.', coordinator.id],
+    });
 
-    const edited = contentWith((slug, text) => (slug === 'pickling-and-canning' ? text.replace('feeCents: 4500', 'feeCents: 5200').replace('title: Safe Pickling and Water-Bath Canning', 'title: Safe Pickling and Boiling-Water Canning') : text));
+    const edited = contentWith((slug, text) =>
+      slug === 'pickling-and-canning'
+        ? text
+            .replace('feeCents: 4500', 'feeCents: 5200')
+            .replace('title: Safe Pickling and Water-Bath Canning', 'title: Safe Pickling and Boiling-Water Canning')
+        : text,
+    );
     const report = await syncCourses(db().sequelize, { contentRoot: edited });
-    expect(report.lines).toEqual(['updated pickling-and-canning: title Safe Pickling and Water-Bath Canning -> Safe Pickling and Boiling-Water Canning, feeCents 4500 -> 5200']);
+    expect(report.lines).toEqual([
+      'updated pickling-and-canning: title Safe Pickling and Water-Bath Canning -> Safe Pickling and Boiling-Water Canning, feeCents 4500 -> 5200',
+    ]);
 
     const [after] = (await rows()).filter((r) => r.slug === 'pickling-and-canning');
-    expect({ id: after.id, title: after.title, feeCents: Number(after.feeCents) }).toEqual({ id: before.id, title: 'Safe Pickling and Boiling-Water Canning', feeCents: 5200 });
-    const [setting] = await db().sequelize.query<{ refundPolicy: string; updatedById: number }>('SELECT refundPolicy, updatedById FROM course_settings WHERE courseId = ?', { replacements: [before.id], type: QueryTypes.SELECT });
+    expect({ id: after.id, title: after.title, feeCents: Number(after.feeCents) }).toEqual({
+      id: before.id,
+      title: 'Safe Pickling and Boiling-Water Canning',
+      feeCents: 5200,
+    });
+    const [setting] = await db().sequelize.query<{ refundPolicy: string; updatedById: number }>(
+      'SELECT refundPolicy, updatedById FROM course_settings WHERE courseId = ?',
+      { replacements: [before.id], type: QueryTypes.SELECT },
+    );
     expect(setting).toEqual({ refundPolicy: 'Full refund up to 7 days before the workshop.', updatedById: coordinator.id });
   });
 
@@ -72,7 +98,9 @@ describe('course sync', () => {
     const learner = await createUser('learner');
     const [refresher] = (await rows()).filter((r) => r.slug === 'volunteer-refresher');
     await db().Enrollment.create({ userId: learner.id, courseId: refresher.id, runKey: 'self-paced', status: 'active', feeCents: 1500 });
-    await db().sequelize.query("INSERT INTO courses (slug, title, feeCents, currency, passMarkPct, validityMonths, createdAt, updatedAt) VALUES ('retired-course', 'Retired', 0, 'usd', 80, 36, NOW(), NOW())");
+    await db().sequelize.query(
+      "INSERT INTO courses (slug, title, feeCents, currency, passMarkPct, validityMonths, createdAt, updatedAt) VALUES ('retired-course', 'Retired', 0, 'usd', 80, 36, NOW(), NOW())",
+    );
 
     const report = await syncCourses(db().sequelize, { contentRoot: contentWith((slug, text) => (slug === 'volunteer-refresher' ? null : text)) });
     expect(report.keep.map((k) => k.slug)).toEqual(['volunteer-refresher']);

@@ -32,7 +32,17 @@ const releaseAs = (viewer: SessionUser, id: number) => {
 /** A learner in the setting's workshop (or self-paced) with one waiting round; returns its id and photo ids. */
 async function waitingRound(workshopId: number | null = fixture.current.workshop.id, learner?: SessionUser) {
   const enrolled = learner
-    ? { learner, enrollment: await db().Enrollment.create({ userId: learner.id, courseId: fixture.current.flagship.id, workshopId, runKey: workshopId ? String(workshopId) : 'self-paced', status: 'active', feeCents: 4500 }) }
+    ? {
+        learner,
+        enrollment: await db().Enrollment.create({
+          userId: learner.id,
+          courseId: fixture.current.flagship.id,
+          workshopId,
+          runKey: workshopId ? String(workshopId) : 'self-paced',
+          status: 'active',
+          feeCents: 4500,
+        }),
+      }
     : await enrolledLearner(fixture.current.flagship.id, 'active', workshopId);
   // Through the service, not the learner-only routes: the account may hold a staff role as well.
   const photoIds = [];
@@ -123,7 +133,9 @@ describe('who may decide on a practical', () => {
     expect(decided.status).toBe(409);
     expect((await decided.json()).message).toMatch(/already been reviewed/);
     actAs(await createUser('learner'));
-    expect((await claim(new Request(`http://localhost:3000/api/practicals/${practicalId}/claim`, { method: 'POST' }), params({ id: String(practicalId) }))).status).toBe(403);
+    expect(
+      (await claim(new Request(`http://localhost:3000/api/practicals/${practicalId}/claim`, { method: 'POST' }), params({ id: String(practicalId) }))).status,
+    ).toBe(403);
   });
 });
 

@@ -32,7 +32,12 @@ describe('GET /api/desk/roster', () => {
     expect([...bytes.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
     const records = parse(Buffer.from(bytes), { bom: true, columns: true, skip_empty_lines: true }) as Record<string, string>[];
     expect(records.map((r) => r.Learner)).toEqual(['Okafor, Adaeze', 'Zoë Brontë-Ångström', 'José "Pepe" Muñoz', `'=HYPERLINK("x")`]);
-    expect(records[0]).toMatchObject({ Course: 'Safe Pickling and Water-Bath Canning', Eligible: 'certified', 'Certificate serial': issued.serial, 'Certificate state': 'valid' });
+    expect(records[0]).toMatchObject({
+      Course: 'Safe Pickling and Water-Bath Canning',
+      Eligible: 'certified',
+      'Certificate serial': issued.serial,
+      'Certificate state': 'valid',
+    });
     expect(records[1]).toMatchObject({ Eligible: 'yes', 'Certificate serial': '', Missing: '' });
 
     const filtered = await rosterRoute(new Request('http://localhost/api/desk/roster?eligible=certified'), {});

@@ -32,7 +32,15 @@ beforeEach(async () => {
 
 async function workshopIn(hours: number, seats = 12) {
   const startsAt = new Date(Date.now() + hours * 3600_000);
-  return db().Workshop.create({ courseId, instructorId: null, startsAt, endsAt: new Date(startsAt.getTime() + 5 * 3600_000), timeZone: 'America/Denver', place: 'Upper Fork Community Kitchen, 220 Aspen Street', seats });
+  return db().Workshop.create({
+    courseId,
+    instructorId: null,
+    startsAt,
+    endsAt: new Date(startsAt.getTime() + 5 * 3600_000),
+    timeZone: 'America/Denver',
+    place: 'Upper Fork Community Kitchen, 220 Aspen Street',
+    seats,
+  });
 }
 
 /** Runs sender rounds (as the worker does) until nothing is due, with the clock moved on so backoff has passed. */
@@ -84,7 +92,8 @@ describe('the outbox sender and the fake SMTP server', () => {
   });
 
   it('two senders at once deliver each of 30 messages exactly once', async () => {
-    for (let i = 0; i < 30; i++) await enqueueEmail({ kind: 'test.bulk', to: `reader${i}@test.example`, subject: `Message ${i}`, text: `Body ${i}`, html: `<p>Body ${i}</p>` });
+    for (let i = 0; i < 30; i++)
+      await enqueueEmail({ kind: 'test.bulk', to: `reader${i}@test.example`, subject: `Message ${i}`, text: `Body ${i}`, html: `<p>Body ${i}</p>` });
     for (let round = 0; round < 10; round++) {
       const [a, b] = await Promise.all([sendDueEmails({ batchSize: 4 }), sendDueEmails({ batchSize: 4 })]);
       if (a.claimed + b.claimed === 0) break;
@@ -116,7 +125,10 @@ describe('the outbox sender and the fake SMTP server', () => {
 
 describe('messages', () => {
   it('registration queues the welcome message in its transaction; its link confirms the address once', async () => {
-    const response = await registerPOST(jsonRequest('/api/register', { name: 'Ada Brook', email: 'ada.brook@test.example', password: 'a-long-password-1' }), {});
+    const response = await registerPOST(
+      jsonRequest('/api/register', { name: 'Ada Brook', email: 'ada.brook@test.example', password: 'a-long-password-1' }),
+      {},
+    );
     expect(response.status).toBe(201);
     await drain();
     expect(h.smtp.messages).toHaveLength(1);

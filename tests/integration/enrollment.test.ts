@@ -20,7 +20,15 @@ beforeEach(async () => {
 
 async function workshop(overrides: Partial<{ hoursFromNow: number; seats: number; instructorId: number | null }> = {}) {
   const startsAt = new Date(Date.now() + (overrides.hoursFromNow ?? 240) * 3600_000);
-  return db().Workshop.create({ courseId, instructorId: overrides.instructorId ?? null, startsAt, endsAt: new Date(startsAt.getTime() + 5 * 3600_000), timeZone: 'America/Denver', place: 'Grange Hall', seats: overrides.seats ?? 12 });
+  return db().Workshop.create({
+    courseId,
+    instructorId: overrides.instructorId ?? null,
+    startsAt,
+    endsAt: new Date(startsAt.getTime() + 5 * 3600_000),
+    timeZone: 'America/Denver',
+    place: 'Grange Hall',
+    seats: overrides.seats ?? 12,
+  });
 }
 
 async function enrollment(userId: number, workshopId: number, status: 'awaiting_payment' | 'active' = 'active') {
@@ -38,8 +46,12 @@ describe('the enrollment state machine', () => {
     const done = (await Enrollment.findByPk(e.id))!;
     expect(done.status).toBe('completed');
     expect(done.completedAt).toBeInstanceOf(Date);
-    await expect(sequelize.transaction((transaction) => transitionEnrollment(e.id, 'withdrawn', { transaction, actorId: null, reason: 'x' }))).rejects.toBeInstanceOf(TransitionError);
-    await expect(sequelize.transaction((transaction) => transitionEnrollment(e.id, 'active', { transaction, actorId: null, reason: 'x' }))).rejects.toThrow(/completed cannot become active/);
+    await expect(
+      sequelize.transaction((transaction) => transitionEnrollment(e.id, 'withdrawn', { transaction, actorId: null, reason: 'x' })),
+    ).rejects.toBeInstanceOf(TransitionError);
+    await expect(sequelize.transaction((transaction) => transitionEnrollment(e.id, 'active', { transaction, actorId: null, reason: 'x' }))).rejects.toThrow(
+      /completed cannot become active/,
+    );
     const audit = await AuditLog.findAll({ where: { subjectType: 'enrollment', subjectId: String(e.id) }, order: [['id', 'ASC']] });
     expect(audit.map((a) => [a.action, (a.data as { from: string }).from])).toEqual([
       ['enrollment.active', 'awaiting_payment'],
@@ -68,10 +80,20 @@ describe('GET /api/courses/[course]/workshops', () => {
     const [a, b] = await Promise.all([createUser('learner'), createUser('learner')]);
     await enrollment(a.id, near.id, 'active');
     await enrollment(b.id, near.id, 'awaiting_payment');
-    await db().Enrollment.create({ userId: (await createUser('learner')).id, courseId, workshopId: far.id, runKey: `withdrawn:9:${far.id}`, status: 'withdrawn', feeCents: 4500 });
+    await db().Enrollment.create({
+      userId: (await createUser('learner')).id,
+      courseId,
+      workshopId: far.id,
+      runKey: `withdrawn:9:${far.id}`,
+      status: 'withdrawn',
+      feeCents: 4500,
+    });
 
     actAs(a);
-    const response = await workshopsGET(new Request('http://localhost:3000/api/courses/pickling-and-canning/workshops'), params({ course: 'pickling-and-canning' }));
+    const response = await workshopsGET(
+      new Request('http://localhost:3000/api/courses/pickling-and-canning/workshops'),
+      params({ course: 'pickling-and-canning' }),
+    );
     expect(response.status).toBe(200);
     const { workshops } = await response.json();
     expect(workshops.map((w: { id: number }) => w.id)).toEqual([near.id, far.id]);
@@ -105,7 +127,17 @@ describe('workshops at the desk', () => {
     const year = new Date().getUTCFullYear() + 1;
     // America/Denver keeps MST (UTC−7) in December (IANA tz database).
     const id = await saveWorkshop({
-      values: { courseId, date: `${year}-12-12`, startTime: '09:00', endTime: '14:30', timeZone: 'America/Denver', place: 'Grange Hall', seats: 2, instructorId: instructor.id, attendanceRequired: true },
+      values: {
+        courseId,
+        date: `${year}-12-12`,
+        startTime: '09:00',
+        endTime: '14:30',
+        timeZone: 'America/Denver',
+        place: 'Grange Hall',
+        seats: 2,
+        instructorId: instructor.id,
+        attendanceRequired: true,
+      },
       actorId: coordinator.id,
     });
     const saved = (await db().Workshop.findByPk(id))!;
@@ -115,10 +147,26 @@ describe('workshops at the desk', () => {
 
     await enrollment((await createUser('learner')).id, id);
     await enrollment((await createUser('learner')).id, id, 'awaiting_payment');
-    const values = { courseId, date: `${year}-12-12`, startTime: '09:00', endTime: '14:30', timeZone: 'America/Denver', place: 'Grange Hall', seats: 1, instructorId: instructor.id, attendanceRequired: true };
-    await expect(saveWorkshop({ id, values, actorId: coordinator.id })).rejects.toMatchObject({ fields: { seats: ['2 seats are already taken; the workshop cannot have fewer.'] } });
-    await expect(saveWorkshop({ values: { ...values, instructorId: (await createUser('learner')).id }, actorId: coordinator.id })).rejects.toMatchObject({ fields: { instructorId: expect.any(Array) } });
-    await expect(saveWorkshop({ values: { ...values, date: '2020-01-01' }, actorId: coordinator.id })).rejects.toMatchObject({ fields: { date: expect.any(Array) } });
+    const values = {
+      courseId,
+      date: `${year}-12-12`,
+      startTime: '09:00',
+      endTime: '14:30',
+      timeZone: 'America/Denver',
+      place: 'Grange Hall',
+      seats: 1,
+      instructorId: instructor.id,
+      attendanceRequired: true,
+    };
+    await expect(saveWorkshop({ id, values, actorId: coordinator.id })).rejects.toMatchObject({
+      fields: { seats: ['2 seats are already taken; the workshop cannot have fewer.'] },
+    });
+    await expect(saveWorkshop({ values: { ...values, instructorId: (await createUser('learner')).id }, actorId: coordinator.id })).rejects.toMatchObject({
+      fields: { instructorId: expect.any(Array) },
+    });
+    await expect(saveWorkshop({ values: { ...values, date: '2020-01-01' }, actorId: coordinator.id })).rejects.toMatchObject({
+      fields: { date: expect.any(Array) },
+    });
     await saveWorkshop({ id, values: { ...values, seats: 5, place: 'Community Kitchen' }, actorId: coordinator.id });
     expect((await db().Workshop.findByPk(id))!.place).toBe('Community Kitchen');
   });
@@ -156,12 +204,17 @@ describe('fee waivers at the desk', () => {
     actAs(await createUser('learner'));
     expect((await waiversPOST(jsonRequest('/api/waivers', { maxUses: 3, expiresOn: `${year}-01-31`, courseId: '' }), {})).status).toBe(403);
     actAs(await createUser('coordinator'));
-    const given = await waiversPOST(jsonRequest('/api/waivers', { code: 'grange-2027', maxUses: 3, expiresOn: `${year}-01-31`, courseId: String(courseId), note: 'Grange volunteers' }), {});
+    const given = await waiversPOST(
+      jsonRequest('/api/waivers', { code: 'grange-2027', maxUses: 3, expiresOn: `${year}-01-31`, courseId: String(courseId), note: 'Grange volunteers' }),
+      {},
+    );
     expect(given.status).toBe(201);
     expect((await given.json()).waiver).toMatchObject({ code: 'GRANGE-2027', maxUses: 3, uses: 0, expiresAt: `${year}-01-31T23:59:59.000Z` });
     const generated = await waiversPOST(jsonRequest('/api/waivers', { code: '', maxUses: 1, expiresOn: `${year}-01-31`, courseId: '' }), {});
     expect((await generated.json()).waiver.code).toMatch(/^BRINE-(?:[A-HJKMNP-Z2-9]{4}-){2}[A-HJKMNP-Z2-9]{4}$/);
-    expect((await waiversPOST(jsonRequest('/api/waivers', { code: 'GRANGE-2027', maxUses: 3, expiresOn: `${year}-01-31`, courseId: '' }), {})).status).toBe(409);
+    expect((await waiversPOST(jsonRequest('/api/waivers', { code: 'GRANGE-2027', maxUses: 3, expiresOn: `${year}-01-31`, courseId: '' }), {})).status).toBe(
+      409,
+    );
     const bad = await waiversPOST(jsonRequest('/api/waivers', { code: 'x', maxUses: 0, expiresOn: 'soon', courseId: '' }), {});
     expect(bad.status).toBe(400);
     expect(Object.keys((await bad.json()).fields).sort()).toEqual(['code', 'expiresOn', 'maxUses']);

@@ -25,7 +25,10 @@ beforeEach(async () => {
 });
 
 async function refusal(call: Promise<unknown>): Promise<AppError> {
-  const error = await call.then(() => null, (e: unknown) => e);
+  const error = await call.then(
+    () => null,
+    (e: unknown) => e,
+  );
   expect(error).toBeInstanceOf(AppError);
   return error as AppError;
 }
@@ -126,7 +129,11 @@ describe('importing certificate holders', () => {
   it('refuses a file that is not CSV, or lacks a column, as a whole', async () => {
     expect((await refusal(previewHolderImport('name,email\n"unclosed,quote@x.example'))).message).toMatch(/could not be read as CSV/);
     expect((await refusal(previewHolderImport('\u0000\u0001PNG binary'))).message).toMatch(/not a CSV text file/);
-    expect((await refusal(previewHolderImport('name,email,course,certificate_date\nA,a@x.example,pickling-and-canning,2024-01-01'))).message).toMatch(/^missing column\(s\): end_date/);
-    expect((await refusal(previewHolderImport(`${HEADER},notes\nA,a@x.example,pickling-and-canning,2024-01-01,2027-01-01,,hi`))).message).toMatch(/unknown column\(s\): notes/);
+    expect((await refusal(previewHolderImport('name,email,course,certificate_date\nA,a@x.example,pickling-and-canning,2024-01-01'))).message).toMatch(
+      /^missing column\(s\): end_date/,
+    );
+    expect((await refusal(previewHolderImport(`${HEADER},notes\nA,a@x.example,pickling-and-canning,2024-01-01,2027-01-01,,hi`))).message).toMatch(
+      /unknown column\(s\): notes/,
+    );
   });
 });

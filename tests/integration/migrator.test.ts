@@ -13,7 +13,11 @@ const url = (() => {
 })();
 
 const tables = async (sequelize: ReturnType<typeof createSequelize>) =>
-  (await sequelize.query<{ name: string }>('SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() ORDER BY table_name', { type: QueryTypes.SELECT })).map((r) => r.name);
+  (
+    await sequelize.query<{ name: string }>('SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() ORDER BY table_name', {
+      type: QueryTypes.SELECT,
+    })
+  ).map((r) => r.name);
 
 describe('migrations and seeders', () => {
   const sequelize = createSequelize(url);
@@ -39,7 +43,9 @@ describe('migrations and seeders', () => {
     await seeder(sequelize).up();
     expect((await migrator(sequelize).executed()).map((m) => m.name)).toEqual(applied);
     expect((await seeder(sequelize).executed()).map((m) => m.name)).toEqual(seeded);
-    const [demo] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM users WHERE email = 'learner@cedarhollow.example'", { type: QueryTypes.SELECT });
+    const [demo] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM users WHERE email = 'learner@cedarhollow.example'", {
+      type: QueryTypes.SELECT,
+    });
     expect(Number(demo.n)).toBe(1);
   });
 });

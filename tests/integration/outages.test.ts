@@ -92,7 +92,15 @@ describe('SMTP and the payment service stopped and started during enrollments', 
   it('loses nothing, sends nothing twice, and answers 503 (never 500) while payments are down', { timeout: 120_000 }, async () => {
     const { flagship } = await createCourses();
     const startsAt = new Date(Date.now() + 10 * 86_400_000);
-    const workshop = await db().Workshop.create({ courseId: flagship.id, instructorId: null, startsAt, endsAt: new Date(startsAt.getTime() + 5 * 3600_000), timeZone: 'America/Denver', place: 'Grange Hall, 14 Mill Road', seats: SEATS });
+    const workshop = await db().Workshop.create({
+      courseId: flagship.id,
+      instructorId: null,
+      startsAt,
+      endsAt: new Date(startsAt.getTime() + 5 * 3600_000),
+      timeZone: 'America/Denver',
+      place: 'Grange Hall, 14 Mill Road',
+      seats: SEATS,
+    });
     await db().FeeWaiver.create({ code: 'OUTAGE-WAIVER', courseId: flagship.id, maxUses: 10, expiresAt: new Date(Date.now() + 86_400_000) });
     const learners = await Promise.all(Array.from({ length: 13 }, () => createUser('learner')));
     const coordinator = await createUser('coordinator');
@@ -112,7 +120,10 @@ describe('SMTP and the payment service stopped and started during enrollments', 
     };
     const refund = (enrollmentId: number) => {
       actAs(coordinator);
-      return answer(`refund ${enrollmentId}`, refundPOST(jsonRequest(`/api/enrollments/${enrollmentId}/refund`, { reason: 'Moved away' }), params({ id: String(enrollmentId) })));
+      return answer(
+        `refund ${enrollmentId}`,
+        refundPOST(jsonRequest(`/api/enrollments/${enrollmentId}/refund`, { reason: 'Moved away' }), params({ id: String(enrollmentId) })),
+      );
     };
     // The learner's browser reaches the card page through the relay too.
     const viaRelay = (url: string) => url.replace(`:${h.payments.port}/`, `:${relay.port}/`);

@@ -28,12 +28,14 @@ beforeEach(async () => {
 
 async function enqueueMany(n: number, kind = 'test.senders') {
   const ids: number[] = [];
-  for (let i = 0; i < n; i++) ids.push(await enqueueEmail({ kind, to: `reader${i}@test.example`, subject: `Message ${i}`, text: `Body ${i}`, html: `<p>Body ${i}</p>` }));
+  for (let i = 0; i < n; i++)
+    ids.push(await enqueueEmail({ kind, to: `reader${i}@test.example`, subject: `Message ${i}`, text: `Body ${i}`, html: `<p>Body ${i}</p>` }));
   return ids;
 }
 
 /** A transport of its own, as a second process would have. */
-const ownTransport = () => nodemailer.createTransport({ host: '127.0.0.1', port: h.smtp.smtpPort, secure: false, ignoreTLS: true, pool: true, maxConnections: 1 });
+const ownTransport = () =>
+  nodemailer.createTransport({ host: '127.0.0.1', port: h.smtp.smtpPort, secure: false, ignoreTLS: true, pool: true, maxConnections: 1 });
 
 /** How many messages the fake SMTP server received per outbox id and per Message-ID. */
 function receivedCounts() {
@@ -83,7 +85,9 @@ describe('two outbox senders at once', () => {
     expect(counts[1]).toBeGreaterThan(0);
     await expectEachSentOnce(ids);
     // Every row went through exactly one claim.
-    const attempts = await db().sequelize.query<{ attempts: number; n: number }>('SELECT attempts, COUNT(*) AS n FROM outbox_emails GROUP BY attempts', { type: QueryTypes.SELECT });
+    const attempts = await db().sequelize.query<{ attempts: number; n: number }>('SELECT attempts, COUNT(*) AS n FROM outbox_emails GROUP BY attempts', {
+      type: QueryTypes.SELECT,
+    });
     expect(attempts.map((a) => [Number(a.attempts), Number(a.n)])).toEqual([[1, 200]]);
   });
 
@@ -121,7 +125,11 @@ describe('two outbox senders at once', () => {
     const exited = (child: ChildProcess) => new Promise<void>((resolve) => (child.exitCode !== null ? resolve() : child.once('exit', () => resolve())));
     try {
       for (let i = 0; i < 2; i++) {
-        const child = spawn(path.join(root, 'node_modules/.bin/tsx'), ['--conditions=react-server', 'scripts/worker.ts'], { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] });
+        const child = spawn(path.join(root, 'node_modules/.bin/tsx'), ['--conditions=react-server', 'scripts/worker.ts'], {
+          cwd: root,
+          env,
+          stdio: ['ignore', 'pipe', 'pipe'],
+        });
         const out: string[] = [];
         child.stdout!.on('data', (c) => out.push(String(c)));
         child.stderr!.on('data', (c) => out.push(String(c)));
@@ -150,7 +158,14 @@ describe('what the sender guarantees', () => {
     // The crashed sender: it claimed the row and SMTP accepted the message, then it died before
     // marking the row sent.
     const [row] = await claimDue('crashed-sender', { batchSize: 5, staleClaimMs: 60_000, now: new Date() });
-    await ownTransport().sendMail({ from: 'hello@brinewright.example', to: row.toAddress, subject: row.subject, text: row.textBody, headers: { 'X-Brinewright-Outbox-Id': String(row.id) }, messageId: messageIdFor(row) });
+    await ownTransport().sendMail({
+      from: 'hello@brinewright.example',
+      to: row.toAddress,
+      subject: row.subject,
+      text: row.textBody,
+      headers: { 'X-Brinewright-Outbox-Id': String(row.id) },
+      messageId: messageIdFor(row),
+    });
     expect((await OutboxEmail.findByPk(id))!.status).toBe('sending');
 
     // Within the stale-claim time no other sender touches it.

@@ -35,7 +35,15 @@ beforeEach(async () => {
   courseId = flagship.id;
   const instructor = await createUser('instructor');
   const startsAt = new Date(Date.now() + 10 * 86_400_000);
-  const w = await db().Workshop.create({ courseId, instructorId: instructor.id, startsAt, endsAt: new Date(startsAt.getTime() + 5 * 3600_000), timeZone: 'America/Denver', place: 'Grange Hall, 14 Mill Road', seats: 12 });
+  const w = await db().Workshop.create({
+    courseId,
+    instructorId: instructor.id,
+    startsAt,
+    endsAt: new Date(startsAt.getTime() + 5 * 3600_000),
+    timeZone: 'America/Denver',
+    place: 'Grange Hall, 14 Mill Road',
+    seats: 12,
+  });
   workshopId = w.id;
 });
 
@@ -60,7 +68,10 @@ async function paidEnrollment() {
 
 async function seatsLeft(): Promise<number> {
   actAs(null);
-  const response = await workshopsGET(new Request('http://localhost:3000/api/courses/pickling-and-canning/workshops'), params({ course: 'pickling-and-canning' }));
+  const response = await workshopsGET(
+    new Request('http://localhost:3000/api/courses/pickling-and-canning/workshops'),
+    params({ course: 'pickling-and-canning' }),
+  );
   return (await response.json()).workshops[0].seatsLeft;
 }
 
@@ -98,7 +109,9 @@ describe('paying through the fake payment server', () => {
     expect(receipts).toHaveLength(1);
     expect(receipts[0].textBody).toContain('Amount paid: $45.00');
     expect(receipts[0].textBody).toContain('Place: Grange Hall, 14 Mill Road');
-    const actions = (await db().AuditLog.findAll({ where: { subjectType: 'enrollment', subjectId: String(enrollment.id) }, order: [['id', 'ASC']] })).map((a) => a.action);
+    const actions = (await db().AuditLog.findAll({ where: { subjectType: 'enrollment', subjectId: String(enrollment.id) }, order: [['id', 'ASC']] })).map(
+      (a) => a.action,
+    );
     expect(actions).toEqual(['enrollment.created', 'enrollment.active']);
   });
 
@@ -152,7 +165,15 @@ describe('paying through the fake payment server', () => {
     const learner = await createUser('learner');
     const first = await enroll(learner);
     const startsAt = new Date(Date.now() + 20 * 86_400_000);
-    const other = await db().Workshop.create({ courseId, instructorId: null, startsAt, endsAt: new Date(startsAt.getTime() + 3600_000), timeZone: 'America/Denver', place: 'Library', seats: 4 });
+    const other = await db().Workshop.create({
+      courseId,
+      instructorId: null,
+      startsAt,
+      endsAt: new Date(startsAt.getTime() + 3600_000),
+      timeZone: 'America/Denver',
+      place: 'Library',
+      seats: 4,
+    });
     const second = await enroll(learner, { workshopId: other.id });
     expect(second.status).toBe(201);
     expect((await db().Enrollment.findByPk(first.body.enrollmentId))!.status).toBe('withdrawn');
@@ -173,7 +194,9 @@ describe('paying through the fake payment server', () => {
       h.payments.expire(sessionIdOf(body.url));
       // Not yet past the grace period: nothing happens.
       expect(await releaseStaleCheckouts()).toBe(0);
-      await db().sequelize.query('UPDATE payments SET createdAt = ? WHERE enrollmentId = ?', { replacements: [new Date(Date.now() - 2 * 3600_000), body.enrollmentId] });
+      await db().sequelize.query('UPDATE payments SET createdAt = ? WHERE enrollmentId = ?', {
+        replacements: [new Date(Date.now() - 2 * 3600_000), body.enrollmentId],
+      });
       expect(await releaseStaleCheckouts()).toBe(1);
       expect((await db().Enrollment.findByPk(body.enrollmentId))!.status).toBe('withdrawn');
       expect(await seatsLeft()).toBe(12);
@@ -225,7 +248,14 @@ describe('the webhook endpoint', () => {
     for (let i = 0; i < 5; i++) await h.payments.redeliver(completed.eventId);
     const responses = await Promise.all(
       Array.from({ length: 5 }, () =>
-        webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(completed.payload) }, body: completed.payload }), {}),
+        webhookPOST(
+          new Request('http://localhost:3000/api/webhooks/stripe', {
+            method: 'POST',
+            headers: { 'stripe-signature': signedHeader(completed.payload) },
+            body: completed.payload,
+          }),
+          {},
+        ),
       ),
     );
     expect(responses.map((r) => r.status)).toEqual([200, 200, 200, 200, 200]);
@@ -241,8 +271,18 @@ describe('the webhook endpoint', () => {
   it('an expired event arriving after the completed one does not undo the payment', async () => {
     const { enrollmentId, sessionId } = await paidEnrollment();
     const session = { ...h.payments.sessions.get(sessionId)!, status: 'expired', payment_status: 'unpaid', line_items_name: undefined };
-    const payload = JSON.stringify({ id: 'evt_test_out_of_order_1', object: 'event', type: 'checkout.session.expired', created: Math.floor(Date.now() / 1000), data: { object: session }, livemode: false });
-    const response = await webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }), {});
+    const payload = JSON.stringify({
+      id: 'evt_test_out_of_order_1',
+      object: 'event',
+      type: 'checkout.session.expired',
+      created: Math.floor(Date.now() / 1000),
+      data: { object: session },
+      livemode: false,
+    });
+    const response = await webhookPOST(
+      new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
+      {},
+    );
     expect(response.status).toBe(200);
     expect((await db().Payment.findOne({ where: { enrollmentId } }))!.status).toBe('paid');
     expect((await db().Enrollment.findByPk(enrollmentId))!.status).toBe('active');
@@ -251,17 +291,40 @@ describe('the webhook endpoint', () => {
   it('a paid checkout whose amount or currency differs from the fee activates nothing, is audited and e-mails every coordinator', async () => {
     const coordinator = await createUser('coordinator');
     const admin = await createUser('admin');
-    for (const [n, change] of [[1, { amount_total: 100 }], [2, { currency: 'eur' }]] as const) {
+    for (const [n, change] of [
+      [1, { amount_total: 100 }],
+      [2, { currency: 'eur' }],
+    ] as const) {
       const learner = await createUser('learner');
       const { body } = await enroll(learner);
-      const session = { ...h.payments.sessions.get(sessionIdOf(body.url))!, status: 'complete', payment_status: 'paid', payment_intent: `pi_test_mismatch_${n}`, ...change };
-      const payload = JSON.stringify({ id: `evt_test_mismatch_${n}`, object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: session } });
-      const response = await webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }), {});
+      const session = {
+        ...h.payments.sessions.get(sessionIdOf(body.url))!,
+        status: 'complete',
+        payment_status: 'paid',
+        payment_intent: `pi_test_mismatch_${n}`,
+        ...change,
+      };
+      const payload = JSON.stringify({
+        id: `evt_test_mismatch_${n}`,
+        object: 'event',
+        type: 'checkout.session.completed',
+        created: Math.floor(Date.now() / 1000),
+        data: { object: session },
+      });
+      const response = await webhookPOST(
+        new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
+        {},
+      );
       expect(response.status).toBe(200);
       expect((await db().Enrollment.findByPk(body.enrollmentId))!.status).toBe('awaiting_payment');
       const audit = await db().AuditLog.findAll({ where: { action: 'payment.amount_mismatch' } });
       expect(audit).toHaveLength(n);
-      expect(audit[n - 1].data).toMatchObject({ enrollmentId: body.enrollmentId, feeCents: 4500, feeCurrency: 'usd', ...(n === 1 ? { paidCents: 100, paidCurrency: 'usd' } : { paidCents: 4500, paidCurrency: 'eur' }) });
+      expect(audit[n - 1].data).toMatchObject({
+        enrollmentId: body.enrollmentId,
+        feeCents: 4500,
+        feeCurrency: 'usd',
+        ...(n === 1 ? { paidCents: 100, paidCurrency: 'usd' } : { paidCents: 4500, paidCurrency: 'eur' }),
+      });
     }
     const mails = await db().OutboxEmail.findAll({ where: { kind: 'payment.amount_mismatch' } });
     expect(mails.map((m) => m.toAddress).sort()).toEqual([admin.email, admin.email, coordinator.email, coordinator.email].sort());
@@ -274,14 +337,25 @@ describe('the webhook endpoint', () => {
     const learner = await createUser('learner');
     const { body } = await enroll(learner);
     const session = { ...h.payments.sessions.get(sessionIdOf(body.url))!, status: 'complete', payment_status: 'paid', payment_intent: 'pi_test_forged' };
-    const payload = JSON.stringify({ id: 'evt_test_forged_1', object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: session } });
-    const post = (headers: Record<string, string>, raw = payload) => webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers, body: raw }), {});
+    const payload = JSON.stringify({
+      id: 'evt_test_forged_1',
+      object: 'event',
+      type: 'checkout.session.completed',
+      created: Math.floor(Date.now() / 1000),
+      data: { object: session },
+    });
+    const post = (headers: Record<string, string>, raw = payload) =>
+      webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers, body: raw }), {});
 
     expect((await post({})).status).toBe(400);
     expect((await post({ 'stripe-signature': signedHeader(payload, 'whsec_someone_else') })).status).toBe(400);
     expect((await post({ 'stripe-signature': signedHeader(payload) }, payload.replace('"paid"', '"paid" '))).status).toBe(400);
     expect((await post({ 'stripe-signature': 't=1,v1=0000' })).status).toBe(400);
-    const stale = new (await import('stripe')).default('sk_x').webhooks.generateTestHeaderString({ payload, secret: WEBHOOK_SECRET, timestamp: Math.floor(Date.now() / 1000) - 3600 });
+    const stale = new (await import('stripe')).default('sk_x').webhooks.generateTestHeaderString({
+      payload,
+      secret: WEBHOOK_SECRET,
+      timestamp: Math.floor(Date.now() / 1000) - 3600,
+    });
     expect((await post({ 'stripe-signature': stale })).status).toBe(400);
 
     expect(await db().PaymentEvent.count()).toBe(0);
@@ -292,8 +366,16 @@ describe('the webhook endpoint', () => {
   it('an unknown event type answers 200, is stored once and changes nothing', async () => {
     const learner = await createUser('learner');
     await enroll(learner);
-    const payload = JSON.stringify({ id: 'evt_test_unknown_1', object: 'event', type: 'customer.created', data: { object: { id: 'cus_1', object: 'customer' } } });
-    const response = await webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }), {});
+    const payload = JSON.stringify({
+      id: 'evt_test_unknown_1',
+      object: 'event',
+      type: 'customer.created',
+      data: { object: { id: 'cus_1', object: 'customer' } },
+    });
+    const response = await webhookPOST(
+      new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
+      {},
+    );
     expect(response.status).toBe(200);
     expect(await response.json()).toMatchObject({ received: true, handled: false });
     expect(await db().PaymentEvent.count()).toBe(1);
@@ -401,7 +483,15 @@ describe('seats and waivers', () => {
       expect((await enrollmentOf(learner.id))!.status).toBe('withdrawn');
       expect(await seatsLeft()).toBe(12);
     } finally {
-      h.payments = await startFakePayments({ port, webhookUrl: h.hookUrl, webhookSecret: WEBHOOK_SECRET, apiKey: API_KEY, retryBaseMs: 40, maxRetryMs: 400, maxAttempts: 8 });
+      h.payments = await startFakePayments({
+        port,
+        webhookUrl: h.hookUrl,
+        webhookSecret: WEBHOOK_SECRET,
+        apiKey: API_KEY,
+        retryBaseMs: 40,
+        maxRetryMs: 400,
+        maxAttempts: 8,
+      });
     }
   });
 });

@@ -72,7 +72,11 @@ describe('practical photos in an S3 bucket', () => {
     const before = await uploadPhoto(photoRequest(await makeJpeg(400, 300), 'before.jpg', 'image/jpeg'), {});
     const { photo } = await before.json();
 
-    const listObjects = () => fs.readdirSync(path.join(folder, 's3', BUCKET, 'objects'), { recursive: true }).map(String).sort();
+    const listObjects = () =>
+      fs
+        .readdirSync(path.join(folder, 's3', BUCKET, 'objects'), { recursive: true })
+        .map(String)
+        .sort();
     const stored = listObjects();
     await fake!.close();
     fake = undefined;

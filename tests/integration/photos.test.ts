@@ -38,7 +38,10 @@ describe('POST /api/photos', () => {
     // 400 × 300 stored sideways with orientation 6 (rotate 90° clockwise to view), a camera make and a GPS position.
     const input = await makeJpeg(400, 300, (s) =>
       s
-        .withExif({ IFD0: { Make: 'BrineTestCam', Model: 'Jar-1' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '40/1 26/1 4636/100', GPSLongitudeRef: 'W', GPSLongitude: '105/1 3/1 0/1' } })
+        .withExif({
+          IFD0: { Make: 'BrineTestCam', Model: 'Jar-1' },
+          IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '40/1 26/1 4636/100', GPSLongitudeRef: 'W', GPSLongitude: '105/1 3/1 0/1' },
+        })
         .withMetadata({ orientation: 6 }),
     );
     const before = await sharp(input).metadata();
@@ -66,7 +69,9 @@ describe('POST /api/photos', () => {
   it('decides the type from the content: a PNG named .jpg and sent as image/jpeg is accepted as a PNG', async () => {
     const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
-    const png = await sharp({ create: { width: 120, height: 80, channels: 4, background: { r: 20, g: 120, b: 90, alpha: 0.5 } } }).png().toBuffer();
+    const png = await sharp({ create: { width: 120, height: 80, channels: 4, background: { r: 20, g: 120, b: 90, alpha: 0.5 } } })
+      .png()
+      .toBuffer();
     const response = await uploadPhoto(photoRequest(png, 'lids.jpg', 'image/jpeg'), {});
     expect(response.status).toBe(201);
     const { photo } = await response.json();
@@ -78,7 +83,9 @@ describe('POST /api/photos', () => {
   it('accepts WebP and scales a large photo to 2000 px on the long side with a 320 px thumbnail', async () => {
     const { learner } = await enrolledLearner(fixture.current.flagship.id);
     actAs(learner);
-    const webp = await sharp(await makeJpeg(3000, 1200)).webp().toBuffer();
+    const webp = await sharp(await makeJpeg(3000, 1200))
+      .webp()
+      .toBuffer();
     const response = await uploadPhoto(photoRequest(webp, 'shelf.webp', 'image/webp'), {});
     expect(response.status).toBe(201);
     const { photo } = await response.json();
@@ -114,7 +121,8 @@ describe('POST /api/photos', () => {
     // The photo is stored, then the store stops answering before the thumbnail is written.
     setStorage({
       name: 'fails-on-thumbnails',
-      put: (key, data, type) => (key.startsWith('thumbs/') ? Promise.reject(new AppError('unavailable', 'The photo store is not answering.')) : real.put(key, data, type)),
+      put: (key, data, type) =>
+        key.startsWith('thumbs/') ? Promise.reject(new AppError('unavailable', 'The photo store is not answering.')) : real.put(key, data, type),
       get: (key) => real.get(key),
       delete: (key) => real.delete(key),
     });

@@ -28,7 +28,12 @@ const post = (practical: Partial<PracticalForm> & { photoIds: number[] }, course
   submit(jsonRequest('/api/practicals', { course, practical: { ...GOOD_BATCH(practical.photoIds), ...practical } }), {});
 
 const rubric = (notMet: string[] = []) =>
-  Object.fromEntries(RUBRIC_CRITERIA.map((c) => [c.id, notMet.includes(c.id) ? { verdict: 'not_met', comment: 'Lids were reused from last year.' } : { verdict: 'met', comment: '' }]));
+  Object.fromEntries(
+    RUBRIC_CRITERIA.map((c) => [
+      c.id,
+      notMet.includes(c.id) ? { verdict: 'not_met', comment: 'Lids were reused from last year.' } : { verdict: 'met', comment: '' },
+    ]),
+  );
 
 const decide = (id: number, body: unknown) => review(jsonRequest(`/api/practicals/${id}/review`, body), params({ id: String(id) }));
 
@@ -108,10 +113,18 @@ describe('the review flow', () => {
     expect((await inconsistent.json()).fields.decision[0]).toMatch(/every criterion is met/);
     const vague = await decide(round1.id, { decision: 'changes_requested', rubric: rubric(['rims-and-lids']), comment: '' });
     expect((await vague.json()).fields.comment[0]).toMatch(/what the learner should change/);
-    const noReason = await decide(round1.id, { decision: 'changes_requested', rubric: { ...rubric(), headspace: { verdict: 'not_met', comment: '' } }, comment: 'Process for the full time.' });
+    const noReason = await decide(round1.id, {
+      decision: 'changes_requested',
+      rubric: { ...rubric(), headspace: { verdict: 'not_met', comment: '' } },
+      comment: 'Process for the full time.',
+    });
     expect(Object.keys((await noReason.json()).fields)).toEqual(['rubric.headspace.comment']);
 
-    const changes = await decide(round1.id, { decision: 'changes_requested', rubric: rubric(['rims-and-lids']), comment: 'Process pints for 15 minutes at your altitude and use new lids.' });
+    const changes = await decide(round1.id, {
+      decision: 'changes_requested',
+      rubric: rubric(['rims-and-lids']),
+      comment: 'Process pints for 15 minutes at your altitude and use new lids.',
+    });
     expect(changes.status).toBe(201);
     expect((await db().Practical.findByPk(round1.id))!.status).toBe('changes_requested');
     const mail1 = await db().OutboxEmail.findAll({ where: { kind: 'practical.reviewed' } });
@@ -176,16 +189,30 @@ describe('GET /api/tasting-table/submissions', () => {
 
   async function seed() {
     const otherWorkshop = await db().Workshop.create({
-      courseId: fixture.current.flagship.id, instructorId: fixture.current.instructor.id, startsAt: new Date('2027-01-10T16:00:00Z'), endsAt: new Date('2027-01-10T21:00:00Z'), timeZone: 'America/Denver', place: 'Upper Fork Community Kitchen', seats: 10,
+      courseId: fixture.current.flagship.id,
+      instructorId: fixture.current.instructor.id,
+      startsAt: new Date('2027-01-10T16:00:00Z'),
+      endsAt: new Date('2027-01-10T21:00:00Z'),
+      timeZone: 'America/Denver',
+      place: 'Upper Fork Community Kitchen',
+      seats: 10,
     });
     const now = Date.now();
     // 25 submissions: every third flagged, every fifth approved, ages 0..24 days, alternating workshops.
     for (let i = 0; i < 25; i++) {
-      const { learner, enrollment } = await enrolledLearner(fixture.current.flagship.id, 'active', i % 2 ? otherWorkshop.id : fixture.current.workshop.id, { quick: true });
+      const { learner, enrollment } = await enrolledLearner(fixture.current.flagship.id, 'active', i % 2 ? otherWorkshop.id : fixture.current.workshop.id, {
+        quick: true,
+      });
       await db().User.update({ name: `Learner ${String.fromCharCode(65 + (i % 26))}` }, { where: { id: learner.id } });
       await db().Practical.create({
-        enrollmentId: enrollment.id, userId: learner.id, round: 1, status: i % 5 === 0 ? 'approved' : 'submitted', details: { product: 'dilly-beans' },
-        flags: i % 3 === 0 ? [{ check: 'seals', message: 'x' }] : [], flagCount: i % 3 === 0 ? 1 : 0, submittedAt: new Date(now - i * 86_400_000),
+        enrollmentId: enrollment.id,
+        userId: learner.id,
+        round: 1,
+        status: i % 5 === 0 ? 'approved' : 'submitted',
+        details: { product: 'dilly-beans' },
+        flags: i % 3 === 0 ? [{ check: 'seals', message: 'x' }] : [],
+        flagCount: i % 3 === 0 ? 1 : 0,
+        submittedAt: new Date(now - i * 86_400_000),
       });
     }
     return { otherWorkshop };
@@ -232,7 +259,12 @@ describe('GET /api/tasting-table/submissions', () => {
     expect(old.total).toBe(12);
     expect(old.counts).toEqual({ submitted: 12, approved: 3, changes_requested: 0 });
     const combined = await (await get(`?status=submitted&flagged=yes&workshop=${fixture.current.workshop.id}`)).json();
-    expect(combined.rows.every((r: { status: string; flagCount: number; workshopId: number }) => r.status === 'submitted' && r.flagCount > 0 && r.workshopId === fixture.current.workshop.id)).toBe(true);
+    expect(
+      combined.rows.every(
+        (r: { status: string; flagCount: number; workshopId: number }) =>
+          r.status === 'submitted' && r.flagCount > 0 && r.workshopId === fixture.current.workshop.id,
+      ),
+    ).toBe(true);
     // Even i (the first workshop), i % 3 == 0, not approved (i % 5 != 0): 6, 12, 18, 24.
     expect(combined.total).toBe(4);
 

@@ -24,7 +24,14 @@ function run(args: string[], env: Record<string, string | undefined>): Promise<{
 
 const { BRINEWRIGHT_DEMO: _flag, ...inherited } = process.env;
 // The demo's own settings: the default payment key and webhook secret, the payment fake on loopback.
-const demoProduction = { ...inherited, NODE_ENV: 'production', NEXTAUTH_URL: 'http://learn.example.org', APP_URL: 'https://learn.example.org', STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PROTOCOL: 'http' };
+const demoProduction = {
+  ...inherited,
+  NODE_ENV: 'production',
+  NEXTAUTH_URL: 'http://learn.example.org',
+  APP_URL: 'https://learn.example.org',
+  STRIPE_API_HOST: '127.0.0.1',
+  STRIPE_API_PROTOCOL: 'http',
+};
 
 describe('production refuses demo settings', () => {
   it('the app server stops with a message naming each variable', async () => {
@@ -52,7 +59,11 @@ describe('production refuses demo settings', () => {
   });
 
   it('with BRINEWRIGHT_DEMO=1 the same settings pass the check (the worker starts and is stopped)', async () => {
-    const child = spawn(TSX, ['--conditions=react-server', 'scripts/worker.ts'], { cwd: ROOT, env: { ...demoProduction, BRINEWRIGHT_DEMO: '1', WORKER_POLL_MS: '100000' } as NodeJS.ProcessEnv, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(TSX, ['--conditions=react-server', 'scripts/worker.ts'], {
+      cwd: ROOT,
+      env: { ...demoProduction, BRINEWRIGHT_DEMO: '1', WORKER_POLL_MS: '100000' } as NodeJS.ProcessEnv,
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let output = '';
     const started = new Promise<void>((resolve) => child.stdout.on('data', (d: Buffer) => ((output += d), /started/.test(output) && resolve())));
     const exited = new Promise<number | null>((resolve) => child.on('exit', resolve));

@@ -32,7 +32,14 @@ function form(fields: Record<string, string>, logo?: Buffer): FormData {
   return data;
 }
 
-const UPPER_FORK = { name: 'Upper Fork County home-preserving program', shortName: 'Upper Fork Preserving', contactEmail: 'Preserving@UpperFork.example', contactPhone: '(555) 010-2290', postalAddress: '220 Aspen Street, Upper Fork', timeZone: 'America/Boise' };
+const UPPER_FORK = {
+  name: 'Upper Fork County home-preserving program',
+  shortName: 'Upper Fork Preserving',
+  contactEmail: 'Preserving@UpperFork.example',
+  contactPhone: '(555) 010-2290',
+  postalAddress: '220 Aspen Street, Upper Fork',
+  timeZone: 'America/Boise',
+};
 
 beforeEach(async () => {
   await resetDatabase();
@@ -42,14 +49,21 @@ beforeEach(async () => {
 describe('program settings', () => {
   it('falls back to CERTIFICATE_PROGRAM_NAME before an admin fills the page in', async () => {
     expect(await getProgramIdentity()).toMatchObject({ name: getEnv().CERTIFICATE_PROGRAM_NAME, shortName: null, configured: false });
-    expect(await (await programRoute(new Request('http://localhost/api/program'), {} as never)).json()).toMatchObject({ name: getEnv().CERTIFICATE_PROGRAM_NAME, shortName: null, logo: null });
+    expect(await (await programRoute(new Request('http://localhost/api/program'), {} as never)).json()).toMatchObject({
+      name: getEnv().CERTIFICATE_PROGRAM_NAME,
+      shortName: null,
+      logo: null,
+    });
   });
 
   it('saves the page with a logo re-encoded as a PNG of at most 256 px, audited; the header route, certificates and e-mails use it', async () => {
     const admin = await createUser('admin');
     actAs(admin);
     // A 1200 x 600 JPEG with EXIF: the stored logo must be a 256 x 128 PNG without it.
-    const jpeg = await sharp({ create: { width: 1200, height: 600, channels: 3, background: '#2a6b55' } }).jpeg().withMetadata({ exif: { IFD0: { Copyright: 'camera data' } } }).toBuffer();
+    const jpeg = await sharp({ create: { width: 1200, height: 600, channels: 3, background: '#2a6b55' } })
+      .jpeg()
+      .withMetadata({ exif: { IFD0: { Copyright: 'camera data' } } })
+      .toBuffer();
     const state = await saveProgramAction({}, form(UPPER_FORK, jpeg));
     expect(state).toEqual({ ok: true, message: 'Program settings saved.' });
 
@@ -59,11 +73,19 @@ describe('program settings', () => {
     expect(logo.headers.get('content-type')).toBe('image/png');
     const bytes = Buffer.from(await logo.arrayBuffer());
     const meta = await sharp(bytes).metadata();
-    expect({ format: meta.format, width: meta.width, height: meta.height, exif: meta.exif }).toEqual({ format: 'png', width: 256, height: 128, exif: undefined });
+    expect({ format: meta.format, width: meta.width, height: meta.height, exif: meta.exif }).toEqual({
+      format: 'png',
+      width: 256,
+      height: 128,
+      exif: undefined,
+    });
     const audit = await db().AuditLog.findOne({ where: { action: 'program.settings_saved' } });
     expect(audit).toMatchObject({ actorId: admin.id, subjectType: 'program' });
     expect((audit!.data as { changed: string[] }).changed.sort()).toEqual(Object.keys(UPPER_FORK).sort());
-    expect(await (await programRoute(new Request('http://localhost/api/program'), {} as never)).json()).toMatchObject({ shortName: 'Upper Fork Preserving', logo: expect.stringMatching(/^\/api\/program\/logo\?v=/) });
+    expect(await (await programRoute(new Request('http://localhost/api/program'), {} as never)).json()).toMatchObject({
+      shortName: 'Upper Fork Preserving',
+      logo: expect.stringMatching(/^\/api\/program\/logo\?v=/),
+    });
 
     const courses = await createCourses();
     const { enrollmentId } = await eligibleEnrollment(courses.flagship);

@@ -11,7 +11,10 @@ import { answersFor, drawnOf, enroll } from '../support/quiz-support';
 
 const QUIZ = 'pickling-and-canning--why-preserving-is-a-safety-job';
 
-async function takeQuiz(user: Awaited<ReturnType<typeof createUser>>, tweak: (answers: Record<string, unknown>, tokenFor: (qid: string, choiceId: string) => string) => void = () => {}) {
+async function takeQuiz(
+  user: Awaited<ReturnType<typeof createUser>>,
+  tweak: (answers: Record<string, unknown>, tokenFor: (qid: string, choiceId: string) => string) => void = () => {},
+) {
   actAs(user);
   const { attempt } = await (await start(new Request('http://localhost/x', { method: 'POST' }), params({ quiz: QUIZ }))).json();
   const answers = (await answersFor(attempt.id)) as Record<string, unknown>;
@@ -29,7 +32,15 @@ let workshopB: number;
 beforeEach(async () => {
   await resetDatabase();
   const { flagship } = await createCourses();
-  const mk = (d: string) => db().Workshop.create({ courseId: flagship.id, startsAt: new Date(d), endsAt: new Date(d), timeZone: 'America/Denver', place: 'Cedar Hollow Grange Hall', seats: 12 });
+  const mk = (d: string) =>
+    db().Workshop.create({
+      courseId: flagship.id,
+      startsAt: new Date(d),
+      endsAt: new Date(d),
+      timeZone: 'America/Denver',
+      place: 'Cedar Hollow Grange Hall',
+      seats: 12,
+    });
   workshopA = (await mk('2026-12-10T16:00:00Z')).id;
   workshopB = (await mk('2027-01-10T16:00:00Z')).id;
   // Workshop A: three learners. Two answer the pH question wrongly with "pH 5.6", one with "pH 7.0".

@@ -22,7 +22,14 @@ const sent = (_options: unknown, query: object) => {
 };
 const done = (_options: unknown, query: { sql?: string }) => {
   const entry = open.get(query);
-  if (entry) Object.assign(entry, { sql: String(query.sql ?? '').split(/\s+/).slice(0, 2).join(' '), done: ++clock });
+  if (entry)
+    Object.assign(entry, {
+      sql: String(query.sql ?? '')
+        .split(/\s+/)
+        .slice(0, 2)
+        .join(' '),
+      done: ++clock,
+    });
 };
 const names = () => statements.map((s) => s.sql);
 
@@ -65,7 +72,7 @@ describe('round trips of POST /api/attempts/[id]/submit', () => {
 });
 
 describe('the write of a grade is all or nothing, and happens once', () => {
-  it('rolls back the attempt\'s result when an answer row cannot be written, leaving the attempt open', async () => {
+  it("rolls back the attempt's result when an answer row cannot be written, leaving the attempt open", async () => {
     const { learner } = await freshLearner();
     actAs(learner);
     const started = await (await start(new Request(`http://localhost/api/quizzes/${QUIZ}/attempts`, { method: 'POST' }), params({ quiz: QUIZ }))).json();
@@ -73,7 +80,16 @@ describe('the write of a grade is all or nothing, and happens once', () => {
     const firstQuestion = started.attempt.questions[0].id as string;
     // A stray row with the same (attemptId, questionId) makes the INSERT hit the unique key.
     const open = (await db().QuizAttempt.findByPk(id))!;
-    await db().QuizAnswer.create({ attemptId: id, courseId: open.courseId, workshopId: null, quizSlug: open.quizSlug, questionId: firstQuestion, correct: false, response: null, submittedAt: new Date() });
+    await db().QuizAnswer.create({
+      attemptId: id,
+      courseId: open.courseId,
+      workshopId: null,
+      quizSlug: open.quizSlug,
+      questionId: firstQuestion,
+      correct: false,
+      response: null,
+      submittedAt: new Date(),
+    });
     const failed = await submit(jsonRequest(`/api/attempts/${id}/submit`, { answers: await answersFor(id) }), params({ id: String(id) }));
     expect(failed.status).toBe(500);
     const attempt = await db().QuizAttempt.findByPk(id, { attributes: ['submittedAt', 'scorePct', 'answers'], raw: true });
@@ -93,7 +109,9 @@ describe('the write of a grade is all or nothing, and happens once', () => {
     const id = started.attempt.id as number;
     const right = await answersFor(id);
     const wrong = await answersFor(id, { wrong: 2 });
-    const responses = await Promise.all([right, wrong, right, wrong, right].map((answers) => submit(jsonRequest(`/api/attempts/${id}/submit`, { answers }), params({ id: String(id) }))));
+    const responses = await Promise.all(
+      [right, wrong, right, wrong, right].map((answers) => submit(jsonRequest(`/api/attempts/${id}/submit`, { answers }), params({ id: String(id) }))),
+    );
     const bodies = await Promise.all(responses.map((r) => r.json()));
     expect(responses.map((r) => r.status)).toEqual([200, 200, 200, 200, 200]);
     expect(bodies.filter((b) => b.graded)).toHaveLength(1);

@@ -22,7 +22,7 @@ describe('no answer key before submission', () => {
     actAs(learner);
   });
 
-  it('covers every lesson quiz of every course, the fermenting lesson\'s among them', () => {
+  it("covers every lesson quiz of every course, the fermenting lesson's among them", () => {
     const slugs = getBanks().map((b) => b.slug);
     for (const course of getCourses()) for (const lesson of getLessons(course.slug)) expect(slugs).toContain(lesson.quiz);
     expect(slugs).toContain('pickling-and-canning--fermented-pickles-and-sauerkraut');

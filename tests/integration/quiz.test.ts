@@ -96,7 +96,9 @@ describe('POST /api/quizzes/[quiz]/attempts', () => {
       await submitReq(body.attempt.id, { answers: {} });
     }
     // Once the oldest attempt is more than 24 h old, a new one is allowed.
-    await db().sequelize.query("UPDATE quiz_attempts SET startedAt = DATE_SUB(startedAt, INTERVAL 25 HOUR) WHERE quizSlug = :q ORDER BY id LIMIT 1", { replacements: { q: EXAM } });
+    await db().sequelize.query('UPDATE quiz_attempts SET startedAt = DATE_SUB(startedAt, INTERVAL 25 HOUR) WHERE quizSlug = :q ORDER BY id LIMIT 1', {
+      replacements: { q: EXAM },
+    });
     expect((await startAs(learner, EXAM)).response.status).toBe(201);
   });
 });
@@ -222,7 +224,17 @@ describe('GET /api/attempts/[id]', () => {
   });
 
   it('an attempt row without a draw or grade (seeded history) reads as 200 with no result, not 500', async () => {
-    const row = await db().QuizAttempt.create({ userId: learner.id, courseId: courses.flagship.id, quizSlug: LESSON_QUIZ, drawn: '[]', answers: {}, scorePct: 100, passed: true, startedAt: new Date(), submittedAt: new Date() });
+    const row = await db().QuizAttempt.create({
+      userId: learner.id,
+      courseId: courses.flagship.id,
+      quizSlug: LESSON_QUIZ,
+      drawn: '[]',
+      answers: {},
+      scorePct: 100,
+      passed: true,
+      startedAt: new Date(),
+      submittedAt: new Date(),
+    });
     actAs(learner);
     const response = await getReq(row.id);
     expect(response.status).toBe(200);

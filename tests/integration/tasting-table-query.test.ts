@@ -31,8 +31,14 @@ beforeEach(async () => {
     const { learner, enrollment } = await enrolledLearner(setting.flagship.id, 'active', workshopId, { quick: true });
     await db().User.update({ name: `Learner ${String((i * 17) % 45).padStart(2, '0')}` }, { where: { id: learner.id } });
     await db().Practical.create({
-      enrollmentId: enrollment.id, userId: learner.id, round: 1, status: STATUSES[i % 3], details: { product: 'pickled-beets' },
-      flags: [], flagCount: i % 4 === 0 ? 2 : i % 4 === 1 ? 1 : 0, submittedAt: new Date(now - Math.floor(i / 2) * 3_600_000),
+      enrollmentId: enrollment.id,
+      userId: learner.id,
+      round: 1,
+      status: STATUSES[i % 3],
+      details: { product: 'pickled-beets' },
+      flags: [],
+      flagCount: i % 4 === 0 ? 2 : i % 4 === 1 ? 1 : 0,
+      submittedAt: new Date(now - Math.floor(i / 2) * 3_600_000),
     });
   }
   actAs(setting.instructor);
@@ -59,7 +65,7 @@ describe('Tasting table page query', () => {
     ['newest', 'p.submittedAt DESC, p.id DESC'],
     ['learner', 'u.name ASC, p.submittedAt ASC, p.id ASC'],
     ['flags', 'p.flagCount DESC, p.submittedAt ASC, p.id ASC'],
-    ["status", "FIELD(p.status, 'submitted', 'changes_requested', 'approved'), p.submittedAt ASC, p.id ASC"],
+    ['status', "FIELD(p.status, 'submitted', 'changes_requested', 'approved'), p.submittedAt ASC, p.id ASC"],
   ])('sort=%s pages through every row once, in the order of a plain sort', async (sort, orderBy) => {
     const rows = await allPages(`?sort=${sort}&status=all`);
     expect(rows).toHaveLength(45);
@@ -68,7 +74,10 @@ describe('Tasting table page query', () => {
 
   it('keeps filters and sort together on deep pages and counts each status under the filters', async () => {
     const rows = await allPages(`?sort=status&status=all&flagged=yes&workshop=${setting.workshop.id}`);
-    const expected = await reference("FIELD(p.status, 'submitted', 'changes_requested', 'approved'), p.submittedAt ASC, p.id ASC", `p.flagCount > 0 AND e.workshopId = ${setting.workshop.id}`);
+    const expected = await reference(
+      "FIELD(p.status, 'submitted', 'changes_requested', 'approved'), p.submittedAt ASC, p.id ASC",
+      `p.flagCount > 0 AND e.workshopId = ${setting.workshop.id}`,
+    );
     expect(rows.map((r) => Number(r.id))).toEqual(expected.map((r) => Number(r.id)));
     expect(rows.every((r) => r.flagCount > 0 && r.workshopId === setting.workshop.id)).toBe(true);
     const first = await get(`?sort=flags&status=submitted&flagged=yes&workshop=${setting.workshop.id}&page=1`);

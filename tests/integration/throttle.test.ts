@@ -65,7 +65,8 @@ describe('sign-in throttle', () => {
   it('a stranger spraying one account from many addresses slows it down but cannot lock its owner out', async () => {
     const env = getEnv();
     await createUser('learner', { email: 'sorrel@test.example' });
-    for (let i = 0; i < 25; i++) expect(await verifyCredentials('sorrel@test.example', 'wrong-guess', `192.0.2.${i}`, { sleep: async () => undefined })).toBeNull();
+    for (let i = 0; i < 25; i++)
+      expect(await verifyCredentials('sorrel@test.example', 'wrong-guess', `192.0.2.${i}`, { sleep: async () => undefined })).toBeNull();
     const waits: number[] = [];
     const owner = await verifyCredentials('sorrel@test.example', 'test-password-123', '203.0.113.77', { sleep: async (ms) => void waits.push(ms) });
     expect(owner).toMatchObject({ email: 'sorrel@test.example' });
@@ -90,7 +91,10 @@ describe('sign-in throttle', () => {
     const nextHeaders = createRequire(import.meta.url)('next/headers') as { headers: unknown; cookies: unknown };
     const real = { headers: nextHeaders.headers, cookies: nextHeaders.cookies };
     const cookiesOf = () =>
-      (current?.headers.get('cookie') ?? '').split(/;\s*/).filter(Boolean).map((pair) => ({ name: pair.slice(0, pair.indexOf('=')), value: decodeURIComponent(pair.slice(pair.indexOf('=') + 1)) }));
+      (current?.headers.get('cookie') ?? '')
+        .split(/;\s*/)
+        .filter(Boolean)
+        .map((pair) => ({ name: pair.slice(0, pair.indexOf('=')), value: decodeURIComponent(pair.slice(pair.indexOf('=') + 1)) }));
     beforeAll(() => {
       nextHeaders.headers = async () => new Headers(current?.headers);
       nextHeaders.cookies = async () => ({ getAll: cookiesOf, get: (n: string) => cookiesOf().find((c) => c.name === n) });
@@ -98,15 +102,25 @@ describe('sign-in throttle', () => {
     afterAll(() => Object.assign(nextHeaders, real));
 
     it('answers a throttled sign-in with 429, Retry-After and the JSON message, keeping the url for the form', async () => {
-      const { GET, POST } = (await import('@/app/api/auth/[...nextauth]/route')) as unknown as Record<'GET' | 'POST', (r: Request, c: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>>;
+      const { GET, POST } = (await import('@/app/api/auth/[...nextauth]/route')) as unknown as Record<
+        'GET' | 'POST',
+        (r: Request, c: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>
+      >;
       current = new NextRequest('http://localhost:3000/api/auth/csrf');
       const csrf = await GET(current, { params: Promise.resolve({ nextauth: ['csrf'] }) });
-      const csrfCookie = csrf.headers.getSetCookie().find((c) => c.startsWith('next-auth.csrf-token='))!.split(';')[0];
+      const csrfCookie = csrf.headers
+        .getSetCookie()
+        .find((c) => c.startsWith('next-auth.csrf-token='))!
+        .split(';')[0];
       const { csrfToken } = await csrf.json();
       await createUser('learner', { email: 'tansy@test.example' });
       const attempt = async (password: string) => {
         const body = new URLSearchParams({ csrfToken, email: 'tansy@test.example', password, json: 'true' }).toString();
-        current = new NextRequest('http://localhost:3000/api/auth/callback/credentials', { method: 'POST', headers: { cookie: csrfCookie, 'content-type': 'application/x-www-form-urlencoded', 'x-forwarded-for': '198.51.100.40' }, body });
+        current = new NextRequest('http://localhost:3000/api/auth/callback/credentials', {
+          method: 'POST',
+          headers: { cookie: csrfCookie, 'content-type': 'application/x-www-form-urlencoded', 'x-forwarded-for': '198.51.100.40' },
+          body,
+        });
         return POST(current, { params: Promise.resolve({ nextauth: ['callback', 'credentials'] }) });
       };
       for (let i = 0; i < getEnv().SIGNIN_MAX_PER_ACCOUNT_ADDRESS; i++) expect((await attempt(`wrong-guess-${i}`)).status).toBe(401);
@@ -124,7 +138,14 @@ describe('sign-in throttle', () => {
 
 describe('registration throttle', () => {
   const register = (i: number, address: string) =>
-    registerPOST(jsonRequest('/api/register', { name: `Flood ${i}`, email: `flood${i}-${address}@test.example`, password: 'a long pass phrase' }, { headers: { 'content-type': 'application/json', 'x-forwarded-for': address } }), {});
+    registerPOST(
+      jsonRequest(
+        '/api/register',
+        { name: `Flood ${i}`, email: `flood${i}-${address}@test.example`, password: 'a long pass phrase' },
+        { headers: { 'content-type': 'application/json', 'x-forwarded-for': address } },
+      ),
+      {},
+    );
 
   it('lets REGISTER_MAX_PER_ADDRESS accounts a window come from one address (a class on one Wi-Fi), then answers 429 with Retry-After', async () => {
     const max = getEnv().REGISTER_MAX_PER_ADDRESS;
@@ -146,7 +167,14 @@ describe('registration throttle', () => {
   });
 
   it('does not count a request that fails validation', async () => {
-    const bad = await registerPOST(jsonRequest('/api/register', { name: '', email: 'nope', password: 'x' }, { headers: { 'content-type': 'application/json', 'x-forwarded-for': '198.51.100.52' } }), {});
+    const bad = await registerPOST(
+      jsonRequest(
+        '/api/register',
+        { name: '', email: 'nope', password: 'x' },
+        { headers: { 'content-type': 'application/json', 'x-forwarded-for': '198.51.100.52' } },
+      ),
+      {},
+    );
     expect(bad.status).toBe(400);
     expect(await hits('register:198.51.100.52')).toBe(0);
   });
@@ -158,13 +186,26 @@ describe('fee waiver codes', () => {
     const { flagship } = await createCourses();
     const instructor = await createUser('instructor');
     const startsAt = new Date(Date.now() + 10 * 86_400_000);
-    workshopId = (await db().Workshop.create({ courseId: flagship.id, instructorId: instructor.id, startsAt, endsAt: new Date(startsAt.getTime() + 5 * 3600_000), timeZone: 'America/Denver', place: 'Grange Hall', seats: 12 })).id;
+    workshopId = (
+      await db().Workshop.create({
+        courseId: flagship.id,
+        instructorId: instructor.id,
+        startsAt,
+        endsAt: new Date(startsAt.getTime() + 5 * 3600_000),
+        timeZone: 'America/Denver',
+        place: 'Grange Hall',
+        seats: 12,
+      })
+    ).id;
     await db().FeeWaiver.create({ code: 'CEDAR-GOOD-CODE', courseId: flagship.id, maxUses: 50, expiresAt: new Date(Date.now() + 7 * 86_400_000) });
   });
 
   const enroll = async (user: Awaited<ReturnType<typeof createUser>>, waiverCode: string, address = '198.51.100.60') => {
     actAs(user);
-    const response = await enrollPOST(jsonRequest('/api/enrollments', { workshopId, waiverCode }, { headers: { 'content-type': 'application/json', 'x-forwarded-for': address } }), {});
+    const response = await enrollPOST(
+      jsonRequest('/api/enrollments', { workshopId, waiverCode }, { headers: { 'content-type': 'application/json', 'x-forwarded-for': address } }),
+      {},
+    );
     return { status: response.status, retryAfter: response.headers.get('retry-after'), body: await response.json() };
   };
 
@@ -188,7 +229,8 @@ describe('fee waiver codes', () => {
     const max = getEnv().WAIVER_MAX_PER_ADDRESS;
     const learners = await Promise.all(Array.from({ length: Math.ceil(max / 5) + 1 }, () => createUser('learner')));
     let sent = 0;
-    for (const learner of learners.slice(0, -1)) for (let i = 0; i < 5 && sent < max; i++, sent++) expect((await enroll(learner, `WRONG-${sent}`)).status).toBe(400);
+    for (const learner of learners.slice(0, -1))
+      for (let i = 0; i < 5 && sent < max; i++, sent++) expect((await enroll(learner, `WRONG-${sent}`)).status).toBe(400);
     const fresh = learners[learners.length - 1];
     expect((await enroll(fresh, 'WRONG-LAST')).status).toBe(429);
     // A right code from another address works, and is not counted as a failure.

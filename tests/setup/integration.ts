@@ -13,9 +13,23 @@ vi.mock('next/headers', async (importOriginal) => {
     cookies: vi.fn(async () => {
       const user = (globalThis as { __testUser?: SessionUser | null }).__testUser;
       const list = user
-        ? [{ name: sessionCookieName(usesSecureCookies(process.env.NEXTAUTH_URL)), value: await encode({ token: { uid: user.id, role: user.role, email: user.email, name: user.name, sub: String(user.id) }, secret: process.env.NEXTAUTH_SECRET!, maxAge: 3600 }) }]
+        ? [
+            {
+              name: sessionCookieName(usesSecureCookies(process.env.NEXTAUTH_URL)),
+              value: await encode({
+                token: { uid: user.id, role: user.role, email: user.email, name: user.name, sub: String(user.id) },
+                secret: process.env.NEXTAUTH_SECRET!,
+                maxAge: 3600,
+              }),
+            },
+          ]
         : [];
-      return { getAll: () => list, get: (name: string) => list.find((c) => c.name === name), has: (name: string) => list.some((c) => c.name === name), size: list.length };
+      return {
+        getAll: () => list,
+        get: (name: string) => list.find((c) => c.name === name),
+        has: (name: string) => list.some((c) => c.name === name),
+        size: list.length,
+      };
     }),
   };
 });

@@ -26,7 +26,10 @@ export type Done = Partial<{ paid: boolean; lessons: boolean; quizzes: boolean; 
  * A learner with an enrollment in `course` who has done everything the course requires, except
  * what `skip` turns off. Rows are written with plain SQL, as the features that own them would.
  */
-export async function eligibleEnrollment(course: Course, options: { name?: string; email?: string; workshopId?: number | null; skip?: Done; userId?: number; waiver?: boolean } = {}) {
+export async function eligibleEnrollment(
+  course: Course,
+  options: { name?: string; email?: string; workshopId?: number | null; skip?: Done; userId?: number; waiver?: boolean } = {},
+) {
   const { sequelize } = db();
   const skip = options.skip ?? {};
   const userId = options.userId ?? (await createUser('learner', { name: options.name, email: options.email })).id;
@@ -34,7 +37,13 @@ export async function eligibleEnrollment(course: Course, options: { name?: strin
   const workshopId = options.workshopId === undefined ? await createWorkshop(course.id) : options.workshopId;
   let feeWaiverId: number | null = null;
   if (options.waiver) {
-    const waiver = await db().FeeWaiver.create({ code: `WAIVE-${userId}-${course.id}`, courseId: course.id, createdById: null, maxUses: 1, expiresAt: new Date(Date.now() + 86_400_000) });
+    const waiver = await db().FeeWaiver.create({
+      code: `WAIVE-${userId}-${course.id}`,
+      courseId: course.id,
+      createdById: null,
+      maxUses: 1,
+      expiresAt: new Date(Date.now() + 86_400_000),
+    });
     feeWaiverId = waiver.id;
   }
   const enrollment = await db().Enrollment.create({

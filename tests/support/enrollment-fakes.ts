@@ -48,7 +48,14 @@ export async function startHarness(): Promise<Harness> {
   });
   await new Promise<void>((r) => hook.listen(0, '127.0.0.1', () => r()));
   const hookUrl = `http://127.0.0.1:${(hook.address() as AddressInfo).port}/api/webhooks/stripe`;
-  const payments = await startFakePayments({ webhookUrl: hookUrl, webhookSecret: WEBHOOK_SECRET, apiKey: API_KEY, retryBaseMs: 40, maxRetryMs: 400, maxAttempts: 8 });
+  const payments = await startFakePayments({
+    webhookUrl: hookUrl,
+    webhookSecret: WEBHOOK_SECRET,
+    apiKey: API_KEY,
+    retryBaseMs: 40,
+    maxRetryMs: 400,
+    maxAttempts: 8,
+  });
   const smtp = await startFakeSmtp();
   Object.assign(process.env, {
     STRIPE_SECRET_KEY: API_KEY,

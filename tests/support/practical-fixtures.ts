@@ -15,15 +15,28 @@ import { actAs } from './session';
 export function useTemporaryStorage(): { root: string; files: () => string[]; cleanup: () => void } {
   const root = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-photos-'));
   setStorage(diskDriver(root));
-  const files = () => (fs.existsSync(root) ? (fs.readdirSync(root, { recursive: true }) as string[]).filter((f) => fs.statSync(path.join(root, f)).isFile()) : []);
-  return { root, files, cleanup: () => { setStorage(undefined); fs.rmSync(root, { recursive: true, force: true }); } };
+  const files = () =>
+    fs.existsSync(root) ? (fs.readdirSync(root, { recursive: true }) as string[]).filter((f) => fs.statSync(path.join(root, f)).isFile()) : [];
+  return {
+    root,
+    files,
+    cleanup: () => {
+      setStorage(undefined);
+      fs.rmSync(root, { recursive: true, force: true });
+    },
+  };
 }
 
 let quick = 0;
 // A learner row without a bcrypt round (they never sign in), for tests that need many.
 async function quickLearner(): Promise<SessionUser> {
   quick += 1;
-  const user = await db().User.create({ email: `bulk${quick}-${Date.now()}@test.example`, name: `Bulk learner ${quick}`, role: 'learner', passwordHash: 'not-a-login' });
+  const user = await db().User.create({
+    email: `bulk${quick}-${Date.now()}@test.example`,
+    name: `Bulk learner ${quick}`,
+    role: 'learner',
+    passwordHash: 'not-a-login',
+  });
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 }
 
@@ -34,7 +47,14 @@ export async function enrolledLearner(
   options: { quick?: boolean } = {},
 ) {
   const learner = options.quick ? await quickLearner() : await createUser('learner');
-  const enrollment = await db().Enrollment.create({ userId: learner.id, courseId, workshopId, runKey: workshopId ? String(workshopId) : 'self-paced', status, feeCents: 4500 });
+  const enrollment = await db().Enrollment.create({
+    userId: learner.id,
+    courseId,
+    workshopId,
+    runKey: workshopId ? String(workshopId) : 'self-paced',
+    status,
+    feeCents: 4500,
+  });
   return { learner, enrollment };
 }
 

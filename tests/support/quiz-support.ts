@@ -6,8 +6,20 @@ import { createCourses, createUser, resetDatabase } from './db';
 import { actAs } from './session';
 
 /** Enrolls a user in a course with the given status; returns the enrollment. */
-export async function enroll(userId: number, courseId: number, status: 'active' | 'completed' | 'awaiting_payment' | 'withdrawn' = 'active', workshopId: number | null = null) {
-  return db().Enrollment.create({ userId, courseId, runKey: `r${userId}-${courseId}-${Math.random().toString(36).slice(2, 12)}`, status, feeCents: 0, workshopId });
+export async function enroll(
+  userId: number,
+  courseId: number,
+  status: 'active' | 'completed' | 'awaiting_payment' | 'withdrawn' = 'active',
+  workshopId: number | null = null,
+) {
+  return db().Enrollment.create({
+    userId,
+    courseId,
+    runKey: `r${userId}-${courseId}-${Math.random().toString(36).slice(2, 12)}`,
+    status,
+    feeCents: 0,
+    workshopId,
+  });
 }
 
 export async function drawnOf(attemptId: number): Promise<{ quizSlug: string; drawn: Drawn }> {
@@ -31,7 +43,10 @@ export async function answersFor(attemptId: number, { wrong = 0 } = {}): Promise
     const right = rightAnswer(q, d);
     const spoil = index < wrong;
     if (q.kind === 'single') answers[q.id] = spoil ? (['c1', 'c2'].find((t) => t !== right.choices![0]) as string) : right.choices![0];
-    else if (q.kind === 'multiple') answers[q.id] = spoil ? right.choices!.slice(0, -1).concat(right.choices!.length === 1 ? ['c1', 'c2', 'c3'].filter((t) => !right.choices!.includes(t)).slice(0, 1) : []) : right.choices!;
+    else if (q.kind === 'multiple')
+      answers[q.id] = spoil
+        ? right.choices!.slice(0, -1).concat(right.choices!.length === 1 ? ['c1', 'c2', 'c3'].filter((t) => !right.choices!.includes(t)).slice(0, 1) : [])
+        : right.choices!;
     else if (q.kind === 'true-false') answers[q.id] = spoil ? !right.value : (right.value as boolean);
     else answers[q.id] = { value: spoil ? (right.value as number) + 1000 : (right.value as number), unit: right.unit! };
   });

@@ -7,7 +7,7 @@ import { discoverBenchScripts, figureRow, lastJsonObject } from '../../bench/ben
 
 describe('npm run bench (bench/bench.ts)', () => {
   it('discovers every bench:* script of package.json, and only those', () => {
-    const found = discoverBenchScripts({ scripts: { bench: 'tsx bench/bench.ts', 'bench:pages': 'a', test: 'b', 'bench:new-one': 'c', 'benchmark': 'd' } });
+    const found = discoverBenchScripts({ scripts: { bench: 'tsx bench/bench.ts', 'bench:pages': 'a', test: 'b', 'bench:new-one': 'c', benchmark: 'd' } });
     expect(found).toEqual([
       { name: 'pages', script: 'a' },
       { name: 'new-one', script: 'c' },

@@ -8,7 +8,11 @@ const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-nginx-conf-'));
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 /** The directives alone (comments dropped). */
-const directives = (conf: string) => conf.split('\n').filter((line) => !line.trim().startsWith('#')).join('\n');
+const directives = (conf: string) =>
+  conf
+    .split('\n')
+    .filter((line) => !line.trim().startsWith('#'))
+    .join('\n');
 
 // nginx itself checks the rendered file in tests/e2e/client-address.test.ts (nginx -t), outside the unit tier.
 describe('the reverse proxy configuration (scripts/cluster/nginx.conf)', () => {

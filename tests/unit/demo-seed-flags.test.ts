@@ -8,7 +8,9 @@ import { checkPractical } from '../../lib/practicals/checks';
 import type { PracticalDetails } from '../../lib/validations/practical';
 
 const load = createRequire(path.resolve(__dirname, '../../package.json'));
-const { DEMO_BATCHES } = load('./seeders/20261201160000-demo-practicals.js') as { DEMO_BATCHES: { name: string; details: Partial<PracticalDetails>; flags: unknown[] }[] };
+const { DEMO_BATCHES } = load('./seeders/20261201160000-demo-practicals.js') as {
+  DEMO_BATCHES: { name: string; details: Partial<PracticalDetails>; flags: unknown[] }[];
+};
 const { approvedBatch } = load('./seeders/20261201170000-demo-certificates.js') as { approvedBatch: (submittedAt: Date) => Partial<PracticalDetails> };
 
 describe('the demo seed', () => {

@@ -5,7 +5,11 @@ import { ENV_NAMES, parseEnv } from '../../lib/env';
 
 const example = fs.readFileSync(path.resolve(__dirname, '../../.env.example'), 'utf8');
 // NAME=value lines, set or commented out (# NAME=value); quoted values as bash and dotenv read them.
-const entries = [...example.matchAll(/^(#\s*)?([A-Z][A-Z0-9_]*)=(.*)$/gm)].map(([, commented, name, value]) => ({ name, value: value.replace(/^"(.*)"$/, '$1'), set: !commented }));
+const entries = [...example.matchAll(/^(#\s*)?([A-Z][A-Z0-9_]*)=(.*)$/gm)].map(([, commented, name, value]) => ({
+  name,
+  value: value.replace(/^"(.*)"$/, '$1'),
+  set: !commented,
+}));
 
 describe('.env.example', () => {
   it('lists every variable lib/env.ts reads, and no other', () => {

@@ -19,7 +19,13 @@ beforeAll(async () => {
     req.on('data', (c: Buffer) => chunks.push(c));
     req.on('end', () => {
       const url = req.url ?? '/';
-      captured = { method: req.method ?? 'GET', rawPath: url.split('?')[0], query: new URL(url, 'http://x').searchParams, headers: req.headers, body: Buffer.concat(chunks) };
+      captured = {
+        method: req.method ?? 'GET',
+        rawPath: url.split('?')[0],
+        query: new URL(url, 'http://x').searchParams,
+        headers: req.headers,
+        body: Buffer.concat(chunks),
+      };
       res.writeHead(200, { etag: '"0"' }).end();
     });
   });
@@ -31,7 +37,9 @@ beforeAll(async () => {
     credentials,
     requestChecksumCalculation: 'WHEN_REQUIRED',
   });
-  await client.send(new PutObjectCommand({ Bucket: 'brinewright-sig', Key: 'photos/1/signed.jpg', Body: Buffer.from('jar photo bytes'), ContentType: 'image/jpeg' }));
+  await client.send(
+    new PutObjectCommand({ Bucket: 'brinewright-sig', Key: 'photos/1/signed.jpg', Body: Buffer.from('jar photo bytes'), ContentType: 'image/jpeg' }),
+  );
   client.destroy();
 });
 afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
@@ -45,7 +53,9 @@ describe('verifySignature (fakes/s3)', () => {
   });
 
   it('refuses a wrong secret or an unknown key id', () => {
-    expect(() => verifySignature(captured, { ...credentials, secretAccessKey: 'another-secret-entirely-000000' })).toThrow(/signature we calculated does not match/);
+    expect(() => verifySignature(captured, { ...credentials, secretAccessKey: 'another-secret-entirely-000000' })).toThrow(
+      /signature we calculated does not match/,
+    );
     expect(() => verifySignature(captured, { ...credentials, accessKeyId: 'SOMEONEELSE000000000' })).toThrow(/access key id you provided does not exist/);
   });
 

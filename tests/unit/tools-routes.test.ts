@@ -48,7 +48,12 @@ describe('GET /api/tools/processing-time', () => {
     // 15 / 20 / 25 min at 0–1,000 / 1,001–6,000 / above 6,000 ft.
     const { status, body } = await call(processingTime, 'processing-time', { product: 'fresh-pack-dill-pickles', jar: 'quart', altitudeFt: 7200 });
     expect(status).toBe(200);
-    expect(body).toMatchObject({ minutes: 25, method: 'boiling-water', altitudeBand: { fromFt: 6001, toFt: 10000 }, lowTemperaturePasteurization: { waterTempF: [180, 185], minutes: 30 } });
+    expect(body).toMatchObject({
+      minutes: 25,
+      method: 'boiling-water',
+      altitudeBand: { fromFt: 6001, toFt: 10000 },
+      lowTemperaturePasteurization: { waterTempF: [180, 185], minutes: 30 },
+    });
     expect(body.source).toContain('Complete Guide to Home Canning');
     const dilly = (await call(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 0 })).body;
     expect(dilly.minutes).toBe(5);
@@ -62,10 +67,28 @@ describe('GET /api/tools/processing-time', () => {
   it('answers 400 for a missing, non-numeric or negative altitude, naming it', async () => {
     await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint' }, 'altitudeFt', 'Enter the altitude in feet as a number.');
     await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 'high' }, 'altitudeFt');
-    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: -2000 }, 'altitudeFt', 'The altitude in feet must be at least -1,500.');
-    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeM: -500 }, 'altitudeM', 'The altitude in metres must be at least -457.');
+    await expect400(
+      processingTime,
+      'processing-time',
+      { product: 'dilly-beans', jar: 'pint', altitudeFt: -2000 },
+      'altitudeFt',
+      'The altitude in feet must be at least -1,500.',
+    );
+    await expect400(
+      processingTime,
+      'processing-time',
+      { product: 'dilly-beans', jar: 'pint', altitudeM: -500 },
+      'altitudeM',
+      'The altitude in metres must be at least -457.',
+    );
     // Feet and metres together are refused rather than one silently winning.
-    await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'pint', altitudeFt: 100, altitudeM: 30 }, 'altitudeFt', 'Give the altitude once: altitudeFt in feet, or altitudeM in metres.');
+    await expect400(
+      processingTime,
+      'processing-time',
+      { product: 'dilly-beans', jar: 'pint', altitudeFt: 100, altitudeM: 30 },
+      'altitudeFt',
+      'Give the altitude once: altitudeFt in feet, or altitudeM in metres.',
+    );
     await expect400(processingTime, 'processing-time', { product: 'dilly-beans', jar: 'jug', altitudeFt: 0 }, 'jar');
     await expect400(processingTime, 'processing-time', { jar: 'pint', altitudeFt: 0 }, 'product');
   });
@@ -85,7 +108,10 @@ describe('GET /api/tools/processing-time', () => {
 describe('GET /api/tools/pressure', () => {
   it('answers pounds by gauge and altitude', async () => {
     // USDA Complete Guide, rev. 2015, Guide 4 tables: dial 13 lb at 4,001–6,000 ft; weighted 15 lb above 1,000 ft.
-    expect((await call(pressure, 'pressure', { gauge: 'dial', altitudeFt: 5000 })).body).toMatchObject({ pounds: 13, source: expect.stringContaining('Guide 4') });
+    expect((await call(pressure, 'pressure', { gauge: 'dial', altitudeFt: 5000 })).body).toMatchObject({
+      pounds: 13,
+      source: expect.stringContaining('Guide 4'),
+    });
     expect((await call(pressure, 'pressure', { gauge: 'weighted', altitudeFt: 1200 })).body.pounds).toBe(15);
   });
 
@@ -145,14 +171,17 @@ describe('GET /api/tools/brine', () => {
     expect(withProduce.body.phCaution).toMatch(/before the produce goes in/);
   });
 
-  it('compares with a chosen product\'s tested liquid, and answers 404 for an unknown product', async () => {
+  it("compares with a chosen product's tested liquid, and answers 404 for an unknown product", async () => {
     // USDA Guide 6, pickled hot peppers: 5 cups vinegar (5 %), 1 cup water → 4.17 %; 1 : 1 (2.5 %) warns.
     const { status, body } = await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: 'pickled-hot-peppers' });
     expect(status).toBe(200);
     expect(body).toMatchObject({ belowTested: true, tested: { product: 'pickled-hot-peppers', aceticAcidPct: expect.closeTo(4.1667, 4), weakest: false } });
     expect((body.warnings as string[]).join(' ')).toMatch(/weaker than the tested liquid of pickled hot peppers \(4.17%\)/);
     // An empty product is "not given": the weakest tested liquid (2.14 %), which 2.5 % is not below.
-    expect((await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: '' })).body).toMatchObject({ belowTested: false, tested: { weakest: true } });
+    expect((await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: '' })).body).toMatchObject({
+      belowTested: false,
+      tested: { weakest: true },
+    });
     const unknown = await call(brine, 'brine', { vinegarMl: 500, vinegarAcidityPct: 5, waterMl: 500, product: 'pickled-okra' });
     expect(unknown.status).toBe(404);
     expect(unknown.body).toMatchObject({ error: 'not_found', param: 'product' });

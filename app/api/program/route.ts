@@ -7,7 +7,13 @@ export const dynamic = 'force-dynamic';
 export const GET = route(async () => {
   const p = await getProgramIdentity();
   return Response.json(
-    { name: p.name, shortName: p.shortName, contactEmail: p.contactEmail, contactPhone: p.contactPhone, logo: p.logoKey ? `/api/program/logo?v=${p.logoKey.slice(-24, -4)}` : null },
+    {
+      name: p.name,
+      shortName: p.shortName,
+      contactEmail: p.contactEmail,
+      contactPhone: p.contactPhone,
+      logo: p.logoKey ? `/api/program/logo?v=${p.logoKey.slice(-24, -4)}` : null,
+    },
     // Not cached: the header must show a saved change on the next page.
     { headers: { 'Cache-Control': 'no-cache' } },
   );

@@ -9,7 +9,10 @@ export const POST = route(async (request) => {
   const user = await requireRole('learner');
   const input = parseOrThrow(MarkReadSchema, await readJson(request), 'lesson');
   const { readAt, created } = await markLessonRead(user.id, input.courseSlug, input.lessonSlug);
-  return Response.json({ courseSlug: input.courseSlug, lessonSlug: input.lessonSlug, read: true, readAt: readAt.toISOString() }, { status: created ? 201 : 200 });
+  return Response.json(
+    { courseSlug: input.courseSlug, lessonSlug: input.lessonSlug, read: true, readAt: readAt.toISOString() },
+    { status: created ? 201 : 200 },
+  );
 });
 
 /** The signed-in learner's reading and passed quizzes in one course: ?course=<slug>. */

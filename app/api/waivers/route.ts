@@ -15,5 +15,8 @@ export const POST = route(async (request) => {
   const user = await requireRole('coordinator');
   const input = parseOrThrow(WaiverSchema, await readJson(request), 'waiver');
   const waiver = await createWaiver(input, user.id);
-  return Response.json({ waiver: { id: waiver.id, code: waiver.code, maxUses: waiver.maxUses, uses: waiver.uses, expiresAt: waiver.expiresAt.toISOString() } }, { status: 201 });
+  return Response.json(
+    { waiver: { id: waiver.id, code: waiver.code, maxUses: waiver.maxUses, uses: waiver.uses, expiresAt: waiver.expiresAt.toISOString() } },
+    { status: 201 },
+  );
 });

@@ -35,7 +35,8 @@ export async function importAction(_prev: State, formData: FormData): Promise<St
     const preview = await importHolders(text, actor.id);
     return { step: 'done', preview, message: `Imported ${preview.counts.create} certificate(s); ${preview.counts.skip} line(s) skipped as duplicates.` };
   } catch (error) {
-    if (error instanceof AppError) return { step: 'preview', message: error.message, preview: (error.extra?.preview as ImportPreview | undefined) ?? undefined, text };
+    if (error instanceof AppError)
+      return { step: 'preview', message: error.message, preview: (error.extra?.preview as ImportPreview | undefined) ?? undefined, text };
     throw error;
   }
 }

@@ -19,7 +19,9 @@ export default async function DeskPaymentsPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Payments and refunds</h1>
-      <p className="max-w-prose text-ink-soft">Card payments of course fees, newest first. A refund returns the fee through the payment service, withdraws the enrollment and frees the workshop seat.</p>
+      <p className="max-w-prose text-ink-soft">
+        Card payments of course fees, newest first. A refund returns the fee through the payment service, withdraws the enrollment and frees the workshop seat.
+      </p>
       <Table caption={`${payments.length} payment${payments.length === 1 ? '' : 's'}`}>
         <THead>
           <TR>
@@ -43,7 +45,9 @@ export default async function DeskPaymentsPage() {
               </TD>
               <TD>
                 <div>{p.courseTitle}</div>
-                {p.workshopStartsAt && p.workshopTimeZone ? <div className="text-ink-soft">{formatWorkshopDate(p.workshopStartsAt, p.workshopTimeZone)}</div> : null}
+                {p.workshopStartsAt && p.workshopTimeZone ? (
+                  <div className="text-ink-soft">{formatWorkshopDate(p.workshopStartsAt, p.workshopTimeZone)}</div>
+                ) : null}
               </TD>
               <TD>
                 {formatMoney(p.amountCents, p.currency)}
@@ -53,7 +57,11 @@ export default async function DeskPaymentsPage() {
                 <Badge tone={TONE[p.status] ?? 'neutral'}>{LABEL[p.status] ?? p.status}</Badge>
               </TD>
               <TD>{ENROLLMENT[p.enrollmentStatus] ?? p.enrollmentStatus}</TD>
-              <TD>{p.status === 'paid' && p.enrollmentStatus !== 'completed' ? <RefundButton enrollmentId={p.enrollmentId} learnerName={p.learnerName} amount={formatMoney(p.amountCents, p.currency)} /> : null}</TD>
+              <TD>
+                {p.status === 'paid' && p.enrollmentStatus !== 'completed' ? (
+                  <RefundButton enrollmentId={p.enrollmentId} learnerName={p.learnerName} amount={formatMoney(p.amountCents, p.currency)} />
+                ) : null}
+              </TD>
             </TR>
           ))}
         </TBody>

@@ -10,7 +10,8 @@ export const metadata: Metadata = { title: 'Reports · Certificate desk' };
 export const dynamic = 'force-dynamic';
 
 const money = (cents: number, currency: string) => new Intl.NumberFormat('en-US', { style: 'currency', currency: currency.toUpperCase() }).format(cents / 100);
-const monthLabel = (ym: string) => new Intl.DateTimeFormat('en-US', { month: 'short', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${ym}-01T00:00:00Z`));
+const monthLabel = (ym: string) =>
+  new Intl.DateTimeFormat('en-US', { month: 'short', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${ym}-01T00:00:00Z`));
 
 // Palette colours from tailwind.config.ts (brine-600, copper-500, beet-600, honey-500).
 const C = { brine: '#276552', copper: '#b86a2e', beet: '#8a1f41', honey: '#b98a12' };
@@ -48,7 +49,9 @@ export default async function ReportsPage() {
 
       <Card title="Completion rate per workshop">
         <p className="mb-2 text-sm text-ink-soft">Completed enrollments as a share of the workshop&apos;s enrollments that were not withdrawn.</p>
-        {workshopData.length ? <ReportBarChart data={workshopData} x="workshop" unit="%" series={[{ key: 'rate', name: 'Completion rate', color: C.copper }]} /> : null}
+        {workshopData.length ? (
+          <ReportBarChart data={workshopData} x="workshop" unit="%" series={[{ key: 'rate', name: 'Completion rate', color: C.copper }]} />
+        ) : null}
         <Table caption="Completion rate per workshop">
           <THead>
             <TR>

@@ -18,7 +18,10 @@ export default async function DeskWaiversPage() {
   return (
     <div className="space-y-8">
       <h1 className="text-3xl font-bold">Fee waivers</h1>
-      <p className="max-w-prose text-ink-soft">A waiver code lets a learner enroll without paying the course fee, for volunteers, scholarships or partner agencies. Each use is counted; the code stops working when its uses run out or after its last day.</p>
+      <p className="max-w-prose text-ink-soft">
+        A waiver code lets a learner enroll without paying the course fee, for volunteers, scholarships or partner agencies. Each use is counted; the code stops
+        working when its uses run out or after its last day.
+      </p>
       <Table caption={`${waivers.length} code${waivers.length === 1 ? '' : 's'}`}>
         <THead>
           <TR>

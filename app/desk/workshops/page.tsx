@@ -69,7 +69,17 @@ export default async function DeskWorkshopsPage() {
           courses={courses}
           instructors={instructors}
           save={saveWorkshopAction}
-          defaults={{ courseId: String(courses[0]?.id ?? ''), date: '', startTime: '09:00', endTime: '14:00', timeZone: 'America/Denver', place: '', seats: 12, instructorId: '', attendanceRequired: true }}
+          defaults={{
+            courseId: String(courses[0]?.id ?? ''),
+            date: '',
+            startTime: '09:00',
+            endTime: '14:00',
+            timeZone: 'America/Denver',
+            place: '',
+            seats: 12,
+            instructorId: '',
+            attendanceRequired: true,
+          }}
         />
       </Card>
     </div>

@@ -25,7 +25,9 @@ export default async function QuizPage({ params }: Props) {
   return (
     <div className="mx-auto max-w-3xl space-y-6">
       <nav aria-label="Breadcrumb" className="text-sm">
-        <Link href={bank.lesson ? `/learn/${bank.course}/${bank.lesson}` : `/courses/${bank.course}`}>{bank.lesson ? '← Back to the lesson' : '← Back to the course'}</Link>
+        <Link href={bank.lesson ? `/learn/${bank.course}/${bank.lesson}` : `/courses/${bank.course}`}>
+          {bank.lesson ? '← Back to the lesson' : '← Back to the course'}
+        </Link>
       </nav>
       <h1 className="text-3xl font-bold">{bank.title}</h1>
       {enrolled ? (

@@ -51,7 +51,12 @@ export default async function QuestionResultsPage({ searchParams }: Props) {
             <label htmlFor="f-workshop" className="block text-sm font-semibold">
               Workshop
             </label>
-            <select id="f-workshop" name="workshop" defaultValue={filter.workshop ? String(filter.workshop) : ''} className={`${fieldClasses} border-ink-faint/40`}>
+            <select
+              id="f-workshop"
+              name="workshop"
+              defaultValue={filter.workshop ? String(filter.workshop) : ''}
+              className={`${fieldClasses} border-ink-faint/40`}
+            >
               <option value="">All workshops</option>
               {workshops.map((w) => (
                 <option key={w.id} value={w.id}>
@@ -64,15 +69,37 @@ export default async function QuestionResultsPage({ searchParams }: Props) {
             <label htmlFor="f-from" className="block text-sm font-semibold">
               From
             </label>
-            <input id="f-from" type="date" name="from" defaultValue={filter.from ?? ''} className={`${fieldClasses} border-ink-faint/40`} aria-describedby={errors.from ? 'f-from-error' : undefined} />
-            {errors.from ? <p id="f-from-error" className="text-sm text-beet-600">{errors.from[0]}</p> : null}
+            <input
+              id="f-from"
+              type="date"
+              name="from"
+              defaultValue={filter.from ?? ''}
+              className={`${fieldClasses} border-ink-faint/40`}
+              aria-describedby={errors.from ? 'f-from-error' : undefined}
+            />
+            {errors.from ? (
+              <p id="f-from-error" className="text-sm text-beet-600">
+                {errors.from[0]}
+              </p>
+            ) : null}
           </div>
           <div>
             <label htmlFor="f-to" className="block text-sm font-semibold">
               To
             </label>
-            <input id="f-to" type="date" name="to" defaultValue={filter.to ?? ''} className={`${fieldClasses} border-ink-faint/40`} aria-describedby={errors.to ? 'f-to-error' : undefined} />
-            {errors.to ? <p id="f-to-error" className="text-sm text-beet-600">{errors.to[0]}</p> : null}
+            <input
+              id="f-to"
+              type="date"
+              name="to"
+              defaultValue={filter.to ?? ''}
+              className={`${fieldClasses} border-ink-faint/40`}
+              aria-describedby={errors.to ? 'f-to-error' : undefined}
+            />
+            {errors.to ? (
+              <p id="f-to-error" className="text-sm text-beet-600">
+                {errors.to[0]}
+              </p>
+            ) : null}
           </div>
           <Button type="submit" variant="secondary">
             Show

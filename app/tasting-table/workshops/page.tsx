@@ -23,13 +23,18 @@ export default async function InstructorWorkshopsPage() {
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">{everyone ? 'Workshops' : 'My workshops'}</h1>
       <p className="max-w-prose text-ink-soft">Mark each learner who attended. Where attendance is required, the certificate waits for this mark.</p>
-      {workshops.length === 0 ? <p className="rounded-jar border border-brine-100 bg-white p-4">No workshops are assigned to you yet. The coordinator assigns instructors at the Certificate desk.</p> : null}
+      {workshops.length === 0 ? (
+        <p className="rounded-jar border border-brine-100 bg-white p-4">
+          No workshops are assigned to you yet. The coordinator assigns instructors at the Certificate desk.
+        </p>
+      ) : null}
       {workshops.map((w, i) => {
         const open = new Date(w.startsAt).getTime() - OPENS_BEFORE_MS <= now;
         return (
           <Card key={w.id} title={`${formatWorkshopDate(w.startsAt, w.timeZone)} · ${w.courseTitle}`}>
             <p className="mb-3 text-sm text-ink-soft">
-              {formatWorkshopTimes(w.startsAt, w.endsAt, w.timeZone)} · {w.place} · {w.taken} of {w.seats} seats taken · attendance {w.attendanceRequired ? 'required' : 'optional'}
+              {formatWorkshopTimes(w.startsAt, w.endsAt, w.timeZone)} · {w.place} · {w.taken} of {w.seats} seats taken · attendance{' '}
+              {w.attendanceRequired ? 'required' : 'optional'}
               {open ? '' : ' · attendance can be marked from the day of the workshop'}
             </p>
             <Table caption={`Learners (${rosters[i].length})`}>

@@ -41,12 +41,17 @@ export default async function VerifySerialPage({ params }: { params: Promise<{ s
       {program.contactEmail || program.contactPhone ? (
         <p data-testid="program-contact">
           Questions about a certificate: {program.name}
-          {program.contactEmail ? <>, <a href={`mailto:${program.contactEmail}`}>{program.contactEmail}</a></> : null}
+          {program.contactEmail ? (
+            <>
+              , <a href={`mailto:${program.contactEmail}`}>{program.contactEmail}</a>
+            </>
+          ) : null}
           {program.contactPhone ? <>, {program.contactPhone}</> : null}.
         </p>
       ) : null}
       <p className="text-sm text-ink-soft">
-        A certificate records that its holder completed the program&apos;s training. It does not certify any recipe or product as safe. <Link href="/courses">About the courses</Link>
+        A certificate records that its holder completed the program&apos;s training. It does not certify any recipe or product as safe.{' '}
+        <Link href="/courses">About the courses</Link>
       </p>
     </div>
   );

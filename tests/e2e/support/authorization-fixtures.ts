@@ -33,7 +33,8 @@ const one = async <T>(conn: Conn, sql: string, values: unknown[]): Promise<T> =>
   if (!rows[0]) throw new Error(`no row for ${sql} ${JSON.stringify(values)}`);
   return rows[0];
 };
-const insert = async (conn: Conn, sql: string, values: unknown[]): Promise<number> => Number(((await conn.query(sql, values)) as { insertId: number }).insertId);
+const insert = async (conn: Conn, sql: string, values: unknown[]): Promise<number> =>
+  Number(((await conn.query(sql, values)) as { insertId: number }).insertId);
 
 async function startAttempt(jar: Jar, quiz: string): Promise<number> {
   const response = await send(`/api/quizzes/${quiz}/attempts`, { method: 'POST', jar, body: {} });
@@ -60,19 +61,34 @@ export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
     const ids = async (email: string) => (await one<{ id: number }>(conn, 'SELECT id FROM users WHERE email = ?', [email])).id;
     const instructorId = await ids('instructor@cedarhollow.example');
     const coordinatorId = await ids('coordinator@cedarhollow.example');
-    const course = async (slug: string) => one<{ id: number; title: string; validityMonths: number }>(conn, 'SELECT id, title, validityMonths FROM courses WHERE slug = ?', [slug]);
+    const course = async (slug: string) =>
+      one<{ id: number; title: string; validityMonths: number }>(conn, 'SELECT id, title, validityMonths FROM courses WHERE slug = ?', [slug]);
     const flagship = await course('pickling-and-canning');
     const refresher = await course('volunteer-refresher');
     const startsAt = new Date(now.getTime() - 40 * 86_400_000);
     const workshopId = await insert(
       conn,
       'INSERT INTO workshops (courseId, instructorId, startsAt, endsAt, timeZone, place, seats, attendanceRequired, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?, 1, ?, ?)',
-      [flagship.id, instructorId, startsAt, new Date(startsAt.getTime() + 4 * 3_600_000), 'America/Denver', 'Cedar Hollow Grange hall, back kitchen', 8, now, now],
+      [
+        flagship.id,
+        instructorId,
+        startsAt,
+        new Date(startsAt.getTime() + 4 * 3_600_000),
+        'America/Denver',
+        'Cedar Hollow Grange hall, back kitchen',
+        8,
+        now,
+        now,
+      ],
     );
     const hash = bcrypt.hashSync(FIXTURE_PASSWORD, 10);
     const emails = { a: `authz-a-${stamp}@test.example`, b: `authz-b-${stamp}@test.example` };
     const person = async (email: string, name: string, refresherStatus: 'withdrawn' | 'active') => {
-      const userId = await insert(conn, "INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, 'learner', ?, ?, ?)", [email, name, hash, now, now, now]);
+      const userId = await insert(
+        conn,
+        "INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, 'learner', ?, ?, ?)",
+        [email, name, hash, now, now, now],
+      );
       const enrollmentId = await insert(
         conn,
         "INSERT INTO enrollments (userId, courseId, workshopId, runKey, status, feeCents, createdAt, updatedAt) VALUES (?, ?, ?, ?, 'active', 4500, ?, ?)",
@@ -96,9 +112,17 @@ export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
     const a = await person(emails.a, 'Avery Matrix', 'withdrawn');
     const b = await person(emails.b, 'Bellamy Matrix', 'active');
     // A practical batch of a demo learner, waiting at the Tasting table (read, never reviewed here).
-    const practical = await one<{ id: number }>(conn, "SELECT p.id FROM practicals p JOIN users u ON u.id = p.userId WHERE u.email = 'idris.fairweather@cedarhollow.example'", []);
+    const practical = await one<{ id: number }>(
+      conn,
+      "SELECT p.id FROM practicals p JOIN users u ON u.id = p.userId WHERE u.email = 'idris.fairweather@cedarhollow.example'",
+      [],
+    );
 
-    const jpeg = new Uint8Array(await sharp({ create: { width: 640, height: 480, channels: 3, background: '#7a9e7e' } }).jpeg({ quality: 80 }).toBuffer());
+    const jpeg = new Uint8Array(
+      await sharp({ create: { width: 640, height: 480, channels: 3, background: '#7a9e7e' } })
+        .jpeg({ quality: 80 })
+        .toBuffer(),
+    );
     const signedA = await signInHttp(emails.a, FIXTURE_PASSWORD);
     const signedB = await signInHttp(emails.b, FIXTURE_PASSWORD);
     const fixtures: Fixtures = {

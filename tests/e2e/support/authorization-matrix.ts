@@ -43,12 +43,19 @@ export type Probe = (fx: Fixtures, subject: Subject) => Request;
 export type PageRow = { kind: 'page'; pattern: string; probe: Probe; expect: Answers; bodyIncludes?: Partial<Record<Subject, string>>; renders?: string };
 export type RouteRow = { kind: 'route'; pattern: string; method: string; probe: Probe; expect: Answers };
 export type ActionExpected = 'pass' | 401 | 403 | 'n/a';
-export type ActionRow = { kind: 'action'; pattern: string; action: string; expect: [ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected] };
+export type ActionRow = {
+  kind: 'action';
+  pattern: string;
+  action: string;
+  expect: [ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected, ActionExpected];
+};
 export type MatrixRow = PageRow | RouteRow | ActionRow;
 
 /** A's resource in the `own` column, B's in every other one. */
 const ab = <T>(subject: Subject, own: T, theirs: T) => (subject === 'own' ? own : theirs);
-const at = (path: string): Probe => () => ({ path });
+const at =
+  (path: string): Probe =>
+  () => ({ path });
 
 const FLAGSHIP = 'pickling-and-canning';
 const REFRESHER = 'volunteer-refresher';
@@ -71,7 +78,12 @@ const pages: PageRow[] = [
   { kind: 'page', pattern: '/admin/program', probe: at('/admin/program'), expect: [S, 403, NA, 403, 403, 200] },
   { kind: 'page', pattern: '/bench', probe: at('/bench'), expect: PUBLIC },
   // Another learner's enrollment number in the address shows nothing of theirs.
-  { kind: 'page', pattern: '/checkout/cancel', probe: (fx, s) => ({ path: `/checkout/cancel?enrollment=${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }), expect: [S, 200, 200, 403, 403, 403] },
+  {
+    kind: 'page',
+    pattern: '/checkout/cancel',
+    probe: (fx, s) => ({ path: `/checkout/cancel?enrollment=${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }),
+    expect: [S, 200, 200, 403, 403, 403],
+  },
   {
     kind: 'page',
     pattern: '/checkout/success',
@@ -125,18 +137,40 @@ const pages: PageRow[] = [
   { kind: 'page', pattern: '/signin', probe: at('/signin'), expect: PUBLIC },
   { kind: 'page', pattern: '/tasting-table', probe: at('/tasting-table'), expect: INSTRUCTOR_PAGE },
   { kind: 'page', pattern: '/tasting-table/questions', probe: at('/tasting-table/questions'), expect: INSTRUCTOR_PAGE },
-  { kind: 'page', pattern: '/tasting-table/submissions/[id]', probe: (fx) => ({ path: `/tasting-table/submissions/${fx.practicalId}` }), expect: [S, 403, 403, 200, 200, 200] },
+  {
+    kind: 'page',
+    pattern: '/tasting-table/submissions/[id]',
+    probe: (fx) => ({ path: `/tasting-table/submissions/${fx.practicalId}` }),
+    expect: [S, 403, 403, 200, 200, 200],
+  },
   { kind: 'page', pattern: '/tasting-table/workshops', probe: at('/tasting-table/workshops'), expect: INSTRUCTOR_PAGE },
   { kind: 'page', pattern: '/verify', probe: at('/verify'), expect: PUBLIC },
   // Public by design: anyone holding a serial may check it.
-  { kind: 'page', pattern: '/verify/[serial]', probe: (fx, s) => ({ path: `/verify/${ab(s, fx.a.serial, fx.b.serial)}` }), expect: [200, 200, 200, 200, 200, 200] },
+  {
+    kind: 'page',
+    pattern: '/verify/[serial]',
+    probe: (fx, s) => ({ path: `/verify/${ab(s, fx.a.serial, fx.b.serial)}` }),
+    expect: [200, 200, 200, 200, 200, 200],
+  },
 ];
 
-const tool = (name: string, query: string): RouteRow => ({ kind: 'route', pattern: `/api/tools/${name}`, method: 'GET', probe: at(`/api/tools/${name}?${query}`), expect: PUBLIC });
+const tool = (name: string, query: string): RouteRow => ({
+  kind: 'route',
+  pattern: `/api/tools/${name}`,
+  method: 'GET',
+  probe: at(`/api/tools/${name}?${query}`),
+  expect: PUBLIC,
+});
 
 const routes: RouteRow[] = [
   // Staff may read an attempt (question results, reviews); another learner may not.
-  { kind: 'route', pattern: '/api/attempts/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/attempts/${ab(s, fx.a.attemptId, fx.b.attemptId)}` }), expect: [401, 200, 403, 200, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/attempts/[id]',
+    method: 'GET',
+    probe: (fx, s) => ({ path: `/api/attempts/${ab(s, fx.a.attemptId, fx.b.attemptId)}` }),
+    expect: [401, 200, 403, 200, 200, 200],
+  },
   {
     kind: 'route',
     pattern: '/api/attempts/[id]/submit',
@@ -146,12 +180,30 @@ const routes: RouteRow[] = [
   },
   { kind: 'route', pattern: '/api/auth/[...nextauth]', method: 'GET', probe: at('/api/auth/session'), expect: PUBLIC },
   // Signing out needs next-auth's CSRF token; a bare POST is sent back to the sign-out page.
-  { kind: 'route', pattern: '/api/auth/[...nextauth]', method: 'POST', probe: () => ({ path: '/api/auth/signout', body: '', headers: { 'content-type': 'application/x-www-form-urlencoded' } }), expect: [302, 302, NA, 302, 302, 302] },
+  {
+    kind: 'route',
+    pattern: '/api/auth/[...nextauth]',
+    method: 'POST',
+    probe: () => ({ path: '/api/auth/signout', body: '', headers: { 'content-type': 'application/x-www-form-urlencoded' } }),
+    expect: [302, 302, NA, 302, 302, 302],
+  },
   // The PDF: its owner and the desk; to anyone else the serial does not exist.
-  { kind: 'route', pattern: '/api/certificates/[serial]/pdf', method: 'GET', probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}/pdf` }), expect: [401, 200, 404, 404, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/certificates/[serial]/pdf',
+    method: 'GET',
+    probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}/pdf` }),
+    expect: [401, 200, 404, 404, 200, 200],
+  },
   { kind: 'route', pattern: '/api/program', method: 'GET', probe: at('/api/program'), expect: PUBLIC },
   { kind: 'route', pattern: '/api/program/logo', method: 'GET', probe: at('/api/program/logo'), expect: PUBLIC },
-  { kind: 'route', pattern: '/api/certificates/[serial]', method: 'GET', probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}` }), expect: [200, 200, 200, 200, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/certificates/[serial]',
+    method: 'GET',
+    probe: (fx, s) => ({ path: `/api/certificates/${ab(s, fx.a.serial, fx.b.serial)}` }),
+    expect: [200, 200, 200, 200, 200, 200],
+  },
   // A's refresher enrollment is withdrawn (not complete: 409); B's is not A's to claim (404).
   {
     kind: 'route',
@@ -161,10 +213,28 @@ const routes: RouteRow[] = [
     expect: [401, 409, 404, 403, 403, 403],
   },
   { kind: 'route', pattern: '/api/courses/[course]/workshops', method: 'GET', probe: at(`/api/courses/${FLAGSHIP}/workshops`), expect: PUBLIC },
-  { kind: 'route', pattern: '/api/desk/certificates/[id]/reissue', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/reissue`, body: {} }), expect: COORDINATOR_WRITE },
-  { kind: 'route', pattern: '/api/desk/certificates/[id]/revoke', method: 'POST', probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/revoke`, body: {} }), expect: COORDINATOR_WRITE },
+  {
+    kind: 'route',
+    pattern: '/api/desk/certificates/[id]/reissue',
+    method: 'POST',
+    probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/reissue`, body: {} }),
+    expect: COORDINATOR_WRITE,
+  },
+  {
+    kind: 'route',
+    pattern: '/api/desk/certificates/[id]/revoke',
+    method: 'POST',
+    probe: (fx) => ({ path: `/api/desk/certificates/${fx.b.certificateId}/revoke`, body: {} }),
+    expect: COORDINATOR_WRITE,
+  },
   // An enrollment that does not exist: answered per id (200, not_found), nothing issued.
-  { kind: 'route', pattern: '/api/desk/certificates', method: 'POST', probe: () => ({ path: '/api/desk/certificates', body: { enrollmentIds: [2_000_000_000] } }), expect: COORDINATOR_READ },
+  {
+    kind: 'route',
+    pattern: '/api/desk/certificates',
+    method: 'POST',
+    probe: () => ({ path: '/api/desk/certificates', body: { enrollmentIds: [2_000_000_000] } }),
+    expect: COORDINATOR_READ,
+  },
   { kind: 'route', pattern: '/api/desk/enrollments', method: 'GET', probe: at('/api/desk/enrollments'), expect: COORDINATOR_READ },
   { kind: 'route', pattern: '/api/desk/options', method: 'GET', probe: at('/api/desk/options'), expect: COORDINATOR_READ },
   { kind: 'route', pattern: '/api/desk/roster', method: 'GET', probe: at('/api/desk/roster'), expect: COORDINATOR_READ },
@@ -177,14 +247,32 @@ const routes: RouteRow[] = [
     expect: [401, 403, 403, 200, 200, 200],
   },
   // The fixtures' enrollments have no payment, so the desk is let through and told there is nothing to refund (409).
-  { kind: 'route', pattern: '/api/enrollments/[id]/refund', method: 'POST', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/refund`, body: {} }), expect: [401, 403, 403, 403, 409, 409] },
+  {
+    kind: 'route',
+    pattern: '/api/enrollments/[id]/refund',
+    method: 'POST',
+    probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}/refund`, body: {} }),
+    expect: [401, 403, 403, 403, 409, 409],
+  },
   // Someone else's enrollment is answered as missing (its existence is not revealed).
-  { kind: 'route', pattern: '/api/enrollments/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }), expect: [401, 200, 404, 404, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/enrollments/[id]',
+    method: 'GET',
+    probe: (fx, s) => ({ path: `/api/enrollments/${ab(s, fx.a.enrollmentId, fx.b.enrollmentId)}` }),
+    expect: [401, 200, 404, 404, 200, 200],
+  },
   { kind: 'route', pattern: '/api/enrollments', method: 'POST', probe: () => ({ path: '/api/enrollments', body: {} }), expect: LEARNER_WRITE },
   { kind: 'route', pattern: '/api/health', method: 'GET', probe: at('/api/health'), expect: PUBLIC },
   { kind: 'route', pattern: '/api/pantry', method: 'GET', probe: at('/api/pantry'), expect: [401, 200, NA, 403, 403, 403] },
   // The fixtures' photos are loose uploads (not yet in a submission): only their owner may read them.
-  { kind: 'route', pattern: '/api/photos/[id]', method: 'GET', probe: (fx, s) => ({ path: `/api/photos/${ab(s, fx.a.photoId, fx.b.photoId)}?size=thumb` }), expect: [401, 200, 403, 403, 403, 403] },
+  {
+    kind: 'route',
+    pattern: '/api/photos/[id]',
+    method: 'GET',
+    probe: (fx, s) => ({ path: `/api/photos/${ab(s, fx.a.photoId, fx.b.photoId)}?size=thumb` }),
+    expect: [401, 200, 403, 403, 403, 403],
+  },
   {
     kind: 'route',
     pattern: '/api/photos',
@@ -198,12 +286,36 @@ const routes: RouteRow[] = [
     expect: [401, 201, NA, 403, 403, 403],
   },
   // A missing submission: the guard lets staff through, then 404 (claiming the demo's waiting round would change shared data).
-  { kind: 'route', pattern: '/api/practicals/[id]/claim', method: 'POST', probe: () => ({ path: '/api/practicals/999999999/claim' }), expect: [401, 403, NA, 404, 404, 404] },
-  { kind: 'route', pattern: '/api/practicals/[id]/claim', method: 'DELETE', probe: () => ({ path: '/api/practicals/999999999/claim' }), expect: [401, 403, NA, 404, 404, 404] },
-  { kind: 'route', pattern: '/api/practicals/[id]/review', method: 'POST', probe: (fx) => ({ path: `/api/practicals/${fx.practicalId}/review`, body: {} }), expect: [401, 403, NA, 400, 400, 400] },
+  {
+    kind: 'route',
+    pattern: '/api/practicals/[id]/claim',
+    method: 'POST',
+    probe: () => ({ path: '/api/practicals/999999999/claim' }),
+    expect: [401, 403, NA, 404, 404, 404],
+  },
+  {
+    kind: 'route',
+    pattern: '/api/practicals/[id]/claim',
+    method: 'DELETE',
+    probe: () => ({ path: '/api/practicals/999999999/claim' }),
+    expect: [401, 403, NA, 404, 404, 404],
+  },
+  {
+    kind: 'route',
+    pattern: '/api/practicals/[id]/review',
+    method: 'POST',
+    probe: (fx) => ({ path: `/api/practicals/${fx.practicalId}/review`, body: {} }),
+    expect: [401, 403, NA, 400, 400, 400],
+  },
   { kind: 'route', pattern: '/api/practicals', method: 'POST', probe: () => ({ path: '/api/practicals', body: {} }), expect: LEARNER_WRITE },
   { kind: 'route', pattern: '/api/progress', method: 'GET', probe: at(`/api/progress?course=${FLAGSHIP}`), expect: [401, 200, NA, 403, 403, 403] },
-  { kind: 'route', pattern: '/api/progress', method: 'POST', probe: () => ({ path: '/api/progress', body: { courseSlug: FLAGSHIP, lessonSlug: 'acidity' } }), expect: [401, 201, NA, 403, 403, 403] },
+  {
+    kind: 'route',
+    pattern: '/api/progress',
+    method: 'POST',
+    probe: () => ({ path: '/api/progress', body: { courseSlug: FLAGSHIP, lessonSlug: 'acidity' } }),
+    expect: [401, 201, NA, 403, 403, 403],
+  },
   // A starts a quiz of their course (201, once per walk); the refresher's are for learners enrolled in it.
   {
     kind: 'route',
@@ -213,7 +325,13 @@ const routes: RouteRow[] = [
     expect: [401, 201, 403, 403, 403, 403],
   },
   { kind: 'route', pattern: '/api/register', method: 'POST', probe: () => ({ path: '/api/register', body: {} }), expect: [400, 400, NA, 400, 400, 400] },
-  { kind: 'route', pattern: '/api/tasting-table/submissions', method: 'GET', probe: at('/api/tasting-table/submissions'), expect: [401, 403, NA, 200, 200, 200] },
+  {
+    kind: 'route',
+    pattern: '/api/tasting-table/submissions',
+    method: 'GET',
+    probe: at('/api/tasting-table/submissions'),
+    expect: [401, 403, NA, 200, 200, 200],
+  },
   tool('batch', 'product=fresh-pack-dill-pickles&jar=pint&jars=7'),
   tool('boiling-point', 'altitudeFt=5000'),
   tool('brine', 'vinegarMl=500&vinegarAcidityPct=5&waterMl=500'),
@@ -227,7 +345,13 @@ const routes: RouteRow[] = [
   { kind: 'route', pattern: '/api/waivers', method: 'GET', probe: at('/api/waivers'), expect: COORDINATOR_READ },
   { kind: 'route', pattern: '/api/waivers', method: 'POST', probe: () => ({ path: '/api/waivers', body: {} }), expect: COORDINATOR_WRITE },
   // Called by the payment service: the signature on the raw body is the only check, for everyone.
-  { kind: 'route', pattern: '/api/webhooks/stripe', method: 'POST', probe: () => ({ path: '/api/webhooks/stripe', body: '{}', headers: { 'content-type': 'application/json' } }), expect: [400, 400, NA, 400, 400, 400] },
+  {
+    kind: 'route',
+    pattern: '/api/webhooks/stripe',
+    method: 'POST',
+    probe: () => ({ path: '/api/webhooks/stripe', body: '{}', headers: { 'content-type': 'application/json' } }),
+    expect: [400, 400, NA, 400, 400, 400],
+  },
 ];
 
 const actions: ActionRow[] = [

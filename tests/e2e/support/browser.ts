@@ -20,7 +20,16 @@ export async function openBrowser(
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
     baseURL: base,
   });
   const page = context.pages()[0] ?? (await context.newPage());
@@ -76,7 +85,10 @@ export function watchNetwork(page: Page) {
     lastChange = Date.now();
   });
   const done = (request: object) => {
-    if (process.env.E2E_LOG_REQUESTS) { const r = open.get(request); if (r) console.log('[done]', r.url, Date.now() - r.since, 'ms'); }
+    if (process.env.E2E_LOG_REQUESTS) {
+      const r = open.get(request);
+      if (r) console.log('[done]', r.url, Date.now() - r.since, 'ms');
+    }
     open.delete(request);
     lastChange = Date.now();
   };

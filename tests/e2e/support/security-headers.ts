@@ -25,7 +25,8 @@ export function securityHeaderProblems(response: Response): string[] {
     if (!directives.has('base-uri')) problems.push('no base-uri');
   }
   if (get('x-content-type-options') !== 'nosniff') problems.push(`X-Content-Type-Options is ${get('x-content-type-options')}`);
-  if (!['no-referrer', 'same-origin', 'strict-origin', 'strict-origin-when-cross-origin'].includes(get('referrer-policy') ?? '')) problems.push(`Referrer-Policy is ${get('referrer-policy')}`);
+  if (!['no-referrer', 'same-origin', 'strict-origin', 'strict-origin-when-cross-origin'].includes(get('referrer-policy') ?? ''))
+    problems.push(`Referrer-Policy is ${get('referrer-policy')}`);
   if (get('x-frame-options') !== 'DENY') problems.push(`X-Frame-Options is ${get('x-frame-options')}`);
   if (!/camera=\(\)/.test(get('permissions-policy') ?? '')) problems.push(`Permissions-Policy is ${get('permissions-policy')}`);
   if (get('x-powered-by')) problems.push('X-Powered-By is sent');

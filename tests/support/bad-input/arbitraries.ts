@@ -86,7 +86,26 @@ export const nastyString: fc.Arbitrary<string> = fc
 
 export const nastyNumber: fc.Arbitrary<number> = fc
   .oneof(
-    fc.constantFrom(-1, 0, -0, 0.5, 1.5, -1.5, 1e99, -1e99, 1e308, -1e308, 5e-324, 2 ** 31, 2 ** 32, 2 ** 53, 2 ** 53 + 2, -(2 ** 63), Number.MAX_VALUE, Number.EPSILON),
+    fc.constantFrom(
+      -1,
+      0,
+      -0,
+      0.5,
+      1.5,
+      -1.5,
+      1e99,
+      -1e99,
+      1e308,
+      -1e308,
+      5e-324,
+      2 ** 31,
+      2 ** 32,
+      2 ** 53,
+      2 ** 53 + 2,
+      -(2 ** 63),
+      Number.MAX_VALUE,
+      Number.EPSILON,
+    ),
     fc.integer({ min: -2_000_000_000, max: 0 }),
     fc.double({ noNaN: true, noDefaultInfinity: true }),
   )
@@ -105,7 +124,35 @@ export const wrongValue: fc.Arbitrary<unknown> = fc.oneof(
 /** Strings that are not a positive whole number in any spelling Number() or parseInt() would accept. */
 export const notAnId: fc.Arbitrary<string> = fc
   .oneof(
-    fc.constantFrom('-1', '0', '-0', '1.5', '1e99', '1e-3', 'abc', '../x', '..', '.', '', ' ', 'NaN', 'Infinity', '-Infinity', '[id]', 'null', '1/2', '1;2', '%00', '\u0000', '\uD800', '٣', '１', '9'.repeat(30), '18446744073709551616', '-2147483649'),
+    fc.constantFrom(
+      '-1',
+      '0',
+      '-0',
+      '1.5',
+      '1e99',
+      '1e-3',
+      'abc',
+      '../x',
+      '..',
+      '.',
+      '',
+      ' ',
+      'NaN',
+      'Infinity',
+      '-Infinity',
+      '[id]',
+      'null',
+      '1/2',
+      '1;2',
+      '%00',
+      '\u0000',
+      '\uD800',
+      '٣',
+      '１',
+      '9'.repeat(30),
+      '18446744073709551616',
+      '-2147483649',
+    ),
     nastyString,
   )
   .filter((s) => !avoids(s));
@@ -128,7 +175,11 @@ export const idParam: fc.Arbitrary<string> = fc.oneof({ weight: 4, arbitrary: no
 
 /** Slug-like path parameters: garbage and well-formed slugs of nothing. */
 export const slugParam = (missing: string[]): fc.Arbitrary<string> =>
-  fc.oneof({ weight: 4, arbitrary: nastyString }, { weight: 1, arbitrary: fc.constantFrom(...missing) }, { weight: 1, arbitrary: fc.stringMatching(/^[a-z0-9]{1,12}(-[a-z0-9]{1,8}){0,3}$/) });
+  fc.oneof(
+    { weight: 4, arbitrary: nastyString },
+    { weight: 1, arbitrary: fc.constantFrom(...missing) },
+    { weight: 1, arbitrary: fc.stringMatching(/^[a-z0-9]{1,12}(-[a-z0-9]{1,8}){0,3}$/) },
+  );
 
 /** A value for a JSON field that must be an id: anything but a real row's id. */
 export const idValue: fc.Arbitrary<unknown> = fc.oneof(wrongValue, fc.constant(MISSING_ID), fc.constant(String(MISSING_ID)));
@@ -150,7 +201,15 @@ const MISSING = Symbol('missing');
 export function brokenObject(fields: Record<string, FieldSpec>): fc.Arbitrary<Record<string, unknown>> {
   const names = Object.keys(fields);
   const each = Object.fromEntries(
-    names.map((name) => [name, fc.oneof({ weight: 3, arbitrary: fields[name].ok }, { weight: 2, arbitrary: fields[name].bad }, { weight: 1, arbitrary: wrongValue }, { weight: 1, arbitrary: fc.constant(MISSING) })]),
+    names.map((name) => [
+      name,
+      fc.oneof(
+        { weight: 3, arbitrary: fields[name].ok },
+        { weight: 2, arbitrary: fields[name].bad },
+        { weight: 1, arbitrary: wrongValue },
+        { weight: 1, arbitrary: fc.constant(MISSING) },
+      ),
+    ]),
   );
   return fc
     .tuple(fc.record(each), fc.constantFrom(...names), fc.option(fc.dictionary(nastyString, wrongValue, { maxKeys: 2 }), { freq: 5 }))
@@ -172,7 +231,34 @@ export const requiredBad = (...wrong: fc.Arbitrary<unknown>[]): fc.Arbitrary<unk
 
 /** JSON that does not parse, and JSON-like text with non-JSON literals. */
 export const malformedJson: fc.Arbitrary<string> = fc.oneof(
-  fc.constantFrom('{', '}', '{"__proto__": {"role": "admin"}}', '{"constructor": {"prototype": {"role": "admin"}}}', '{"a":', '{"a" 1}', "{'a': 1}", '{"a": NaN}', '{"a": Infinity}', '{"a": -Infinity}', '{"a": undefined}', '[1,2,', '{"a":1,}', '\u0000', '\uFEFF{"a":1', 'nul', 'tru', '"unterminated', '{"a":"\\x41"}', '{"a":"\\u12"}', '{"a": 01}', '{"a": .5}', '{"a": 1e}', '<xml/>', 'a=1&b=2', '--boundary'),
+  fc.constantFrom(
+    '{',
+    '}',
+    '{"__proto__": {"role": "admin"}}',
+    '{"constructor": {"prototype": {"role": "admin"}}}',
+    '{"a":',
+    '{"a" 1}',
+    "{'a': 1}",
+    '{"a": NaN}',
+    '{"a": Infinity}',
+    '{"a": -Infinity}',
+    '{"a": undefined}',
+    '[1,2,',
+    '{"a":1,}',
+    '\u0000',
+    '\uFEFF{"a":1',
+    'nul',
+    'tru',
+    '"unterminated',
+    '{"a":"\\x41"}',
+    '{"a":"\\u12"}',
+    '{"a": 01}',
+    '{"a": .5}',
+    '{"a": 1e}',
+    '<xml/>',
+    'a=1&b=2',
+    '--boundary',
+  ),
   fc.string({ maxLength: 60 }).filter((s) => {
     try {
       JSON.parse(s);
@@ -186,10 +272,23 @@ export const malformedJson: fc.Arbitrary<string> = fc.oneof(
 
 export type BadBody = { contentType: string | null; body: string | Uint8Array | null; kind: string };
 
-const withType = (contentType: string | null, kind: string) => (body: string | Uint8Array | null): BadBody => ({ contentType, body, kind });
+const withType =
+  (contentType: string | null, kind: string) =>
+  (body: string | Uint8Array | null): BadBody => ({ contentType, body, kind });
 
 /** Content types that are not JSON, and JSON with odd parameters. */
-export const wrongContentType = fc.constantFrom('text/plain', 'application/x-www-form-urlencoded', 'multipart/form-data; boundary=xyz', 'application/xml', 'application/octet-stream', 'image/jpeg', 'application/jsonp', 'text/json', '', 'application/vnd.api+json');
+export const wrongContentType = fc.constantFrom(
+  'text/plain',
+  'application/x-www-form-urlencoded',
+  'multipart/form-data; boundary=xyz',
+  'application/xml',
+  'application/octet-stream',
+  'image/jpeg',
+  'application/jsonp',
+  'text/json',
+  '',
+  'application/vnd.api+json',
+);
 
 /** Every kind of bad JSON body: broken objects, wrong-shaped JSON, malformed JSON, wrong types, empty, huge. */
 export function badJsonBodies(fields: Record<string, FieldSpec>): fc.Arbitrary<BadBody> {
@@ -203,10 +302,25 @@ export function badJsonBodies(fields: Record<string, FieldSpec>): fc.Arbitrary<B
         .map((v) => withType('application/json', 'wrong-shaped JSON')(JSON.stringify(v) ?? 'null')),
     },
     { weight: 3, arbitrary: malformedJson.map(withType('application/json', 'malformed JSON')) },
-    { weight: 1, arbitrary: fc.constantFrom('APPLICATION/JSON', 'application/json; charset=utf-16', 'application/json; charset=latin1').chain((t) => malformedJson.map(withType(t, 'malformed JSON, odd type'))) },
+    {
+      weight: 1,
+      arbitrary: fc
+        .constantFrom('APPLICATION/JSON', 'application/json; charset=utf-16', 'application/json; charset=latin1')
+        .chain((t) => malformedJson.map(withType(t, 'malformed JSON, odd type'))),
+    },
     { weight: 2, arbitrary: fc.tuple(wrongContentType, brokenObject(fields)).map(([t, o]) => withType(t, 'wrong content type')(JSON.stringify(o))) },
-    { weight: 1, arbitrary: fc.constantFrom(withType('application/json', 'empty body')(''), withType(null, 'no body, no type')(null), withType('application/json', 'no body')(null)) },
-    { weight: 1, arbitrary: hugeString.map((s) => withType('application/json', 'huge JSON string')(JSON.stringify({ [Object.keys(fields)[0] ?? 'x']: s, filler: s }))) },
+    {
+      weight: 1,
+      arbitrary: fc.constantFrom(
+        withType('application/json', 'empty body')(''),
+        withType(null, 'no body, no type')(null),
+        withType('application/json', 'no body')(null),
+      ),
+    },
+    {
+      weight: 1,
+      arbitrary: hugeString.map((s) => withType('application/json', 'huge JSON string')(JSON.stringify({ [Object.keys(fields)[0] ?? 'x']: s, filler: s }))),
+    },
     { weight: 1, arbitrary: fc.uint8Array({ maxLength: 200 }).map(withType('application/json', 'binary bytes as JSON')) },
     { weight: 1, arbitrary: fc.constant(withType('application/json', 'deeply nested')('['.repeat(5_000) + ']'.repeat(5_000))) },
   );
@@ -215,7 +329,12 @@ export function badJsonBodies(fields: Record<string, FieldSpec>): fc.Arbitrary<B
 /** Query strings: the route's own names with bad values, unknown names, repeated names. */
 export function badQuery(names: string[], okValues: Record<string, fc.Arbitrary<string>> = {}): fc.Arbitrary<[string, string][]> {
   const value = (name: string) => fc.oneof({ weight: 4, arbitrary: nastyString }, { weight: 1, arbitrary: okValues[name] ?? nastyString });
-  const own = names.length ? fc.array(fc.constantFrom(...names).chain((n) => value(n).map((v): [string, string] => [n, v])), { maxLength: 6 }) : fc.constant([] as [string, string][]);
+  const own = names.length
+    ? fc.array(
+        fc.constantFrom(...names).chain((n) => value(n).map((v): [string, string] => [n, v])),
+        { maxLength: 6 },
+      )
+    : fc.constant([] as [string, string][]);
   return fc.tuple(own, fc.array(fc.tuple(nastyString, nastyString), { maxLength: 2 })).map(([a, b]) => [...a, ...b]);
 }
 

@@ -16,8 +16,13 @@ export async function tableNames(): Promise<string[]> {
 /** CHECKSUM TABLE of every table (row count beside it, for a readable failure). */
 export async function fingerprint(exclude: readonly string[] = []): Promise<Fingerprint> {
   const names = (await tableNames()).filter((name) => !exclude.includes(name));
-  const sums = await db().sequelize.query<{ Table: string; Checksum: string | number | null }>(`CHECKSUM TABLE ${names.map((n) => `\`${n}\``).join(', ')}`, { type: QueryTypes.SELECT });
-  const counts = await db().sequelize.query<{ name: string; n: number | string }>(names.map((n) => `SELECT '${n}' AS name, COUNT(*) AS n FROM \`${n}\``).join(' UNION ALL '), { type: QueryTypes.SELECT });
+  const sums = await db().sequelize.query<{ Table: string; Checksum: string | number | null }>(`CHECKSUM TABLE ${names.map((n) => `\`${n}\``).join(', ')}`, {
+    type: QueryTypes.SELECT,
+  });
+  const counts = await db().sequelize.query<{ name: string; n: number | string }>(
+    names.map((n) => `SELECT '${n}' AS name, COUNT(*) AS n FROM \`${n}\``).join(' UNION ALL '),
+    { type: QueryTypes.SELECT },
+  );
   const count = new Map(counts.map((c) => [c.name, Number(c.n)]));
   const out: Fingerprint = {};
   for (const row of sums) {

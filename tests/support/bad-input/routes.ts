@@ -63,8 +63,16 @@ const badIdValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.constantFrom({}, { id: MISSING_ID }, [], [MISSING_ID, MISSING_ID], [[]]),
 );
 const notString: fc.Arbitrary<unknown> = fc.oneof(nastyNumber, fc.boolean(), fc.constant(null), fc.constantFrom([], ['a'], {}, { a: 'b' }));
-const longerThan = (n: number) => fc.oneof(fc.constant('x'.repeat(n + 1)), hugeString.filter((s) => s.trim().length > n));
-const shortTrimmed = (n: number) => fc.oneof(fc.constantFrom('', ' ', '\t'), fc.string({ maxLength: n + 4 }).filter((s) => s.trim().length < n));
+const longerThan = (n: number) =>
+  fc.oneof(
+    fc.constant('x'.repeat(n + 1)),
+    hugeString.filter((s) => s.trim().length > n),
+  );
+const shortTrimmed = (n: number) =>
+  fc.oneof(
+    fc.constantFrom('', ' ', '\t'),
+    fc.string({ maxLength: n + 4 }).filter((s) => s.trim().length < n),
+  );
 const notMatching = (re: RegExp, transform: (s: string) => string = (s) => s) => nastyString.filter((s) => !re.test(transform(s)));
 const SLUG = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 
@@ -72,21 +80,48 @@ const SLUG = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 
 // Real quiz slugs (content/quizzes/*.json) would start a real attempt: the sweep never names one.
 const REAL_QUIZZES = new Set(fs.readdirSync(path.resolve(__dirname, '../../../content/quizzes')).map((f) => f.replace(/\.json$/, '')));
-const quizParam = slugParam(['pickling-and-canning--no-such-lesson', 'volunteer-refresher--nope', 'pickling-and-canning', 'a--b', '--', 'pickling-and-canning--acidity/../final-exam', 'PICKLING-AND-CANNING--ACIDITY']).filter(
-  (s) => !REAL_QUIZZES.has(s) && !REAL_QUIZZES.has(s.trim().toLowerCase()),
+const quizParam = slugParam([
+  'pickling-and-canning--no-such-lesson',
+  'volunteer-refresher--nope',
+  'pickling-and-canning',
+  'a--b',
+  '--',
+  'pickling-and-canning--acidity/../final-exam',
+  'PICKLING-AND-CANNING--ACIDITY',
+]).filter((s) => !REAL_QUIZZES.has(s) && !REAL_QUIZZES.has(s.trim().toLowerCase()));
+const serialParam = fc.oneof(
+  nastyString,
+  fc.stringMatching(/^[0-9A-Z]{16}$/),
+  fc.stringMatching(/^[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}$/),
+  fc.constantFrom('%', '%zz', '%E0%A4%A', 'a%2Fb', '0000-0000-0000-0000'),
 );
-const serialParam = fc.oneof(nastyString, fc.stringMatching(/^[0-9A-Z]{16}$/), fc.stringMatching(/^[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}$/), fc.constantFrom('%', '%zz', '%E0%A4%A', 'a%2Fb', '0000-0000-0000-0000'));
 const courseParam = slugParam(['no-such-course', 'pickling-and-canning-x', 'volunteer']);
 
 // ---- bodies ----------------------------------------------------------------------------------------
 
-const answerValue = fc.oneof(fc.string({ minLength: 1, maxLength: 20 }), fc.boolean(), fc.array(fc.string({ minLength: 1, maxLength: 20 }), { maxLength: 3 }), fc.record({ value: fc.double({ noNaN: true, noDefaultInfinity: true }), unit: fc.constantFrom('g', 'mL', 'ft') }));
+const answerValue = fc.oneof(
+  fc.string({ minLength: 1, maxLength: 20 }),
+  fc.boolean(),
+  fc.array(fc.string({ minLength: 1, maxLength: 20 }), { maxLength: 3 }),
+  fc.record({ value: fc.double({ noNaN: true, noDefaultInfinity: true }), unit: fc.constantFrom('g', 'mL', 'ft') }),
+);
 const submitFields: Record<string, FieldSpec> = {
   answers: {
     ok: fc.dictionary(fc.string({ minLength: 1, maxLength: 12 }), answerValue, { maxKeys: 4 }),
     bad: requiredBad(
       fc.oneof(nastyString, nastyNumber, fc.boolean(), fc.constant(null), fc.array(answerValue)),
-      fc.constantFrom({ q1: 5 }, { q1: '' }, { q1: 'x'.repeat(21) }, { '': 'a' }, { q1: { value: 'a', unit: 'g' } }, { q1: { value: 1, unit: 'furlong' } }, { q1: { value: 1, unit: 'g', extra: 1 } }, { q1: Array(13).fill('a') }, { ['k'.repeat(121)]: 'a' }, { q1: null }),
+      fc.constantFrom(
+        { q1: 5 },
+        { q1: '' },
+        { q1: 'x'.repeat(21) },
+        { '': 'a' },
+        { q1: { value: 'a', unit: 'g' } },
+        { q1: { value: 1, unit: 'furlong' } },
+        { q1: { value: 1, unit: 'g', extra: 1 } },
+        { q1: Array(13).fill('a') },
+        { ['k'.repeat(121)]: 'a' },
+        { q1: null },
+      ),
     ),
   },
 };
@@ -94,16 +129,31 @@ const submitFields: Record<string, FieldSpec> = {
 const reasonFields = (min: number, max: number, optional: boolean): Record<string, FieldSpec> => ({
   reason: {
     ok: fc.string({ minLength: min + 1, maxLength: Math.min(max, 60) }),
-    bad: optional ? fc.oneof(notString.filter((v) => v !== undefined), longerThan(max)) : requiredBad(notString, shortTrimmed(min), longerThan(max)),
+    bad: optional
+      ? fc.oneof(
+          notString.filter((v) => v !== undefined),
+          longerThan(max),
+        )
+      : requiredBad(notString, shortTrimmed(min), longerThan(max)),
   },
 });
 
 const criterion = fc.record({ verdict: fc.constantFrom('met', 'not_met'), comment: fc.string({ maxLength: 20 }) });
 const reviewFields: Record<string, FieldSpec> = {
-  decision: { ok: fc.constantFrom('approved', 'changes_requested'), bad: requiredBad(notString, nastyString.filter((s) => !['approved', 'changes_requested'].includes(s))) },
+  decision: {
+    ok: fc.constantFrom('approved', 'changes_requested'),
+    bad: requiredBad(
+      notString,
+      nastyString.filter((s) => !['approved', 'changes_requested'].includes(s)),
+    ),
+  },
   rubric: {
-    ok: fc.record(Object.fromEntries(['rims-and-lids', 'headspace', 'liquid-covers', 'no-siphoning', 'colour-texture', 'labelled'].map((id) => [id, criterion]))),
-    bad: requiredBad(fc.oneof(nastyString, nastyNumber, fc.constant(null), fc.constantFrom([], {}, { headspace: { verdict: 'maybe' } }, { 'rims-and-lids': 'met' }))),
+    ok: fc.record(
+      Object.fromEntries(['rims-and-lids', 'headspace', 'liquid-covers', 'no-siphoning', 'colour-texture', 'labelled'].map((id) => [id, criterion])),
+    ),
+    bad: requiredBad(
+      fc.oneof(nastyString, nastyNumber, fc.constant(null), fc.constantFrom([], {}, { headspace: { verdict: 'maybe' } }, { 'rims-and-lids': 'met' })),
+    ),
   },
   comment: { ok: fc.string({ maxLength: 40 }), bad: fc.oneof(notString, longerThan(2000)) },
 };
@@ -136,8 +186,30 @@ const practicalBadField: fc.Arbitrary<[string, unknown]> = fc.oneof(
   fc.tuple(fc.constant('saltG'), fc.oneof(nastyString, fc.constantFrom(-1, 1e99, 5_001, null))),
   fc.tuple(fc.constantFrom('vinegarAcidityPct', 'vinegarMl', 'waterMl', 'headspaceIn'), fc.oneof(nastyString, fc.constantFrom(-1, 1e99, -1e99, null, 20_001))),
   fc.tuple(fc.constant('batchDate'), fc.oneof(notString, nastyString, fc.constantFrom('2999-01-01', '1999-12-31', '2026-02-30', '2026-13-01'))),
-  fc.tuple(fc.constant('photoIds'), fc.oneof(notString, fc.constantFrom([], [MISSING_ID], [MISSING_ID, MISSING_ID], Array(7).fill(0).map((_, i) => MISSING_ID - i), [-1, 0], ['1', '2']))),
-  fc.tuple(fc.constantFrom('recipeTitle', 'recipeSource', 'notes'), fc.oneof(notString.filter((v) => v !== undefined), fc.constant('x'.repeat(2_001)), fc.constant(''))),
+  fc.tuple(
+    fc.constant('photoIds'),
+    fc.oneof(
+      notString,
+      fc.constantFrom(
+        [],
+        [MISSING_ID],
+        [MISSING_ID, MISSING_ID],
+        Array(7)
+          .fill(0)
+          .map((_, i) => MISSING_ID - i),
+        [-1, 0],
+        ['1', '2'],
+      ),
+    ),
+  ),
+  fc.tuple(
+    fc.constantFrom('recipeTitle', 'recipeSource', 'notes'),
+    fc.oneof(
+      notString.filter((v) => v !== undefined),
+      fc.constant('x'.repeat(2_001)),
+      fc.constant(''),
+    ),
+  ),
   fc.tuple(fc.constantFrom('jar', 'pack', 'method'), fc.oneof(notString, nastyString)),
 );
 const practicalFields: Record<string, FieldSpec> = {
@@ -154,14 +226,22 @@ const practicalFields: Record<string, FieldSpec> = {
 
 const slugField: FieldSpec = {
   ok: fc.constantFrom('pickling-and-canning', 'acidity', 'why-preserving-is-a-safety-job'),
-  bad: requiredBad(notString, fc.constantFrom('', ' ', 'Acidity', 'a b', 'a--b', '-a', 'a-', 'a_b', '../x', 'x'.repeat(121), '\u202Eacidity'), notMatching(SLUG, (s) => s.trim())),
+  bad: requiredBad(
+    notString,
+    fc.constantFrom('', ' ', 'Acidity', 'a b', 'a--b', '-a', 'a-', 'a_b', '../x', 'x'.repeat(121), '\u202Eacidity'),
+    notMatching(SLUG, (s) => s.trim()),
+  ),
 };
 
 const registerFields: Record<string, FieldSpec> = {
   name: { ok: fc.constantFrom('Juniper Vale', 'Ada', '𝔘𝔫𝔦'), bad: requiredBad(notString, shortTrimmed(1), longerThan(120)) },
   email: {
     ok: fc.constantFrom('new.person@test.example', 'X@Example.org'),
-    bad: requiredBad(notString, nastyString.filter((s) => !s.includes('@') || s.trim().length > 254), fc.constantFrom('a@', '@b', 'a@b', 'a b@c.d', 'a@b..c', `${'x'.repeat(250)}@example.org`)),
+    bad: requiredBad(
+      notString,
+      nastyString.filter((s) => !s.includes('@') || s.trim().length > 254),
+      fc.constantFrom('a@', '@b', 'a@b', 'a b@c.d', 'a@b..c', `${'x'.repeat(250)}@example.org`),
+    ),
   },
   password: { ok: fc.constant('a long pass phrase'), bad: requiredBad(notString, fc.string({ maxLength: 9 }), fc.constant('p'.repeat(201))) },
 };
@@ -178,7 +258,13 @@ const waiverFields: Record<string, FieldSpec> = {
   courseId: { ok: fc.constantFrom('', null, 1, '2'), bad: requiredBad(badIdValue.filter((v) => v !== null && v !== '')) },
   maxUses: { ok: fc.constantFrom(1, 10, '25', 1000), bad: requiredBad(fc.constantFrom(0, -1, 1001, 1.5, 'abc', null, {}, '1e99', 'NaN', '')) },
   expiresOn: { ok: fc.constantFrom('2027-06-30', '2027-01-01'), bad: requiredBad(notString, notMatching(/^\d{4}-\d{2}-\d{2}$/)) },
-  note: { ok: fc.constantFrom('Volunteers', '', '🥒'), bad: fc.oneof(notString.filter((v) => v !== undefined), longerThan(300)) },
+  note: {
+    ok: fc.constantFrom('Volunteers', '', '🥒'),
+    bad: fc.oneof(
+      notString.filter((v) => v !== undefined),
+      longerThan(300),
+    ),
+  },
 };
 
 const enrollFields: Record<string, FieldSpec> = {
@@ -217,7 +303,10 @@ const product = fc.constantFrom(...PRODUCT_IDS, 'no-such-product');
 const jar = fc.constantFrom(...JAR_SIZES, 'gallon');
 const unit = fc.constantFrom('cup', 'tbsp', 'mL', 'g', 'lb', 'F', 'C', 'ft', 'furlong');
 
-const clientAddress = fc.record({ 'x-forwarded-for': fc.oneof(fc.ipV4(), fc.ipV6(), fc.constantFrom('unknown', ' ', 'x'.repeat(300), '1.1.1.1, 2.2.2.2')) }, { requiredKeys: [] });
+const clientAddress = fc.record(
+  { 'x-forwarded-for': fc.oneof(fc.ipV4(), fc.ipV6(), fc.constantFrom('unknown', ' ', 'x'.repeat(300), '1.1.1.1, 2.2.2.2')) },
+  { requiredKeys: [] },
+);
 
 const tool = (names: string[], ok: Record<string, fc.Arbitrary<string>> = {}): SweepSpec => ({ who: EVERYONE, query: toolQuery(names, ok), mayAnswerOk: true });
 
@@ -229,24 +318,42 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/auth/[...nextauth]/route.ts#POST': { who: EVERYONE, special: 'nextauth', mayAnswerOk: true },
   'app/api/certificates/[serial]/pdf/route.ts#GET': { who: SIGNED_IN, params: { serial: serialParam } },
   'app/api/certificates/[serial]/route.ts#GET': { who: EVERYONE, params: { serial: serialParam }, headers: clientAddress },
-  'app/api/certificates/refresher/route.ts#POST': { who: ['learner'], body: badJsonBodies({ enrollmentId: { ok: fc.constant(MISSING_ID), bad: requiredBad(badIdValue, fc.constant(String(MISSING_ID))) } }) },
+  'app/api/certificates/refresher/route.ts#POST': {
+    who: ['learner'],
+    body: badJsonBodies({ enrollmentId: { ok: fc.constant(MISSING_ID), bad: requiredBad(badIdValue, fc.constant(String(MISSING_ID))) } }),
+  },
   'app/api/courses/[course]/workshops/route.ts#GET': { who: EVERYONE, params: { course: courseParam } },
   'app/api/desk/certificates/[id]/reissue/route.ts#POST': {
     who: DESK,
     params: { id: idParam },
-    body: badJsonBodies({ ...reasonFields(5, 500, false), holderName: { ok: fc.string({ minLength: 1, maxLength: 60 }).filter((s) => s.trim().length > 0), bad: fc.oneof(notString.filter((v) => v !== undefined && v !== null), longerThan(120)) } }),
+    body: badJsonBodies({
+      ...reasonFields(5, 500, false),
+      holderName: {
+        ok: fc.string({ minLength: 1, maxLength: 60 }).filter((s) => s.trim().length > 0),
+        bad: fc.oneof(
+          notString.filter((v) => v !== undefined && v !== null),
+          longerThan(120),
+        ),
+      },
+    }),
   },
   'app/api/desk/certificates/[id]/revoke/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(5, 500, false)) },
   'app/api/desk/certificates/route.ts#POST': { who: DESK, body: badJsonBodies({ enrollmentIds: idsField(100) }) },
   'app/api/desk/enrollments/route.ts#GET': {
     who: DESK,
-    query: badQuery(['course', 'workshop', 'status', 'eligible', 'q', 'page', 'pageSize'], { status: fc.constantFrom('active', 'completed', 'nope'), page: num, pageSize: num }),
+    query: badQuery(['course', 'workshop', 'status', 'eligible', 'q', 'page', 'pageSize'], {
+      status: fc.constantFrom('active', 'completed', 'nope'),
+      page: num,
+      pageSize: num,
+    }),
     mayAnswerOk: true,
   },
   'app/api/desk/options/route.ts#GET': { who: DESK, query: badQuery([]), mayAnswerOk: true },
   'app/api/desk/roster/route.ts#GET': {
     who: DESK,
-    query: badQuery(['ids', 'course', 'workshop', 'status', 'eligible'], { ids: fc.constantFrom(String(MISSING_ID), `${MISSING_ID},${MISSING_ID}`, '1,,2', ',', Array(5001).fill(MISSING_ID).join(',')) }),
+    query: badQuery(['ids', 'course', 'workshop', 'status', 'eligible'], {
+      ids: fc.constantFrom(String(MISSING_ID), `${MISSING_ID},${MISSING_ID}`, '1,,2', ',', Array(5001).fill(MISSING_ID).join(',')),
+    }),
     mayAnswerOk: true,
   },
   'app/api/enrollments/[id]/attendance/route.ts#POST': { who: STAFF, params: { id: idParam }, body: badJsonBodies(attendanceFields) },
@@ -263,13 +370,22 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/practicals/[id]/claim/route.ts#POST': { who: STAFF, params: { id: idParam } },
   'app/api/practicals/[id]/claim/route.ts#DELETE': { who: STAFF, params: { id: idParam } },
   'app/api/practicals/route.ts#POST': { who: ['learner'], body: badJsonBodies(practicalFields) },
-  'app/api/progress/route.ts#GET': { who: ['learner'], query: badQuery(['course'], { course: fc.constantFrom('pickling-and-canning', 'no-such-course') }), mayAnswerOk: true },
+  'app/api/progress/route.ts#GET': {
+    who: ['learner'],
+    query: badQuery(['course'], { course: fc.constantFrom('pickling-and-canning', 'no-such-course') }),
+    mayAnswerOk: true,
+  },
   'app/api/progress/route.ts#POST': { who: ['learner'], body: badJsonBodies({ courseSlug: slugField, lessonSlug: slugField }) },
   'app/api/quizzes/[quiz]/attempts/route.ts#POST': { who: ['learner'], params: { quiz: quizParam }, body: anyBody },
   'app/api/register/route.ts#POST': { who: EVERYONE, body: badJsonBodies(registerFields) },
   'app/api/tasting-table/submissions/route.ts#GET': {
     who: STAFF,
-    query: badQuery(['page', 'sort', 'status', 'workshop', 'flagged', 'olderThanDays'], { page: num, sort: fc.constantFrom('oldest', 'flags', 'x'), status: fc.constantFrom('all', 'approved', 'x'), flagged: fc.constantFrom('yes', 'any') }),
+    query: badQuery(['page', 'sort', 'status', 'workshop', 'flagged', 'olderThanDays'], {
+      page: num,
+      sort: fc.constantFrom('oldest', 'flags', 'x'),
+      status: fc.constantFrom('all', 'approved', 'x'),
+      flagged: fc.constantFrom('yes', 'any'),
+    }),
     mayAnswerOk: true,
   },
   'app/api/tools/batch/route.ts#GET': tool(['product', 'jar', 'jars'], { product, jar }),

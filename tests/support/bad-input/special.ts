@@ -2,7 +2,19 @@
 // next-auth's catch-all (forms, cookies, callback URLs), the payment webhook (raw body + signature)
 // and the photo upload (multipart).
 import fc from 'fast-check';
-import { badQuery, brokenObject, headerValue, hugeString, malformedJson, nastyNumber, nastyString, requiredBad, wrongContentType, wrongValue, type FieldSpec } from './arbitraries';
+import {
+  badQuery,
+  brokenObject,
+  headerValue,
+  hugeString,
+  malformedJson,
+  nastyNumber,
+  nastyString,
+  requiredBad,
+  wrongContentType,
+  wrongValue,
+  type FieldSpec,
+} from './arbitraries';
 
 export type RawRequest = {
   params?: Record<string, string | string[]>;
@@ -22,11 +34,49 @@ export const encode = (s: string) => encodeURIComponent(s.toWellFormed());
 export type NextAuthContext = { csrfToken: string; csrfCookie: string; sessionCookies: string[]; knownEmail: string };
 
 // A catch-all gets at least one non-empty segment from Next (/api/auth alone is not this route).
-const ACTIONS: string[][] = [['signin'], ['signin', 'credentials'], ['signin', 'nope'], ['callback'], ['callback', 'credentials'], ['callback', 'nope'], ['session'], ['csrf'], ['providers'], ['signout'], ['error'], ['verify-request'], ['_log'], ['webauthn-options']];
+const ACTIONS: string[][] = [
+  ['signin'],
+  ['signin', 'credentials'],
+  ['signin', 'nope'],
+  ['callback'],
+  ['callback', 'credentials'],
+  ['callback', 'nope'],
+  ['session'],
+  ['csrf'],
+  ['providers'],
+  ['signout'],
+  ['error'],
+  ['verify-request'],
+  ['_log'],
+  ['webauthn-options'],
+];
 
 export function nextAuthRequests(ctx: NextAuthContext, method: 'GET' | 'POST'): fc.Arbitrary<RawRequest> {
-  const action = fc.oneof({ weight: 3, arbitrary: fc.constantFrom(...ACTIONS) }, { weight: 1, arbitrary: fc.array(nastyString.filter((s) => s !== ''), { minLength: 1, maxLength: 3 }) });
-  const callbackUrl = fc.oneof(nastyString, fc.constantFrom('/pantry', 'http://localhost:3000/desk', 'javascript:alert(1)', 'data:text/html,x', '//evil.example/x', 'http://[::1', 'ftp://x', 'http://', '/\\evil.example', 'http://evil.example'));
+  const action = fc.oneof(
+    { weight: 3, arbitrary: fc.constantFrom(...ACTIONS) },
+    {
+      weight: 1,
+      arbitrary: fc.array(
+        nastyString.filter((s) => s !== ''),
+        { minLength: 1, maxLength: 3 },
+      ),
+    },
+  );
+  const callbackUrl = fc.oneof(
+    nastyString,
+    fc.constantFrom(
+      '/pantry',
+      'http://localhost:3000/desk',
+      'javascript:alert(1)',
+      'data:text/html,x',
+      '//evil.example/x',
+      'http://[::1',
+      'ftp://x',
+      'http://',
+      '/\\evil.example',
+      'http://evil.example',
+    ),
+  );
   const cookie = fc.oneof(
     fc.constant(ctx.csrfCookie),
     fc.constantFrom(...ctx.sessionCookies),
@@ -37,7 +87,10 @@ export function nextAuthRequests(ctx: NextAuthContext, method: 'GET' | 'POST'): 
   );
   const goodOrBadCallback = fc.oneof({ weight: 3, arbitrary: fc.constantFrom('/pantry', 'http://localhost:3000/desk') }, { weight: 1, arbitrary: callbackUrl });
   const query = fc
-    .tuple(badQuery(['error', 'csrf', 'json', 'nextauth'], { error: fc.constantFrom('CredentialsSignin', 'Throttled', 'Configuration') }), fc.array(goodOrBadCallback, { maxLength: 2 }))
+    .tuple(
+      badQuery(['error', 'csrf', 'json', 'nextauth'], { error: fc.constantFrom('CredentialsSignin', 'Throttled', 'Configuration') }),
+      fc.array(goodOrBadCallback, { maxLength: 2 }),
+    )
     .map(([q, callbacks]) => [...q, ...callbacks.map((c): [string, string] => ['callbackUrl', c])]);
   const form = fc.record(
     {
@@ -52,33 +105,59 @@ export function nextAuthRequests(ctx: NextAuthContext, method: 'GET' | 'POST'): 
     },
     { requiredKeys: [] },
   );
-  const formBody = form.map((f) => Object.entries(f).map(([k, v]) => `${k}=${encode(String(v))}`).join('&'));
+  const formBody = form.map((f) =>
+    Object.entries(f)
+      .map(([k, v]) => `${k}=${encode(String(v))}`)
+      .join('&'),
+  );
   const body: fc.Arbitrary<Pick<RawRequest, 'body' | 'contentType' | 'kind'>> =
     method === 'GET'
       ? fc.constant({ body: null, contentType: null, kind: 'GET' })
       : fc.oneof(
           { weight: 4, arbitrary: formBody.map((b) => ({ body: b, contentType: 'application/x-www-form-urlencoded', kind: 'form' })) },
           { weight: 2, arbitrary: malformedJson.map((b) => ({ body: b, contentType: 'application/json', kind: 'malformed JSON' })) },
-          { weight: 1, arbitrary: fc.oneof(fc.jsonValue(), form).map((v) => ({ body: JSON.stringify(v) ?? 'null', contentType: 'application/json', kind: 'JSON' })) },
+          {
+            weight: 1,
+            arbitrary: fc.oneof(fc.jsonValue(), form).map((v) => ({ body: JSON.stringify(v) ?? 'null', contentType: 'application/json', kind: 'JSON' })),
+          },
           { weight: 1, arbitrary: fc.tuple(wrongContentType, formBody).map(([t, b]) => ({ body: b, contentType: t, kind: 'wrong type' })) },
-          { weight: 1, arbitrary: hugeString.map((s) => ({ body: `csrfToken=${encode(s)}&email=${encode(s)}`, contentType: 'application/x-www-form-urlencoded', kind: 'huge form' })) },
+          {
+            weight: 1,
+            arbitrary: hugeString.map((s) => ({
+              body: `csrfToken=${encode(s)}&email=${encode(s)}`,
+              contentType: 'application/x-www-form-urlencoded',
+              kind: 'huge form',
+            })),
+          },
         );
-  const anything = fc.record({ action, query, cookies: fc.array(cookie, { maxLength: 3 }), body, origin: fc.option(headerValue) }).map(({ action, query, cookies, body, origin }) => ({
-    params: { nextauth: action },
-    query,
-    headers: { ...(cookies.length ? { cookie: cookies.join('; ') } : {}), ...(origin !== null ? { origin, 'x-forwarded-host': origin } : {}) },
-    ...body,
-  }));
+  const anything = fc
+    .record({ action, query, cookies: fc.array(cookie, { maxLength: 3 }), body, origin: fc.option(headerValue) })
+    .map(({ action, query, cookies, body, origin }) => ({
+      params: { nextauth: action },
+      query,
+      headers: { ...(cookies.length ? { cookie: cookies.join('; ') } : {}), ...(origin !== null ? { origin, 'x-forwarded-host': origin } : {}) },
+      ...body,
+    }));
   if (method === 'GET') return anything;
   // Sign-in attempts that pass the CSRF check, so bad e-mails and passwords reach authorize() and
   // its zod schema (a well-formed wrong one is counted by the sign-in throttle, as it should be).
   const signIn = fc
-    .record({ email: form.map((f) => f.email ?? ''), password: fc.oneof(nastyString, fc.constant('wrong-password-1')).filter((p) => p !== 'test-password-123'), json: fc.boolean() })
+    .record({
+      email: form.map((f) => f.email ?? ''),
+      password: fc.oneof(nastyString, fc.constant('wrong-password-1')).filter((p) => p !== 'test-password-123'),
+      json: fc.boolean(),
+    })
     .map(({ email, password, json }): RawRequest => ({
       params: { nextauth: ['callback', 'credentials'] },
       query: [],
       headers: { cookie: ctx.csrfCookie },
-      body: [`csrfToken=${encode(ctx.csrfToken)}`, `email=${encode(email)}`, `password=${encode(password)}`, 'callbackUrl=%2Fpantry', ...(json ? ['json=true'] : [])].join('&'),
+      body: [
+        `csrfToken=${encode(ctx.csrfToken)}`,
+        `email=${encode(email)}`,
+        `password=${encode(password)}`,
+        'callbackUrl=%2Fpantry',
+        ...(json ? ['json=true'] : []),
+      ].join('&'),
       contentType: 'application/x-www-form-urlencoded',
       kind: 'sign-in attempt with a valid CSRF token',
     }));
@@ -91,11 +170,23 @@ export type Signer = (payload: string, options?: { timestamp?: number; secret?: 
 
 /** Event-like bodies that are wrong in at least one of id, type, data.object: never an event the app should store. */
 const eventFields: Record<string, FieldSpec> = {
-  id: { ok: fc.constantFrom('evt_sweep_1', 'evt_sweep_2'), bad: requiredBad(fc.oneof(nastyNumber, fc.boolean(), fc.constant(null), fc.constantFrom([], {})), fc.constantFrom('', 'e'.repeat(256))) },
-  type: { ok: fc.constantFrom('checkout.session.completed', 'checkout.session.expired', 'charge.refunded', 'made.up'), bad: requiredBad(fc.oneof(nastyNumber, fc.boolean(), fc.constant(null), fc.constantFrom([], {})), fc.constantFrom('', 't'.repeat(101))) },
+  id: {
+    ok: fc.constantFrom('evt_sweep_1', 'evt_sweep_2'),
+    bad: requiredBad(fc.oneof(nastyNumber, fc.boolean(), fc.constant(null), fc.constantFrom([], {})), fc.constantFrom('', 'e'.repeat(256))),
+  },
+  type: {
+    ok: fc.constantFrom('checkout.session.completed', 'checkout.session.expired', 'charge.refunded', 'made.up'),
+    bad: requiredBad(fc.oneof(nastyNumber, fc.boolean(), fc.constant(null), fc.constantFrom([], {})), fc.constantFrom('', 't'.repeat(101))),
+  },
   data: {
-    ok: fc.constantFrom({ object: { id: 'cs_sweep', object: 'checkout.session', payment_status: 'paid', metadata: { enrollmentId: '987654321' } } }, { object: {} }),
-    bad: requiredBad(fc.oneof(nastyString, nastyNumber, fc.constant(null)), fc.constantFrom([], {}, { object: null }, { object: 'x' }, { object: [] }, { object: 5 })),
+    ok: fc.constantFrom(
+      { object: { id: 'cs_sweep', object: 'checkout.session', payment_status: 'paid', metadata: { enrollmentId: '987654321' } } },
+      { object: {} },
+    ),
+    bad: requiredBad(
+      fc.oneof(nastyString, nastyNumber, fc.constant(null)),
+      fc.constantFrom([], {}, { object: null }, { object: 'x' }, { object: [] }, { object: 5 }),
+    ),
   },
 };
 
@@ -158,7 +249,13 @@ export function photoRequests(): fc.Arbitrary<RawRequest> {
   const fileName = fc.oneof(fc.constantFrom('IMG_0001.jpg', 'photo.png', '../../etc/passwd', 'a\u0000b.jpg', '\u202Egpj.exe', ''), nastyString);
   const fileType = fc.constantFrom('image/jpeg', 'image/png', 'image/heic', 'text/html', 'application/octet-stream', '', 'image/svg+xml');
   const form = fc
-    .record({ course: fc.option(course), file: fc.option(fc.tuple(garbageFile, fileName, fileType), { freq: 8 }), photoAsText: fc.oneof({ weight: 6, arbitrary: fc.constant(null) }, { weight: 1, arbitrary: nastyString }), extra: fc.array(fc.tuple(nastyString, nastyString), { maxLength: 2 }), second: fc.boolean() })
+    .record({
+      course: fc.option(course),
+      file: fc.option(fc.tuple(garbageFile, fileName, fileType), { freq: 8 }),
+      photoAsText: fc.oneof({ weight: 6, arbitrary: fc.constant(null) }, { weight: 1, arbitrary: nastyString }),
+      extra: fc.array(fc.tuple(nastyString, nastyString), { maxLength: 2 }),
+      second: fc.boolean(),
+    })
     .map(({ course, file, photoAsText, extra, second }): RawRequest => {
       const data = new FormData();
       if (course !== null) data.set('course', course);
@@ -179,8 +276,40 @@ export function photoRequests(): fc.Arbitrary<RawRequest> {
   );
   return fc.oneof(
     { weight: 6, arbitrary: form },
-    { weight: 2, arbitrary: fc.tuple(brokenMultipart, fc.constantFrom('multipart/form-data; boundary=xyz', 'multipart/form-data', 'multipart/form-data; boundary=', 'multipart/form-data; boundary="', 'MULTIPART/FORM-DATA; boundary=xyz', 'multipart/mixed; boundary=xyz')).map(([body, contentType]): RawRequest => ({ query: [], headers: {}, body, contentType, kind: 'broken multipart' })) },
-    { weight: 1, arbitrary: fc.tuple(wrongContentType.filter((t) => !t.startsWith('multipart')), fc.oneof(garbageFile, nastyString)).map(([contentType, body]): RawRequest => ({ query: [], headers: {}, body, contentType, kind: 'not multipart' })) },
-    { weight: 1, arbitrary: fc.constantFrom('99999999999', '10551297', '-1', 'abc').map((length): RawRequest => ({ query: [], headers: { 'content-length': length }, body: '--xyz--', contentType: 'multipart/form-data; boundary=xyz', kind: 'declared length' })) },
+    {
+      weight: 2,
+      arbitrary: fc
+        .tuple(
+          brokenMultipart,
+          fc.constantFrom(
+            'multipart/form-data; boundary=xyz',
+            'multipart/form-data',
+            'multipart/form-data; boundary=',
+            'multipart/form-data; boundary="',
+            'MULTIPART/FORM-DATA; boundary=xyz',
+            'multipart/mixed; boundary=xyz',
+          ),
+        )
+        .map(([body, contentType]): RawRequest => ({ query: [], headers: {}, body, contentType, kind: 'broken multipart' })),
+    },
+    {
+      weight: 1,
+      arbitrary: fc
+        .tuple(
+          wrongContentType.filter((t) => !t.startsWith('multipart')),
+          fc.oneof(garbageFile, nastyString),
+        )
+        .map(([contentType, body]): RawRequest => ({ query: [], headers: {}, body, contentType, kind: 'not multipart' })),
+    },
+    {
+      weight: 1,
+      arbitrary: fc.constantFrom('99999999999', '10551297', '-1', 'abc').map((length): RawRequest => ({
+        query: [],
+        headers: { 'content-length': length },
+        body: '--xyz--',
+        contentType: 'multipart/form-data; boundary=xyz',
+        kind: 'declared length',
+      })),
+    },
   );
 }

@@ -18,7 +18,9 @@ export const GET = route<{ params: Promise<{ serial: string }> }>(async (request
   try {
     const result = await verifyForAddress(serial, address);
     if (!result.found && result.reason === 'malformed') {
-      throw new AppError('bad_request', 'That is not a Brinewright certificate serial: check the 16 characters again.', { fields: { serial: ['malformed or wrong check character'] } });
+      throw new AppError('bad_request', 'That is not a Brinewright certificate serial: check the 16 characters again.', {
+        fields: { serial: ['malformed or wrong check character'] },
+      });
     }
     if (!result.found) throw new AppError('not_found', 'No certificate has that serial.');
     return Response.json(result, { headers: { 'Cache-Control': 'no-store' } });

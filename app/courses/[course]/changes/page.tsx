@@ -13,7 +13,9 @@ export const generateStaticParams = courseParams;
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const course = getCourse((await params).course);
-  return course ? { title: `What changed: ${course.title}`, description: `Dated changes to the safety figures and advice of ${course.title}, each with its source.` } : {};
+  return course
+    ? { title: `What changed: ${course.title}`, description: `Dated changes to the safety figures and advice of ${course.title}, each with its source.` }
+    : {};
 }
 
 const KIND_LABEL = { figure: 'Safety figure', advice: 'Advice', lesson: 'New lesson' } as const;
@@ -35,7 +37,9 @@ export default async function CourseChangesPage({ params }: Props) {
           </Link>
         </p>
         <h1 className="text-3xl leading-tight font-bold">What changed in this course</h1>
-        <p className="text-ink-soft">{record?.intro ?? 'Changes to the safety figures and advice of this course are listed here, dated, with their sources.'}</p>
+        <p className="text-ink-soft">
+          {record?.intro ?? 'Changes to the safety figures and advice of this course are listed here, dated, with their sources.'}
+        </p>
       </header>
       {changes.length === 0 ? (
         <p>No changes have been published for this course yet.</p>

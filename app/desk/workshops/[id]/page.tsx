@@ -36,7 +36,17 @@ export default async function EditWorkshopPage({ params }: { params: Promise<{ i
           courses={courses}
           instructors={instructors}
           save={saveWorkshopAction}
-          defaults={{ courseId: String(w.courseId), date: start.date, startTime: start.time, endTime: end.time, timeZone: w.timeZone, place: w.place, seats: w.seats, instructorId: w.instructorId ? String(w.instructorId) : '', attendanceRequired: w.attendanceRequired }}
+          defaults={{
+            courseId: String(w.courseId),
+            date: start.date,
+            startTime: start.time,
+            endTime: end.time,
+            timeZone: w.timeZone,
+            place: w.place,
+            seats: w.seats,
+            instructorId: w.instructorId ? String(w.instructorId) : '',
+            attendanceRequired: w.attendanceRequired,
+          }}
         />
       </Card>
     </div>

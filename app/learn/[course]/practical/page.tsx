@@ -23,7 +23,9 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
       <div className="mx-auto max-w-3xl space-y-6">
         <h1 className="text-3xl font-bold">Practical batch</h1>
         <Card>
-          <p className="mb-4 text-ink-soft">The practical is for learners with an active enrollment in {course.title}. Enroll in the course first, then come back here.</p>
+          <p className="mb-4 text-ink-soft">
+            The practical is for learners with an active enrollment in {course.title}. Enroll in the course first, then come back here.
+          </p>
           <ButtonLink href={`/courses/${slug}`}>See the course</ButtonLink>
         </Card>
       </div>
@@ -47,8 +49,8 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
       <aside className="rounded-jar border-l-4 border-copper-500 bg-copper-50 p-4 text-sm" aria-label="Caution">
         <p className="font-semibold">Caution</p>
         <p>
-          Follow a tested recipe from a recognised food-safety authority exactly, and your local extension office&apos;s guidance for your altitude. A batch with no
-          flags is not thereby safe: discard any jar that leaks, bulges, spurts or smells off, without tasting it.
+          Follow a tested recipe from a recognised food-safety authority exactly, and your local extension office&apos;s guidance for your altitude. A batch
+          with no flags is not thereby safe: discard any jar that leaks, bulges, spurts or smells off, without tasting it.
         </p>
       </aside>
       <PracticalStatus courseSlug={slug} latest={latest} />

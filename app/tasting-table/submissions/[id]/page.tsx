@@ -41,7 +41,9 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
           <Badge tone={PRACTICAL_STATUS_TONE[round.status]}>{PRACTICAL_STATUS_LABEL[round.status]}</Badge>
           <span>
             {course.title} · submitted {when(round.submittedAt)}
-            {workshop ? ` · workshop ${new Date(workshop.startsAt).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })}, ${workshop.place.split(',')[0]}` : ' · self-paced'}
+            {workshop
+              ? ` · workshop ${new Date(workshop.startsAt).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })}, ${workshop.place.split(',')[0]}`
+              : ' · self-paced'}
           </span>
         </p>
       </header>
