@@ -1,5 +1,6 @@
 import 'server-only';
 import { forbidden, notFound } from 'next/navigation';
+import { cache } from 'react';
 import { isEnrolled } from '@/lib/access';
 import { requirePageRole } from '@/lib/auth/guard';
 import type { SessionUser } from '@/lib/auth/users';
@@ -20,9 +21,10 @@ export async function canReadMembersLesson(user: Pick<SessionUser, 'id' | 'role'
  * The one way to a lesson's body: unknown lessons are a 404, and a members-only lesson first passes
  * the reader's check (sign-in page when signed out, 403 without access). Pages and layouts render
  * in parallel, and a router request may render the page alone, so the page's data needs this check
- * of its own. A preview lesson reads no cookie, so its page stays prerendered.
+ * of its own. A preview lesson reads no cookie, so its page stays prerendered. Memoised per request
+ * (React `cache`), so the layout and the page share one user and enrollment read.
  */
-export async function readLesson(courseSlug: string, lessonSlug: string): Promise<{ course: CourseContent; lesson: LessonContent }> {
+export const readLesson = cache(async (courseSlug: string, lessonSlug: string): Promise<{ course: CourseContent; lesson: LessonContent }> => {
   const course = getCourse(courseSlug);
   const lesson = getLesson(courseSlug, lessonSlug);
   if (!course || !lesson) notFound();
@@ -31,4 +33,4 @@ export async function readLesson(courseSlug: string, lessonSlug: string): Promis
     if (!(await canReadMembersLesson(user, course.slug))) forbidden();
   }
   return { course, lesson };
-}
+});
