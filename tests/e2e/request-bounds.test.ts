@@ -61,13 +61,14 @@ describe('bounded bodies', () => {
       }
     }
     // The server's allocator settles at its own high-water mark for socket buffers first (about
-    // 50 MB over three rounds here); after that, more bodies must not add to it.
+    // 50 MB over three rounds here); after that, more bodies must not add to it. RSS moves by a few
+    // MB on its own (10.5 MB once in CI-like runs), so 240 MB are sent and the bound is two bodies:
+    // a server that held each body, even for a moment, would grow by far more.
     for (let n = 0; n < 3; n++) await round(n);
     const before = serverRss();
-    for (let n = 3; n < 6; n++) await round(n);
+    for (let n = 3; n < 9; n++) await round(n);
     const grown = serverRss() - before;
-    // 120 MB more were sent; the server's resident memory grew by less than one of the bodies.
-    expect(grown, `the server grew by ${(grown / 1024 / 1024).toFixed(1)} MB`).toBeLessThan(TEN_MB);
+    expect(grown, `the server grew by ${(grown / 1024 / 1024).toFixed(1)} MB`).toBeLessThan(2 * TEN_MB);
     // And it still answers as usual.
     expect((await send('/api/health')).status).toBe(200);
   }, 120_000);
