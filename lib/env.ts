@@ -39,6 +39,8 @@ const EnvSchema = z
     // New accounts per client address: a class on one venue's Wi-Fi fits, a script does not.
     REGISTER_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
     REGISTER_WINDOW_MINUTES: z.coerce.number().int().positive().default(60),
+    // A session ends this many days after sign-in, however active (it also ends after 8 idle hours).
+    SESSION_MAX_DAYS: z.coerce.number().int().min(1).max(90).default(7),
     // Certificates (lib/certificates): the program named on the PDF, and the verification throttle.
     CERTIFICATE_PROGRAM_NAME: z.string().min(1).max(120).default('Cedar Hollow County home-preserving program'),
     VERIFY_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(60),

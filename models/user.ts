@@ -8,6 +8,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare role: CreationOptional<Role>;
   declare emailVerifiedAt: CreationOptional<Date | null>;
+  declare sessionVersion: CreationOptional<number>;
+  declare deactivatedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -20,6 +22,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         passwordHash: { type: DataTypes.STRING(100), allowNull: false },
         role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: 'learner' },
         emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
+        sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        deactivatedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -9,6 +9,7 @@ declare module 'next-auth' {
     email: string;
     name: string;
     role: Role;
+    sessionVersion: number;
   }
 }
 
@@ -16,5 +17,10 @@ declare module 'next-auth/jwt' {
   interface JWT {
     uid: number;
     role: Role;
+    /** The user's sessionVersion at sign-in (lib/auth/sessions.ts). */
+    sv?: number;
+    /** Sign-in time, seconds since the epoch: the absolute lifetime counts from it. */
+    sat?: number;
+    iat?: number;
   }
 }

@@ -5,14 +5,16 @@ import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { roleAllows, type Role } from '@/lib/roles';
 import { userFromCookies, usesSecureCookies } from './session';
-import { currentRole, type SessionUser } from './users';
+import { sessionIsLive } from './sessions';
+import { currentAccount, type SessionUser } from './users';
 
 /**
  * The signed-in user, or null: next-auth's session cookie decoded with next-auth's own `decode`
  * (lib/auth/session.ts), without running the NextAuth handler on every request. The role is the
  * one the database holds now, not the one written into the token at sign-in: a role an admin
- * changes applies from the user's next request, and an account that no longer exists is signed out.
- * That is one primary-key read per check.
+ * changes applies from the user's next request; an account that no longer exists or is deactivated,
+ * a session from before a password change or "sign out everywhere", and a sign-in older than
+ * SESSION_MAX_DAYS are signed out. That is one primary-key read per check.
  */
 export async function getCurrentUser(): Promise<SessionUser | null> {
   // cookies() first: it marks the page dynamic before the configuration is read (no prerendering).
@@ -20,8 +22,9 @@ export async function getCurrentUser(): Promise<SessionUser | null> {
   const env = getEnv();
   const fromToken = await userFromCookies(jar, { secret: env.NEXTAUTH_SECRET, secure: usesSecureCookies(env.NEXTAUTH_URL) });
   if (!fromToken) return null;
-  const role = await currentRole(fromToken.id);
-  return role ? { ...fromToken, role } : null;
+  const account = await currentAccount(fromToken.id);
+  if (!account || !sessionIsLive(fromToken, account, { nowSeconds: Date.now() / 1000, maxAgeDays: env.SESSION_MAX_DAYS })) return null;
+  return { id: fromToken.id, email: fromToken.email, name: fromToken.name, role: account.role };
 }
 
 /**

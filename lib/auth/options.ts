@@ -4,7 +4,8 @@ import CredentialsProvider from 'next-auth/providers/credentials';
 import { getEnv } from '@/lib/env';
 import { SignInSchema } from '@/lib/validations/user';
 import { ThrottledError } from './sign-in-throttle';
-import { currentRole, verifyCredentials } from './users';
+import { sessionIsLive } from './sessions';
+import { currentAccount, verifyCredentials } from './users';
 
 type HeaderBag = Record<string, string | string[] | undefined> | Headers | undefined;
 
@@ -35,7 +36,7 @@ export function authOptions(): NextAuthOptions {
           if (!parsed.success) return null;
           try {
             const user = await verifyCredentials(parsed.data.email, parsed.data.password, clientAddress(req?.headers));
-            return user ? { id: String(user.id), email: user.email, name: user.name, role: user.role } : null;
+            return user ? { id: String(user.id), email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion } : null;
           } catch (error) {
             // next-auth passes the message to the sign-in form as the error code.
             if (error instanceof ThrottledError) throw new Error('Throttled');
@@ -49,10 +50,16 @@ export function authOptions(): NextAuthOptions {
         if (user) {
           token.uid = Number(user.id);
           token.role = user.role;
+          token.sv = user.sessionVersion;
+          token.sat = Math.floor(Date.now() / 1000);
         } else if (typeof token.uid === 'number') {
+          const account = await currentAccount(token.uid);
+          const stamp = { sessionVersion: token.sv ?? 0, signedInAt: token.sat ?? token.iat ?? 0 };
+          // An ended session: next-auth answers the browser's session request with no session and clears the cookie.
+          if (!sessionIsLive(stamp, account, { nowSeconds: Date.now() / 1000, maxAgeDays: env.SESSION_MAX_DAYS })) throw new Error('Session ended');
           // The browser's session (its menus) follows a role an admin changed; the server's checks
           // read the role from the database on every request anyway (lib/auth/guard.ts).
-          token.role = (await currentRole(token.uid)) ?? token.role;
+          token.role = account!.role;
         }
         return token;
       },

@@ -31,7 +31,15 @@ describe('userFromCookies', () => {
   it('returns the user a token made by next-auth encode names, with the role from the token', async () => {
     const token = await encode({ token: claims, secret, maxAge: 60 });
     const user = await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false });
-    expect(user).toEqual({ id: 42, role: 'instructor', email: 'ada@cedarhollow.example', name: 'Ada Fenwick' });
+    expect(user).toMatchObject({ id: 42, role: 'instructor', email: 'ada@cedarhollow.example', name: 'Ada Fenwick', sessionVersion: 0 });
+    // A token without a sign-in stamp counts from when it was issued (jose's iat).
+    expect(Math.abs(user!.signedInAt - Date.now() / 1000)).toBeLessThan(5);
+  });
+
+  it('reads the session stamp (version and sign-in time) the jwt callback writes', async () => {
+    const token = await encode({ token: { ...claims, sv: 4, sat: 1_700_000_000 }, secret, maxAge: 60 });
+    const user = await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false });
+    expect(user).toMatchObject({ id: 42, sessionVersion: 4, signedInAt: 1_700_000_000 });
   });
 
   it('reads a token split over two cookie chunks', async () => {

@@ -1,6 +1,7 @@
 import 'server-only';
 import { decode } from 'next-auth/jwt';
 import { ROLES } from '@/lib/roles';
+import type { SessionStamp } from './sessions';
 import type { SessionUser } from './users';
 
 // Reads the signed-in user straight from next-auth's session cookie, with next-auth's own `decode`
@@ -40,14 +41,21 @@ export function sessionTokenFrom(cookies: readonly CookieLike[], secure: boolean
  * The user the session cookie names, or null: no cookie, a token that does not decrypt with the
  * secret, an expired token (jose checks `exp`, with next-auth's 15 s clock tolerance), or claims
  * that are not a user of a known role. The role is the one in the token, written at sign-in;
- * getCurrentUser (lib/auth/guard.ts) replaces it with the role the database holds now.
+ * getCurrentUser (lib/auth/guard.ts) replaces it with the role the database holds now, and checks
+ * the stamp (session version, sign-in time) against the account (lib/auth/sessions.ts).
  */
-export async function userFromCookies(cookies: readonly CookieLike[], options: { secret: string; secure: boolean }): Promise<SessionUser | null> {
+export async function userFromCookies(
+  cookies: readonly CookieLike[],
+  options: { secret: string; secure: boolean },
+): Promise<(SessionUser & SessionStamp) | null> {
   const token = sessionTokenFrom(cookies, options.secure);
   if (!token) return null;
   const claims = await decodeCached(token, options.secret);
   if (!claims || typeof claims.uid !== 'number' || !ROLES.includes(claims.role)) return null;
-  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', role: claims.role };
+  // A token without a stamp (written before sessions had versions) counts as version 0, signed in when issued.
+  const sessionVersion = typeof claims.sv === 'number' ? claims.sv : 0;
+  const signedInAt = typeof claims.sat === 'number' ? claims.sat : typeof claims.iat === 'number' ? claims.iat : 0;
+  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', role: claims.role, sessionVersion, signedInAt };
 }
 
 type Claims = NonNullable<Awaited<ReturnType<typeof decode>>>;

@@ -9,6 +9,7 @@ import { getEnv } from '@/lib/env';
 import { takeOrThrow } from '@/lib/throttle';
 import type { RegisterInput } from '@/lib/validations/user';
 import { countSignInAttempt } from './sign-in-throttle';
+import type { AccountState } from './sessions';
 
 export { ThrottledError } from './sign-in-throttle';
 
@@ -17,6 +18,8 @@ const COST = 10;
 const DUMMY_HASH = bcrypt.hashSync('brinewright-no-such-account', COST);
 
 export type SessionUser = { id: number; email: string; name: string; role: Role };
+/** A user who just proved their password: the session token records the account's sessionVersion. */
+export type SignedInUser = SessionUser & { sessionVersion: number };
 
 export const hashPassword = (plain: string) => bcrypt.hash(plain, COST);
 
@@ -60,17 +63,18 @@ export async function verifyCredentials(
   plain: string,
   address: string,
   options: { sleep?: (ms: number) => Promise<void> } = {},
-): Promise<SessionUser | null> {
+): Promise<SignedInUser | null> {
   const takeBack = await countSignInAttempt({ email: emailAddress, address }, options);
   const user = await db().User.findOne({ where: { email: emailAddress } });
   const ok = await bcrypt.compare(plain, user?.passwordHash ?? DUMMY_HASH);
-  if (!user || !ok) return null;
+  // A deactivated account keeps its records but cannot sign in: the same answer as a wrong password.
+  if (!user || !ok || user.deactivatedAt) return null;
   await takeBack();
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion };
 }
 
-/** The role a user has now, or null when there is no such user (one primary-key read). */
-export async function currentRole(userId: number): Promise<Role | null> {
-  const row = await db().User.findByPk(userId, { attributes: ['role'], raw: true });
-  return row?.role ?? null;
+/** The role, session version and deactivation of a user now, or null when there is no such user (one primary-key read). */
+export async function currentAccount(userId: number): Promise<AccountState | null> {
+  const row = await db().User.findByPk(userId, { attributes: ['role', 'sessionVersion', 'deactivatedAt'], raw: true });
+  return row ? { role: row.role, sessionVersion: row.sessionVersion, deactivatedAt: row.deactivatedAt } : null;
 }

@@ -2,7 +2,8 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { POST as register } from '@/app/api/register/route';
 import { requireRole } from '@/lib/auth/guard';
 import { authOptions } from '@/lib/auth/options';
-import { verifyCredentials } from '@/lib/auth/users';
+import { endSessions } from '@/lib/auth/sessions';
+import { verifyCredentials, type SessionUser } from '@/lib/auth/users';
 import { changeRole } from '@/lib/users-admin';
 import { db } from '@/models';
 import { createUser, resetDatabase } from '../support/db';
@@ -96,12 +97,62 @@ describe('changeRole', () => {
     // The browser's session (/api/auth/session runs the jwt callback) follows as well.
     const jwt = authOptions().callbacks!.jwt!;
     const token = await jwt({
-      token: { uid: instructor.id, role: 'instructor', email: instructor.email, name: instructor.name },
+      token: { uid: instructor.id, role: 'instructor', email: instructor.email, name: instructor.name, sv: 0, sat: Math.floor(Date.now() / 1000) },
       user: undefined as never,
       account: null,
     });
     expect(token.role).toBe('coordinator');
     await db().User.destroy({ where: { id: instructor.id } });
     await expect(requireRole()).rejects.toMatchObject({ status: 401 });
+  });
+});
+
+describe('sessions that end', () => {
+  const jwt = () => authOptions().callbacks!.jwt!;
+  const tokenOf = (user: SessionUser, stamp: { sv: number; sat: number }) => ({ uid: user.id, role: user.role, email: user.email, name: user.name, ...stamp });
+  const now = () => Math.floor(Date.now() / 1000);
+
+  it('ends every session of a user when the session version is raised, on the server and in the browser', async () => {
+    const learner = await createUser('learner');
+    actAs(learner);
+    await expect(requireRole()).resolves.toMatchObject({ id: learner.id });
+    await expect(jwt()({ token: tokenOf(learner, { sv: 0, sat: now() }), user: undefined as never, account: null })).resolves.toMatchObject({
+      uid: learner.id,
+    });
+    await endSessions(learner.id);
+    expect((await db().User.findByPk(learner.id))?.sessionVersion).toBe(1);
+    await expect(requireRole()).rejects.toMatchObject({ status: 401 });
+    await expect(jwt()({ token: tokenOf(learner, { sv: 0, sat: now() }), user: undefined as never, account: null })).rejects.toThrow('Session ended');
+    // A new sign-in records the new version.
+    const signedIn = await verifyCredentials(learner.email, 'test-password-123', 'sessions-test');
+    expect(signedIn?.sessionVersion).toBe(1);
+    await expect(jwt()({ token: tokenOf(learner, { sv: 1, sat: now() }), user: undefined as never, account: null })).resolves.toMatchObject({ sv: 1 });
+  });
+
+  it('refuses a deactivated account: its session ends and it cannot sign in, while its row stays', async () => {
+    const learner = await createUser('learner');
+    actAs(learner);
+    await db().User.update({ deactivatedAt: new Date() }, { where: { id: learner.id } });
+    await expect(requireRole()).rejects.toMatchObject({ status: 401 });
+    expect(await verifyCredentials(learner.email, 'test-password-123', 'sessions-test')).toBeNull();
+    expect(await db().User.count({ where: { id: learner.id } })).toBe(1);
+  });
+
+  it('ends a session older than SESSION_MAX_DAYS however fresh its cookie', async () => {
+    const learner = await createUser('learner');
+    const eightDaysAgo = now() - 8 * 24 * 60 * 60;
+    await expect(jwt()({ token: tokenOf(learner, { sv: 0, sat: eightDaysAgo }), user: undefined as never, account: null })).rejects.toThrow('Session ended');
+  });
+
+  it('stamps a new sign-in with the account version and the time', async () => {
+    const learner = await createUser('learner');
+    const before = now();
+    const token = await jwt()({
+      token: {} as never,
+      user: { id: String(learner.id), email: learner.email, name: learner.name, role: 'learner', sessionVersion: 3 },
+      account: null,
+    });
+    expect(token).toMatchObject({ uid: learner.id, sv: 3 });
+    expect(token.sat).toBeGreaterThanOrEqual(before);
   });
 });
