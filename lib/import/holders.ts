@@ -67,6 +67,7 @@ type Planned = PreviewLine & { data?: HolderLine; courseId?: number; courseTitle
 /** Decides each line against the database: create, skip as a duplicate, or refuse with the reason. */
 async function plan(parsed: Parsed[], transaction?: Transaction): Promise<Planned[]> {
   const { sequelize } = db();
+  // Raw SQL: set-wise lookups (every e-mail, serial and certificate of the file at once) read as flat rows inside the import's transaction.
   const q = <T extends object>(sql: string, replacements: Record<string, unknown>) =>
     sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction });
   const courses = await q<{ id: number; slug: string; title: string }>('SELECT id, slug, title FROM courses', {});
@@ -163,6 +164,7 @@ export async function importHolders(text: string, actorId: number): Promise<Impo
   const unusable = await hashPassword(randomBytes(32).toString('hex'));
   return sequelize.transaction(async (transaction) => {
     // Imports run one after the other (they lock the course rows), so one file imported twice at once creates once.
+    // Raw SQL: a lock only (FOR UPDATE on every course row).
     await sequelize.query('SELECT id FROM courses FOR UPDATE', { transaction });
     const lines = await plan(parsed, transaction);
     const preview = summarize(lines);
