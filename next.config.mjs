@@ -1,5 +1,3 @@
-import { membersLessonRoutes } from './lib/content/members-lesson-routes.mjs';
-
 // `next dev` runs with NODE_ENV=development; `next build` and `next start` with production.
 const isDev = process.env.NODE_ENV === 'development';
 
@@ -38,6 +36,16 @@ export const securityHeaders = [
 // on 127.0.0.1; behind a TLS-terminating proxy (which sets X-Forwarded-Proto: https) it is sent.
 const httpsOnlyHeaders = [{ key: 'Strict-Transport-Security', value: 'max-age=31536000; includeSubDomains' }];
 
+// The lesson route (app/learn/[course]/[lesson]); the practical's page beside it is not a lesson.
+const LESSON_PATH = '/learn/:course/:lesson((?!practical$)[^/]+)';
+// next-auth's session cookie on http and on https (lib/auth/session.ts reads both).
+const SESSION_COOKIES = ['next-auth.session-token', '__Secure-next-auth.session-token', 'next-auth.session-token.0', '__Secure-next-auth.session-token.0'].map(
+  (key) => /** @type {const} */ ({ type: 'cookie', key }),
+);
+// The same as the prerendered public pages' (the root layout's revalidate and expireTime below).
+const PUBLIC_PAGE_CACHE = 's-maxage=300, stale-while-revalidate=300';
+const PRIVATE_PAGE_CACHE = 'private, no-cache, no-store, max-age=0, must-revalidate';
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize and its driver load modules dynamically; the bundler must leave them to Node.
@@ -45,31 +53,19 @@ const nextConfig = {
   // Lets a second build (tests, a helper's branch of work) live beside the demo's.
   distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
-  // With the layout's revalidate (300 s): Cache-Control s-maxage=300, stale-while-revalidate=300 on public pages.
+  // With the layout's revalidate (300 s): Cache-Control s-maxage=300, stale-while-revalidate=300 on prerendered public pages.
   expireTime: 600,
-  // Lessons share one address, /learn/<course>/<lesson>. The public preview lessons are the only
-  // params app/learn/[course]/[lesson] prerenders (dynamicParams = false, so unknown lessons answer
-  // 404 there). Every members-only lesson is rewritten, without changing the address, to
-  // app/learn/[course]/[lesson]/members, which checks the session and the enrollment and renders per
-  // request. The rewrite is an afterFiles one, listed lesson by lesson from the front matter: it is
-  // decided before the dynamic [lesson] route, so the router's own (RSC) requests reach the members
-  // page too. (A fallback rewrite reached it only for HTML: Next 16.4 first matched the prerendered
-  // route's 404 for the router's requests and failed them with a 500, "Expected RSC response".)
-  // A rewrite in the router costs far less than running a proxy (middleware) on every lesson request.
-  async rewrites() {
-    return {
-      afterFiles: membersLessonRoutes().map(({ course, lessons }) => ({
-        source: `/learn/${course}/:lesson(${lessons.join('|')})`,
-        destination: `/learn/${course}/:lesson/members`,
-      })),
-    };
-  },
   experimental: {
     authInterrupts: true,
   },
   async headers() {
     return [
       { source: '/:path*', headers: securityHeaders },
+      // Lessons render per request. An answer to a request without a session cookie cannot depend on
+      // who asked, so the proxy or a CDN may keep it for minutes (a lesson turned members-only leaves
+      // them soon); with the cookie it is the reader's own. Next keeps a Cache-Control set here.
+      { source: LESSON_PATH, missing: SESSION_COOKIES, headers: [{ key: 'Cache-Control', value: PUBLIC_PAGE_CACHE }] },
+      ...SESSION_COOKIES.map((cookie) => ({ source: LESSON_PATH, has: [cookie], headers: [{ key: 'Cache-Control', value: PRIVATE_PAGE_CACHE }] })),
       { source: '/:path*', has: [{ type: 'header', key: 'x-forwarded-proto', value: 'https' }], headers: httpsOnlyHeaders },
     ];
   },

@@ -19,6 +19,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           environment: 'node',
+          isolate: false,
           include: ['lib/**/*.test.ts', 'tests/unit/**/*.test.ts', 'content/**/*.test.ts'],
         },
       },
@@ -27,6 +28,7 @@ export default defineConfig({
         test: {
           name: 'components',
           environment: 'jsdom',
+          isolate: false,
           include: ['components/**/*.test.tsx', 'app/**/*.test.tsx', 'tests/components/**/*.test.tsx'],
           setupFiles: ['tests/setup/components.ts'],
         },
@@ -40,6 +42,8 @@ export default defineConfig({
           globalSetup: ['tests/setup/integration-global.ts'],
           setupFiles: ['tests/setup/integration.ts'],
           fileParallelism: false,
+          // After the unit and component tests, before the browser tests (whose build runs meanwhile).
+          sequence: { groupOrder: 1 },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },
@@ -51,7 +55,10 @@ export default defineConfig({
           environment: 'node',
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/setup/e2e-global.ts'],
+          // Waits for the build and the app, which the global setup starts in the background.
+          setupFiles: ['tests/setup/e2e.ts'],
           fileParallelism: false,
+          sequence: { groupOrder: 2 },
           testTimeout: 90_000,
           hookTimeout: 300_000,
         },

@@ -37,7 +37,8 @@ export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> 
   try {
     response = await fetch(url, {
       ...init,
-      headers: { accept: 'application/json', ...(init?.body ? { 'content-type': 'application/json' } : {}), ...(init?.headers ?? {}) },
+      // A FormData body sets its own multipart type with the boundary.
+      headers: { accept: 'application/json', ...(typeof init?.body === 'string' ? { 'content-type': 'application/json' } : {}), ...(init?.headers ?? {}) },
     });
   } catch {
     throw new FetchError(0, {}, UNREACHABLE);
@@ -50,4 +51,9 @@ export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> 
 /** POST a JSON body (or none) to a route handler. */
 export function postJson<T>(url: string, body?: unknown): Promise<T> {
   return fetchJson<T>(url, { method: 'POST', ...(body === undefined ? {} : { body: JSON.stringify(body) }) });
+}
+
+/** POST a multipart form (a file upload) to a route handler. */
+export function postForm<T>(url: string, form: FormData): Promise<T> {
+  return fetchJson<T>(url, { method: 'POST', body: form });
 }

@@ -54,6 +54,7 @@ export async function rebuildDatabase(url: string, options: { allowed: RegExp; p
   serverUrl.pathname = '/information_schema';
   const server = createSequelize(serverUrl.toString());
   try {
+    // Raw SQL: DDL on the server itself; there is no model for a database.
     await server.query(`DROP DATABASE IF EXISTS \`${name}\``);
     await server.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
   } finally {

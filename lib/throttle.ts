@@ -42,6 +42,7 @@ async function countOne(limit: Limit, now: Date): Promise<number> {
   for (let attempt = 1; ; attempt += 1) {
     try {
       // `hits` is assigned before `windowStartedAt`, so both conditions read the old window.
+      // Raw SQL: one INSERT … ON DUPLICATE KEY UPDATE counts and resets the window atomically; LAST_INSERT_ID carries the new count back.
       const [insertId, affectedRows] = (await sequelize.query(
         `INSERT INTO rate_limits (bucket, hits, windowStartedAt, createdAt, updatedAt)
          VALUES (:key, 1, :now, :now, :now)
@@ -62,6 +63,7 @@ async function countOne(limit: Limit, now: Date): Promise<number> {
 
 /** Seconds until the window of each bucket ends (read only when an attempt is refused). */
 async function secondsLeft(limits: Limit[], now: Date): Promise<number> {
+  // Raw SQL: rate_limits has no model (these four statements are its only readers and writers).
   const rows = await db().sequelize.query<{ bucket: string; windowStartedAt: Date }>(
     'SELECT bucket, windowStartedAt FROM rate_limits WHERE bucket IN (:keys)',
     {
@@ -90,6 +92,7 @@ export async function take(limits: Limit[], now: Date = new Date()): Promise<Ver
 /** Takes back one attempt from each bucket (a right password, a good code): only failures add up. */
 export async function giveBack(limits: Pick<Limit, 'bucket'>[]): Promise<void> {
   if (!limits.length) return;
+  // Raw SQL: an arithmetic UPDATE on several buckets in one statement, never below zero.
   await db().sequelize.query('UPDATE rate_limits SET hits = hits - 1 WHERE bucket IN (:keys) AND hits > 0', {
     replacements: { keys: limits.map((l) => keyOf(l.bucket)) },
   });
@@ -97,6 +100,7 @@ export async function giveBack(limits: Pick<Limit, 'bucket'>[]): Promise<void> {
 
 /** Drops windows that ended long ago (housekeeping; a stale row is also reset on its next hit). */
 export async function pruneThrottles(olderThanSeconds: number, now: Date = new Date()): Promise<void> {
+  // Raw SQL: rate_limits has no model.
   await db().sequelize.query('DELETE FROM rate_limits WHERE windowStartedAt < :cutoff', {
     replacements: { cutoff: new Date(now.getTime() - olderThanSeconds * 1000) },
   });

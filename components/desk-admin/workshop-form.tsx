@@ -5,11 +5,11 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import type { SaveState } from '@/app/desk/workshops/actions';
 import { Select } from '@/components/ui/select';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
+import { FetchError, errorMessage, postJson } from '@/lib/fetcher';
 import { WORKSHOP_TIME_ZONES, WorkshopSchema, type WorkshopInput } from '@/lib/validations/workshop';
 
 type Props = {
@@ -17,11 +17,10 @@ type Props = {
   defaults: WorkshopInput;
   courses: { id: number; title: string }[];
   instructors: { id: number; name: string }[];
-  save: (id: number | null, input: WorkshopInput) => Promise<SaveState>;
 };
 
-/** The coordinator's workshop form: react-hook-form with the same zod schema the server action uses. */
-export function WorkshopForm({ workshopId, defaults, courses, instructors, save }: Props) {
+/** The coordinator's workshop form: react-hook-form with the same zod schema its route handler uses. */
+export function WorkshopForm({ workshopId, defaults, courses, instructors }: Props) {
   const router = useRouter();
   const toast = useToast();
   const [message, setMessage] = useState<string | null>(null);
@@ -34,10 +33,12 @@ export function WorkshopForm({ workshopId, defaults, courses, instructors, save 
 
   const onSubmit = handleSubmit(async (values) => {
     setMessage(null);
-    const result = await save(workshopId, { ...values, instructorId: values.instructorId ?? '' });
-    if (!result.ok) {
-      setMessage(result.message);
-      for (const [field, messages] of Object.entries(result.fields ?? {})) setError(field as keyof WorkshopInput, { message: messages[0] });
+    try {
+      await postJson(workshopId ? `/api/desk/workshops/${workshopId}` : '/api/desk/workshops', { ...values, instructorId: values.instructorId ?? '' });
+    } catch (error) {
+      setMessage(errorMessage(error, 'The workshop could not be saved. Try again.'));
+      if (error instanceof FetchError)
+        for (const [field, messages] of Object.entries(error.fields)) if (field in defaults) setError(field as keyof WorkshopInput, { message: messages[0] });
       return;
     }
     toast.show(workshopId ? 'Workshop saved.' : 'Workshop added.', 'success');

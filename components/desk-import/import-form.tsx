@@ -1,10 +1,13 @@
 'use client';
 
-import { useActionState } from 'react';
-import { importAction, previewImportAction, type State } from '@/app/desk/import/actions';
+import { useState, type FormEvent } from 'react';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Table, TBody, TD, TH, THead, TR } from '@/components/ui/table';
+import { FetchError, errorMessage, postJson } from '@/lib/fetcher';
+import type { ImportPreview } from '@/lib/import/holders';
+
+type State = { step: 'upload' | 'preview' | 'done'; message?: string; preview?: ImportPreview; text?: string };
 
 const OUTCOME = {
   create: { label: 'Will be created', tone: 'brine' },
@@ -12,15 +15,50 @@ const OUTCOME = {
   refuse: { label: 'Refused', tone: 'beet' },
 } as const;
 
+/** The holder import: the browser reads the CSV file and sends its text to preview, then to import (one transaction, or nothing). */
 export function ImportForm() {
-  const [previewed, preview, previewing] = useActionState<State, FormData>(previewImportAction, { step: 'upload' });
-  const [imported, runImport, importing] = useActionState<State, FormData>(importAction, { step: 'upload' });
-  const current = imported.step !== 'upload' || imported.message ? imported : previewed;
+  const [current, setCurrent] = useState<State>({ step: 'upload' });
+  const [busy, setBusy] = useState<'preview' | 'import' | null>(null);
+
+  async function preview(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const file = new FormData(event.currentTarget).get('file');
+    const text = file instanceof File && file.size > 0 ? await file.text() : '';
+    if (!text) return setCurrent({ step: 'upload', message: 'Choose a CSV file to preview.' });
+    setBusy('preview');
+    try {
+      const { preview } = await postJson<{ preview: ImportPreview }>('/api/desk/import/preview', { text });
+      setCurrent({ step: 'preview', preview, text });
+    } catch (error) {
+      setCurrent({ step: 'upload', message: errorMessage(error, 'The file could not be previewed. Try again.') });
+    } finally {
+      setBusy(null);
+    }
+  }
+
+  async function runImport(text: string) {
+    setBusy('import');
+    try {
+      const { preview } = await postJson<{ preview: ImportPreview }>('/api/desk/import', { text });
+      setCurrent({
+        step: 'done',
+        preview,
+        message: `Imported ${preview.counts.create} certificate(s); ${preview.counts.skip} line(s) skipped as duplicates.`,
+      });
+    } catch (error) {
+      // A line refused since the preview: the server sends the new preview with its sentence.
+      const again = error instanceof FetchError ? (error.body.preview as ImportPreview | undefined) : undefined;
+      setCurrent({ step: 'preview', preview: again ?? current.preview, text, message: errorMessage(error, 'The import did not run. Try again.') });
+    } finally {
+      setBusy(null);
+    }
+  }
+
   const lines = current.preview?.lines ?? [];
   const counts = current.preview?.counts;
   return (
     <div className="space-y-6">
-      <form action={preview} className="space-y-3">
+      <form onSubmit={preview} className="space-y-3">
         <label htmlFor="import-file" className="block text-sm font-semibold">
           CSV file of certificate holders
         </label>
@@ -29,7 +67,7 @@ export function ImportForm() {
           First line: name, email, course, certificate_date, end_date, old_serial (old_serial may be empty). Dates as YYYY-MM-DD; course as its short name, e.g.
           pickling-and-canning.
         </p>
-        <Button type="submit" variant="secondary" pending={previewing}>
+        <Button type="submit" variant="secondary" pending={busy === 'preview'}>
           Preview the import
         </Button>
       </form>
@@ -68,12 +106,9 @@ export function ImportForm() {
             </TBody>
           </Table>
           {current.step === 'preview' && counts.refuse === 0 && counts.create > 0 ? (
-            <form action={runImport}>
-              <input type="hidden" name="text" value={current.text ?? ''} />
-              <Button type="submit" pending={importing}>
-                Import {counts.create} certificate{counts.create === 1 ? '' : 's'}
-              </Button>
-            </form>
+            <Button type="button" pending={busy === 'import'} onClick={() => runImport(current.text ?? '')}>
+              Import {counts.create} certificate{counts.create === 1 ? '' : 's'}
+            </Button>
           ) : null}
           {current.step === 'preview' && counts.refuse > 0 ? (
             <p>Correct the refused lines in the file and preview it again: nothing is imported while a line is refused.</p>

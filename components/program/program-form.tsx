@@ -1,16 +1,51 @@
 'use client';
 
-import { useActionState } from 'react';
-import { saveProgramAction, type State } from '@/app/admin/program/actions';
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
+import { FetchError, errorMessage, postForm, postJson } from '@/lib/fetcher';
 import type { ProgramIdentity } from '@/lib/program/settings';
 
+type State = { ok?: boolean; message?: string; fields?: Record<string, string[]> };
+const FIELDS = ['name', 'shortName', 'contactEmail', 'contactPhone', 'postalAddress', 'timeZone'] as const;
+
+/** The admin's program page: the fields as JSON to /api/program, then a chosen logo as a multipart upload to /api/program/logo. */
 export function ProgramForm({ program, timeZones }: { program: ProgramIdentity; timeZones: readonly string[] }) {
-  const [state, action, pending] = useActionState<State, FormData>(saveProgramAction, {});
+  const router = useRouter();
+  const [state, setState] = useState<State>({});
+  const [pending, setPending] = useState(false);
   const error = (field: string) => state.fields?.[field]?.[0];
+
+  async function onSubmit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    const logo = form.get('logo');
+    setPending(true);
+    let saved = false;
+    try {
+      await postJson('/api/program', Object.fromEntries(FIELDS.map((f) => [f, String(form.get(f) ?? '')])));
+      saved = true;
+      if (logo instanceof File && logo.size > 0) {
+        const upload = new FormData();
+        upload.set('logo', logo);
+        await postForm('/api/program/logo', upload);
+      }
+      setState({ ok: true, message: 'Program settings saved.' });
+      router.refresh();
+    } catch (e) {
+      const fields = e instanceof FetchError ? e.fields : undefined;
+      const problem =
+        fields && Object.keys(fields).length ? 'Please check the fields marked below.' : errorMessage(e, 'The settings could not be saved. Try again.');
+      setState({ message: saved ? `The settings were saved; the logo was not. ${problem}` : problem, fields });
+      if (saved) router.refresh();
+    } finally {
+      setPending(false);
+    }
+  }
+
   return (
-    <form action={action} className="max-w-xl space-y-4" encType="multipart/form-data">
+    <form onSubmit={onSubmit} noValidate className="max-w-xl space-y-4" aria-describedby="program-form-message">
       <div aria-live="polite" id="program-form-message" className={state.ok ? 'font-semibold text-brine-700' : 'font-semibold text-beet-600'}>
         {state.message}
       </div>

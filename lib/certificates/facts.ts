@@ -54,6 +54,7 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
   const result = new Map<number, EnrollmentStanding>();
   if (enrollmentIds.length === 0) return result;
   const { sequelize } = db();
+  // Raw SQL: one query per fact for the whole set of enrollments (the desk's eligibility of hundreds at once), read as flat rows.
   const q = <T extends object>(sql: string, replacements: Record<string, unknown>) =>
     sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction: options.transaction });
   const ids = [...new Set(enrollmentIds)];

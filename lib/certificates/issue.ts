@@ -36,6 +36,7 @@ async function signerFor(actorId: number | null, transaction: Transaction): Prom
 }
 
 async function existing(enrollmentId: number, transaction?: Transaction) {
+  // Raw SQL: two columns read inside the issuing transaction, without building a model instance.
   const [row] = await db().sequelize.query<{ id: number; serial: string }>('SELECT id, serial FROM certificates WHERE enrollmentId = :enrollmentId', {
     replacements: { enrollmentId },
     type: QueryTypes.SELECT,
@@ -76,6 +77,7 @@ export async function issueCertificate(enrollmentId: number, actorId: number | n
     try {
       return await sequelize.transaction(async (transaction) => {
         const now = options.now ?? new Date();
+        // Raw SQL: a row lock only (FOR UPDATE on the id), so two desks issuing at once serialise on the enrollment.
         const locked = await sequelize.query('SELECT id FROM enrollments WHERE id = :enrollmentId FOR UPDATE', {
           replacements: { enrollmentId },
           type: QueryTypes.SELECT,
@@ -251,6 +253,7 @@ export async function revokeCertificate(certificateId: number, actorId: number, 
  * own request issues its certificate (the flagship course is issued at the desk only).
  */
 export async function claimRefresherCertificate(enrollmentId: number, learnerId: number): Promise<IssueOutcome> {
+  // Raw SQL: the enrollment's owner and course slug in one join, flat.
   const [row] = await db().sequelize.query<{ userId: number; slug: string }>(
     'SELECT e.userId, c.slug FROM enrollments e JOIN courses c ON c.id = e.courseId WHERE e.id = :enrollmentId',
     { replacements: { enrollmentId }, type: QueryTypes.SELECT },
@@ -265,6 +268,7 @@ export async function claimRefresherCertificate(enrollmentId: number, learnerId:
 
 /** The learner's refresher enrollments that are complete but have no certificate yet. */
 export async function claimableRefreshers(learnerId: number): Promise<number[]> {
+  // Raw SQL: an anti-join (LEFT JOIN … IS NULL) for enrollments without a certificate, which Sequelize's include expresses less plainly.
   const rows = await db().sequelize.query<{ id: number }>(
     `SELECT e.id FROM enrollments e JOIN courses c ON c.id = e.courseId LEFT JOIN certificates ce ON ce.enrollmentId = e.id
       WHERE e.userId = :learnerId AND c.slug = :slug AND ce.id IS NULL AND e.status IN ('active', 'completed')`,

@@ -50,6 +50,7 @@ const WORDING = 'holderName, courseTitle, programName, signerName, signerTitle';
 
 async function findBySerial(serial: string, legacy = false): Promise<CertificateRecord | null> {
   // An imported certificate is also found by the serial of the program's earlier records.
+  // Raw SQL: one UNION ALL over certificates and their replaced versions answers either serial in one round trip.
   const [row] = await db().sequelize.query<CertificateRecord>(
     `SELECT ${STORED}, ce.serial, ${WORDING.split(', ')
       .map((f) => `ce.${f}`)
@@ -151,6 +152,7 @@ export type LearnerCertificate = {
 
 /** A learner's certificates, newest first, for the Pantry. */
 export async function fetchLearnerCertificates({ userId, now = new Date() }: { userId: number; now?: Date }): Promise<LearnerCertificate[]> {
+  // Raw SQL: a three-table join read as flat rows (the course slug beside each certificate), no model instances needed.
   const rows = await db().sequelize.query<Omit<LearnerCertificate, 'state'>>(
     `SELECT ce.id, ce.serial, c.slug AS courseSlug, ce.courseTitle, ce.issuedAt, ce.validUntil, ce.revokedAt
        FROM certificates ce JOIN enrollments e ON e.id = ce.enrollmentId JOIN courses c ON c.id = e.courseId

@@ -24,6 +24,7 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
     const record = getChanges(course.slug);
     const published = record ? publishedBy(record.changes, now) : [];
     if (published.length === 0) continue;
+    // Raw SQL: ids only, for a quick check before taking the course lock.
     const known = await sequelize.query<{ changeId: string }>('SELECT changeId FROM change_notices WHERE changeId IN (:ids)', {
       replacements: { ids: published.map((c) => c.id) },
       type: QueryTypes.SELECT,
@@ -32,6 +33,7 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
     if (published.every((c) => seen.has(c.id))) continue;
     const done = await sequelize.transaction(async (transaction) => {
       // One worker at a time per course: concurrent INSERT IGNOREs of several ids deadlock on the unique index's gaps.
+      // Raw SQL: a row lock only (FOR UPDATE), the per-course mutex of the notice job.
       const [locked] = await sequelize.query<{ id: number }>('SELECT id FROM courses WHERE slug = :course FOR UPDATE', {
         replacements: { course: course.slug },
         type: QueryTypes.SELECT,
@@ -41,6 +43,7 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
       const claimed: CourseChange[] = [];
       for (const change of published.filter((c) => !seen.has(c.id))) {
         // After the lock, an id another worker committed is ignored here (0 rows).
+        // Raw SQL: INSERT IGNORE reports 0 rows for an id another worker claimed, which Model.create cannot express without an error.
         const [, inserted] = (await sequelize.query(
           'INSERT IGNORE INTO change_notices (changeId, courseSlug, recipients, createdAt) VALUES (:id, :course, 0, :now)',
           {
@@ -52,6 +55,7 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
         if (inserted === 1) claimed.push(change);
       }
       if (claimed.length === 0) return { changes: 0, emails: 0 };
+      // Raw SQL: a four-table join with DISTINCT, read as flat (email, name) pairs.
       const holders = await sequelize.query<Holder>(
         `SELECT DISTINCT u.email, u.name
            FROM certificates ce
@@ -73,6 +77,7 @@ export async function queueChangeNotices(now = new Date()): Promise<{ changes: n
           { transaction },
         );
       }
+      // Raw SQL: one UPDATE for every claimed id (change_notices has no model: the job is its only writer).
       await sequelize.query('UPDATE change_notices SET recipients = :n WHERE changeId IN (:ids)', {
         replacements: { n: holders.length, ids: claimed.map((c) => c.id) },
         transaction,

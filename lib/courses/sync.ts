@@ -15,6 +15,7 @@ export type SyncReport = SyncPlan & { lines: string[] };
 export async function syncCourses(sequelize: Sequelize, options: { contentRoot?: string; lockWaitSeconds?: number } = {}): Promise<SyncReport> {
   const content = loadCourses(options.contentRoot ?? path.join(process.env.BRINEWRIGHT_ROOT ?? process.cwd(), 'content'));
   return sequelize.transaction(async (lockHolder) => {
+    // Raw SQL: MariaDB's named lock (GET_LOCK) has no model equivalent; the sync also runs on the migrator's own connection, without the app's models.
     const [got] = await sequelize.query<{ ok: number | null }>('SELECT GET_LOCK(?, ?) AS ok', {
       replacements: [LOCK_NAME, options.lockWaitSeconds ?? 60],
       type: QueryTypes.SELECT,
@@ -23,6 +24,7 @@ export async function syncCourses(sequelize: Sequelize, options: { contentRoot?:
     if (Number(got?.ok) !== 1) throw new Error(`the course sync waited ${options.lockWaitSeconds ?? 60} s for another process's sync and gave up`);
     try {
       const plan = await sequelize.transaction(async (transaction) => {
+        // Raw SQL: the migrator's connection has no models; the reference counts come in the same locking read.
         const rows = await sequelize.query<CourseRow>(
           `SELECT c.id, c.slug, c.title, c.feeCents, c.currency, c.passMarkPct, c.validityMonths,
                   (SELECT COUNT(*) FROM enrollments e WHERE e.courseId = c.id) AS enrollments,
@@ -45,6 +47,7 @@ export async function syncCourses(sequelize: Sequelize, options: { contentRoot?:
         );
         const now = new Date();
         for (const course of plan.insert) {
+          // Raw SQL: the migrator's connection has no models.
           await sequelize.query(
             'INSERT INTO courses (slug, title, feeCents, currency, passMarkPct, validityMonths, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
             {
@@ -56,16 +59,19 @@ export async function syncCourses(sequelize: Sequelize, options: { contentRoot?:
         for (const update of plan.update) {
           const course = content.find((c) => c.slug === update.slug)!;
           // Only the fields the course file owns: anything else kept for the course stays as it is.
+          // Raw SQL: the migrator's connection has no models.
           await sequelize.query(`UPDATE courses SET ${SYNCED_FIELDS.map((f) => `${f} = ?`).join(', ')}, updatedAt = ? WHERE id = ?`, {
             replacements: [...SYNCED_FIELDS.map((f) => course[f]), now, update.id],
             transaction,
           });
         }
+        // Raw SQL: the migrator's connection has no models.
         for (const gone of plan.remove) await sequelize.query('DELETE FROM courses WHERE id = ?', { replacements: [gone.id], transaction });
         return plan;
       });
       return { ...plan, lines: describePlan(plan) };
     } finally {
+      // Raw SQL: releases the named lock taken above.
       await sequelize.query('SELECT RELEASE_LOCK(?)', { replacements: [LOCK_NAME], transaction: lockHolder });
     }
   });

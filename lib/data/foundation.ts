@@ -8,6 +8,7 @@ export type LearnerEnrollment = { id: number; courseSlug: string; courseTitle: s
 
 /** The courses a learner is enrolled in, newest first. */
 export async function fetchLearnerEnrollments({ userId }: { userId: number }): Promise<LearnerEnrollment[]> {
+  // Raw SQL: a three-table join read as flat rows for the header's list.
   return db().sequelize.query<LearnerEnrollment>(
     `SELECT e.id, c.slug AS courseSlug, c.title AS courseTitle, e.status, w.startsAt AS workshopStartsAt
        FROM enrollments e JOIN courses c ON c.id = e.courseId LEFT JOIN workshops w ON w.id = e.workshopId

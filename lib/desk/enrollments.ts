@@ -54,6 +54,7 @@ export async function matchingEnrollmentIds(filter: DeskFilter): Promise<number[
   }
   if (filter.eligible === 'certified') where.push('ce.id IS NOT NULL');
   if (filter.eligible === 'yes' || filter.eligible === 'no') where.push('ce.id IS NULL');
+  // Raw SQL: ids only, filtered over four tables (LIKE on the learner, the certificate anti-join); the rows come from loadStandings.
   const rows = await db().sequelize.query<{ id: number }>(
     `SELECT e.id FROM enrollments e JOIN users u ON u.id = e.userId JOIN courses c ON c.id = e.courseId
        LEFT JOIN certificates ce ON ce.enrollmentId = e.id
@@ -129,7 +130,9 @@ export type DeskOptions = { courses: { slug: string; title: string }[]; workshop
 export async function fetchDeskOptions(): Promise<DeskOptions> {
   const { sequelize } = db();
   const [courses, workshops] = await Promise.all([
+    // Raw SQL: two columns for a select list, no model instances.
     sequelize.query<{ slug: string; title: string }>('SELECT slug, title FROM courses ORDER BY id', { type: QueryTypes.SELECT }),
+    // Raw SQL: a two-table join read as flat option rows.
     sequelize.query<{ id: number; courseSlug: string; startsAt: Date; place: string }>(
       'SELECT w.id, c.slug AS courseSlug, w.startsAt, w.place FROM workshops w JOIN courses c ON c.id = w.courseId ORDER BY w.startsAt DESC',
       { type: QueryTypes.SELECT },

@@ -28,6 +28,7 @@ export function lastMonths(n: number, now = new Date()): string[] {
  */
 export async function fetchDeskReports({ months = 12, now = new Date() }: { months?: number; now?: Date } = {}): Promise<DeskReports> {
   const { sequelize } = db();
+  // Raw SQL: grouped counts and sums per status, workshop and month (DATE_FORMAT, GROUP BY), read as flat rows for the charts.
   const q = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) => sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
   const monthList = lastMonths(months, now);
   const since = new Date(`${monthList[0]}-01T00:00:00Z`);

@@ -65,12 +65,14 @@ const DUE = `((status = 'pending' AND nextAttemptAt <= :now) OR (status = 'sendi
 export async function lockDueIds(transaction: Transaction, options: { limit: number; now: Date; staleClaimMs: number }): Promise<number[]> {
   const { sequelize } = db();
   const replacements = { now: options.now, stale: new Date(options.now.getTime() - options.staleClaimMs), limit: options.limit, candidates: options.limit * 4 };
+  // Raw SQL: a plain read of candidate ids, shared with the locking read below.
   const candidates = await sequelize.query<{ id: number }>(`SELECT id FROM outbox_emails WHERE ${DUE} ORDER BY id LIMIT :candidates`, {
     replacements,
     type: QueryTypes.SELECT,
     transaction,
   });
   if (!candidates.length) return [];
+  // Raw SQL: FORCE INDEX and SKIP LOCKED (see the comment above lockDueIds); Sequelize emits neither.
   const locked = await sequelize.query<{ id: number }>(
     `SELECT id FROM outbox_emails FORCE INDEX (PRIMARY) WHERE id IN (:ids) AND ${DUE} ORDER BY id LIMIT :limit FOR UPDATE SKIP LOCKED`,
     {
@@ -92,6 +94,7 @@ export async function claimDue(token: string, options: Required<Pick<SenderOptio
   return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
     const ids = await lockDueIds(transaction, { limit: options.batchSize, now: options.now, staleClaimMs: options.staleClaimMs });
     if (!ids.length) return [];
+    // Raw SQL: one UPDATE claims every locked row with the token and bumps attempts in place.
     await sequelize.query(
       `UPDATE outbox_emails SET status = 'sending', claimedBy = :token, claimedAt = :now, attempts = attempts + 1, updatedAt = :now WHERE id IN (:ids)`,
       {

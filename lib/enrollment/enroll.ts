@@ -23,6 +23,7 @@ export class WorkshopFullError extends AppError {
 
 /** Seat-holding enrollments of a workshop, counted inside the caller's transaction (after the workshop row is locked). */
 async function countHolders(workshopId: number, transaction: Transaction): Promise<number> {
+  // Raw SQL: the seat count in the caller's locking transaction, exactly the statement the seat rule is reasoned on.
   const [row] = await db().sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM enrollments WHERE workshopId = :workshopId AND status IN (:statuses)', {
     replacements: { workshopId, statuses: [...SEAT_HOLDING_STATUSES] },
     type: QueryTypes.SELECT,

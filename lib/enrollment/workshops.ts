@@ -22,6 +22,7 @@ export type PublicWorkshop = {
 export async function seatsTaken(workshopIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
   const taken = new Map<number, number>();
   if (!workshopIds.length) return taken;
+  // Raw SQL: a grouped COUNT per workshop in one statement, read as plain numbers.
   const rows = await db().sequelize.query<{ workshopId: number; n: number }>(
     `SELECT workshopId, COUNT(*) AS n FROM enrollments WHERE workshopId IN (:ids) AND status IN (:statuses) GROUP BY workshopId`,
     { replacements: { ids: workshopIds, statuses: [...SEAT_HOLDING_STATUSES] }, type: QueryTypes.SELECT, transaction },

@@ -6,7 +6,7 @@ import { audit } from '@/lib/audit';
 import { hashPassword } from '@/lib/auth/users';
 import { programName } from '@/lib/certificates/issue';
 import { generateSerial } from '@/lib/certificates/serial';
-import { AppError } from '@/lib/errors';
+import { AppError, clipText } from '@/lib/errors';
 import { HOLDER_COLUMNS, HolderFileSchema, HolderLineSchema, REQUIRED_HOLDER_COLUMNS, type HolderLine } from '@/lib/validations/holder-import';
 import { db } from '@/models';
 
@@ -24,6 +24,12 @@ export type PreviewLine = {
 export type ImportPreview = { lines: PreviewLine[]; counts: Record<PreviewLine['outcome'], number> };
 
 type Parsed = { line: number; raw: Record<string, string> };
+
+/** The file's own header names, quoted short and printable (a binary or huge first line must not come back whole). */
+function unknownList(names: string[]): string {
+  const shown = names.slice(0, 5).map((n) => clipText(n, 40));
+  return shown.join(', ') + (names.length > 5 ? ` and ${names.length - 5} more` : '');
+}
 
 /** Splits the file with the CSV parser; a file that is not CSV or lacks a column is refused as a whole. */
 export function parseHolderFile(input: string): Parsed[] {
@@ -48,7 +54,7 @@ export function parseHolderFile(input: string): Parsed[] {
   if (missing.length || unknown.length) {
     throw new AppError(
       'bad_request',
-      [missing.length ? `missing column(s): ${missing.join(', ')}` : '', unknown.length ? `unknown column(s): ${unknown.join(', ')}` : '']
+      [missing.length ? `missing column(s): ${missing.join(', ')}` : '', unknown.length ? `unknown column(s): ${unknownList(unknown)}` : '']
         .filter(Boolean)
         .join('; ') + `. The first line must name the columns ${HOLDER_COLUMNS.join(', ')} (old_serial may be left out).`,
     );
@@ -61,6 +67,7 @@ type Planned = PreviewLine & { data?: HolderLine; courseId?: number; courseTitle
 /** Decides each line against the database: create, skip as a duplicate, or refuse with the reason. */
 async function plan(parsed: Parsed[], transaction?: Transaction): Promise<Planned[]> {
   const { sequelize } = db();
+  // Raw SQL: set-wise lookups (every e-mail, serial and certificate of the file at once) read as flat rows inside the import's transaction.
   const q = <T extends object>(sql: string, replacements: Record<string, unknown>) =>
     sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT, transaction });
   const courses = await q<{ id: number; slug: string; title: string }>('SELECT id, slug, title FROM courses', {});
@@ -157,6 +164,7 @@ export async function importHolders(text: string, actorId: number): Promise<Impo
   const unusable = await hashPassword(randomBytes(32).toString('hex'));
   return sequelize.transaction(async (transaction) => {
     // Imports run one after the other (they lock the course rows), so one file imported twice at once creates once.
+    // Raw SQL: a lock only (FOR UPDATE on every course row).
     await sequelize.query('SELECT id FROM courses FOR UPDATE', { transaction });
     const lines = await plan(parsed, transaction);
     const preview = summarize(lines);

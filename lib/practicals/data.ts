@@ -80,6 +80,7 @@ export async function fetchTastingTable(query: TastingTableQuery, now = new Date
   // learner sort does not join and read every row it skips; the rest is joined for the page's rows.
   const pageJoin = query.sort === 'learner' ? 'JOIN users u ON u.id = p.userId' : '';
   const [rows, countRows] = await Promise.all([
+    // Raw SQL: the deferred join, STRAIGHT_JOIN and the ENUM sort above are what keep a far page at 2 to 5 ms; Sequelize cannot emit them.
     sequelize.query<TastingRow>(
       `SELECT p.id, p.round, p.status, p.flagCount, p.submittedAt,
               JSON_UNQUOTE(JSON_EXTRACT(p.details, '$.product')) AS product,
@@ -96,6 +97,7 @@ export async function fetchTastingTable(query: TastingTableQuery, now = new Date
         ORDER BY ${ORDER[query.sort]}`,
       { replacements, type: QueryTypes.SELECT },
     ),
+    // Raw SQL: the counts share the page's FROM and WHERE (STRAIGHT_JOIN included).
     sequelize.query<{ status: PracticalStatus; n: number | string }>(countsSql, { replacements, type: QueryTypes.SELECT }),
   ]);
   const counts = Object.fromEntries(PRACTICAL_STATUSES.map((s) => [s, 0])) as Record<PracticalStatus, number>;
@@ -123,6 +125,7 @@ export type WorkshopOption = { id: number; label: string };
 
 /** Workshops for the Tasting table's filter. */
 export async function fetchWorkshopOptions(): Promise<WorkshopOption[]> {
+  // Raw SQL: a two-table join read as flat option rows.
   const rows = await db().sequelize.query<{ id: number; startsAt: Date; place: string; title: string }>(
     `SELECT w.id, w.startsAt, w.place, c.title FROM workshops w JOIN courses c ON c.id = w.courseId ORDER BY w.startsAt DESC LIMIT 200`,
     { type: QueryTypes.SELECT },

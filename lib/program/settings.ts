@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import { audit } from '@/lib/audit';
 import { getEnv } from '@/lib/env';
+import { AppError } from '@/lib/errors';
 import { getStorage } from '@/lib/storage';
 import type { ProgramSettingsInput } from '@/lib/validations/program';
 import { db } from '@/models';
@@ -49,27 +50,33 @@ export async function getProgramIdentity(options: { transaction?: Transaction } 
   };
 }
 
-/** Saves the program page (and a new logo, re-encoded, when one is given); the change is audited with what changed. */
-export async function saveProgramSettings(actorId: number, input: ProgramSettingsInput, logo: Buffer | null): Promise<void> {
+/** Saves the program page; the change is audited with what changed. */
+export async function saveProgramSettings(actorId: number, input: ProgramSettingsInput): Promise<void> {
   const { ProgramSetting, sequelize } = db();
-  let logoKey: string | undefined;
-  if (logo) {
-    const png = await processLogo(logo);
-    // A new key per image, so browsers and proxies never show an old logo under a cached address.
-    logoKey = `program/logo-${createHash('sha256').update(png).digest('hex').slice(0, 20)}.png`;
-    await getStorage().put(logoKey, png, 'image/png');
-  }
   await sequelize.transaction(async (transaction) => {
     const row = await ProgramSetting.findByPk(ROW_ID, { transaction, lock: transaction.LOCK.UPDATE });
-    const next = { ...input, ...(logoKey ? { logoKey } : {}), updatedById: actorId };
+    const next = { ...input, updatedById: actorId };
     const changed = Object.keys(input).filter((k) => !row || row.get(k as keyof ProgramSettingsInput) !== input[k as keyof ProgramSettingsInput]);
     if (row) await row.update(next, { transaction });
     else await ProgramSetting.create({ id: ROW_ID, ...next }, { transaction });
-    await audit(
-      { actorId, action: 'program.settings_saved', subjectType: 'program', subjectId: ROW_ID, data: { changed, logo: logoKey ?? null } },
-      { transaction },
-    );
+    await audit({ actorId, action: 'program.settings_saved', subjectType: 'program', subjectId: ROW_ID, data: { changed } }, { transaction });
   });
+}
+
+/** Re-encodes and stores a new logo for a program whose page was saved (409 before that: the row holds the name). */
+export async function saveProgramLogo(actorId: number, logo: Buffer): Promise<{ logoKey: string }> {
+  const { ProgramSetting, sequelize } = db();
+  if (!(await ProgramSetting.count({ where: { id: ROW_ID } })))
+    throw new AppError('conflict', 'Save the program’s name first, then add the logo.', { fields: { logo: ['Save the program’s name first.'] } });
+  const png = await processLogo(logo);
+  // A new key per image, so browsers and proxies never show an old logo under a cached address.
+  const logoKey = `program/logo-${createHash('sha256').update(png).digest('hex').slice(0, 20)}.png`;
+  await getStorage().put(logoKey, png, 'image/png');
+  await sequelize.transaction(async (transaction) => {
+    await ProgramSetting.update({ logoKey, updatedById: actorId }, { where: { id: ROW_ID }, transaction });
+    await audit({ actorId, action: 'program.logo_saved', subjectType: 'program', subjectId: ROW_ID, data: { logo: logoKey } }, { transaction });
+  });
+  return { logoKey };
 }
 
 /** The logo's bytes from the storage driver, or null when none was uploaded. */

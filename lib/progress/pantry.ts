@@ -13,6 +13,7 @@ type Row = { courseSlug: string; courseTitle: string; status: Shelf['status']; c
  */
 export async function fetchPantry(userId: number): Promise<Shelf[]> {
   const { sequelize } = db();
+  // Raw SQL: the latest enrollment per course by a correlated subquery, one statement whatever the number of courses.
   const enrollments = await sequelize.query<Row>(
     `SELECT c.slug AS courseSlug, c.title AS courseTitle, e.status, e.contentVersion
        FROM enrollments e JOIN courses c ON c.id = e.courseId
@@ -23,10 +24,12 @@ export async function fetchPantry(userId: number): Promise<Shelf[]> {
   );
   if (!enrollments.length) return [];
   const [reads, passes] = await Promise.all([
+    // Raw SQL: every lesson read, with its course slug, in one flat join.
     sequelize.query<{ courseSlug: string; lessonSlug: string; readAt: Date }>(
       'SELECT c.slug AS courseSlug, lp.lessonSlug, lp.readAt FROM lesson_progress lp JOIN courses c ON c.id = lp.courseId WHERE lp.userId = :userId',
       { replacements: { userId }, type: QueryTypes.SELECT },
     ),
+    // Raw SQL: DISTINCT slugs only, without loading attempts.
     sequelize.query<{ quizSlug: string }>('SELECT DISTINCT quizSlug FROM quiz_attempts WHERE userId = :userId AND passed = 1 AND submittedAt IS NOT NULL', {
       replacements: { userId },
       type: QueryTypes.SELECT,

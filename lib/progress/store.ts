@@ -25,7 +25,7 @@ export async function markLessonRead(userId: number, courseSlug: string, lessonS
   }
   const { sequelize } = db();
   const now = new Date();
-  // One statement, safe against two tabs clicking at once: the unique index keeps one row.
+  // Raw SQL: INSERT … ON DUPLICATE KEY UPDATE is one statement, safe against two tabs at once (the unique index keeps one row); findOrCreate takes two.
   const [, affected] = (await sequelize.query(
     `INSERT INTO lesson_progress (userId, courseId, lessonSlug, readAt, createdAt, updatedAt)
      VALUES (:userId, :courseId, :lessonSlug, :now, :now, :now)
@@ -38,6 +38,7 @@ export async function markLessonRead(userId: number, courseSlug: string, lessonS
 
 /** The lessons of a course the learner has read, slug → time read. */
 export async function readLessons(userId: number, courseSlug: string): Promise<Record<string, string>> {
+  // Raw SQL: a join on the course slug, read as flat rows.
   const rows = await db().sequelize.query<{ lessonSlug: string; readAt: Date }>(
     `SELECT lp.lessonSlug, lp.readAt FROM lesson_progress lp JOIN courses c ON c.id = lp.courseId
       WHERE lp.userId = :userId AND c.slug = :courseSlug`,
@@ -48,6 +49,7 @@ export async function readLessons(userId: number, courseSlug: string): Promise<R
 
 /** Quiz slugs of a course the learner has passed at least once. */
 export async function passedQuizzes(userId: number, courseSlug: string): Promise<string[]> {
+  // Raw SQL: DISTINCT over a join on the course slug, read as flat rows.
   const rows = await db().sequelize.query<{ quizSlug: string }>(
     `SELECT DISTINCT qa.quizSlug FROM quiz_attempts qa JOIN courses c ON c.id = qa.courseId
       WHERE qa.userId = :userId AND c.slug = :courseSlug AND qa.passed = 1 AND qa.submittedAt IS NOT NULL`,

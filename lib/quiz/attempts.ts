@@ -170,7 +170,9 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
   const { sequelize, QuizAttempt } = db();
   return sequelize.transaction(async (transaction) => {
     // Serialises the starts of one learner, so two tabs cannot both slip under the limit.
+    // Raw SQL: a row lock only (FOR UPDATE on the learner's id).
     await sequelize.query('SELECT id FROM users WHERE id = :id FOR UPDATE', { replacements: { id: user.id }, type: QueryTypes.SELECT, transaction });
+    // Raw SQL: the same AttemptRow shape the submit path reads raw, so one mapper serves both.
     const open = await sequelize.query<AttemptRow>(
       `SELECT * FROM quiz_attempts WHERE userId = :userId AND quizSlug = :quizSlug AND submittedAt IS NULL
           AND (deadlineAt IS NULL OR deadlineAt > :now) ORDER BY startedAt DESC LIMIT 1`,
@@ -180,6 +182,7 @@ export async function startAttempt(user: SessionUser, quizSlug: string, now = ne
 
     if (bank.attemptLimit) {
       const since = new Date(now.getTime() - bank.attemptLimit.windowHours * 3_600_000);
+      // Raw SQL: start times only, inside the locking transaction.
       const recent = await sequelize.query<{ startedAt: Date }>(
         'SELECT startedAt FROM quiz_attempts WHERE userId = :userId AND quizSlug = :quizSlug AND startedAt > :since ORDER BY startedAt ASC',
         { replacements: { userId: user.id, quizSlug, since }, type: QueryTypes.SELECT, transaction },
@@ -235,6 +238,7 @@ async function storeGradeOnce(row: AttemptRow & { workshopId: number | null }, s
   const insert = answerRows.length
     ? `INSERT INTO quiz_answers (attemptId, courseId, workshopId, quizSlug, questionId, correct, response, submittedAt) VALUES ${answerRows.join(', ')};`
     : 'DO 0;';
+  // Raw SQL: one MariaDB compound statement (BEGIN NOT ATOMIC) holds the submit's transaction in one round trip (grading figure).
   const result = await db().sequelize.query(
     `BEGIN NOT ATOMIC
        DECLARE stored INT DEFAULT 0;
@@ -302,6 +306,7 @@ export async function submitAttempt(user: SessionUser, attemptId: number, answer
 
 /** An attempt for its owner, an instructor or a coordinator; the result only once submitted. */
 export async function readAttempt(user: SessionUser, attemptId: number): Promise<AttemptView> {
+  // Raw SQL: the same AttemptRow shape as the submit path's read, so one mapper serves both.
   const rows = await db().sequelize.query<AttemptRow>('SELECT * FROM quiz_attempts WHERE id = :id', {
     replacements: { id: attemptId },
     type: QueryTypes.SELECT,

@@ -68,6 +68,7 @@ export async function fetchQuestionResults(filter: ResultsFilter): Promise<Quest
     where.push('quizSlug = :quiz');
     replacements.quiz = filter.quiz;
   }
+  // Raw SQL: one aggregated query with a CTE and window functions (per-question results), which Sequelize cannot express.
   const rows = await db().sequelize.query<Row>(
     `WITH filtered AS (
        SELECT quizSlug, questionId, correct, response FROM quiz_answers ${where.length ? `WHERE ${where.join(' AND ')}` : ''}

@@ -3,6 +3,8 @@ import { AppError } from '@/lib/errors';
 // The most a route reads of a request body; a larger one is refused with 413 before it is read whole.
 export const JSON_BODY_LIMIT = 64 * 1024;
 export const WEBHOOK_BODY_LIMIT = 1024 * 1024;
+// A holder file of at most 2 MB of text, with room for its JSON escapes.
+export const IMPORT_BODY_LIMIT = 3 * 1024 * 1024;
 
 const kb = (bytes: number) => `${Math.round(bytes / 1024).toLocaleString('en-US')} KB`;
 

@@ -29,3 +29,6 @@ export type HolderLine = z.infer<typeof HolderLineSchema>;
 
 /** The text of the uploaded file, at most 2 MB (about 10,000 holders). */
 export const HolderFileSchema = z.string().min(1, 'The file is empty.').max(2_000_000, 'The file is larger than 2 MB: split it.');
+
+/** The body of the import routes: the file's text, read in the browser. */
+export const HolderImportSchema = z.object({ text: HolderFileSchema });

@@ -17,7 +17,7 @@ const id = (what: string) =>
     .int(`Choose ${what}.`)
     .positive(`Choose ${what}.`);
 
-/** The coordinator's workshop form, shared by the client form and the server action. */
+/** The coordinator's workshop form, shared by the client form and the route handlers. */
 export const WorkshopSchema = z
   .object({
     courseId: id('a course'),
@@ -40,3 +40,6 @@ export type WorkshopInput = z.input<typeof WorkshopSchema>;
 export type WorkshopValues = z.output<typeof WorkshopSchema>;
 
 export const AttendanceSchema = z.object({ enrollmentId: z.coerce.number().int().positive(), attended: z.boolean() });
+
+/** A workshop's id in the address. */
+export const WorkshopIdSchema = z.coerce.number().int().positive();

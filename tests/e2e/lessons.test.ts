@@ -1,7 +1,8 @@
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadLessons } from '../../lib/content/loader';
-import { baseUrl, openBrowser, seriousViolations, signIn } from './support/browser';
+import { openBrowser, seriousViolations, signIn } from './support/browser';
+import { send, signInHttp } from './support/http';
 
 const content = path.resolve(__dirname, '../../content');
 const lessons = loadLessons(content, 'pickling-and-canning');
@@ -31,18 +32,29 @@ describe('lessons in the browser', () => {
     expect(await seriousViolations(page)).toEqual([]);
   });
 
-  it('sends public pages with a Cache-Control of minutes for the proxy or a CDN, and members-only ones private', async () => {
+  it('sends public pages with a Cache-Control of minutes for the proxy or a CDN, and a signed-in reader’s lessons private', async () => {
     const publicPages = ['/courses', '/courses/pickling-and-canning', `/learn/pickling-and-canning/${preview.slug}`, '/bench'];
     for (const url of publicPages) {
-      const response = await fetch(new URL(url, baseUrl()));
+      const response = await send(url);
       await response.arrayBuffer();
       expect(response.status, url).toBe(200);
-      // revalidate = 300 in the root layout, expireTime 600 in next.config.mjs.
+      // Prerendered pages: revalidate = 300 in the root layout, expireTime 600; the lesson route (per request): next.config.mjs headers().
       expect(response.headers.get('cache-control'), url).toBe('s-maxage=300, stale-while-revalidate=300');
     }
-    const members = await fetch(new URL(membersPath, baseUrl()), { redirect: 'manual' });
+    // A visitor is sent to sign in; the redirect is the same for every visitor.
+    const members = await send(membersPath);
     await members.arrayBuffer();
-    expect(members.headers.get('cache-control')).toMatch(/^private, no-cache, no-store/);
+    expect(members.status).toBe(307);
+    expect(members.headers.get('location')).toContain('/signin?callbackUrl=');
+    // With the session cookie every lesson answer is the reader's own: the preview lesson too.
+    const { jar } = await signInHttp('learner@cedarhollow.example', 'demo-learner-pass');
+    for (const url of [membersPath, `/learn/pickling-and-canning/${preview.slug}`]) {
+      const response = await send(url, { jar });
+      const html = await response.text();
+      expect(response.status, url).toBe(200);
+      expect(html, url).toContain('data-lesson-body');
+      expect(response.headers.get('cache-control'), url).toBe('private, no-cache, no-store, max-age=0, must-revalidate');
+    }
   });
 
   it('opens a public lesson and uses its embedded brine calculator', async () => {

@@ -92,6 +92,17 @@ beforeAll(async () => {
   users.admin = await createUser('admin');
   // The learner holds a place, so an upload reaches the photo checks instead of stopping at "not enrolled".
   await db().Enrollment.create({ userId: users.learner.id, courseId: flagship.id, workshopId: null, runKey: 'self-paced', status: 'active', feeCents: 4500 });
+  // The program page was saved once, so a logo upload reaches the image checks instead of stopping at "save the name first".
+  await db().ProgramSetting.create({
+    id: 1,
+    name: 'Sweep County preserving program',
+    shortName: 'Sweep',
+    contactEmail: null,
+    contactPhone: null,
+    postalAddress: null,
+    timeZone: 'America/Denver',
+    updatedById: null,
+  });
 
   const secret = getEnv().NEXTAUTH_SECRET;
   const sessionCookies = await Promise.all(
@@ -133,6 +144,7 @@ function requestsFor(target: Target, spec: SweepSpec): fc.Arbitrary<Generated> {
   if (spec.special === 'nextauth') raw = nextAuthRequests(nextAuth, target.method as 'GET' | 'POST');
   else if (spec.special === 'webhook') raw = webhookRequests(sign);
   else if (spec.special === 'photo-upload') raw = photoRequests();
+  else if (spec.special === 'logo-upload') raw = photoRequests('logo');
   else {
     const params = fc.record(spec.params ?? {}) as fc.Arbitrary<Record<string, string>>;
     const body: fc.Arbitrary<BadBody | null> = target.method === 'GET' || !spec.body ? fc.constant(null) : spec.body;

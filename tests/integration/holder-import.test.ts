@@ -5,8 +5,12 @@ import { loadStandings } from '@/lib/certificates/facts';
 import { verifySerial } from '@/lib/certificates/lookup';
 import { AppError } from '@/lib/errors';
 import { importHolders, previewHolderImport } from '@/lib/import/holders';
+import { POST as importRoute } from '@/app/api/desk/import/route';
+import { POST as previewRoute } from '@/app/api/desk/import/preview/route';
 import { db } from '@/models';
 import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest } from '../support/request';
+import { actAs } from '../support/session';
 import { eligibleEnrollment } from '../support/certificate-fixtures';
 import { issueCertificate } from '@/lib/certificates/issue';
 
@@ -135,5 +139,25 @@ describe('importing certificate holders', () => {
     expect((await refusal(previewHolderImport(`${HEADER},notes\nA,a@x.example,pickling-and-canning,2024-01-01,2027-01-01,,hi`))).message).toMatch(
       /unknown column\(s\): notes/,
     );
+  });
+
+  it('answers the page through its two routes: the preview, a refusal with the new preview (422), then the import (201)', async () => {
+    actAs(await createUser('coordinator'));
+    const preview = await previewRoute(jsonRequest('/api/desk/import/preview', { text: GOOD }), {} as never);
+    expect(preview.status).toBe(200);
+    expect(((await preview.json()) as { preview: { counts: unknown } }).preview.counts).toEqual({ create: 3, skip: 0, refuse: 0 });
+    const refused = await importRoute(
+      jsonRequest('/api/desk/import', {
+        text: `${GOOD}
+No Course,nc@county.example,fermenting-101,2024-01-10,2027-01-10,`,
+      }),
+      {} as never,
+    );
+    const body = (await refused.json()) as { error: string; preview: { counts: unknown } };
+    expect([refused.status, body.error, body.preview.counts]).toEqual([422, 'unprocessable', { create: 3, skip: 0, refuse: 1 }]);
+    expect(await db().Certificate.count()).toBe(0);
+    const done = await importRoute(jsonRequest('/api/desk/import', { text: GOOD }), {} as never);
+    expect(done.status).toBe(201);
+    expect(await db().Certificate.count()).toBe(3);
   });
 });

@@ -1,22 +1,20 @@
-// The program's identity: the admin's page (its server action), the logo, and where the name appears.
+// The program's identity: the admin's page (its two route handlers), the logo, and where the name appears.
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
-import { saveProgramAction } from '@/app/admin/program/actions';
-import { GET as logoRoute } from '@/app/api/program/logo/route';
-import { GET as programRoute } from '@/app/api/program/route';
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import { GET as logoRoute, POST as uploadLogo } from '@/app/api/program/logo/route';
+import { GET as programRoute, POST as saveProgram } from '@/app/api/program/route';
 import { issueCertificate } from '@/lib/certificates/issue';
 import { getEnv } from '@/lib/env';
 import { getProgramIdentity } from '@/lib/program/settings';
 import { diskDriver, setStorage } from '@/lib/storage';
 import { db } from '@/models';
 import { createCourses, createUser, resetDatabase } from '../support/db';
+import { jsonRequest } from '../support/request';
 import { actAs } from '../support/session';
 import { eligibleEnrollment } from '../support/certificate-fixtures';
-
-vi.mock('next/cache', async (importOriginal) => ({ ...(await importOriginal<typeof import('next/cache')>()), revalidatePath: vi.fn() }));
 
 const root = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-program-'));
 setStorage(diskDriver(root));
@@ -25,11 +23,12 @@ afterAll(() => {
   fs.rmSync(root, { recursive: true, force: true });
 });
 
-function form(fields: Record<string, string>, logo?: Buffer): FormData {
+const save = (fields: Record<string, string>) => saveProgram(jsonRequest('/api/program', fields), {} as never);
+
+function upload(logo: Buffer): Promise<Response> {
   const data = new FormData();
-  for (const [k, v] of Object.entries(fields)) data.set(k, v);
-  if (logo) data.set('logo', new File([new Uint8Array(logo)], 'logo.png', { type: 'image/png' }));
-  return data;
+  data.set('logo', new File([new Uint8Array(logo)], 'logo.png', { type: 'image/png' }));
+  return uploadLogo(new Request('http://localhost:3000/api/program/logo', { method: 'POST', body: data }), {} as never);
 }
 
 const UPPER_FORK = {
@@ -64,8 +63,9 @@ describe('program settings', () => {
       .jpeg()
       .withMetadata({ exif: { IFD0: { Copyright: 'camera data' } } })
       .toBuffer();
-    const state = await saveProgramAction({}, form(UPPER_FORK, jpeg));
-    expect(state).toEqual({ ok: true, message: 'Program settings saved.' });
+    const saved = await save(UPPER_FORK);
+    expect(saved.status).toBe(200);
+    expect((await upload(jpeg)).status).toBe(201);
 
     const program = await getProgramIdentity();
     expect(program).toMatchObject({ ...UPPER_FORK, contactEmail: 'preserving@upperfork.example', configured: true });
@@ -82,6 +82,7 @@ describe('program settings', () => {
     const audit = await db().AuditLog.findOne({ where: { action: 'program.settings_saved' } });
     expect(audit).toMatchObject({ actorId: admin.id, subjectType: 'program' });
     expect((audit!.data as { changed: string[] }).changed.sort()).toEqual(Object.keys(UPPER_FORK).sort());
+    expect(await db().AuditLog.findOne({ where: { action: 'program.logo_saved' } })).toMatchObject({ actorId: admin.id, subjectType: 'program' });
     expect(await (await programRoute(new Request('http://localhost/api/program'), {} as never)).json()).toMatchObject({
       shortName: 'Upper Fork Preserving',
       logo: expect.stringMatching(/^\/api\/program\/logo\?v=/),
@@ -98,11 +99,23 @@ describe('program settings', () => {
 
   it('refuses bad fields and a file that is not an image, keeping what was saved', async () => {
     actAs(await createUser('admin'));
-    const bad = await saveProgramAction({}, form({ ...UPPER_FORK, contactEmail: 'not-an-address', timeZone: 'Mars/Olympus' }));
-    expect(bad.fields?.contactEmail?.[0]).toMatch(/valid e-mail/);
-    expect(bad.fields?.timeZone?.[0]).toMatch(/time-zone name/);
-    const notImage = await saveProgramAction({}, form(UPPER_FORK, Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"></svg>')));
-    expect(notImage.fields?.logo?.[0]).toBe('Not a PNG, JPEG or WebP image.');
+    const bad = await save({ ...UPPER_FORK, contactEmail: 'not-an-address', timeZone: 'Mars/Olympus' });
+    expect(bad.status).toBe(400);
+    const { fields } = (await bad.json()) as { fields: Record<string, string[]> };
+    expect(fields.contactEmail?.[0]).toMatch(/valid e-mail/);
+    expect(fields.timeZone?.[0]).toMatch(/time-zone name/);
+    // A logo before the program has a name has nowhere to go.
+    const png = await sharp({ create: { width: 20, height: 20, channels: 3, background: '#2a6b55' } })
+      .png()
+      .toBuffer();
+    const early = await upload(png);
+    expect([early.status, ((await early.json()) as { fields: Record<string, string[]> }).fields.logo]).toEqual([409, ['Save the program’s name first.']]);
     expect(await db().ProgramSetting.count()).toBe(0);
+
+    expect((await save(UPPER_FORK)).status).toBe(200);
+    const notImage = await upload(Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"></svg>'));
+    expect(notImage.status).toBe(400);
+    expect(((await notImage.json()) as { fields: Record<string, string[]> }).fields.logo).toEqual(['Not a PNG, JPEG or WebP image.']);
+    expect((await getProgramIdentity()).logoKey).toBeNull();
   });
 });

@@ -1,8 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { saveProgramAction } from '@/app/admin/program/actions';
-import { importAction, previewImportAction } from '@/app/desk/import/actions';
 import { changeRoleAction } from '@/app/admin/users/actions';
-import { saveWorkshopAction } from '@/app/desk/workshops/actions';
 import type { SessionUser } from '@/lib/auth/users';
 import { AppError } from '@/lib/errors';
 import { db } from '@/models';
@@ -25,13 +22,6 @@ const CALLS: Record<string, (people: People) => Promise<unknown>> = {
     form.set('role', 'instructor');
     return changeRoleAction(people.target.id, {}, form);
   },
-  // The program page with nothing filled in: the admin gets the field errors back.
-  '/admin/program saveProgramAction': () => saveProgramAction({}, new FormData()),
-  // The import page with no file: the coordinator is asked for one; nothing is read or written.
-  '/desk/import importAction': () => importAction({ step: 'upload' }, new FormData()),
-  '/desk/import previewImportAction': () => previewImportAction({ step: 'upload' }, new FormData()),
-  // A new workshop with nothing filled in: the coordinator gets the field errors back.
-  '/desk/workshops saveWorkshopAction': () => saveWorkshopAction(null, {} as Parameters<typeof saveWorkshopAction>[1]),
 };
 
 async function outcome(call: () => Promise<unknown>): Promise<{ result: ActionExpected; value?: unknown }> {

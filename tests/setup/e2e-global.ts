@@ -1,13 +1,24 @@
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { rebuildDatabase, waitForOk } from '../../lib/migrator';
 import { startAppServer } from '../../scripts/app-server';
+import { e2eStatePath, writeE2eState } from './e2e-state';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 let server: ChildProcess | undefined;
+let build: ChildProcess | undefined;
 const services: ChildProcess[] = [];
+
+/** `next build` without blocking this process's event loop (vitest runs the other projects meanwhile). */
+function runBuild(env: NodeJS.ProcessEnv): Promise<void> {
+  return new Promise((resolve, reject) => {
+    build = spawn(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });
+    build.once('error', reject);
+    build.once('exit', (code, signal) => (code === 0 ? resolve() : reject(new Error(`next build failed for the browser tests (${signal ?? `exit ${code}`})`))));
+  });
+}
 
 // Browser tests run against a production build on its own port and its own database,
 // migrated and seeded with the demo program like `npm run demo`.
@@ -52,17 +63,25 @@ export default async function setup() {
   await waitForOk(`http://127.0.0.1:${port + 1}/_fake/health`, 30_000);
   process.env.E2E_MAILBOX_URL = `http://127.0.0.1:${port + 3}`;
   process.env.E2E_PAYMENTS_URL = `http://127.0.0.1:${port + 1}`;
-  if (process.env.E2E_SKIP_BUILD !== '1' || !fs.existsSync(path.join(root, distDir, 'BUILD_ID'))) {
-    const build = spawnSync(path.join(root, 'node_modules/.bin/next'), ['build'], { cwd: root, env, stdio: 'inherit' });
-    if (build.status !== 0) throw new Error('next build failed for the browser tests');
-  }
-  server = startAppServer(port, env, { stdio: ['ignore', 'inherit', 'inherit'] });
-  await waitForOk(`${baseUrl}/api/health`, 60_000);
   process.env.E2E_BASE_URL = baseUrl;
-  // For tests that read the server's memory (/proc/<pid> and its children).
-  process.env.E2E_SERVER_PID = String(server.pid);
+
+  // The build and the app start run in the background: the browser files come last (vitest.config.mts,
+  // sequence.groupOrder), so the unit, component and integration tests run meanwhile, and
+  // tests/setup/e2e.ts holds each browser file until the state file says the app answers.
+  const statePath = e2eStatePath(port);
+  fs.rmSync(statePath, { force: true });
+  const ready = (async () => {
+    if (process.env.E2E_SKIP_BUILD !== '1' || !fs.existsSync(path.join(root, distDir, 'BUILD_ID'))) await runBuild(env);
+    build = undefined;
+    server = startAppServer(port, env, { stdio: ['ignore', 'inherit', 'inherit'] });
+    await waitForOk(`${baseUrl}/api/health`, 60_000);
+    // For tests that read the server's memory (/proc/<pid> and its children).
+    writeE2eState(statePath, { status: 'ready', pid: server.pid! });
+  })().catch((error: unknown) => writeE2eState(statePath, { status: 'failed', message: error instanceof Error ? error.message : String(error) }));
 
   return async () => {
+    build?.kill('SIGTERM');
+    await ready;
     server?.kill('SIGTERM');
     for (const child of services) child.kill('SIGTERM');
   };

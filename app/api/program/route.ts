@@ -1,5 +1,8 @@
-import { getProgramIdentity } from '@/lib/program/settings';
-import { route } from '@/lib/errors';
+import { requireRole } from '@/lib/auth/guard';
+import { parseOrThrow, route } from '@/lib/errors';
+import { getProgramIdentity, saveProgramSettings } from '@/lib/program/settings';
+import { readJson } from '@/lib/server/body';
+import { ProgramSettingsSchema } from '@/lib/validations/program';
 
 export const dynamic = 'force-dynamic';
 
@@ -17,4 +20,12 @@ export const GET = route(async () => {
     // Not cached: the header must show a saved change on the next page.
     { headers: { 'Cache-Control': 'no-cache' } },
   );
+});
+
+/** POST /api/program { name, shortName, contactEmail?, contactPhone?, postalAddress?, timeZone } — the admin's program page. */
+export const POST = route(async (request) => {
+  const actor = await requireRole('admin');
+  const input = parseOrThrow(ProgramSettingsSchema, await readJson(request));
+  await saveProgramSettings(actor.id, input);
+  return Response.json({ ok: true });
 });

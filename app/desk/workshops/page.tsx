@@ -7,7 +7,6 @@ import { EmptyRow, Table, TBody, TD, TH, THead, TR } from '@/components/ui/table
 import { requirePageRole } from '@/lib/auth/guard';
 import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
 import { fetchCourseOptions, fetchInstructorOptions, fetchWorkshopsForDesk } from '@/lib/enrollment/queries';
-import { saveWorkshopAction } from './actions';
 
 export const metadata: Metadata = { title: 'Workshops — Certificate desk' };
 export const dynamic = 'force-dynamic';
@@ -68,7 +67,6 @@ export default async function DeskWorkshopsPage() {
           workshopId={null}
           courses={courses}
           instructors={instructors}
-          save={saveWorkshopAction}
           defaults={{
             courseId: String(courses[0]?.id ?? ''),
             date: '',

@@ -46,7 +46,7 @@ export type SweepSpec = {
    */
   mayAnswerOk?: boolean;
   /** Handled by the test itself (next-auth's catch-all, the payment webhook): see the test file. */
-  special?: 'nextauth' | 'webhook' | 'photo-upload';
+  special?: 'nextauth' | 'webhook' | 'photo-upload' | 'logo-upload';
 };
 
 // ---- values that must be refused ----------------------------------------------------------------
@@ -287,6 +287,35 @@ const attendanceFields: Record<string, FieldSpec> = {
   attended: { ok: fc.boolean(), bad: requiredBad(fc.oneof(nastyString, nastyNumber, fc.constant(null), fc.constantFrom([], {}, 'true', 1, 0))) },
 };
 
+const HHMM = /^([01]\d|2[0-3]):[0-5]\d$/;
+const notWholeIn = (min: number, max: number) => (v: unknown) => !(Number.isInteger(Number(v)) && Number(v) >= min && Number(v) <= max);
+const badTimeZone = requiredBad(notString, fc.constantFrom('', 'Mars/Olympus', 'America/Nowhere', 'UTC+25'));
+const workshopFields: Record<string, FieldSpec> = {
+  courseId: { ok: fc.constantFrom(MISSING_ID, String(MISSING_ID)), bad: requiredBad(badIdValue) },
+  date: { ok: fc.constant('2030-05-01'), bad: requiredBad(notString, notMatching(/^\d{4}-\d{2}-\d{2}$/)) },
+  startTime: { ok: fc.constant('09:00'), bad: requiredBad(notString, notMatching(HHMM)) },
+  endTime: { ok: fc.constant('14:00'), bad: requiredBad(notString, notMatching(HHMM)) },
+  timeZone: { ok: fc.constant('America/Denver'), bad: badTimeZone },
+  place: { ok: fc.constant('Cedar Hollow Grange Hall'), bad: requiredBad(notString, shortTrimmed(3), longerThan(300)) },
+  // Coerced to a number: a boolean or a one-element array would coerce to a valid count.
+  seats: {
+    ok: fc.integer({ min: 1, max: 200 }),
+    bad: requiredBad(fc.oneof(nastyNumber, nastyString).filter(notWholeIn(1, 200)), fc.constantFrom(0, -1, 201, 1.5, '', 'many', {}, [])),
+  },
+  attendanceRequired: { ok: fc.boolean(), bad: requiredBad(fc.constantFrom('true', 1, 0, null, [], {})) },
+};
+
+const programFields: Record<string, FieldSpec> = {
+  name: { ok: fc.constant('Upper Fork County home-preserving program'), bad: requiredBad(notString, shortTrimmed(1), longerThan(200)) },
+  shortName: { ok: fc.constant('Upper Fork Preserving'), bad: requiredBad(notString, shortTrimmed(1), longerThan(40)) },
+  contactEmail: { ok: fc.constantFrom('', null, 'office@upperfork.example'), bad: fc.constantFrom('not-an-address', '@upperfork.example', 5, true, [], {}) },
+  timeZone: { ok: fc.constant('America/Boise'), bad: badTimeZone },
+};
+
+const holderFileFields: Record<string, FieldSpec> = {
+  text: { ok: fc.constant('name,email,course,certificate_date,end_date\n'), bad: requiredBad(notString, fc.constantFrom('', 'x'.repeat(2_000_001))) },
+};
+
 /** A body for a route that reads none: anything at all. */
 const anyBody: fc.Arbitrary<BadBody> = fc.oneof(
   malformedJson.map((body): BadBody => ({ contentType: 'application/json', body, kind: 'ignored malformed JSON' })),
@@ -360,9 +389,15 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/enrollments/[id]/refund/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(0, 300, true)) },
   'app/api/enrollments/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam } },
   'app/api/enrollments/route.ts#POST': { who: ['learner'], body: badJsonBodies(enrollFields) },
+  'app/api/desk/import/preview/route.ts#POST': { who: DESK, body: badJsonBodies(holderFileFields) },
+  'app/api/desk/import/route.ts#POST': { who: DESK, body: badJsonBodies(holderFileFields) },
+  'app/api/desk/workshops/[id]/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(workshopFields) },
+  'app/api/desk/workshops/route.ts#POST': { who: DESK, body: badJsonBodies(workshopFields) },
   'app/api/health/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
   'app/api/program/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
   'app/api/program/logo/route.ts#GET': { who: EVERYONE, query: badQuery([]), mayAnswerOk: true },
+  'app/api/program/logo/route.ts#POST': { who: ['admin'], special: 'logo-upload' },
+  'app/api/program/route.ts#POST': { who: ['admin'], body: badJsonBodies(programFields) },
   'app/api/pantry/route.ts#GET': { who: ['learner'], query: badQuery([]), mayAnswerOk: true },
   'app/api/photos/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam }, query: badQuery(['size'], { size: fc.constantFrom('thumb', 'full') }) },
   'app/api/photos/route.ts#POST': { who: ['learner'], special: 'photo-upload' },

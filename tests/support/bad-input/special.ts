@@ -244,7 +244,8 @@ const garbageFile = fc.tuple(fc.constantFrom(...MAGIC), fc.uint8Array({ maxLengt
   return out;
 });
 
-export function photoRequests(): fc.Arbitrary<RawRequest> {
+/** Broken uploads of one file in the form field `field` (the practical's photo, the program's logo). */
+export function photoRequests(field = 'photo'): fc.Arbitrary<RawRequest> {
   const course = fc.oneof({ weight: 2, arbitrary: fc.constantFrom('pickling-and-canning', 'volunteer-refresher') }, { weight: 1, arbitrary: nastyString });
   const fileName = fc.oneof(fc.constantFrom('IMG_0001.jpg', 'photo.png', '../../etc/passwd', 'a\u0000b.jpg', '\u202Egpj.exe', ''), nastyString);
   const fileType = fc.constantFrom('image/jpeg', 'image/png', 'image/heic', 'text/html', 'application/octet-stream', '', 'image/svg+xml');
@@ -259,19 +260,19 @@ export function photoRequests(): fc.Arbitrary<RawRequest> {
     .map(({ course, file, photoAsText, extra, second }): RawRequest => {
       const data = new FormData();
       if (course !== null) data.set('course', course);
-      if (photoAsText !== null) data.append('photo', photoAsText);
-      if (file) data.append('photo', new File([file[0] as BlobPart], file[1], { type: file[2] }));
-      if (file && second) data.append('photo', new File([file[0] as BlobPart], 'second.jpg', { type: 'image/jpeg' }));
+      if (photoAsText !== null) data.append(field, photoAsText);
+      if (file) data.append(field, new File([file[0] as BlobPart], file[1], { type: file[2] }));
+      if (file && second) data.append(field, new File([file[0] as BlobPart], 'second.jpg', { type: 'image/jpeg' }));
       for (const [k, v] of extra) data.append(k, v);
       return { query: [], headers: {}, body: data, contentType: null, kind: 'multipart form' };
     });
   const brokenMultipart = fc.constantFrom(
-    '--xyz\r\nContent-Disposition: form-data; name="photo"; filename="a.jpg"\r\n\r\n\xff\xd8\xff',
+    `--xyz\r\nContent-Disposition: form-data; name="${field}"; filename="a.jpg"\r\n\r\n\xff\xd8\xff`,
     '--xyz\r\nContent-Disposition: form-data; name="course"\r\n\r\npickling-and-canning\r\n',
     '--xyz--',
     '',
     'not a multipart body at all',
-    '--abc\r\nContent-Disposition: form-data; name="photo"\r\n\r\nx\r\n--abc--\r\n',
+    `--abc\r\nContent-Disposition: form-data; name="${field}"\r\n\r\nx\r\n--abc--\r\n`,
     '--xyz\r\nContent-Disposition: form-data\r\n\r\n\r\n--xyz--\r\n',
   );
   return fc.oneof(

@@ -6,7 +6,6 @@ import { Card } from '@/components/ui/card';
 import { requirePageRole } from '@/lib/auth/guard';
 import { fetchCourseOptions, fetchInstructorOptions, fetchWorkshopsForDesk } from '@/lib/enrollment/queries';
 import { toZonedInput } from '@/lib/enrollment/time';
-import { saveWorkshopAction } from '../actions';
 
 export const metadata: Metadata = { title: 'Edit workshop — Certificate desk' };
 export const dynamic = 'force-dynamic';
@@ -35,7 +34,6 @@ export default async function EditWorkshopPage({ params }: { params: Promise<{ i
           workshopId={w.id}
           courses={courses}
           instructors={instructors}
-          save={saveWorkshopAction}
           defaults={{
             courseId: String(w.courseId),
             date: start.date,

@@ -1,22 +1,14 @@
 import { LessonView, lessonMetadata, type LessonPageProps } from '@/components/lessons/lesson-view';
-import { getCourses, getLessons } from '@/lib/content';
 
-// Public preview lessons: static pages generated at build time, served from the cache. Members-only
-// lessons never reach this route: next.config.mjs rewrites each of them (to ./members, which checks
-// the session and the enrollment) without changing the address. Any other lesson answers 404 here.
-export const dynamicParams = false;
-
-export function generateStaticParams() {
-  return getCourses().flatMap((course) =>
-    getLessons(course.slug)
-      .filter((lesson) => lesson.preview)
-      .map((lesson) => ({ course: course.slug, lesson: lesson.slug })),
-  );
-}
+// Every lesson, preview or members-only, at one address. Rendered per request and never cached by
+// Next: the access decision (readLesson, in LessonView's data path) is made for each reader, so no
+// one's refusal or body can be served to another. No loading boundary here, so a refusal is a real
+// redirect or 403 before anything streams. Cache-Control for visitors: next.config.mjs.
+export const dynamic = 'force-dynamic';
 
 export const generateMetadata = lessonMetadata;
 
-export default async function PreviewLessonPage({ params }: LessonPageProps) {
+export default async function LessonPage({ params }: LessonPageProps) {
   const { course, lesson } = await params;
   return <LessonView courseSlug={course} lessonSlug={lesson} />;
 }
