@@ -15,7 +15,8 @@ export default async function AccountPage() {
       <h1 className="text-3xl font-bold">Your account</h1>
       <Card title="E-mail address">
         <p>
-          <strong>{account.email}</strong> — {account.confirmed ? 'confirmed.' : 'not confirmed yet. Enrolling and receiving a certificate need a confirmed address.'}
+          <strong>{account.email}</strong> —{' '}
+          {account.confirmed ? 'confirmed.' : 'not confirmed yet. Enrolling and receiving a certificate need a confirmed address.'}
         </p>
         {account.confirmed ? null : (
           <div className="mt-3">
@@ -31,7 +32,9 @@ export default async function AccountPage() {
       </Card>
       <Card title="Name on certificates">
         {account.issuedCertificates ? (
-          <p className="mb-3 text-sm text-ink-soft">Certificates already issued keep the name printed on them; the program coordinator can reissue one with a new name.</p>
+          <p className="mb-3 text-sm text-ink-soft">
+            Certificates already issued keep the name printed on them; the program coordinator can reissue one with a new name.
+          </p>
         ) : null}
         <NameForm name={account.name} />
       </Card>

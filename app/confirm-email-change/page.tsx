@@ -13,9 +13,24 @@ const COPY: Record<EmailChangeOutcome, { title: string; body: string; href: stri
     href: '/signin',
     action: 'Sign in',
   },
-  used: { title: 'This link has already been used', body: 'The change it asked for was made, or a newer link replaced it.', href: '/account', action: 'Open my account' },
-  expired: { title: 'This link has expired', body: 'Links to change an address work for a day. Ask again from your account page.', href: '/account', action: 'Open my account' },
-  invalid: { title: 'This link does not work', body: 'The link is incomplete. Copy the whole link from the e-mail.', href: '/account', action: 'Open my account' },
+  used: {
+    title: 'This link has already been used',
+    body: 'The change it asked for was made, or a newer link replaced it.',
+    href: '/account',
+    action: 'Open my account',
+  },
+  expired: {
+    title: 'This link has expired',
+    body: 'Links to change an address work for a day. Ask again from your account page.',
+    href: '/account',
+    action: 'Open my account',
+  },
+  invalid: {
+    title: 'This link does not work',
+    body: 'The link is incomplete. Copy the whole link from the e-mail.',
+    href: '/account',
+    action: 'Open my account',
+  },
   taken: {
     title: 'That address is taken',
     body: 'Another account started using this address after you asked. Your account keeps its present address.',

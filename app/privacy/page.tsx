@@ -15,21 +15,21 @@ export default function PrivacyPage() {
       </p>
       <h2 className="text-xl font-semibold">Seeing it and taking it with you</h2>
       <p>
-        Signed in, open <Link href="/account">your account</Link> and download everything as one ZIP file: a JSON file for each kind of record and your
-        photos as stored.
+        Signed in, open <Link href="/account">your account</Link> and download everything as one ZIP file: a JSON file for each kind of record and your photos
+        as stored.
       </p>
       <h2 className="text-xl font-semibold">Deleting your account</h2>
       <p>
-        From your account page you can delete your account. Your name, e-mail address, password, lesson progress, quiz attempts, practical batches and
-        photos are removed, and every session ends. Three things are kept, with your name replaced by a pseudonym such as “Deleted account #1234”:
+        From your account page you can delete your account. Your name, e-mail address, password, lesson progress, quiz attempts, practical batches and photos
+        are removed, and every session ends. Three things are kept, with your name replaced by a pseudonym such as “Deleted account #1234”:
       </p>
       <ul className="list-disc pl-5">
         <li>
           <strong>Payments and enrollments</strong>: the program must be able to account for the fees it took and the refunds it made.
         </li>
         <li>
-          <strong>Issued certificates</strong>: a certificate is a public statement; anyone holding one must still be able to verify it by its serial, and
-          the program must know what it certified.
+          <strong>Issued certificates</strong>: a certificate is a public statement; anyone holding one must still be able to verify it by its serial, and the
+          program must know what it certified.
         </li>
         <li>
           <strong>The audit log</strong>: who issued, revoked or refunded what, and when, so the program&apos;s own records stay trustworthy.

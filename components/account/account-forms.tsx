@@ -102,7 +102,19 @@ export function EmailForm() {
 }
 
 /** One button that posts to a route and shows its sentence; `after` runs on success. */
-function ActionButton({ url, body, label, after, variant }: { url: string; body?: unknown; label: string; after?: () => Promise<void>; variant?: 'secondary' }) {
+function ActionButton({
+  url,
+  body,
+  label,
+  after,
+  variant,
+}: {
+  url: string;
+  body?: unknown;
+  label: string;
+  after?: () => Promise<void>;
+  variant?: 'secondary';
+}) {
   const [pending, setPending] = useState(false);
   const [done, setDone] = useState<string | null>(null);
   const [failure, setFailure] = useState<FetchError | string | null>(null);

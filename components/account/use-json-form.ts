@@ -23,8 +23,9 @@ export function useJsonForm<T extends FieldValues>(
     setFailure(null);
     try {
       const body = await fetchJson<Record<string, unknown>>(url, { method: options.method ?? 'POST', body: JSON.stringify(values) });
-      setDone(typeof body.message === 'string' ? body.message : 'Done.');
+      // The follow-up (a fresh sign-in, a refresh) finishes before the sentence says it is done.
       await options.onDone?.(body, values);
+      setDone(typeof body.message === 'string' ? body.message : 'Done.');
     } catch (e) {
       const error = e instanceof FetchError ? e : new FetchError(0, {}, errorMessage(e, 'Something went wrong. Please try again.'));
       for (const [field, messages] of Object.entries(error.fields)) {

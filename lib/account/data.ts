@@ -28,8 +28,17 @@ export async function collectPersonalData(userId: number) {
   const enrollmentIds = enrollments.map((e) => e.id);
   const [payments, attempts, practicals, photos, certificates, progress] = await Promise.all([
     Payment.findAll({ where: { enrollmentId: enrollmentIds }, order: [['id', 'ASC']], raw: true }),
-    QuizAttempt.findAll({ where: { userId }, attributes: ['id', 'quizSlug', 'answers', 'scorePct', 'passed', 'startedAt', 'submittedAt'], order: [['id', 'ASC']], raw: true }),
-    Practical.findAll({ where: { userId }, include: [{ model: Review, as: 'reviews', attributes: ['decision', 'rubric', 'comment', 'createdAt'] }], order: [['id', 'ASC']] }),
+    QuizAttempt.findAll({
+      where: { userId },
+      attributes: ['id', 'quizSlug', 'answers', 'scorePct', 'passed', 'startedAt', 'submittedAt'],
+      order: [['id', 'ASC']],
+      raw: true,
+    }),
+    Practical.findAll({
+      where: { userId },
+      include: [{ model: Review, as: 'reviews', attributes: ['decision', 'rubric', 'comment', 'createdAt'] }],
+      order: [['id', 'ASC']],
+    }),
     PracticalPhoto.findAll({ where: { userId }, order: [['id', 'ASC']], raw: true }),
     Certificate.findAll({
       where: { userId },
@@ -145,7 +154,10 @@ export async function eraseAccount(userId: number, currentPassword: string): Pro
       { transaction },
     );
     await endSessions(user.id, transaction);
-    await sequelize.query('DELETE FROM rate_limits WHERE bucket LIKE :pattern', { replacements: { pattern: `%${formerEmail.replace(/[\\%_]/g, '\\$&')}%` }, transaction });
+    await sequelize.query('DELETE FROM rate_limits WHERE bucket LIKE :pattern', {
+      replacements: { pattern: `%${formerEmail.replace(/[\\%_]/g, '\\$&')}%` },
+      transaction,
+    });
     await audit({ actorId: user.id, action: 'user.erased', subjectType: 'user', subjectId: user.id }, { transaction });
   });
   // The photos' files go after the rows: a failed delete leaves an orphan file, never a row without one.

@@ -81,7 +81,8 @@ export async function requestEmailChange(userId: number, input: ChangeEmailInput
   const { User, sequelize } = db();
   const user = await loadUser(userId);
   await checkPresentPassword(user, input.currentPassword);
-  if (input.newEmail === user.email) throw new AppError('conflict', 'That is already your e-mail address.', { fields: { newEmail: ['That is already your e-mail address.'] } });
+  if (input.newEmail === user.email)
+    throw new AppError('conflict', 'That is already your e-mail address.', { fields: { newEmail: ['That is already your e-mail address.'] } });
   if (await User.count({ where: { email: input.newEmail } })) throw new AppError('conflict', TAKEN, { fields: { newEmail: [TAKEN] } });
   await countAccountMail(user.id);
   const appUrl = getEnv().APP_URL;

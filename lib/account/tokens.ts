@@ -29,10 +29,7 @@ export async function issueToken(
   const { AccountToken } = db();
   const now = options.now ?? new Date();
   const token = crypto.randomBytes(32).toString('base64url');
-  await AccountToken.update(
-    { usedAt: now },
-    { where: { userId, purpose, usedAt: null, expiresAt: { [Op.gt]: now } }, transaction: options.transaction },
-  );
+  await AccountToken.update({ usedAt: now }, { where: { userId, purpose, usedAt: null, expiresAt: { [Op.gt]: now } }, transaction: options.transaction });
   await AccountToken.create(
     { userId, purpose, tokenHash: hashToken(token), newEmail: options.newEmail ?? null, expiresAt: new Date(now.getTime() + options.validMinutes * 60_000) },
     { transaction: options.transaction },

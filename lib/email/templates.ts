@@ -359,7 +359,17 @@ export function passwordChangedEmail({ to, name, appUrl }: { to: string; name: s
 }
 
 /** Sent to the new address of an e-mail change: nothing changes until this link is opened. */
-export function emailChangeConfirmEmail({ to, name, confirmUrl, validHours }: { to: string; name: string; confirmUrl: string; validHours: number }): OutgoingEmail {
+export function emailChangeConfirmEmail({
+  to,
+  name,
+  confirmUrl,
+  validHours,
+}: {
+  to: string;
+  name: string;
+  confirmUrl: string;
+  validHours: number;
+}): OutgoingEmail {
   return compose('user.email_change', to, 'Confirm your new e-mail address for Brinewright', `Hello ${name},`, [
     { kind: 'p', text: 'You asked to use this address for your Brinewright account. Confirm it, and we will write to you here from then on:' },
     { kind: 'button', label: 'Use this e-mail address', href: confirmUrl },
@@ -379,7 +389,10 @@ export function emailChangeNoticeEmail({ to, name, newEmail, appUrl }: { to: str
 /** Sent again on request: the link that confirms the account's e-mail address. */
 export function confirmAddressEmail({ to, name, confirmUrl }: { to: string; name: string; confirmUrl: string }): OutgoingEmail {
   return compose('user.confirm_address', to, 'Confirm your e-mail address for Brinewright', `Hello ${name},`, [
-    { kind: 'p', text: 'Here is a new link to confirm that this address is yours. Enrolling in a course and receiving a certificate need a confirmed address.' },
+    {
+      kind: 'p',
+      text: 'Here is a new link to confirm that this address is yours. Enrolling in a course and receiving a certificate need a confirmed address.',
+    },
     { kind: 'button', label: 'Confirm my e-mail address', href: confirmUrl },
     { kind: 'note', text: 'The link works for seven days. If you did not ask for it, you can ignore this message.' },
   ]);

@@ -128,7 +128,8 @@ describe('password reset by e-mail', () => {
   it('throttles requests per address typed (known or not) and per client address', async () => {
     // RESET_MAX_PER_ACCOUNT is 3 (lib/env.ts default): the fourth request for one address within the hour is refused.
     await createUser('learner', { email: 'yarrow@test.example' });
-    for (let i = 0; i < 3; i++) expect((await resetPOST(post('/api/password-reset', { email: 'yarrow@test.example' }, `198.51.100.${i}`), {})).status).toBe(202);
+    for (let i = 0; i < 3; i++)
+      expect((await resetPOST(post('/api/password-reset', { email: 'yarrow@test.example' }, `198.51.100.${i}`), {})).status).toBe(202);
     const refused = await resetPOST(post('/api/password-reset', { email: 'yarrow@test.example' }, '198.51.100.50'), {});
     expect(refused.status).toBe(429);
     expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0);

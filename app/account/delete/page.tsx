@@ -30,7 +30,9 @@ export default async function DeleteAccountPage() {
       </Card>
       <Card title="What the program keeps, under the name “{preview.pseudonym}”">
         <ul className="list-disc space-y-1 pl-5">
-          <li>{count(preview.payments, 'payment')} and {count(preview.enrollments, 'enrollment')}: the program must keep its accounts.</li>
+          <li>
+            {count(preview.payments, 'payment')} and {count(preview.enrollments, 'enrollment')}: the program must keep its accounts.
+          </li>
           <li>
             {count(preview.certificates, 'issued certificate')}: anyone holding one may still verify it by its serial; it will show the pseudonym, not your
             name.

@@ -361,7 +361,13 @@ const routes: RouteRow[] = [
     expect: [400, 400, NA, 400, 400, 400],
   },
   // Accounts that recover. The bodies fail validation, so no demo account changes; the demo accounts are confirmed (409: nothing to send).
-  { kind: 'route', pattern: '/api/password-reset', method: 'POST', probe: () => ({ path: '/api/password-reset', body: {} }), expect: [400, 400, NA, 400, 400, 400] },
+  {
+    kind: 'route',
+    pattern: '/api/password-reset',
+    method: 'POST',
+    probe: () => ({ path: '/api/password-reset', body: {} }),
+    expect: [400, 400, NA, 400, 400, 400],
+  },
   {
     kind: 'route',
     pattern: '/api/password-reset/complete',
