@@ -33,6 +33,10 @@ export function UserNav() {
       <span className="text-brine-100" data-testid="signed-in-as">
         {user.name} · {ROLE_LABELS[user.role]}
       </span>
+      <Link href="/account" className="relative font-semibold text-white no-underline hover:underline">
+        Account
+        <LinkPending />
+      </Link>
       <button type="button" onClick={() => signOut({ callbackUrl: '/' })} className="rounded border border-brine-400 px-2 py-1 text-white hover:bg-brine-700">
         Sign out
       </button>

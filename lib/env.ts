@@ -39,6 +39,13 @@ const EnvSchema = z
     // New accounts per client address: a class on one venue's Wi-Fi fits, a script does not.
     REGISTER_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(30),
     REGISTER_WINDOW_MINUTES: z.coerce.number().int().positive().default(60),
+    // Password reset requests per e-mail address typed (known or not, so the answer tells nothing)
+    // and per client address; confirmation and e-mail change messages sent per account.
+    RESET_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(3),
+    RESET_MAX_PER_ADDRESS: z.coerce.number().int().positive().default(10),
+    RESET_WINDOW_MINUTES: z.coerce.number().int().positive().default(60),
+    ACCOUNT_MAIL_MAX_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
+    ACCOUNT_MAIL_WINDOW_MINUTES: z.coerce.number().int().positive().default(60),
     // A session ends this many days after sign-in, however active (it also ends after 8 idle hours).
     SESSION_MAX_DAYS: z.coerce.number().int().min(1).max(90).default(7),
     // Certificates (lib/certificates): the program named on the PDF, and the verification throttle.

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { getSequelize } from '@/lib/db';
+import { AccountToken } from './account-token';
 import { AuditLog } from './audit-log';
 import { Certificate } from './certificate';
 import { CertificateVersion } from './certificate-version';
@@ -21,6 +22,7 @@ import { Workshop } from './workshop';
 
 // An explicit registry: the bundler can follow these imports, unlike a readdir + require loop.
 const registry = {
+  AccountToken,
   AuditLog,
   Certificate,
   CertificateVersion,
@@ -89,6 +91,7 @@ function associate() {
   FeeWaiver.belongsTo(User, { foreignKey: fk('createdById', true), as: 'createdBy' });
 
   AuditLog.belongsTo(User, { foreignKey: fk('actorId', true), as: 'actor' });
+  AccountToken.belongsTo(User, { foreignKey: fk('userId'), as: 'user' });
 }
 
 declare global {
@@ -111,6 +114,7 @@ export function db(): Models & { sequelize: Sequelize } {
 }
 
 export {
+  AccountToken,
   AuditLog,
   Certificate,
   Course,

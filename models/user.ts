@@ -10,6 +10,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare emailVerifiedAt: CreationOptional<Date | null>;
   declare sessionVersion: CreationOptional<number>;
   declare deactivatedAt: CreationOptional<Date | null>;
+  declare erasedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -24,6 +25,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         deactivatedAt: { type: DataTypes.DATE, allowNull: true },
+        erasedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

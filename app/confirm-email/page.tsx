@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
+import { ResendConfirmation } from '@/components/account/account-forms';
 import { ButtonLink } from '@/components/ui/button';
-import { Card } from '@/components/ui/card';
+import { LinkOutcome } from '@/components/account/link-outcome';
 import { confirmEmailAddress, type ConfirmOutcome } from '@/lib/email/confirm';
 
 export const metadata: Metadata = { title: 'Confirm your e-mail address — Brinewright' };
@@ -12,7 +13,7 @@ const COPY: Record<ConfirmOutcome, { title: string; body: string }> = {
     body: 'Thank you. Receipts, workshop reminders and your certificate will reach you at this address.',
   },
   already: { title: 'Already confirmed', body: 'This address was confirmed before; there is nothing more to do.' },
-  expired: { title: 'This link has expired', body: 'Confirmation links work for seven days. Sign in and ask the program coordinator for a new one.' },
+  expired: { title: 'This link has expired', body: 'Confirmation links work for seven days. Send yourself a new one (you may be asked to sign in first).' },
   invalid: {
     title: 'This link does not work',
     body: 'The link is incomplete or was made for another address. Copy the whole link from the e-mail and try again.',
@@ -24,14 +25,9 @@ export default async function ConfirmEmailPage({ searchParams }: { searchParams:
   const outcome = typeof token === 'string' && token ? await confirmEmailAddress(token) : 'invalid';
   const copy = COPY[outcome];
   return (
-    <div className="mx-auto max-w-xl py-10">
-      <Card>
-        <h1 className="font-display text-2xl font-bold text-brine-900">{copy.title}</h1>
-        <p className="mt-3 text-ink">{copy.body}</p>
-        <div className="mt-5">
-          <ButtonLink href="/pantry">Go to my Pantry</ButtonLink>
-        </div>
-      </Card>
-    </div>
+    <LinkOutcome title={copy.title} body={copy.body}>
+      {outcome === 'expired' ? <ResendConfirmation /> : null}
+      <ButtonLink href="/pantry">Go to my Pantry</ButtonLink>
+    </LinkOutcome>
   );
 }

@@ -14,6 +14,9 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <SignInForm callbackUrl={callbackUrl} initialError={error} />
       </Card>
       <p className="text-sm text-ink-soft">
+        <Link href="/forgot-password">Forgot your password?</Link>
+      </p>
+      <p className="text-sm text-ink-soft">
         New here? <Link href="/register">Create a learner account</Link>.
       </p>
     </div>

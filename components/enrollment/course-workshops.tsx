@@ -7,6 +7,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
 import type { PublicWorkshop } from '@/lib/enrollment/workshops';
+import { ResendConfirmation } from '@/components/account/account-forms';
 import { FetchError, fetchJson, postJson } from '@/lib/fetcher';
 
 // The route answers the server's PublicWorkshop shape; the type import is erased from the client bundle.
@@ -62,6 +63,7 @@ export function CourseWorkshops({ courseSlug }: { courseSlug: string }) {
 function WorkshopRow({ workshop: w, onEnrolled }: { workshop: WorkshopItem; onEnrolled: () => void }) {
   const [pending, setPending] = useState(false);
   const [message, setMessage] = useState<string | null>(null);
+  const [unconfirmed, setUnconfirmed] = useState(false);
   const [showWaiver, setShowWaiver] = useState(false);
   const [waiverCode, setWaiverCode] = useState('');
   const headingId = `workshop-${w.id}`;
@@ -83,6 +85,7 @@ function WorkshopRow({ workshop: w, onEnrolled }: { workshop: WorkshopItem; onEn
         return;
       }
       setMessage(e instanceof FetchError ? (e.fields.waiverCode?.[0] ?? e.message) : 'The enrollment did not go through. Please try again.');
+      setUnconfirmed(e instanceof FetchError && e.body.reason === 'email_unconfirmed');
       if (e instanceof FetchError && !e.unreachable) onEnrolled();
     } finally {
       setPending(false);
@@ -131,6 +134,7 @@ function WorkshopRow({ workshop: w, onEnrolled }: { workshop: WorkshopItem; onEn
           <p role="status" aria-live="polite" className="text-sm font-medium text-beet-600">
             {message}
           </p>
+          {unconfirmed ? <ResendConfirmation /> : null}
         </div>
       )}
     </li>

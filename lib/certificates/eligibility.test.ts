@@ -22,6 +22,7 @@ const done: EnrollmentFacts = {
   workshopId: 7,
   workshopAttendanceRequired: true,
   attended: true,
+  emailConfirmed: true,
 };
 
 describe('checkEligibility', () => {
@@ -29,7 +30,7 @@ describe('checkEligibility', () => {
     const result = checkEligibility(course, done);
     expect(result.eligible).toBe(true);
     expect(result.missing).toEqual([]);
-    expect(result.checks.map((c) => c.key)).toEqual(['enrollment', 'fee', 'lessons', 'quizzes', 'final-exam', 'practical', 'workshop']);
+    expect(result.checks.map((c) => c.key)).toEqual(['enrollment', 'fee', 'lessons', 'quizzes', 'final-exam', 'practical', 'workshop', 'email']);
   });
 
   it('accepts a waiver instead of a payment, and a free course with neither', () => {
@@ -109,6 +110,12 @@ describe('checkEligibility', () => {
   it('lists every missing requirement at once', () => {
     const nothing: EnrollmentFacts = { ...done, paid: false, lessonsRead: [], quizzesPassed: [], practicalApproved: false, attended: false };
     expect(checkEligibility(course, nothing).missing).toEqual(['fee', 'lessons', 'quizzes', 'final-exam', 'practical', 'workshop']);
+  });
+
+  it('refuses an unconfirmed e-mail address, whatever else is done', () => {
+    const result = checkEligibility(course, { ...done, emailConfirmed: false });
+    expect(result.missing).toEqual(['email']);
+    expect(result.checks.find((c) => c.key === 'email')?.detail).toBe('The learner has not confirmed their e-mail address yet.');
   });
 });
 

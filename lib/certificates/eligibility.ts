@@ -37,9 +37,11 @@ export type EnrollmentFacts = {
   attended: boolean;
   /** An unrevoked certificate the course refreshes (only read when priorCertificateRequired). */
   hasPriorCertificate?: boolean;
+  /** The learner has confirmed their e-mail address (users.emailVerifiedAt), so the certificate reaches its holder. */
+  emailConfirmed: boolean;
 };
 
-export type RequirementKey = 'enrollment' | 'fee' | 'lessons' | 'quizzes' | 'final-exam' | 'practical' | 'workshop' | 'prior-certificate';
+export type RequirementKey = 'enrollment' | 'fee' | 'lessons' | 'quizzes' | 'final-exam' | 'practical' | 'workshop' | 'prior-certificate' | 'email';
 
 export type Check = {
   key: RequirementKey;
@@ -132,6 +134,14 @@ export function checkEligibility(course: CourseRequirements, facts: EnrollmentFa
       detail: met ? 'Holds a certificate this course refreshes.' : 'The refresher needs an earlier, unrevoked certificate.',
     });
   }
+
+  // Someone else's address could otherwise be certified under a name they never chose.
+  checks.push({
+    key: 'email',
+    label: 'E-mail address confirmed',
+    met: facts.emailConfirmed,
+    detail: facts.emailConfirmed ? 'Confirmed.' : 'The learner has not confirmed their e-mail address yet.',
+  });
 
   const missing = checks.filter((c) => !c.met).map((c) => c.key);
   return { eligible: missing.length === 0, checks, missing };

@@ -13,6 +13,7 @@ export type EnrollmentRow = {
   userId: number;
   learnerName: string;
   learnerEmail: string;
+  learnerConfirmed: boolean;
   courseId: number;
   courseSlug: string;
   courseTitle: string;
@@ -60,7 +61,7 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
   const ids = [...new Set(enrollmentIds)];
 
   const raw = await q<Record<string, unknown>>(
-    `SELECT e.id, e.userId, u.name AS learnerName, u.email AS learnerEmail, e.courseId, c.slug AS courseSlug, c.title AS courseTitle,
+    `SELECT e.id, e.userId, u.name AS learnerName, u.email AS learnerEmail, u.emailVerifiedAt AS learnerConfirmedAt, e.courseId, c.slug AS courseSlug, c.title AS courseTitle,
             e.contentVersion, c.validityMonths, e.workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace, w.attendanceRequired,
             e.status, e.feeCents, e.feeWaiverId, e.attendedAt, e.completedAt, e.createdAt,
             ce.id AS certId, ce.serial, ce.issuedAt, ce.validUntil, ce.revokedAt, ce.revokeReason
@@ -78,6 +79,7 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
     userId: Number(r.userId),
     learnerName: String(r.learnerName),
     learnerEmail: String(r.learnerEmail),
+    learnerConfirmed: r.learnerConfirmedAt !== null && r.learnerConfirmedAt !== undefined,
     courseId: Number(r.courseId),
     courseSlug: String(r.courseSlug),
     courseTitle: String(r.courseTitle),
@@ -168,6 +170,7 @@ export async function loadStandings(enrollmentIds: readonly number[], options: O
       workshopId: row.workshopId,
       workshopAttendanceRequired: row.attendanceRequired,
       attended: row.attendedAt !== null,
+      emailConfirmed: row.learnerConfirmed,
       hasPriorCertificate: prior.some(
         (p) => !p.revokedAt && (REFRESHED_COURSE_SLUGS as readonly string[]).includes(p.courseSlug) && p.validUntil.getTime() >= graceCutoff.getTime(),
       ),

@@ -9,6 +9,7 @@ import { roleAllows } from '@/lib/roles';
 import { db } from '@/models';
 import { certificateIssuedEmail, certificateRevokedEmail } from '@/lib/email/templates';
 import { transitionEnrollment } from '@/lib/enrollment/state';
+import { requireConfirmedAddress } from '@/lib/account/confirmed';
 import type { RequirementKey } from './eligibility';
 import { loadStandings } from './facts';
 import { renderCertificatePdf } from './pdf';
@@ -261,6 +262,7 @@ export async function claimRefresherCertificate(enrollmentId: number, learnerId:
   if (!row || Number(row.userId) !== learnerId) throw new AppError('not_found', 'You have no such enrollment.');
   if (row.slug !== REFRESHER_COURSE_SLUG)
     throw new AppError('forbidden', 'Only the refresher certificate can be claimed by the learner; the coordinator issues the others.');
+  await requireConfirmedAddress(learnerId);
   const outcome = await issueCertificate(enrollmentId, learnerId);
   if (outcome.outcome === 'not_eligible') throw new AppError('conflict', 'The refresher is not complete yet.', { extra: { missing: outcome.missing } });
   return outcome;

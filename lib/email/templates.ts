@@ -338,3 +338,62 @@ export function courseChangesEmail({
     { kind: 'button', label: 'Read what changed', href: changesUrl },
   ]);
 }
+
+/** Sent when someone asks to reset the password of an existing account: the single-use link. */
+export function passwordResetEmail({ to, name, resetUrl, validMinutes }: { to: string; name: string; resetUrl: string; validMinutes: number }): OutgoingEmail {
+  return compose('user.password_reset', to, 'Set a new Brinewright password', `Hello ${name},`, [
+    { kind: 'p', text: 'Someone, probably you, asked to set a new password for your Brinewright account. Use this link to choose one:' },
+    { kind: 'button', label: 'Choose a new password', href: resetUrl },
+    { kind: 'note', text: `The link works once, for ${validMinutes} minutes. Setting a new password signs your account out everywhere.` },
+    { kind: 'note', text: 'If you did not ask for this, ignore this message: your password stays as it is.' },
+  ]);
+}
+
+/** Sent after a password was changed or reset, so the holder notices a change they did not make. */
+export function passwordChangedEmail({ to, name, appUrl }: { to: string; name: string; appUrl: string }): OutgoingEmail {
+  return compose('user.password_changed', to, 'Your Brinewright password was changed', `Hello ${name},`, [
+    { kind: 'p', text: 'The password of your Brinewright account was just changed, and every session of the account was signed out.' },
+    { kind: 'p', text: 'If you did not do this, reset your password now and tell the program coordinator:' },
+    { kind: 'button', label: 'Reset my password', href: `${trimUrl(appUrl)}/forgot-password` },
+  ]);
+}
+
+/** Sent to the new address of an e-mail change: nothing changes until this link is opened. */
+export function emailChangeConfirmEmail({
+  to,
+  name,
+  confirmUrl,
+  validHours,
+}: {
+  to: string;
+  name: string;
+  confirmUrl: string;
+  validHours: number;
+}): OutgoingEmail {
+  return compose('user.email_change', to, 'Confirm your new e-mail address for Brinewright', `Hello ${name},`, [
+    { kind: 'p', text: 'You asked to use this address for your Brinewright account. Confirm it, and we will write to you here from then on:' },
+    { kind: 'button', label: 'Use this e-mail address', href: confirmUrl },
+    { kind: 'note', text: `The link works once, for ${validHours} hours. Until it is opened, your account keeps its present address.` },
+  ]);
+}
+
+/** Sent to the present address when a change to another one is asked for. */
+export function emailChangeNoticeEmail({ to, name, newEmail, appUrl }: { to: string; name: string; newEmail: string; appUrl: string }): OutgoingEmail {
+  return compose('user.email_change_notice', to, 'A change of your Brinewright e-mail address was asked for', `Hello ${name},`, [
+    { kind: 'p', text: `Someone signed in to your Brinewright account asked to move it to ${newEmail}. Nothing changes unless that address confirms.` },
+    { kind: 'p', text: 'If this was not you, change your password now; that also signs the account out everywhere:' },
+    { kind: 'button', label: 'Reset my password', href: `${trimUrl(appUrl)}/forgot-password` },
+  ]);
+}
+
+/** Sent again on request: the link that confirms the account's e-mail address. */
+export function confirmAddressEmail({ to, name, confirmUrl }: { to: string; name: string; confirmUrl: string }): OutgoingEmail {
+  return compose('user.confirm_address', to, 'Confirm your e-mail address for Brinewright', `Hello ${name},`, [
+    {
+      kind: 'p',
+      text: 'Here is a new link to confirm that this address is yours. Enrolling in a course and receiving a certificate need a confirmed address.',
+    },
+    { kind: 'button', label: 'Confirm my e-mail address', href: confirmUrl },
+    { kind: 'note', text: 'The link works for seven days. If you did not ask for it, you can ignore this message.' },
+  ]);
+}

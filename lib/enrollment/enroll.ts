@@ -5,6 +5,7 @@ import { enqueueEmail } from '@/lib/email/outbox';
 import { enrollmentReceiptEmail } from '@/lib/email/templates';
 import { getCourse } from '@/lib/content';
 import { getEnv } from '@/lib/env';
+import { requireConfirmedAddress } from '@/lib/account/confirmed';
 import { AppError } from '@/lib/errors';
 import { createCheckoutForEnrollment, expireCheckoutQuietly } from '@/lib/payments/checkout';
 import { db, type Course, type Enrollment, type Workshop } from '@/models';
@@ -52,6 +53,7 @@ export async function enrollInWorkshop({
   const { Workshop, Course, Enrollment, User, sequelize } = db();
   const appUrl = getEnv().APP_URL.replace(/\/$/, '');
   const superseded: number[] = [];
+  await requireConfirmedAddress(user.id);
 
   // A typed code is checked (and counted) before the workshop row is locked, so guessing never holds the lock.
   let waiverId: number | null = null;

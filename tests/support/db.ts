@@ -20,14 +20,15 @@ export async function resetDatabase(): Promise<void> {
 
 let counter = 0;
 
-/** Creates a user with a role; the password is 'test-password-123'. */
-export async function createUser(role: Role = 'learner', overrides: Partial<{ email: string; name: string }> = {}): Promise<SessionUser> {
+/** Creates a user with a role and a confirmed address (unless `confirmed: false`); the password is 'test-password-123'. */
+export async function createUser(role: Role = 'learner', overrides: Partial<{ email: string; name: string; confirmed: boolean }> = {}): Promise<SessionUser> {
   counter += 1;
   const user = await db().User.create({
     email: overrides.email ?? `${role}${counter}-${Date.now()}@test.example`,
     name: overrides.name ?? `Test ${role} ${counter}`,
     role,
     passwordHash: await hashPassword('test-password-123'),
+    emailVerifiedAt: overrides.confirmed === false ? null : new Date(),
   });
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 }

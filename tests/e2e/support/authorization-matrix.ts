@@ -71,6 +71,7 @@ const COORDINATOR_READ: Answers = [401, 403, NA, 403, 200, 200];
 const COORDINATOR_WRITE: Answers = [401, 403, NA, 403, 400, 400];
 const LEARNER_WRITE: Answers = [401, 400, NA, 403, 403, 403];
 const ADMIN_WRITE: Answers = [401, 403, NA, 403, 403, 400];
+const ACCOUNT_WRITE: Answers = [401, 400, NA, 400, 400, 400];
 
 const pages: PageRow[] = [
   { kind: 'page', pattern: '/', probe: at('/'), expect: PUBLIC },
@@ -145,6 +146,13 @@ const pages: PageRow[] = [
     probe: (fx, s) => ({ path: `/verify/${ab(s, fx.a.serial, fx.b.serial)}` }),
     expect: [200, 200, 200, 200, 200, 200],
   },
+  // Accounts that recover: every signed-in person has an account page; deletion is a learner's own.
+  { kind: 'page', pattern: '/account', probe: at('/account'), expect: [S, 200, NA, 200, 200, 200] },
+  { kind: 'page', pattern: '/account/delete', probe: at('/account/delete'), expect: LEARNER_PAGE },
+  { kind: 'page', pattern: '/forgot-password', probe: at('/forgot-password'), expect: PUBLIC },
+  { kind: 'page', pattern: '/reset-password', probe: at('/reset-password?token=not-a-token'), expect: PUBLIC },
+  { kind: 'page', pattern: '/confirm-email-change', probe: at('/confirm-email-change?token=not-a-token'), expect: PUBLIC },
+  { kind: 'page', pattern: '/privacy', probe: at('/privacy'), expect: PUBLIC },
 ];
 
 const tool = (name: string, query: string): RouteRow => ({
@@ -365,6 +373,34 @@ const routes: RouteRow[] = [
     probe: () => ({ path: '/api/webhooks/stripe', body: '{}', headers: { 'content-type': 'application/json' } }),
     expect: [400, 400, NA, 400, 400, 400],
   },
+  // Accounts that recover. The bodies fail validation, so no demo account changes; the demo accounts are confirmed (409: nothing to send).
+  {
+    kind: 'route',
+    pattern: '/api/password-reset',
+    method: 'POST',
+    probe: () => ({ path: '/api/password-reset', body: {} }),
+    expect: [400, 400, NA, 400, 400, 400],
+  },
+  {
+    kind: 'route',
+    pattern: '/api/password-reset/complete',
+    method: 'POST',
+    probe: () => ({ path: '/api/password-reset/complete', body: {} }),
+    expect: [400, 400, NA, 400, 400, 400],
+  },
+  { kind: 'route', pattern: '/api/account/password', method: 'POST', probe: () => ({ path: '/api/account/password', body: {} }), expect: ACCOUNT_WRITE },
+  { kind: 'route', pattern: '/api/account/email', method: 'POST', probe: () => ({ path: '/api/account/email', body: {} }), expect: ACCOUNT_WRITE },
+  { kind: 'route', pattern: '/api/account/name', method: 'POST', probe: () => ({ path: '/api/account/name', body: {} }), expect: ACCOUNT_WRITE },
+  {
+    kind: 'route',
+    pattern: '/api/account/sign-out-everywhere',
+    method: 'POST',
+    probe: () => ({ path: '/api/account/sign-out-everywhere', body: {} }),
+    expect: ACCOUNT_WRITE,
+  },
+  { kind: 'route', pattern: '/api/account/confirmation', method: 'POST', probe: at('/api/account/confirmation'), expect: [401, 409, NA, 409, 409, 409] },
+  { kind: 'route', pattern: '/api/account/export', method: 'GET', probe: at('/api/account/export'), expect: [401, 200, NA, 200, 200, 200] },
+  { kind: 'route', pattern: '/api/account', method: 'DELETE', probe: () => ({ path: '/api/account', body: {} }), expect: LEARNER_WRITE },
 ];
 
 const actions: ActionRow[] = [{ kind: 'action', pattern: '/admin/users', action: 'changeRoleAction', expect: [401, 403, NA, 403, 403, 'pass'] }];

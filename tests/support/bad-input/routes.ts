@@ -340,7 +340,37 @@ const clientAddress = fc.record(
 const tool = (names: string[], ok: Record<string, fc.Arbitrary<string>> = {}): SweepSpec => ({ who: EVERYONE, query: toolQuery(names, ok), mayAnswerOk: true });
 
 /** Key: `${file}#${method}`, as discoverRoutes() names them. */
+// Accounts that recover: every body breaks at least one field, so no password is ever checked.
+const presentPasswordField: FieldSpec = {
+  ok: fc.constantFrom('not-the-password-1', 'another wrong one'),
+  bad: requiredBad(notString, fc.constant(''), fc.constant('p'.repeat(201))),
+};
+const accountFields = {
+  resetRequest: { email: registerFields.email },
+  resetComplete: {
+    token: { ok: fc.constant('A'.repeat(43)), bad: requiredBad(notString, fc.constant(''), longerThan(200)) },
+    password: registerFields.password,
+  },
+  password: { currentPassword: presentPasswordField, newPassword: registerFields.password },
+  email: { newEmail: registerFields.email, currentPassword: presentPasswordField },
+  name: { name: registerFields.name },
+  signOutEverywhere: { confirm: { ok: fc.constant(true), bad: requiredBad(fc.constantFrom(false, 'true', 1, 0, null, {}, [], 'yes')) } },
+  erase: {
+    currentPassword: presentPasswordField,
+    confirm: { ok: fc.constant('DELETE'), bad: requiredBad(notString, fc.constantFrom('delete', 'yes', '', ' DELETE', 'DELETE ', 'Delete')) },
+  },
+} satisfies Record<string, Record<string, FieldSpec>>;
+
 export const SWEEP: Record<string, SweepSpec> = {
+  'app/api/account/confirmation/route.ts#POST': { who: SIGNED_IN },
+  'app/api/account/email/route.ts#POST': { who: SIGNED_IN, body: badJsonBodies(accountFields.email) },
+  'app/api/account/export/route.ts#GET': { who: SIGNED_IN, query: badQuery([]), mayAnswerOk: true },
+  'app/api/account/name/route.ts#POST': { who: SIGNED_IN, body: badJsonBodies(accountFields.name) },
+  'app/api/account/password/route.ts#POST': { who: SIGNED_IN, body: badJsonBodies(accountFields.password) },
+  'app/api/account/route.ts#DELETE': { who: ['learner'], body: badJsonBodies(accountFields.erase) },
+  'app/api/account/sign-out-everywhere/route.ts#POST': { who: SIGNED_IN, body: badJsonBodies(accountFields.signOutEverywhere) },
+  'app/api/password-reset/complete/route.ts#POST': { who: EVERYONE, body: badJsonBodies(accountFields.resetComplete) },
+  'app/api/password-reset/route.ts#POST': { who: EVERYONE, body: badJsonBodies(accountFields.resetRequest) },
   'app/api/attempts/[id]/route.ts#GET': { who: SIGNED_IN, params: { id: idParam } },
   'app/api/attempts/[id]/submit/route.ts#POST': { who: ['learner'], params: { id: idParam }, body: badJsonBodies(submitFields) },
   'app/api/auth/[...nextauth]/route.ts#GET': { who: EVERYONE, special: 'nextauth', mayAnswerOk: true },
