@@ -5,27 +5,20 @@ import { changeRoleAction, type State } from '@/app/admin/users/actions';
 import { Button } from '@/components/ui/button';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
 
-export function RoleForm({ userId, userName, role }: { userId: number; userName: string; role: Role }) {
+export function RoleForm({ userId, userName, roles }: { userId: number; userName: string; roles: readonly Role[] }) {
   const [state, action, pending] = useActionState<State, FormData>(changeRoleAction.bind(null, userId), {});
   const messageId = `role-msg-${userId}`;
   return (
     <form action={action} className="flex flex-wrap items-center gap-2">
-      <label className="sr-only" htmlFor={`role-${userId}`}>
-        Role for {userName}
-      </label>
-      <select
-        id={`role-${userId}`}
-        name="role"
-        defaultValue={role}
-        aria-describedby={messageId}
-        className="rounded-lg border border-ink-faint/40 bg-white px-2 py-1"
-      >
+      <fieldset className="flex flex-wrap gap-3" aria-describedby={messageId}>
+        <legend className="sr-only">Roles for {userName}</legend>
         {ROLES.map((r) => (
-          <option key={r} value={r}>
+          <label key={r} className="flex items-center gap-1 text-sm">
+            <input type="checkbox" name="roles" value={r} defaultChecked={roles.includes(r)} />
             {ROLE_LABELS[r]}
-          </option>
+          </label>
         ))}
-      </select>
+      </fieldset>
       <Button type="submit" size="sm" variant="secondary" pending={pending}>
         Save
       </Button>

@@ -16,9 +16,9 @@ export async function fetchLearnerEnrollments({ userId }: { userId: number }): P
   );
 }
 
-export type UserRow = { id: number; name: string; email: string; role: Role; createdAt: Date };
+export type UserRow = { id: number; name: string; email: string; roles: Role[]; createdAt: Date };
 
 export async function fetchUsers({ limit = 200 }: { limit?: number } = {}): Promise<UserRow[]> {
-  const users = await db().User.findAll({ attributes: ['id', 'name', 'email', 'role', 'createdAt'], order: [['name', 'ASC']], limit });
-  return users.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role, createdAt: u.createdAt }));
+  const users = await db().User.findAll({ attributes: ['id', 'name', 'email', 'roles', 'createdAt'], order: [['name', 'ASC']], limit });
+  return users.map((u) => ({ id: u.id, name: u.name, email: u.email, roles: u.roles, createdAt: u.createdAt }));
 }

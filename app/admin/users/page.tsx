@@ -18,7 +18,7 @@ export default async function UsersPage() {
           <TR>
             <TH>Name</TH>
             <TH>E-mail</TH>
-            <TH>Role</TH>
+            <TH>Roles</TH>
           </TR>
         </THead>
         <TBody>
@@ -27,7 +27,7 @@ export default async function UsersPage() {
               <TD>{u.name}</TD>
               <TD>{u.email}</TD>
               <TD>
-                <RoleForm userId={u.id} userName={u.name} role={u.role} />
+                <RoleForm userId={u.id} userName={u.name} roles={u.roles} />
               </TD>
             </TR>
           ))}
