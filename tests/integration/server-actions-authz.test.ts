@@ -1,7 +1,6 @@
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { saveProgramAction } from '@/app/admin/program/actions';
 import { importAction, previewImportAction } from '@/app/desk/import/actions';
-import { changeRoleAction } from '@/app/admin/users/actions';
 import { saveWorkshopAction } from '@/app/desk/workshops/actions';
 import type { SessionUser } from '@/lib/auth/users';
 import { AppError } from '@/lib/errors';
@@ -19,13 +18,6 @@ type People = Record<Exclude<Subject, 'visitor'>, SessionUser> & { target: Sessi
 
 /** One call per action, as the page would make it, for the signed-in person; returns what came back or the status it was refused with. */
 const CALLS: Record<string, (people: People) => Promise<unknown>> = {
-  // The admin page's role select: makes the target learner an instructor.
-  '/admin/users changeRoleAction': (people) => {
-    const form = new FormData();
-    form.append('roles', 'learner');
-    form.append('roles', 'instructor');
-    return changeRoleAction(people.target.id, {}, form);
-  },
   // The program page with nothing filled in: the admin gets the field errors back.
   '/admin/program saveProgramAction': () => saveProgramAction({}, new FormData()),
   // The import page with no file: the coordinator is asked for one; nothing is read or written.
@@ -86,15 +78,4 @@ describe('server actions in the authorization matrix', () => {
       expect(got).toEqual(wanted);
     });
   }
-
-  it('changes nothing when the guard refuses, and the change when the admin asks', async () => {
-    for (const subject of ['own', 'instructor', 'coordinator', 'volunteer'] as const) {
-      actAs(people[subject]);
-      await outcome(() => CALLS['/admin/users changeRoleAction'](people));
-    }
-    expect((await db().User.findByPk(people.target.id))?.roles).toEqual(['learner']);
-    actAs(people.admin);
-    expect(await CALLS['/admin/users changeRoleAction'](people)).toEqual({ ok: true, message: 'Roles saved.' });
-    expect((await db().User.findByPk(people.target.id))?.roles).toEqual(['learner', 'instructor']);
-  });
 });

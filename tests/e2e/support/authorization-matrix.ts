@@ -174,7 +174,19 @@ const tool = (name: string, query: string): RouteRow => ({
   expect: PUBLIC,
 });
 
+const ADMIN_WRITE: Answers = { visitor: 401, own: 403, other: NA, instructor: 403, coordinator: 403, admin: 404, volunteer: 403 };
+
 const routes: RouteRow[] = [
+  // An account that does not exist: the admin is let through, then told so (404); nobody's roles or access change.
+  {
+    kind: 'route',
+    pattern: '/api/admin/users/[id]/roles',
+    method: 'POST',
+    probe: () => ({ path: '/api/admin/users/999999999/roles', body: { roles: ['learner'] } }),
+    expect: ADMIN_WRITE,
+  },
+  { kind: 'route', pattern: '/api/admin/users/[id]/deactivate', method: 'POST', probe: at('/api/admin/users/999999999/deactivate'), expect: ADMIN_WRITE },
+  { kind: 'route', pattern: '/api/admin/users/[id]/reactivate', method: 'POST', probe: at('/api/admin/users/999999999/reactivate'), expect: ADMIN_WRITE },
   // Staff may read an attempt (question results, reviews); another learner may not.
   {
     kind: 'route',
@@ -402,12 +414,6 @@ const actions: ActionRow[] = [
     kind: 'action',
     pattern: '/admin/program',
     action: 'saveProgramAction',
-    expect: { visitor: 401, own: 403, other: NA, instructor: 403, coordinator: 403, admin: 'pass', volunteer: 403 },
-  },
-  {
-    kind: 'action',
-    pattern: '/admin/users',
-    action: 'changeRoleAction',
     expect: { visitor: 401, own: 403, other: NA, instructor: 403, coordinator: 403, admin: 'pass', volunteer: 403 },
   },
   {

@@ -6,7 +6,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import fc from 'fast-check';
 import { CRISPING_AGENTS, GAUGES, JAR_SIZES, PRODUCT_IDS, SALT_KINDS, SUGAR_KINDS } from '@/lib/preserving';
-import type { Role } from '@/lib/roles';
+import { ROLES, type Role } from '@/lib/roles';
 import {
   AVOID_IDS,
   MISSING_ID,
@@ -137,6 +137,15 @@ const reasonFields = (min: number, max: number, optional: boolean): Record<strin
       : requiredBad(notString, shortTrimmed(min), longerThan(max)),
   },
 });
+
+const roleSetField: FieldSpec = {
+  ok: fc.subarray([...ROLES], { minLength: 1 }),
+  bad: requiredBad(
+    notString,
+    nastyString,
+    fc.constantFrom([], ['superuser'], ['admin', 'root'], [null], [1], ['learner', 'instructor', 'coordinator', 'admin', 'learner']),
+  ),
+};
 
 const criterion = fc.record({ verdict: fc.constantFrom('met', 'not_met'), comment: fc.string({ maxLength: 20 }) });
 const reviewFields: Record<string, FieldSpec> = {
@@ -337,6 +346,9 @@ export const SWEEP: Record<string, SweepSpec> = {
       },
     }),
   },
+  'app/api/admin/users/[id]/roles/route.ts#POST': { who: ['admin'], params: { id: idParam }, body: badJsonBodies({ roles: roleSetField }) },
+  'app/api/admin/users/[id]/deactivate/route.ts#POST': { who: ['admin'], params: { id: idParam } },
+  'app/api/admin/users/[id]/reactivate/route.ts#POST': { who: ['admin'], params: { id: idParam } },
   'app/api/desk/certificates/[id]/revoke/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(5, 500, false)) },
   'app/api/desk/certificates/route.ts#POST': { who: DESK, body: badJsonBodies({ enrollmentIds: idsField(100) }) },
   'app/api/desk/enrollments/route.ts#GET': {
