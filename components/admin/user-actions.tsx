@@ -77,7 +77,12 @@ export function UserActions({ user }: Props) {
               size="sm"
               pending={pending === 'activation'}
               onClick={() =>
-                void send('activation', `/api/admin/users/${user.id}/${activation}`, undefined, user.deactivated ? 'Account reactivated.' : 'Account deactivated.')
+                void send(
+                  'activation',
+                  `/api/admin/users/${user.id}/${activation}`,
+                  undefined,
+                  user.deactivated ? 'Account reactivated.' : 'Account deactivated.',
+                )
               }
             >
               {user.deactivated ? 'Reactivate the account' : 'Deactivate the account'}
@@ -89,8 +94,8 @@ export function UserActions({ user }: Props) {
           <p>{user.name} will be able to sign in again with their password. Sessions that ended stay ended.</p>
         ) : (
           <p>
-            {user.name} will be signed out everywhere and cannot sign in. Their enrollments, payments, certificates and the audit log stay. You can
-            reactivate the account later.
+            {user.name} will be signed out everywhere and cannot sign in. Their enrollments, payments, certificates and the audit log stay. You can reactivate
+            the account later.
           </p>
         )}
       </Dialog>

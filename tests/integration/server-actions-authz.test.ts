@@ -4,7 +4,6 @@ import { importAction, previewImportAction } from '@/app/desk/import/actions';
 import { saveWorkshopAction } from '@/app/desk/workshops/actions';
 import type { SessionUser } from '@/lib/auth/users';
 import { AppError } from '@/lib/errors';
-import { db } from '@/models';
 import { discoverRoutes } from '../support/app-routes';
 import { MATRIX, SUBJECTS, type ActionExpected, type ActionRow, type Subject } from '../e2e/support/authorization-matrix';
 import { createCourses, createUser, resetDatabase } from '../support/db';
