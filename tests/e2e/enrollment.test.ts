@@ -1,23 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openBrowser, seriousViolations } from './support/browser';
-
-type Message = { to: string[]; subject: string; text: string; html: string | null };
-
-async function mailbox(): Promise<Message[]> {
-  const url = process.env.E2E_MAILBOX_URL;
-  if (!url) throw new Error('E2E_MAILBOX_URL is not set: the e2e global setup did not start the fakes');
-  return (await (await fetch(`${url}/api/messages`)).json()).messages;
-}
-
-async function messageTo(email: string, subject: RegExp, timeoutMs = 20_000): Promise<Message> {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    const found = (await mailbox()).find((m) => m.to.includes(email) && subject.test(m.subject));
-    if (found) return found;
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error(`no message to ${email} matching ${subject}`);
-}
+import { mailbox, messageTo } from './support/mailbox';
 
 describe('enrolling and paying in the browser', () => {
   let browser: Awaited<ReturnType<typeof openBrowser>>;

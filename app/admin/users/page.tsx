@@ -27,6 +27,11 @@ export default async function UsersPage({ searchParams }: Props) {
         An account may hold several roles: a volunteer instructor is also a learner. A change applies at once: the next page the person opens uses it, without
         signing in again. A deactivated account cannot sign in and its sessions end; its enrollments, payments and certificates stay.
       </p>
+      <p>
+        <Link href="/admin/invitations" className="font-semibold">
+          Invite staff by e-mail
+        </Link>
+      </p>
       <form method="get" action="/admin/users" role="search" className="flex flex-wrap items-end gap-2">
         <label className="flex flex-col text-sm font-medium">
           Name or e-mail

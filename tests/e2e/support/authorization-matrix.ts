@@ -68,6 +68,7 @@ const NA = 'n/a' as const;
 const PUBLIC: Answers = { visitor: 200, own: 200, other: NA, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 };
 const COORDINATOR_PAGE: Answers = { visitor: S, own: 403, other: NA, instructor: 403, coordinator: 200, admin: 200, volunteer: 403 };
 const INSTRUCTOR_PAGE: Answers = { visitor: S, own: 403, other: NA, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 };
+const ADMIN_PAGE: Answers = { visitor: S, own: 403, other: NA, instructor: 403, coordinator: 403, admin: 200, volunteer: 403 };
 const LEARNER_PAGE: Answers = { visitor: S, own: 200, other: NA, instructor: 403, coordinator: 403, admin: 403, volunteer: 200 };
 const COORDINATOR_READ: Answers = { visitor: 401, own: 403, other: NA, instructor: 403, coordinator: 200, admin: 200, volunteer: 403 };
 const COORDINATOR_WRITE: Answers = { visitor: 401, own: 403, other: NA, instructor: 403, coordinator: 400, admin: 400, volunteer: 403 };
@@ -81,6 +82,9 @@ const pages: PageRow[] = [
     probe: at('/admin/users'),
     expect: { visitor: S, own: 403, other: NA, instructor: 403, coordinator: 403, admin: 200, volunteer: 403 },
   },
+  { kind: 'page', pattern: '/admin/invitations', probe: at('/admin/invitations'), expect: ADMIN_PAGE },
+  // The invitee's page: public, the token is the only credential (an unknown one says so).
+  { kind: 'page', pattern: '/invitation', probe: at('/invitation?token=AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA'), expect: PUBLIC },
   { kind: 'page', pattern: '/desk/import', probe: at('/desk/import'), expect: COORDINATOR_PAGE },
   {
     kind: 'page',
@@ -184,6 +188,22 @@ const routes: RouteRow[] = [
     method: 'POST',
     probe: () => ({ path: '/api/admin/users/999999999/roles', body: { roles: ['learner'] } }),
     expect: ADMIN_WRITE,
+  },
+  // Nothing filled in: the admin is told what is missing (400); nobody is invited.
+  {
+    kind: 'route',
+    pattern: '/api/admin/invitations',
+    method: 'POST',
+    probe: () => ({ path: '/api/admin/invitations', body: {} }),
+    expect: { ...ADMIN_WRITE, admin: 400 },
+  },
+  // Public (the token is the credential): a form without a token is refused on its merits for everyone.
+  {
+    kind: 'route',
+    pattern: '/api/invitations/accept',
+    method: 'POST',
+    probe: () => ({ path: '/api/invitations/accept', body: {} }),
+    expect: { visitor: 400, own: 400, other: NA, instructor: 400, coordinator: 400, admin: 400, volunteer: 400 },
   },
   { kind: 'route', pattern: '/api/admin/users/[id]/deactivate', method: 'POST', probe: at('/api/admin/users/999999999/deactivate'), expect: ADMIN_WRITE },
   { kind: 'route', pattern: '/api/admin/users/[id]/reactivate', method: 'POST', probe: at('/api/admin/users/999999999/reactivate'), expect: ADMIN_WRITE },

@@ -255,6 +255,19 @@ const registerFields: Record<string, FieldSpec> = {
   password: { ok: fc.constant('a long pass phrase'), bad: requiredBad(notString, fc.string({ maxLength: 9 }), fc.constant('p'.repeat(201))) },
 };
 
+// Well-formed tokens that name no invitation: the sweep never accepts a real one.
+const acceptFields: Record<string, FieldSpec> = {
+  token: {
+    ok: fc.stringMatching(/^[A-Za-z0-9_-]{43}$/),
+    bad: requiredBad(
+      notString,
+      nastyString.filter((v) => !/^[A-Za-z0-9_-]{43}$/.test(v)),
+    ),
+  },
+  name: registerFields.name,
+  password: registerFields.password,
+};
+
 const WAIVER = /^[A-Z0-9-]{4,40}$/;
 const waiverCodeBad = fc.oneof(
   nastyNumber,
@@ -346,6 +359,8 @@ export const SWEEP: Record<string, SweepSpec> = {
       },
     }),
   },
+  'app/api/admin/invitations/route.ts#POST': { who: ['admin'], body: badJsonBodies({ email: registerFields.email, roles: roleSetField }) },
+  'app/api/invitations/accept/route.ts#POST': { who: EVERYONE, body: badJsonBodies(acceptFields) },
   'app/api/admin/users/[id]/roles/route.ts#POST': { who: ['admin'], params: { id: idParam }, body: badJsonBodies({ roles: roleSetField }) },
   'app/api/admin/users/[id]/deactivate/route.ts#POST': { who: ['admin'], params: { id: idParam } },
   'app/api/admin/users/[id]/reactivate/route.ts#POST': { who: ['admin'], params: { id: idParam } },
