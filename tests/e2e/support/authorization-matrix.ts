@@ -85,6 +85,7 @@ const pages: PageRow[] = [
   { kind: 'page', pattern: '/admin/invitations', probe: at('/admin/invitations'), expect: ADMIN_PAGE },
   // The invitee's page: public, the token is the only credential (an unknown one says so).
   { kind: 'page', pattern: '/invitation', probe: at('/invitation?token=AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA'), expect: PUBLIC },
+  { kind: 'page', pattern: '/desk/audit', probe: at('/desk/audit?action=user.roles_changed&from=2026-01-01'), expect: COORDINATOR_PAGE },
   { kind: 'page', pattern: '/desk/import', probe: at('/desk/import'), expect: COORDINATOR_PAGE },
   {
     kind: 'page',
