@@ -29,7 +29,7 @@ async function main() {
 
   console.log(`[bench] seeding ${COUNT} eligible enrollments…`);
   await q(
-    `INSERT INTO users (email, name, passwordHash, role, createdAt, updatedAt) VALUES ('bench-coordinator@bench.example', 'Bench Coordinator', 'x', 'coordinator', :now, :now)`,
+    `INSERT INTO users (email, name, passwordHash, roles, createdAt, updatedAt) VALUES ('bench-coordinator@bench.example', 'Bench Coordinator', 'x', 'coordinator', :now, :now)`,
     { now },
   );
   await q(
@@ -57,7 +57,7 @@ async function main() {
     }));
     await sequelize.getQueryInterface().bulkInsert(
       'users',
-      users.map((u) => ({ ...u, passwordHash: 'x', role: 'learner', createdAt: now, updatedAt: now })),
+      users.map((u) => ({ ...u, passwordHash: 'x', roles: 'learner', createdAt: now, updatedAt: now })),
     );
     const ids = (
       await sequelize.query<{ id: number }>('SELECT id FROM users WHERE email IN (:emails) ORDER BY id', {

@@ -144,7 +144,7 @@ async function seedSubmissions(url: string, count: number) {
       stamp,
       stamp,
     ]);
-    await sequelize.query(`INSERT INTO users (email, name, role, passwordHash, createdAt, updatedAt) VALUES ${users.map(() => '(?,?,?,?,?,?)').join(',')}`, {
+    await sequelize.query(`INSERT INTO users (email, name, roles, passwordHash, createdAt, updatedAt) VALUES ${users.map(() => '(?,?,?,?,?,?)').join(',')}`, {
       replacements: users.flat(),
     });
     const [ids] = (await sequelize.query('SELECT id FROM users WHERE email LIKE ? ORDER BY id DESC LIMIT ?', { replacements: ['bench-%', n] })) as [

@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { signOut, useSession } from 'next-auth/react';
 import { LinkPending } from '@/components/ui/link-pending';
 import { navFor } from '@/lib/nav';
-import { ROLE_LABELS } from '@/lib/roles';
+import { describeRoles } from '@/lib/roles';
 
 export function UserNav() {
   const { data, status } = useSession();
@@ -24,14 +24,14 @@ export function UserNav() {
   const { user } = data;
   return (
     <nav aria-label="Your pages" className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
-      {navFor(user.role).map((item) => (
+      {navFor(user.roles).map((item) => (
         <Link key={item.href} href={item.href} className="relative font-semibold text-white no-underline hover:underline">
           {item.label}
           <LinkPending />
         </Link>
       ))}
       <span className="text-brine-100" data-testid="signed-in-as">
-        {user.name} · {ROLE_LABELS[user.role]}
+        {user.name} · {describeRoles(user.roles)}
       </span>
       <Link href="/account" className="relative font-semibold text-white no-underline hover:underline">
         Account

@@ -1,4 +1,4 @@
-import type { Role } from './roles';
+import { roleAllows, type RoleSet, type Role } from './roles';
 
 export type NavItem = { href: string; label: string; roles: readonly Role[] };
 
@@ -9,15 +9,16 @@ export const PUBLIC_NAV: readonly NavItem[] = [
   { href: '/verify', label: 'Verify a certificate', roles: [] },
 ];
 
+// `roles`: who the page's guard lets in (lib/roles.ts implies the rest), so the menu and the guard agree.
 export const ROLE_NAV: readonly NavItem[] = [
   { href: '/pantry', label: 'Pantry', roles: ['learner'] },
-  { href: '/tasting-table', label: 'Tasting table', roles: ['instructor', 'coordinator', 'admin'] },
-  { href: '/desk', label: 'Certificate desk', roles: ['coordinator', 'admin'] },
+  { href: '/tasting-table', label: 'Tasting table', roles: ['instructor'] },
+  { href: '/desk', label: 'Certificate desk', roles: ['coordinator'] },
   { href: '/admin/users', label: 'Users and roles', roles: ['admin'] },
   { href: '/admin/program', label: 'Program', roles: ['admin'] },
 ];
 
-export function navFor(role: Role | null): NavItem[] {
-  if (!role) return [];
-  return ROLE_NAV.filter((item) => item.roles.includes(role));
+export function navFor(roles: RoleSet | null): NavItem[] {
+  if (!roles) return [];
+  return ROLE_NAV.filter((item) => roleAllows(roles, item.roles));
 }

@@ -17,6 +17,7 @@ import { ProgramSetting } from './program-setting';
 import { QuizAnswer } from './quiz-answer';
 import { QuizAttempt } from './quiz-attempt';
 import { Review } from './review';
+import { StaffInvitation } from './staff-invitation';
 import { User } from './user';
 import { Workshop } from './workshop';
 
@@ -39,6 +40,7 @@ const registry = {
   QuizAnswer,
   QuizAttempt,
   Review,
+  StaffInvitation,
   User,
   Workshop,
 };
@@ -76,6 +78,9 @@ function associate() {
   PracticalPhoto.belongsTo(User, { foreignKey: fk('userId'), as: 'user' });
   Review.belongsTo(Practical, { foreignKey: fk('practicalId'), as: 'practical' });
   Review.belongsTo(User, { foreignKey: fk('reviewerId'), as: 'reviewer' });
+
+  StaffInvitation.belongsTo(User, { foreignKey: fk('invitedById', true), as: 'invitedBy' });
+  StaffInvitation.belongsTo(User, { foreignKey: fk('acceptedUserId', true), as: 'acceptedUser' });
 
   Certificate.belongsTo(Enrollment, { foreignKey: fk('enrollmentId'), as: 'enrollment' });
   Certificate.belongsTo(User, { foreignKey: fk('userId'), as: 'user' });
@@ -129,6 +134,7 @@ export {
   QuizAnswer,
   QuizAttempt,
   Review,
+  StaffInvitation,
   User,
   Workshop,
 };

@@ -1,12 +1,13 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ROLES, type Role } from '@/lib/roles';
+import { formatRoles, parseRoles, type Role } from '@/lib/roles';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<number>;
   declare email: string;
   declare name: string;
   declare passwordHash: string;
-  declare role: CreationOptional<Role>;
+  /** The roles the account holds (MariaDB SET column; read and written as an array). */
+  declare roles: CreationOptional<Role[]>;
   declare emailVerifiedAt: CreationOptional<Date | null>;
   declare sessionVersion: CreationOptional<number>;
   declare deactivatedAt: CreationOptional<Date | null>;
@@ -21,7 +22,17 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
         name: { type: DataTypes.STRING(120), allowNull: false },
         passwordHash: { type: DataTypes.STRING(100), allowNull: false },
-        role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: 'learner' },
+        roles: {
+          type: DataTypes.STRING,
+          allowNull: false,
+          defaultValue: 'learner',
+          get(this: User) {
+            return parseRoles(this.getDataValue('roles'));
+          },
+          set(this: User, value: Role[]) {
+            this.setDataValue('roles', formatRoles(value) as unknown as Role[]);
+          },
+        },
         emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         deactivatedAt: { type: DataTypes.DATE, allowNull: true },

@@ -6,6 +6,7 @@ import { createInterface } from 'node:readline';
 import { parseArgs } from 'node:util';
 import { z } from 'zod';
 import { password as passwordPolicy } from '../lib/validations/user';
+import { describeRoles } from '../lib/roles';
 
 // The command needs the database only; the session secret is the app server's business.
 process.env.NEXTAUTH_SECRET ??= 'not-used-by-admin-create';
@@ -52,7 +53,9 @@ async function main() {
     const email = values.email.trim().toLowerCase();
     if (result.outcome === 'created') console.log(`[admin:create] created admin account ${email} (id ${result.userId}); sign in with the password just given`);
     else if (result.outcome === 'promoted')
-      console.log(`[admin:create] ${email} (id ${result.userId}) was a ${result.previousRole}; it is now an admin (name and password unchanged)`);
+      console.log(
+        `[admin:create] ${email} (id ${result.userId}) held ${describeRoles(result.previousRoles).toLowerCase()}; it is now also an admin (name, password and other roles unchanged)`,
+      );
     else console.log(`[admin:create] ${email} (id ${result.userId}) is already an admin; nothing changed`);
   } finally {
     await (globalThis as { __brinewrightSequelize?: { close: () => Promise<void> } }).__brinewrightSequelize?.close();

@@ -3,11 +3,12 @@
 // Demo data only: the Cedar Hollow County home-preserving program, an invented scenario.
 const bcrypt = require('bcryptjs');
 
+// `roles`: MariaDB's SET column, comma-separated. Tomas teaches and is also a certified volunteer (learner).
 const ACCOUNTS = [
-  { email: 'learner@cedarhollow.example', name: 'Maren Osei', role: 'learner', password: 'demo-learner-pass' },
-  { email: 'instructor@cedarhollow.example', name: 'Tomas Lindqvist', role: 'instructor', password: 'demo-instructor-pass' },
-  { email: 'coordinator@cedarhollow.example', name: 'Priya Halvorsen', role: 'coordinator', password: 'demo-coordinator-pass' },
-  { email: 'admin@cedarhollow.example', name: 'Dale Okafor', role: 'admin', password: 'demo-admin-pass' },
+  { email: 'learner@cedarhollow.example', name: 'Maren Osei', roles: 'learner', password: 'demo-learner-pass' },
+  { email: 'instructor@cedarhollow.example', name: 'Tomas Lindqvist', roles: 'learner,instructor', password: 'demo-instructor-pass' },
+  { email: 'coordinator@cedarhollow.example', name: 'Priya Halvorsen', roles: 'coordinator', password: 'demo-coordinator-pass' },
+  { email: 'admin@cedarhollow.example', name: 'Dale Okafor', roles: 'admin', password: 'demo-admin-pass' },
 ];
 
 const DAY = 24 * 60 * 60 * 1000;
@@ -22,7 +23,7 @@ module.exports = {
       ACCOUNTS.map((a) => ({
         email: a.email,
         name: a.name,
-        role: a.role,
+        roles: a.roles,
         passwordHash: bcrypt.hashSync(a.password, 10),
         emailVerifiedAt: now,
         createdAt: now,

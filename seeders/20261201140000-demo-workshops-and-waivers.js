@@ -28,7 +28,7 @@ module.exports = {
       'users',
       LEARNERS.map((l) => ({
         ...l,
-        role: 'learner',
+        roles: 'learner',
         passwordHash: bcrypt.hashSync('demo-learner-pass', 10),
         emailVerifiedAt: now,
         createdAt: now,

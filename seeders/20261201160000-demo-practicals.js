@@ -126,7 +126,7 @@ module.exports = {
         {
           email: learner.email,
           name: learner.name,
-          role: 'learner',
+          roles: 'learner',
           passwordHash: bcrypt.hashSync(`${learner.email}-not-a-demo-login`, 10),
           emailVerifiedAt: now,
           createdAt: now,

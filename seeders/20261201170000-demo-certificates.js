@@ -79,7 +79,7 @@ module.exports = {
       LEARNERS.map((a) => ({
         email: a.email,
         name: a.name,
-        role: 'learner',
+        roles: 'learner',
         passwordHash: bcrypt.hashSync(a.password, 10),
         emailVerifiedAt: now,
         createdAt: now,
@@ -203,19 +203,7 @@ module.exports = {
       [inesEnrollment, ines, recent],
       [wrenEnrollment, wren, longAgo],
     ]) {
-      await queryInterface.bulkInsert('practicals', [
-        {
-          enrollmentId: enrollment.id,
-          userId: user.id,
-          round: 1,
-          status: 'approved',
-          details: JSON.stringify(approvedBatch(when)),
-          flags: '[]',
-          submittedAt: when,
-          createdAt: when,
-          updatedAt: when,
-        },
-      ]);
+      await queryInterface.bulkInsert('practicals', [approvedPractical(enrollment.id, user.id, when)]);
     }
     const [[coordinator]] = await q("SELECT id, name FROM users WHERE email = 'coordinator@cedarhollow.example'");
     await queryInterface.bulkInsert('certificates', [
@@ -258,5 +246,22 @@ module.exports = {
   },
 };
 
+/** The row of a practical batch approved in its first round, as the certified demo learners have. */
+function approvedPractical(enrollmentId, userId, when) {
+  return {
+    enrollmentId,
+    userId,
+    round: 1,
+    status: 'approved',
+    details: JSON.stringify(approvedBatch(when)),
+    flags: '[]',
+    submittedAt: when,
+    createdAt: when,
+    updatedAt: when,
+  };
+}
+module.exports.approvedPractical = approvedPractical;
+
 // For tests/unit/demo-seed-flags.test.ts (the migrator reads only up and down).
 module.exports.approvedBatch = approvedBatch;
+module.exports.flagshipLessons = flagshipLessons;

@@ -2,13 +2,13 @@ import type { Role } from '@/lib/roles';
 
 declare module 'next-auth' {
   interface Session {
-    user: { id: number; email: string; name: string; role: Role };
+    user: { id: number; email: string; name: string; roles: Role[] };
   }
   interface User {
     id: string;
     email: string;
     name: string;
-    role: Role;
+    roles: Role[];
     sessionVersion: number;
   }
 }
@@ -16,7 +16,9 @@ declare module 'next-auth' {
 declare module 'next-auth/jwt' {
   interface JWT {
     uid: number;
-    role: Role;
+    roles?: Role[];
+    /** A token written before accounts held sets of roles (read for one release: lib/auth/session.ts tokenRoles). */
+    role?: Role;
     /** The user's sessionVersion at sign-in (lib/auth/sessions.ts). */
     sv?: number;
     /** Sign-in time, seconds since the epoch: the absolute lifetime counts from it. */

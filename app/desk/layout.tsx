@@ -9,6 +9,7 @@ const LINKS = [
   { href: '/desk/waivers', label: 'Fee waivers' },
   { href: '/desk/reports', label: 'Reports' },
   { href: '/desk/import', label: 'Import holders' },
+  { href: '/desk/audit', label: 'Audit log' },
 ];
 
 export default function DeskLayout({ children }: { children: ReactNode }) {

@@ -7,7 +7,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { TextField } from '@/components/ui/text-field';
-import { PASSWORD_MIN, RegisterSchema, type RegisterInput } from '@/lib/validations/user';
+import { NewPasswordField } from './new-password-field';
+import { RegisterSchema, type RegisterInput } from '@/lib/validations/user';
 import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
 
 export function RegisterForm() {
@@ -48,14 +49,7 @@ export function RegisterForm() {
         {...register('name')}
       />
       <TextField label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register('email')} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters. A short sentence is easy to remember.`}
-        error={formState.errors.password?.message}
-        {...register('password')}
-      />
+      <NewPasswordField error={formState.errors.password?.message} {...register('password')} />
       <SubmitButton pending={formState.isSubmitting} className="w-full">
         Create my account
       </SubmitButton>

@@ -4,16 +4,17 @@ import { ButtonLink, buttonClasses } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { claimableRefreshers } from '@/lib/certificates/issue';
 import { fetchLearnerCertificates, type LearnerCertificate } from '@/lib/certificates/lookup';
+import { formatDate as formatLocalDate } from '@/lib/local-time';
+import { getProgramIdentity } from '@/lib/program/settings';
 import { ClaimRefresher } from './claim-refresher';
 import { REFRESHER_COURSE_SLUG, refresherDue } from '@/lib/certificates/validity';
 
-const formatDate = (d: Date) => new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeZone: 'UTC' }).format(d);
 const TONE = { valid: 'brine', expired: 'honey', revoked: 'beet' } as const;
 const LABEL = { valid: 'Valid', expired: 'Expired', revoked: 'Revoked' } as const;
 
 /** The learner's certificates in the Pantry: download, expiry, and the refresher when it is due. */
 export async function PantryCertificates({ userId, now = new Date() }: { userId: number; now?: Date }) {
-  const [certificates, claimable] = await Promise.all([fetchLearnerCertificates({ userId, now }), claimableRefreshers(userId)]);
+  const [certificates, claimable, program] = await Promise.all([fetchLearnerCertificates({ userId, now }), claimableRefreshers(userId), getProgramIdentity()]);
   if (certificates.length === 0 && claimable.length === 0) return null;
   // A newer certificate in the same line (the refresher) supersedes the offer on an older one.
   const latestValidUntil = Math.max(...certificates.filter((c) => !c.revokedAt).map((c) => c.validUntil.getTime()), 0);
@@ -30,7 +31,7 @@ export async function PantryCertificates({ userId, now = new Date() }: { userId:
       <ul className="grid gap-4 md:grid-cols-2">
         {certificates.map((c) => (
           <li key={c.id}>
-            <CertificateCard certificate={c} now={now} />
+            <CertificateCard certificate={c} now={now} timeZone={program.timeZone} />
           </li>
         ))}
       </ul>
@@ -38,7 +39,8 @@ export async function PantryCertificates({ userId, now = new Date() }: { userId:
   );
 }
 
-function CertificateCard({ certificate: c, now }: { certificate: LearnerCertificate; now: Date }) {
+function CertificateCard({ certificate: c, now, timeZone }: { certificate: LearnerCertificate; now: Date; timeZone: string }) {
+  const formatDate = (d: Date) => formatLocalDate(d, timeZone);
   const daysLeft = Math.ceil((c.validUntil.getTime() - now.getTime()) / 86_400_000);
   return (
     <Card title={c.courseTitle} actions={<Badge tone={TONE[c.state]}>{LABEL[c.state]}</Badge>}>

@@ -16,13 +16,15 @@ const base = {
 
 describe('VerificationResult', () => {
   it('shows the stored program name with a current certificate', () => {
-    render(<VerificationResult result={{ ...base, replaced: null }} />);
+    render(<VerificationResult result={{ ...base, replaced: null }} timeZone="America/Denver" />);
     expect(screen.getByRole('heading', { name: 'This certificate is valid.' })).toBeInTheDocument();
     expect(screen.getByText('Upper Fork preserving program')).toBeInTheDocument();
   });
 
   it('shows a replaced serial as replaced, linking to the serial in force, and still says what it said', () => {
-    render(<VerificationResult result={{ ...base, replaced: { at: '2026-12-03T09:00:00.000Z', bySerial: 'EEEE-FFFF-GGGG-HHHH' } }} />);
+    render(
+      <VerificationResult result={{ ...base, replaced: { at: '2026-12-03T09:00:00.000Z', bySerial: 'EEEE-FFFF-GGGG-HHHH' } }} timeZone="America/Denver" />,
+    );
     expect(screen.getByRole('heading', { name: 'This certificate was replaced by a corrected one.' })).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'EEEE-FFFF-GGGG-HHHH' })).toHaveAttribute('href', '/verify/EEEE-FFFF-GGGG-HHHH');
     expect(screen.getByText('Ada Lindqvst')).toBeInTheDocument();

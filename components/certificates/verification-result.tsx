@@ -1,8 +1,7 @@
 import Link from 'next/link';
 import { Badge } from '@/components/ui/badge';
+import { formatDate as formatLocalDate } from '@/lib/local-time';
 import type { Verification } from '@/lib/certificates/lookup';
-
-const formatDate = (iso: string) => new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeZone: 'UTC' }).format(new Date(iso));
 
 const STATE = {
   valid: { label: 'Valid', tone: 'brine', sentence: 'This certificate is valid.' },
@@ -12,7 +11,9 @@ const STATE = {
 const REPLACED = { label: 'Replaced', tone: 'honey', sentence: 'This certificate was replaced by a corrected one.' } as const;
 
 /** The public answer: the state, the name, the course and the dates, and nothing more. */
-export function VerificationResult({ result }: { result: Verification }) {
+/** `timeZone`: the program's, in which the certificate's dates are shown. */
+export function VerificationResult({ result, timeZone }: { result: Verification; timeZone: string }) {
+  const formatDate = (iso: string) => formatLocalDate(iso, timeZone);
   if (!result.found) {
     return (
       <div role="status" className="rounded-jar border-l-4 border-beet-500 bg-beet-50 p-4">

@@ -1,18 +1,17 @@
 import { Badge } from '@/components/ui/badge';
+import { formatDateTime } from '@/lib/local-time';
 import type { RoundView } from '@/lib/practicals/data';
 import { RUBRIC_CRITERIA } from '@/lib/validations/practical';
 import { FlagList } from './flag-list';
 import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from './practical-status';
 
-const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
-
 /** One review: the decision, the rubric criterion by criterion, and the comment. */
-export function ReviewSummary({ review }: { review: RoundView['reviews'][number] }) {
+export function ReviewSummary({ review, timeZone }: { review: RoundView['reviews'][number]; timeZone: string }) {
   return (
     <div className="space-y-2 rounded-lg border border-brine-100 bg-white p-3" data-testid="review-summary">
       <p className="text-sm">
         <Badge tone={review.decision === 'approved' ? 'brine' : 'beet'}>{review.decision === 'approved' ? 'Approved' : 'Changes requested'}</Badge> by{' '}
-        {review.reviewerName}, {when(review.createdAt)}
+        {review.reviewerName}, {formatDateTime(review.createdAt, timeZone)}
       </p>
       {review.comment ? (
         <p className="text-sm">
@@ -37,7 +36,7 @@ export function ReviewSummary({ review }: { review: RoundView['reviews'][number]
 }
 
 /** Every round of a practical, newest first, with its flags, photos and reviews. */
-export function PracticalHistory({ rounds }: { rounds: RoundView[] }) {
+export function PracticalHistory({ rounds, timeZone }: { rounds: RoundView[]; timeZone: string }) {
   if (!rounds.length) return null;
   return (
     <section aria-labelledby="practical-history" className="space-y-4">
@@ -50,7 +49,7 @@ export function PracticalHistory({ rounds }: { rounds: RoundView[] }) {
             <div className="flex flex-wrap items-center gap-2">
               <h3 className="font-display text-lg font-bold">Round {r.round}</h3>
               <Badge tone={PRACTICAL_STATUS_TONE[r.status]}>{PRACTICAL_STATUS_LABEL[r.status]}</Badge>
-              <span className="text-sm text-ink-soft">submitted {when(r.submittedAt)}</span>
+              <span className="text-sm text-ink-soft">submitted {formatDateTime(r.submittedAt, timeZone)}</span>
             </div>
             <p className="text-sm text-ink-soft">
               {[
@@ -76,7 +75,7 @@ export function PracticalHistory({ rounds }: { rounds: RoundView[] }) {
             ) : null}
             <FlagList flags={r.flags} title={`Flags on round ${r.round}`} level="h4" />
             {r.reviews.map((review) => (
-              <ReviewSummary key={review.id} review={review} />
+              <ReviewSummary key={review.id} review={review} timeZone={timeZone} />
             ))}
           </li>
         ))}

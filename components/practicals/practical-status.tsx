@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import { Badge, type Tone } from '@/components/ui/badge';
 import { cn } from '@/lib/cn';
+import { formatShortDate } from '@/lib/local-time';
 
 export type PracticalStatusValue = 'submitted' | 'changes_requested' | 'approved';
 
@@ -14,6 +15,8 @@ export type PracticalStatusProps = {
     flagCount: number;
     review?: { decision: 'approved' | 'changes_requested'; comment: string | null; reviewerName: string; createdAt: string } | null;
   } | null;
+  /** The zone the dates are shown in: the learner's workshop's, or the program's. */
+  timeZone: string;
   className?: string;
 };
 
@@ -24,10 +27,9 @@ export const PRACTICAL_STATUS_LABEL: Record<PracticalStatusValue, string> = {
 };
 export const PRACTICAL_STATUS_TONE: Record<PracticalStatusValue, Tone> = { submitted: 'honey', changes_requested: 'beet', approved: 'brine' };
 
-const day = (iso: string) => new Date(iso).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' });
-
 /** A small panel with where a learner's practical stands: for the Pantry and the practical page. */
-export function PracticalStatus({ courseSlug, latest, className }: PracticalStatusProps) {
+export function PracticalStatus({ courseSlug, latest, timeZone, className }: PracticalStatusProps) {
+  const day = (iso: string) => formatShortDate(iso, timeZone);
   const href = `/learn/${courseSlug}/practical`;
   return (
     <div className={cn('space-y-2 rounded-lg border border-brine-100 bg-paper p-3 text-sm', className)} data-testid="practical-status">

@@ -9,7 +9,7 @@ vi.mock('@/components/ui/toast', () => ({ useToast: () => ({ show: vi.fn() }) })
 
 const { DecisionPanel } = await import('./decision-panel');
 
-const instructor = { id: 7, role: 'instructor' as const };
+const instructor = { id: 7, roles: ['instructor' as const] };
 
 describe('DecisionPanel', () => {
   afterEach(() => {
@@ -56,7 +56,7 @@ describe('DecisionPanel', () => {
         round={1}
         right={{ may: true, as: 'coordinator' }}
         claim={{ byId: 8, byName: 'Alder Finch' }}
-        viewer={{ id: 2, role: 'coordinator' }}
+        viewer={{ id: 2, roles: ['coordinator'] }}
       />,
     );
     await userEvent.click(screen.getByRole('button', { name: 'Release the claim' }));

@@ -18,9 +18,9 @@ export function DecisionPanel({
   round: number;
   right: DecisionRight;
   claim: { byId: number; byName: string } | null;
-  viewer: { id: number; role: Role };
+  viewer: { id: number; roles: readonly Role[] };
 }) {
-  const mayRelease = claim !== null && (claim.byId === viewer.id || roleAllows(viewer.role, ['coordinator']));
+  const mayRelease = claim !== null && (claim.byId === viewer.id || roleAllows(viewer.roles, ['coordinator']));
   return (
     <div className="space-y-4">
       {claim ? <p className="text-sm text-ink-soft">{claim.byId === viewer.id ? 'You have claimed this submission.' : `Claimed by ${claim.byName}.`}</p> : null}

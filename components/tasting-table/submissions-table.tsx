@@ -14,6 +14,7 @@ import { PRODUCTS } from '@/lib/preserving/products';
 import { tastingTableQuerySchema, type TastingSort } from '@/lib/validations/practical';
 import { rememberTableView } from './back-to-table';
 import { fetchJson } from '@/lib/fetcher';
+import { formatShortDate } from '@/lib/local-time';
 
 type Filters = { page: number; sort: TastingSort; status: string; workshop: string; flagged: string; olderThanDays: string };
 
@@ -199,7 +200,7 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
                 <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
                 <TD>
                   {row.workshopPlace
-                    ? `${new Date(row.workshopStartsAt!).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${row.workshopPlace.split(',')[0]}`
+                    ? `${formatShortDate(row.workshopStartsAt!, row.workshopTimeZone ?? 'UTC')} · ${row.workshopPlace.split(',')[0]}`
                     : 'Self-paced'}
                 </TD>
                 <TD>

@@ -10,9 +10,9 @@ import { currentAccount, type SessionUser } from './users';
 
 /**
  * The signed-in user, or null: next-auth's session cookie decoded with next-auth's own `decode`
- * (lib/auth/session.ts), without running the NextAuth handler on every request. The role is the
- * one the database holds now, not the one written into the token at sign-in: a role an admin
- * changes applies from the user's next request; an account that no longer exists or is deactivated,
+ * (lib/auth/session.ts), without running the NextAuth handler on every request. The roles are the
+ * ones the database holds now, not the one written into the token at sign-in: roles an admin
+ * changes apply from the user's next request; an account that no longer exists or is deactivated,
  * a session from before a password change or "sign out everywhere", and a sign-in older than
  * SESSION_MAX_DAYS are signed out. That is one primary-key read per check.
  */
@@ -24,18 +24,18 @@ export async function getCurrentUser(): Promise<SessionUser | null> {
   if (!fromToken) return null;
   const account = await currentAccount(fromToken.id);
   if (!account || !sessionIsLive(fromToken, account, { nowSeconds: Date.now() / 1000, maxAgeDays: env.SESSION_MAX_DAYS })) return null;
-  return { id: fromToken.id, email: fromToken.email, name: fromToken.name, role: account.role };
+  return { id: fromToken.id, email: fromToken.email, name: fromToken.name, roles: account.roles };
 }
 
 /**
  * The one check every protected route handler, server action and page makes.
- * Signed out: AppError 401. Signed in with a role that is not allowed: AppError 403.
- * With no roles given, any signed-in user passes.
+ * Signed out: AppError 401. Signed in without any role that allows one of `allowed`: AppError 403
+ * (a user passes when any role they hold allows it). With no roles given, any signed-in user passes.
  */
 export async function requireRole(...allowed: Role[]): Promise<SessionUser> {
   const user = await getCurrentUser();
   if (!user) throw new AppError('unauthorized');
-  if (allowed.length && !roleAllows(user.role, allowed)) throw new AppError('forbidden');
+  if (allowed.length && !roleAllows(user.roles, allowed)) throw new AppError('forbidden');
   return user;
 }
 

@@ -4,6 +4,7 @@ import CredentialsProvider from 'next-auth/providers/credentials';
 import { getEnv } from '@/lib/env';
 import { SignInSchema } from '@/lib/validations/user';
 import { ThrottledError } from './sign-in-throttle';
+import { tokenRoles } from './session';
 import { sessionIsLive } from './sessions';
 import { currentAccount, verifyCredentials } from './users';
 
@@ -36,7 +37,7 @@ export function authOptions(): NextAuthOptions {
           if (!parsed.success) return null;
           try {
             const user = await verifyCredentials(parsed.data.email, parsed.data.password, clientAddress(req?.headers));
-            return user ? { id: String(user.id), email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion } : null;
+            return user ? { id: String(user.id), email: user.email, name: user.name, roles: user.roles, sessionVersion: user.sessionVersion } : null;
           } catch (error) {
             // next-auth passes the message to the sign-in form as the error code.
             if (error instanceof ThrottledError) throw new Error('Throttled');
@@ -49,7 +50,7 @@ export function authOptions(): NextAuthOptions {
       async jwt({ token, user }) {
         if (user) {
           token.uid = Number(user.id);
-          token.role = user.role;
+          token.roles = user.roles;
           token.sv = user.sessionVersion;
           token.sat = Math.floor(Date.now() / 1000);
         } else if (typeof token.uid === 'number') {
@@ -57,14 +58,16 @@ export function authOptions(): NextAuthOptions {
           const stamp = { sessionVersion: token.sv ?? 0, signedInAt: token.sat ?? token.iat ?? 0 };
           // An ended session: next-auth answers the browser's session request with no session and clears the cookie.
           if (!sessionIsLive(stamp, account, { nowSeconds: Date.now() / 1000, maxAgeDays: env.SESSION_MAX_DAYS })) throw new Error('Session ended');
-          // The browser's session (its menus) follows a role an admin changed; the server's checks
-          // read the role from the database on every request anyway (lib/auth/guard.ts).
-          token.role = account!.role;
+          // The browser's session (its menus) follows roles an admin changed; the server's checks
+          // read the roles from the database on every request anyway (lib/auth/guard.ts).
+          token.roles = account!.roles;
+          // A token from before role sets: rewritten with the set on its first refresh.
+          delete token.role;
         }
         return token;
       },
       async session({ session, token }) {
-        session.user = { id: token.uid, email: token.email ?? '', name: token.name ?? '', role: token.role };
+        session.user = { id: token.uid, email: token.email ?? '', name: token.name ?? '', roles: token.roles ?? tokenRoles(token) ?? [] };
         return session;
       },
     },

@@ -3,7 +3,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { sessionCookieName, sessionTokenFrom, userFromCookies, usesSecureCookies } from './session';
 
 const secret = 'unit-test-secret-0123456789abcdef';
-const claims = { uid: 42, role: 'instructor' as const, email: 'ada@cedarhollow.example', name: 'Ada Fenwick', sub: '42' };
+const claims = { uid: 42, roles: ['learner' as const, 'instructor' as const], email: 'ada@cedarhollow.example', name: 'Ada Fenwick', sub: '42' };
 
 describe('session cookie name', () => {
   it('is prefixed with __Secure- exactly when the app is served over https (next-auth default cookies)', () => {
@@ -28,12 +28,21 @@ describe('session cookie name', () => {
 });
 
 describe('userFromCookies', () => {
-  it('returns the user a token made by next-auth encode names, with the role from the token', async () => {
+  it('returns the user a token made by next-auth encode names, with the roles from the token', async () => {
     const token = await encode({ token: claims, secret, maxAge: 60 });
     const user = await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false });
-    expect(user).toMatchObject({ id: 42, role: 'instructor', email: 'ada@cedarhollow.example', name: 'Ada Fenwick', sessionVersion: 0 });
+    expect(user).toMatchObject({ id: 42, roles: ['learner', 'instructor'], email: 'ada@cedarhollow.example', name: 'Ada Fenwick', sessionVersion: 0 });
     // A token without a sign-in stamp counts from when it was issued (jose's iat).
     expect(Math.abs(user!.signedInAt - Date.now() / 1000)).toBeLessThan(5);
+  });
+
+  it('reads a token written before role sets (one `role`) as that one role, for one release', async () => {
+    const { roles: _roles, ...rest } = claims;
+    const token = await encode({ token: { ...rest, role: 'instructor' }, secret, maxAge: 60 });
+    expect(await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false })).toMatchObject({
+      id: 42,
+      roles: ['instructor'],
+    });
   });
 
   it('reads the session stamp (version and sign-in time) the jwt callback writes', async () => {
@@ -73,7 +82,7 @@ describe('userFromCookies', () => {
   });
 
   it('refuses claims without a numeric user id or with an unknown role', async () => {
-    for (const bad of [{ ...claims, uid: '42' }, { ...claims, role: 'superuser' }, { email: 'x@y.example' }]) {
+    for (const bad of [{ ...claims, uid: '42' }, { ...claims, roles: ['learner', 'superuser'] }, { uid: 42, role: 'superuser' }, { email: 'x@y.example' }]) {
       const token = await encode({ token: bad as never, secret, maxAge: 60 });
       expect(await userFromCookies([{ name: 'next-auth.session-token', value: token }], { secret, secure: false })).toBeNull();
     }

@@ -1,6 +1,6 @@
 import 'server-only';
 import { decode } from 'next-auth/jwt';
-import { ROLES } from '@/lib/roles';
+import { isRole, parseRoles, type Role } from '@/lib/roles';
 import type { SessionStamp } from './sessions';
 import type { SessionUser } from './users';
 
@@ -40,8 +40,8 @@ export function sessionTokenFrom(cookies: readonly CookieLike[], secure: boolean
 /**
  * The user the session cookie names, or null: no cookie, a token that does not decrypt with the
  * secret, an expired token (jose checks `exp`, with next-auth's 15 s clock tolerance), or claims
- * that are not a user of a known role. The role is the one in the token, written at sign-in;
- * getCurrentUser (lib/auth/guard.ts) replaces it with the role the database holds now, and checks
+ * that are not a user of known roles. The roles are the ones in the token, written at sign-in;
+ * getCurrentUser (lib/auth/guard.ts) replaces them with the roles the database holds now, and checks
  * the stamp (session version, sign-in time) against the account (lib/auth/sessions.ts).
  */
 export async function userFromCookies(
@@ -51,11 +51,26 @@ export async function userFromCookies(
   const token = sessionTokenFrom(cookies, options.secure);
   if (!token) return null;
   const claims = await decodeCached(token, options.secret);
-  if (!claims || typeof claims.uid !== 'number' || !ROLES.includes(claims.role)) return null;
+  if (!claims || typeof claims.uid !== 'number') return null;
+  const roles = tokenRoles(claims);
+  if (!roles) return null;
   // A token without a stamp (written before sessions had versions) counts as version 0, signed in when issued.
   const sessionVersion = typeof claims.sv === 'number' ? claims.sv : 0;
   const signedInAt = typeof claims.sat === 'number' ? claims.sat : typeof claims.iat === 'number' ? claims.iat : 0;
-  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', role: claims.role, sessionVersion, signedInAt };
+  return { id: claims.uid, email: claims.email ?? '', name: claims.name ?? '', roles, sessionVersion, signedInAt };
+}
+
+/**
+ * The roles a token names: `roles` (a set), or the single `role` of a token written before accounts
+ * held sets, read for one release so nobody is signed out by the upgrade; the guard uses the
+ * database's roles either way. Null when neither names a known role.
+ */
+export function tokenRoles(claims: { roles?: unknown; role?: unknown }): Role[] | null {
+  if (Array.isArray(claims.roles)) {
+    const roles = parseRoles(claims.roles);
+    return roles.length === claims.roles.length ? roles : null;
+  }
+  return isRole(claims.role) ? [claims.role] : null;
 }
 
 type Claims = NonNullable<Awaited<ReturnType<typeof decode>>>;

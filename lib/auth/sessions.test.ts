@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { sessionIsLive, type AccountState } from './sessions';
 
-const account: AccountState = { role: 'learner', sessionVersion: 2, deactivatedAt: null };
+const account: AccountState = { roles: ['learner'], sessionVersion: 2, deactivatedAt: null };
 const now = 1_800_000_000;
 const options = { nowSeconds: now, maxAgeDays: 7 };
 

@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { db } from '@/models';
 
 /** What the guard needs from the user row to accept a session: one primary-key read. */
-export type AccountState = { role: import('@/lib/roles').Role; sessionVersion: number; deactivatedAt: Date | null };
+export type AccountState = { roles: import('@/lib/roles').Role[]; sessionVersion: number; deactivatedAt: Date | null };
 
 /** What a session token says about itself (lib/auth/session.ts reads it). */
 export type SessionStamp = { sessionVersion: number; signedInAt: number };

@@ -2,7 +2,7 @@ import 'server-only';
 import bcrypt from 'bcryptjs';
 import { UniqueConstraintError } from 'sequelize';
 import { AppError } from '@/lib/errors';
-import type { Role } from '@/lib/roles';
+import { parseRoles, type Role } from '@/lib/roles';
 import { db } from '@/models';
 import { queueWelcomeEmail } from '@/lib/email/welcome';
 import { getEnv } from '@/lib/env';
@@ -17,7 +17,7 @@ const COST = 10;
 // Compared against when the e-mail is unknown, so both answers take the same time.
 const DUMMY_HASH = bcrypt.hashSync('brinewright-no-such-account', COST);
 
-export type SessionUser = { id: number; email: string; name: string; role: Role };
+export type SessionUser = { id: number; email: string; name: string; roles: Role[] };
 /** A user who just proved their password: the session token records the account's sessionVersion. */
 export type SignedInUser = SessionUser & { sessionVersion: number };
 
@@ -38,10 +38,10 @@ export async function registerLearner(input: RegisterInput): Promise<SessionUser
   const passwordHash = await hashPassword(input.password);
   try {
     return await sequelize.transaction(async (transaction) => {
-      const user = await User.create({ name: input.name, email: input.email, passwordHash, role: 'learner' }, { transaction });
+      const user = await User.create({ name: input.name, email: input.email, passwordHash, roles: ['learner'] }, { transaction });
       await AuditLog.create({ actorId: user.id, action: 'user.registered', subjectType: 'user', subjectId: String(user.id), data: null }, { transaction });
       await queueWelcomeEmail(user, transaction);
-      return { id: user.id, email: user.email, name: user.name, role: user.role };
+      return { id: user.id, email: user.email, name: user.name, roles: user.roles };
     });
   } catch (error) {
     if (error instanceof UniqueConstraintError) {
@@ -70,11 +70,12 @@ export async function verifyCredentials(
   // A deactivated account keeps its records but cannot sign in: the same answer as a wrong password.
   if (!user || !ok || user.deactivatedAt) return null;
   await takeBack();
-  return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion };
+  return { id: user.id, email: user.email, name: user.name, roles: user.roles, sessionVersion: user.sessionVersion };
 }
 
-/** The role, session version and deactivation of a user now, or null when there is no such user (one primary-key read). */
+/** The roles, session version and deactivation of a user now, or null when there is no such user (one primary-key read). */
 export async function currentAccount(userId: number): Promise<AccountState | null> {
-  const row = await db().User.findByPk(userId, { attributes: ['role', 'sessionVersion', 'deactivatedAt'], raw: true });
-  return row ? { role: row.role, sessionVersion: row.sessionVersion, deactivatedAt: row.deactivatedAt } : null;
+  const row = await db().User.findByPk(userId, { attributes: ['roles', 'sessionVersion', 'deactivatedAt'], raw: true });
+  // raw: the SET column comes back as MariaDB writes it ('instructor,learner' in declaration order).
+  return row ? { roles: parseRoles(row.roles), sessionVersion: row.sessionVersion, deactivatedAt: row.deactivatedAt } : null;
 }

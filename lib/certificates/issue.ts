@@ -31,8 +31,8 @@ export const SIGNER_TITLE = 'Program coordinator';
 /** Who signs: the coordinator or admin who issues; a certificate the learner claims (the refresher) has no signer. */
 async function signerFor(actorId: number | null, transaction: Transaction): Promise<{ signerName: string | null; signerTitle: string | null }> {
   if (actorId === null) return { signerName: null, signerTitle: null };
-  const actor = await db().User.findByPk(actorId, { attributes: ['name', 'role'], transaction });
-  if (!actor || !roleAllows(actor.role, ['coordinator'])) return { signerName: null, signerTitle: null };
+  const actor = await db().User.findByPk(actorId, { attributes: ['name', 'roles'], transaction });
+  if (!actor || !roleAllows(actor.roles, ['coordinator'])) return { signerName: null, signerTitle: null };
   return { signerName: actor.name, signerTitle: SIGNER_TITLE };
 }
 

@@ -119,7 +119,7 @@ export async function verifyForAddress(input: string, address: string, now: Date
 export async function certificatePdfFor(serialInput: string, viewer: SessionUser): Promise<{ serial: string; pdf: Uint8Array }> {
   const serial = normalizeSerial(serialInput);
   const cert = serial ? await findBySerial(serial) : null;
-  const staff = roleAllows(viewer.role, ['coordinator']);
+  const staff = roleAllows(viewer.roles, ['coordinator']);
   // An earlier wording is not handed out again: the current serial's PDF replaces it.
   if (!cert || cert.replacedAt || (!staff && cert.userId !== viewer.id))
     throw new AppError('not_found', 'There is no certificate with that serial for your account.');

@@ -12,8 +12,8 @@ import { getCourse, getLesson, type CourseContent, type LessonContent } from './
  * course (the one rule in lib/access.ts), and staff who teach or run the course (instructors and
  * the roles that imply instructor), who review learners' work against these lessons.
  */
-export async function canReadMembersLesson(user: Pick<SessionUser, 'id' | 'role'>, courseSlug: string): Promise<boolean> {
-  if (roleAllows(user.role, ['instructor'])) return true;
+export async function canReadMembersLesson(user: Pick<SessionUser, 'id' | 'roles'>, courseSlug: string): Promise<boolean> {
+  if (roleAllows(user.roles, ['instructor'])) return true;
   return isEnrolled(user.id, courseSlug);
 }
 

@@ -1,7 +1,6 @@
 import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
-import type { Role } from '@/lib/roles';
 import type { EnrollmentStatus } from '@/lib/enrollment-status';
 
 export type LearnerEnrollment = { id: number; courseSlug: string; courseTitle: string; status: EnrollmentStatus; workshopStartsAt: Date | null };
@@ -15,11 +14,4 @@ export async function fetchLearnerEnrollments({ userId }: { userId: number }): P
       WHERE e.userId = :userId ORDER BY e.createdAt DESC`,
     { replacements: { userId }, type: QueryTypes.SELECT },
   );
-}
-
-export type UserRow = { id: number; name: string; email: string; role: Role; createdAt: Date };
-
-export async function fetchUsers({ limit = 200 }: { limit?: number } = {}): Promise<UserRow[]> {
-  const users = await db().User.findAll({ attributes: ['id', 'name', 'email', 'role', 'createdAt'], order: [['name', 'ASC']], limit });
-  return users.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role, createdAt: u.createdAt }));
 }

@@ -2,6 +2,7 @@ import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
 import { ENROLLMENT_STATUSES, type EnrollmentStatus } from '@/lib/enrollment-status';
+import { isoDay } from '@/lib/local-time';
 
 export type DeskReports = {
   byStatus: { status: EnrollmentStatus; count: number }[];
@@ -34,15 +35,15 @@ export async function fetchDeskReports({ months = 12, now = new Date() }: { mont
   const since = new Date(`${monthList[0]}-01T00:00:00Z`);
   const [statusRows, workshopRows, issuedRows, revokedRows, feeRows] = await Promise.all([
     q<{ status: EnrollmentStatus; n: number }>('SELECT status, COUNT(*) AS n FROM enrollments GROUP BY status'),
-    q<{ id: number; startsAt: Date; place: string; title: string; enrolled: number; completed: number; certified: number }>(
-      `SELECT w.id, w.startsAt, w.place, c.title,
+    q<{ id: number; startsAt: Date; timeZone: string; place: string; title: string; enrolled: number; completed: number; certified: number }>(
+      `SELECT w.id, w.startsAt, w.timeZone, w.place, c.title,
               SUM(e.id IS NOT NULL AND e.status <> 'withdrawn') AS enrolled,
               SUM(e.status = 'completed') AS completed,
               SUM(ce.id IS NOT NULL AND ce.revokedAt IS NULL) AS certified
          FROM workshops w JOIN courses c ON c.id = w.courseId
          LEFT JOIN enrollments e ON e.workshopId = w.id
          LEFT JOIN certificates ce ON ce.enrollmentId = e.id
-        GROUP BY w.id, w.startsAt, w.place, c.title
+        GROUP BY w.id, w.startsAt, w.timeZone, w.place, c.title
         ORDER BY w.startsAt`,
     ),
     q<{ month: string; n: number }>("SELECT DATE_FORMAT(issuedAt, '%Y-%m') AS month, COUNT(*) AS n FROM certificates WHERE issuedAt >= :since GROUP BY month", {
@@ -75,7 +76,8 @@ export async function fetchDeskReports({ months = 12, now = new Date() }: { mont
     workshops: workshopRows.map((w) => {
       const enrolled = Number(w.enrolled ?? 0);
       const completed = Number(w.completed ?? 0);
-      const date = new Date(w.startsAt).toISOString().slice(0, 10);
+      // The workshop's date where it took place, not in UTC.
+      const date = isoDay(w.startsAt, w.timeZone);
       return {
         id: Number(w.id),
         label: `${date} · ${w.place.split(',')[0]}`,

@@ -1,6 +1,8 @@
 // Every message Brinewright sends, each with a plain-text and an HTML part. Pure functions: they
 // build an OutgoingEmail for enqueueEmail() and do no I/O, so any module (and its tests) may call them.
 import { formatMoney, formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
+import { formatDateTime } from '@/lib/local-time';
+import { describeRoles, type Role } from '@/lib/roles';
 import { RUBRIC_CRITERIA, type ReviewInput } from '@/lib/validations/practical';
 import type { OutgoingAttachment, OutgoingEmail } from './outbox';
 
@@ -395,5 +397,32 @@ export function confirmAddressEmail({ to, name, confirmUrl }: { to: string; name
     },
     { kind: 'button', label: 'Confirm my e-mail address', href: confirmUrl },
     { kind: 'note', text: 'The link works for seven days. If you did not ask for it, you can ignore this message.' },
+  ]);
+}
+
+/** Sent when an admin invites a staff member: the roles, and the single-use link to choose a name and password. */
+export function staffInvitationEmail({
+  to,
+  inviterName,
+  programName,
+  roles,
+  acceptUrl,
+  expiresAt,
+  timeZone,
+}: {
+  to: string;
+  inviterName: string;
+  programName: string;
+  roles: readonly Role[];
+  acceptUrl: string;
+  expiresAt: Date;
+  timeZone: string;
+}): OutgoingEmail {
+  return compose('invitation.staff', to, `You are invited to ${programName} on Brinewright`, 'Hello,', [
+    { kind: 'p', text: `${inviterName} invites you to join ${programName} on Brinewright as ${describeRoles(roles).toLowerCase()}.` },
+    { kind: 'p', text: 'Open the link to choose your name and a password. It works once.' },
+    { kind: 'button', label: 'Accept the invitation', href: acceptUrl },
+    { kind: 'facts', rows: [['Link works until', formatDateTime(expiresAt, timeZone)]] },
+    { kind: 'note', text: 'If you did not expect this invitation, you can ignore this message; no account is made until the link is used.' },
   ]);
 }

@@ -18,7 +18,7 @@ export async function saveWorkshop({ id, values, actorId }: { id?: number; value
   if (!(await Course.findByPk(values.courseId))) throw fieldError('courseId', 'Choose a course.');
   if (values.instructorId !== null) {
     const instructor = await User.findByPk(values.instructorId);
-    if (!instructor || !roleAllows(instructor.role, ['instructor'])) throw fieldError('instructorId', 'Choose someone with the instructor role.');
+    if (!instructor || !roleAllows(instructor.roles, ['instructor'])) throw fieldError('instructorId', 'Choose someone with the instructor role.');
   }
   return sequelize.transaction(async (transaction) => {
     const fields = {
@@ -56,7 +56,7 @@ export async function markAttendance({ enrollmentId, attended, actor }: { enroll
     const enrollment = await Enrollment.findByPk(enrollmentId, { transaction, lock: transaction.LOCK.UPDATE });
     const workshop = enrollment?.workshopId ? await Workshop.findByPk(enrollment.workshopId, { transaction }) : null;
     if (!enrollment || !workshop) throw new AppError('not_found', 'That enrollment is not in a workshop.');
-    if (workshop.instructorId !== actor.id && !roleAllows(actor.role, ['coordinator']))
+    if (workshop.instructorId !== actor.id && !roleAllows(actor.roles, ['coordinator']))
       throw new AppError('forbidden', 'Only the workshop’s instructor or a coordinator marks attendance.');
     if (enrollment.status !== 'active' && enrollment.status !== 'completed') throw new AppError('conflict', 'Attendance is kept only for enrolled learners.');
     if (attended && workshop.startsAt.getTime() > Date.now() + 12 * 3600_000)

@@ -1,5 +1,6 @@
 import 'server-only';
 import { Op } from 'sequelize';
+import { holdingRoleFor } from '@/lib/users/role-query';
 import { db } from '@/models';
 import { seatsTaken } from './workshops';
 
@@ -102,7 +103,7 @@ export async function fetchCourseOptions(): Promise<{ id: number; title: string;
 
 export async function fetchInstructorOptions(): Promise<{ id: number; name: string }[]> {
   const users = await db().User.findAll({
-    where: { role: { [Op.in]: ['instructor', 'coordinator', 'admin'] } },
+    where: holdingRoleFor(['instructor']),
     order: [['name', 'ASC']],
     attributes: ['id', 'name'],
   });

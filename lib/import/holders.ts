@@ -181,7 +181,7 @@ export async function importHolders(text: string, actorId: number): Promise<Impo
       const userId =
         l.userId ??
         created.get(d.email) ??
-        (await User.create({ email: d.email, name: d.name, role: 'learner', passwordHash: unusable, emailVerifiedAt: null }, { transaction })).id;
+        (await User.create({ email: d.email, name: d.name, roles: ['learner'], passwordHash: unusable, emailVerifiedAt: null }, { transaction })).id;
       created.set(d.email, userId);
       const issuedAt = new Date(`${d.certificate_date}T12:00:00Z`);
       const enrollment = await Enrollment.create(

@@ -7,6 +7,7 @@ import { enrollmentReceiptEmail, paymentMismatchEmail } from '@/lib/email/templa
 import { transitionEnrollment } from '@/lib/enrollment/state';
 import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
+import { holdingRoleFor } from '@/lib/users/role-query';
 import { db, type Course, type Enrollment, type Payment } from '@/models';
 import { stripe } from './stripe';
 
@@ -190,7 +191,7 @@ async function amountMismatch({
   );
   const [learner, coordinators] = await Promise.all([
     User.findByPk(enrollment.userId, { transaction }),
-    User.findAll({ where: { role: ['coordinator', 'admin'] }, attributes: ['email', 'name'], transaction }),
+    User.findAll({ where: holdingRoleFor(['coordinator']), attributes: ['email', 'name'], transaction }),
   ]);
   for (const to of coordinators) {
     await enqueueEmail(

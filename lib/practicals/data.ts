@@ -1,4 +1,5 @@
 import 'server-only';
+import { formatShortDate } from '@/lib/local-time';
 import { QueryTypes } from 'sequelize';
 import { PRACTICAL_STATUSES, type PracticalStatus } from '@/models/practical';
 import { db } from '@/models';
@@ -20,6 +21,8 @@ export type TastingRow = {
   workshopId: number | null;
   workshopStartsAt: string | null;
   workshopPlace: string | null;
+  /** The workshop's own time zone, in which its date is shown. */
+  workshopTimeZone: string | null;
 };
 
 export type TastingTablePage = {
@@ -85,7 +88,7 @@ export async function fetchTastingTable(query: TastingTableQuery, now = new Date
       `SELECT p.id, p.round, p.status, p.flagCount, p.submittedAt,
               JSON_UNQUOTE(JSON_EXTRACT(p.details, '$.product')) AS product,
               u.name AS learnerName, c.slug AS courseSlug,
-              w.id AS workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace
+              w.id AS workshopId, w.startsAt AS workshopStartsAt, w.place AS workshopPlace, w.timeZone AS workshopTimeZone
          FROM (SELECT p.id FROM ${from} ${pageJoin} ${whereSql}
                 ORDER BY ${ORDER[query.sort]}
                 LIMIT ${TASTING_PAGE_SIZE} OFFSET ${offset}) page
@@ -126,13 +129,13 @@ export type WorkshopOption = { id: number; label: string };
 /** Workshops for the Tasting table's filter. */
 export async function fetchWorkshopOptions(): Promise<WorkshopOption[]> {
   // Raw SQL: a two-table join read as flat option rows.
-  const rows = await db().sequelize.query<{ id: number; startsAt: Date; place: string; title: string }>(
-    `SELECT w.id, w.startsAt, w.place, c.title FROM workshops w JOIN courses c ON c.id = w.courseId ORDER BY w.startsAt DESC LIMIT 200`,
+  const rows = await db().sequelize.query<{ id: number; startsAt: Date; timeZone: string; place: string; title: string }>(
+    `SELECT w.id, w.startsAt, w.timeZone, w.place, c.title FROM workshops w JOIN courses c ON c.id = w.courseId ORDER BY w.startsAt DESC LIMIT 200`,
     { type: QueryTypes.SELECT },
   );
   return rows.map((w) => ({
     id: Number(w.id),
-    label: `${new Date(w.startsAt).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })} · ${w.place.split(',')[0]}`,
+    label: `${formatShortDate(w.startsAt, w.timeZone)} · ${w.place.split(',')[0]}`,
   }));
 }
 
@@ -209,7 +212,7 @@ export type SubmissionView = {
   earlierRounds: RoundView[];
   learner: { id: number; name: string; email: string };
   course: { slug: string; title: string };
-  workshop: { id: number; startsAt: string; place: string } | null;
+  workshop: { id: number; startsAt: string; timeZone: string; place: string } | null;
   /** The instructor holding this round to decide on it, if any. */
   claim: { byId: number; byName: string } | null;
 };
@@ -234,7 +237,7 @@ export async function fetchSubmission({ id }: { id: number }): Promise<Submissio
     earlierRounds: rounds.filter((r) => r.round < round.round),
     learner: { id: learner.id, name: learner.name, email: learner.email },
     course: { slug: course.slug, title: course.title },
-    workshop: workshop ? { id: workshop.id, startsAt: workshop.startsAt.toISOString(), place: workshop.place } : null,
+    workshop: workshop ? { id: workshop.id, startsAt: workshop.startsAt.toISOString(), timeZone: workshop.timeZone, place: workshop.place } : null,
     claim: claimant ? { byId: claimant.id, byName: claimant.name } : null,
   };
 }

@@ -1,7 +1,7 @@
 import { roleAllows, type Role } from '@/lib/roles';
 
 export type DecisionFacts = {
-  viewer: { id: number; role: Role };
+  viewer: { id: number; roles: readonly Role[] };
   learnerId: number;
   workshopInstructorId: number | null;
   claimedById: number | null;
@@ -16,8 +16,8 @@ export type DecisionRight =
  */
 export function decisionRight({ viewer, learnerId, workshopInstructorId, claimedById }: DecisionFacts): DecisionRight {
   if (viewer.id === learnerId) return { may: false, reason: 'own' };
-  if (!roleAllows(viewer.role, ['instructor'])) return { may: false, reason: 'not_instructor' };
-  if (roleAllows(viewer.role, ['coordinator'])) return { may: true, as: 'coordinator' };
+  if (!roleAllows(viewer.roles, ['instructor'])) return { may: false, reason: 'not_instructor' };
+  if (roleAllows(viewer.roles, ['coordinator'])) return { may: true, as: 'coordinator' };
   if (workshopInstructorId === viewer.id) return { may: true, as: 'workshop instructor' };
   if (claimedById === viewer.id) return { may: true, as: 'claimant' };
   return { may: false, reason: claimedById === null ? 'claim_first' : 'claimed_by_other' };

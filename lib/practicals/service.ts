@@ -119,7 +119,7 @@ export async function readPhotoFor(viewer: SessionUser, photoId: number, size: '
   const photo = await db().PracticalPhoto.findByPk(photoId);
   if (!photo) throw new AppError('not_found', 'There is no such photo.');
   if (photo.userId !== viewer.id) {
-    if (!roleAllows(viewer.role, ['instructor'])) throw new AppError('forbidden', 'This photo belongs to another learner.');
+    if (!roleAllows(viewer.roles, ['instructor'])) throw new AppError('forbidden', 'This photo belongs to another learner.');
     if (photo.practicalId === null) throw new AppError('forbidden', 'This photo is not part of a submission yet; only the learner who uploaded it can see it.');
   }
   const stored = await getStorage().get(size === 'thumb' ? photo.thumbnailKey : photo.storageKey);
@@ -233,7 +233,7 @@ export async function releasePractical(viewer: SessionUser, practicalId: number)
     const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!practical) throw new AppError('not_found', 'There is no such submission.');
     if (practical.claimedById === null) throw new AppError('conflict', 'Nobody has claimed this submission.');
-    if (practical.claimedById !== viewer.id && !roleAllows(viewer.role, ['coordinator'])) {
+    if (practical.claimedById !== viewer.id && !roleAllows(viewer.roles, ['coordinator'])) {
       throw new AppError('forbidden', 'Only the instructor who claimed this submission or a coordinator can release it.');
     }
     const from = practical.claimedById;

@@ -313,7 +313,7 @@ export async function readAttempt(user: SessionUser, attemptId: number): Promise
   });
   const row = rows[0];
   if (!row) throw new AppError('not_found', 'There is no such attempt.');
-  const staff = roleAllows(user.role, ['instructor']);
+  const staff = roleAllows(user.roles, ['instructor']);
   if (row.userId !== user.id && !staff) throw new AppError('forbidden', 'This attempt belongs to another learner.');
   const bank = requireBank(row.quizSlug);
   return view(row, bank, passMarkFor(bank.course), true);

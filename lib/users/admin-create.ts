@@ -1,12 +1,12 @@
 import 'server-only';
 import { hashPassword } from '@/lib/auth/users';
 import { AppError } from '@/lib/errors';
-import type { Role } from '@/lib/roles';
+import { normalizeRoles, type Role } from '@/lib/roles';
 import { AdminCreateSchema, type AdminCreateInput } from '@/lib/validations/user';
 import { db } from '@/models';
 
 export type AdminCreateResult =
-  { outcome: 'created'; userId: number } | { outcome: 'promoted'; userId: number; previousRole: Role } | { outcome: 'unchanged'; userId: number };
+  { outcome: 'created'; userId: number } | { outcome: 'promoted'; userId: number; previousRoles: Role[] } | { outcome: 'unchanged'; userId: number };
 
 /** Whether an account exists for the address, so the command asks for a password only when it will create one. */
 export async function accountExists(email: string): Promise<boolean> {
@@ -24,25 +24,26 @@ export async function createOrPromoteAdmin(raw: AdminCreateInput): Promise<Admin
   return sequelize.transaction(async (transaction) => {
     const existing = await User.findOne({ where: { email: input.email }, transaction, lock: transaction.LOCK.UPDATE });
     if (existing) {
-      if (existing.role === 'admin') return { outcome: 'unchanged', userId: existing.id };
-      const previousRole = existing.role;
-      await existing.update({ role: 'admin' }, { transaction });
+      if (existing.roles.includes('admin')) return { outcome: 'unchanged', userId: existing.id };
+      const previousRoles = existing.roles;
+      // Admin is added to the roles the account holds: a learner made admin keeps their Pantry.
+      await existing.update({ roles: normalizeRoles([...previousRoles, 'admin']) }, { transaction });
       await AuditLog.create(
         {
           actorId: null,
-          action: 'user.role_changed',
+          action: 'user.roles_changed',
           subjectType: 'user',
           subjectId: String(existing.id),
-          data: { from: previousRole, to: 'admin', by: 'admin:create' },
+          data: { from: previousRoles, to: normalizeRoles([...previousRoles, 'admin']), by: 'admin:create' },
         },
         { transaction },
       );
-      return { outcome: 'promoted', userId: existing.id, previousRole };
+      return { outcome: 'promoted', userId: existing.id, previousRoles };
     }
     if (!input.password) throw new AppError('bad_request', 'A new admin account needs a password: set ADMIN_PASSWORD or type one when asked.');
     // The person running the command on the server vouches for the address.
     const user = await User.create(
-      { email: input.email, name: input.name, role: 'admin', passwordHash: await hashPassword(input.password), emailVerifiedAt: new Date() },
+      { email: input.email, name: input.name, roles: ['admin'], passwordHash: await hashPassword(input.password), emailVerifiedAt: new Date() },
       { transaction },
     );
     await AuditLog.create(

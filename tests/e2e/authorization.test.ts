@@ -29,11 +29,11 @@ describe('the authorization matrix covers app/', () => {
     ).toEqual([]);
   });
 
-  it('gives every row an answer for each of the six people, and requests at least one column', () => {
+  it('gives every row an answer for each of the seven people, and requests at least one column', () => {
     for (const row of MATRIX) {
-      expect(row.expect, rowKey(row)).toHaveLength(SUBJECTS.length);
+      expect(Object.keys(row.expect).sort(), rowKey(row)).toEqual([...SUBJECTS].sort());
       expect(
-        row.expect.some((e) => e !== 'n/a'),
+        Object.values(row.expect).some((e) => e !== 'n/a'),
         rowKey(row),
       ).toBe(true);
     }
@@ -52,9 +52,10 @@ describe('the authorization matrix against the running app', () => {
     jars.own = (await signInHttp(people.emails.a, FIXTURE_PASSWORD)).jar;
     jars.other = jars.own; // A again: the probes point this column at B's records
     learnerB = (await signInHttp(people.emails.b, FIXTURE_PASSWORD)).jar;
-    jars.instructor = (await signInHttp('instructor@cedarhollow.example', 'demo-instructor-pass')).jar;
+    jars.instructor = (await signInHttp(people.emails.instructor, FIXTURE_PASSWORD)).jar;
     jars.coordinator = (await signInHttp('coordinator@cedarhollow.example', 'demo-coordinator-pass')).jar;
     jars.admin = (await signInHttp('admin@cedarhollow.example', 'demo-admin-pass')).jar;
+    jars.volunteer = (await signInHttp('instructor@cedarhollow.example', 'demo-instructor-pass')).jar;
   });
 
   type Outcome = { key: string; subject: Subject; path: string; expected: string; got: string };
@@ -63,7 +64,7 @@ describe('the authorization matrix against the running app', () => {
     const outcomes: Outcome[] = [];
     const headerProblems: string[] = [];
     for (const [i, subject] of SUBJECTS.entries()) {
-      const expected = row.expect[i];
+      const expected = row.expect[subject];
       if (expected === 'n/a') continue;
       const request = row.probe(fixtures, subject);
       const method = row.kind === 'route' ? row.method : 'GET';
@@ -101,7 +102,7 @@ describe('the authorization matrix against the running app', () => {
     expect(wrong).toEqual([]);
     expect(headerProblems).toEqual([]);
     // The walk really asked: one request per requested cell.
-    const cells = MATRIX.filter((r) => r.kind !== 'action').reduce((n, r) => n + r.expect.filter((e) => e !== 'n/a').length, 0);
+    const cells = MATRIX.filter((r) => r.kind !== 'action').reduce((n, r) => n + Object.values(r.expect).filter((e) => e !== 'n/a').length, 0);
     expect(outcomes).toHaveLength(cells);
   }, 240_000);
 
@@ -110,7 +111,7 @@ describe('the authorization matrix against the running app', () => {
   async function allowedHtml(path: string): Promise<string | null> {
     if (!allowedPages.has(path)) {
       let html: string | null = null;
-      for (const jar of [jars.own, learnerB, jars.instructor, jars.coordinator, jars.admin]) {
+      for (const jar of [jars.own, learnerB, jars.instructor, jars.coordinator, jars.admin, jars.volunteer]) {
         const response = await send(path, { jar, headers: { 'x-forwarded-for': '198.51.100.40' } });
         const text = await response.text();
         if (response.status === 200) {
@@ -127,7 +128,7 @@ describe('the authorization matrix against the running app', () => {
     // What anyone may read (every page a visitor opens): a sentence found there is not private.
     let publicText = '';
     for (const row of MATRIX) {
-      if (row.kind === 'page' && row.expect[0] === 200) publicText += await (await send(row.probe(fixtures, 'visitor').path)).text();
+      if (row.kind === 'page' && row.expect.visitor === 200) publicText += await (await send(row.probe(fixtures, 'visitor').path)).text();
     }
     // Every course's page (the matrix probes one), with its lessons' titles and summaries.
     for (const course of new Set(publicText.match(/\/courses\/[a-z0-9-]+(?=")/g))) publicText += await (await send(course)).text();
@@ -136,7 +137,7 @@ describe('the authorization matrix against the running app', () => {
     for (const row of MATRIX) {
       if (row.kind !== 'page') continue;
       for (const [i, subject] of SUBJECTS.entries()) {
-        const expected = row.expect[i];
+        const expected = row.expect[subject];
         if (expected === 'n/a') continue;
         const request = row.probe(fixtures, subject);
         const headers = { 'x-forwarded-for': `198.51.100.${i + 10}` };

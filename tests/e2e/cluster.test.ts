@@ -51,7 +51,7 @@ const query = <T extends object>(sql: string, replacements: unknown[] = []) => s
 async function makeLearner(label: string): Promise<Learner> {
   const email = `${label}-${run}@cluster.test.example`;
   const now = new Date();
-  await sequelize.query('INSERT INTO users (email, name, role, passwordHash, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?)', {
+  await sequelize.query('INSERT INTO users (email, name, roles, passwordHash, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, ?, ?, ?, ?)', {
     replacements: [email, `Cluster ${label} ${run}`, 'learner', bcrypt.hashSync(PASSWORD, 10), now, now, now],
   });
   const [row] = await query<{ id: number }>('SELECT id FROM users WHERE email = ?', [email]);
@@ -275,8 +275,8 @@ describe('two app servers behind nginx, sharing MariaDB and an S3 bucket', () =>
     // next-auth 4 keeps the session in an encrypted JWT (JWE compact form: five parts).
     expect(cookie.split('=')[1]).toMatch(/^[\w-]+\.[\w-]*\.[\w-]+\.[\w-]+\.[\w-]+$/);
     for (const app of apps) {
-      const session = (await (await fetch(`${app.url}/api/auth/session`, { headers: { cookie } })).json()) as { user?: { email: string; role: string } };
-      expect(session.user, `server ${app.name}`).toMatchObject({ email: learners.uploader.email, role: 'learner' });
+      const session = (await (await fetch(`${app.url}/api/auth/session`, { headers: { cookie } })).json()) as { user?: { email: string; roles: string[] } };
+      expect(session.user, `server ${app.name}`).toMatchObject({ email: learners.uploader.email, roles: ['learner'] });
     }
     const tables = await query<{ name: string }>(
       "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() AND table_name LIKE '%session%'",

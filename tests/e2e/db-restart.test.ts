@@ -166,7 +166,7 @@ beforeAll(async () => {
     const now = new Date();
     for (let i = 1; i < LEARNERS; i++) {
       await sequelize.query(
-        `INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt)
+        `INSERT INTO users (email, name, passwordHash, roles, emailVerifiedAt, createdAt, updatedAt)
          SELECT :email, :name, passwordHash, 'learner', :now, :now, :now FROM users WHERE email = 'learner@cedarhollow.example'`,
         { replacements: { email: `load-learner-${i}@cedarhollow.example`, name: `Load Learner ${i}`, now } },
       );

@@ -23,7 +23,7 @@ describe('the fermenting lesson in the browser', () => {
     try {
       const now = new Date();
       const user = await conn.query(
-        "INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt) VALUES (?, 'Noor Fermenter', ?, 'learner', ?, ?, ?)",
+        "INSERT INTO users (email, name, passwordHash, roles, emailVerifiedAt, createdAt, updatedAt) VALUES (?, 'Noor Fermenter', ?, 'learner', ?, ?, ?)",
         [email, bcrypt.hashSync(PASSWORD, 10), now, now, now],
       );
       const [course] = (await conn.query("SELECT id FROM courses WHERE slug = 'pickling-and-canning'")) as { id: number }[];

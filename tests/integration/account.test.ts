@@ -50,7 +50,7 @@ async function completeEverything() {
   const { flagship } = await createCourses();
   const { enrollmentId, userId } = await eligibleEnrollment(flagship);
   const user = (await db().User.findByPk(userId))!;
-  return { learner: { id: user.id, email: user.email, name: user.name, role: user.role }, enrollment: { id: enrollmentId } };
+  return { learner: { id: user.id, email: user.email, name: user.name, roles: user.roles }, enrollment: { id: enrollmentId } };
 }
 
 describe('password reset by e-mail', () => {

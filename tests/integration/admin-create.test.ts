@@ -37,7 +37,7 @@ describe('npm run admin:create', { timeout: 60_000 }, () => {
     expect(first.code).toBe(0);
     expect(first.stdout).toMatch(/created admin account ruth\.abara@county\.example/);
     const user = (await findUser('ruth.abara@county.example'))!;
-    expect({ role: user.role, name: user.name, verified: user.emailVerifiedAt !== null }).toEqual({ role: 'admin', name: 'Ruth Abara', verified: true });
+    expect({ roles: user.roles, name: user.name, verified: user.emailVerifiedAt !== null }).toEqual({ roles: ['admin'], name: 'Ruth Abara', verified: true });
     expect(await bcrypt.compare('a long enough secret', user.passwordHash)).toBe(true);
 
     const second = await adminCreate(args, 'a different password');
@@ -64,15 +64,15 @@ describe('npm run admin:create', { timeout: 60_000 }, () => {
     expect(await findUser('nopass@county.example')).toBeNull();
   });
 
-  it('promotes an existing account without asking for or changing its password', async () => {
+  it('adds admin to an existing account without asking for or changing its password or its other roles', async () => {
     const learner = await createUser('learner', { email: 'teacher@county.example', name: 'Ana Teacher' });
     const hash = (await findUser(learner.email))!.passwordHash;
     const result = await adminCreate(['--email', learner.email, '--name', 'Other Name']);
     expect(result.code).toBe(0);
-    expect(result.stdout).toMatch(/was a learner; it is now an admin/);
+    expect(result.stdout).toMatch(/held learner; it is now also an admin/);
     const user = (await findUser(learner.email))!;
-    expect({ role: user.role, name: user.name, hash: user.passwordHash }).toEqual({ role: 'admin', name: 'Ana Teacher', hash });
+    expect({ roles: user.roles, name: user.name, hash: user.passwordHash }).toEqual({ roles: ['learner', 'admin'], name: 'Ana Teacher', hash });
     const [audit] = await db().AuditLog.findAll({ where: { subjectType: 'user', subjectId: String(learner.id) } });
-    expect(audit.data).toEqual({ from: 'learner', to: 'admin', by: 'admin:create' });
+    expect(audit.data).toEqual({ from: ['learner'], to: ['learner', 'admin'], by: 'admin:create' });
   });
 });

@@ -4,7 +4,7 @@ import { requireRole } from '@/lib/auth/guard';
 import { authOptions } from '@/lib/auth/options';
 import { endSessions } from '@/lib/auth/sessions';
 import { verifyCredentials, type SessionUser } from '@/lib/auth/users';
-import { changeRole } from '@/lib/users-admin';
+import { changeRoles } from '@/lib/users-admin';
 import { db } from '@/models';
 import { createUser, resetDatabase } from '../support/db';
 import { jsonRequest } from '../support/request';
@@ -20,7 +20,7 @@ describe('POST /api/register', () => {
     const response = await register(jsonRequest('/api/register', { name: 'Juniper Vale', email: 'Juniper@Example.org', password: 'a long pass phrase' }), {});
     expect(response.status).toBe(201);
     const body = await response.json();
-    expect(body.user).toMatchObject({ email: 'juniper@example.org', role: 'learner' });
+    expect(body.user).toMatchObject({ email: 'juniper@example.org', roles: ['learner'] });
     const row = await db().User.findOne({ where: { email: 'juniper@example.org' } });
     expect(row?.passwordHash).toMatch(/^\$2[aby]\$10\$/);
     expect(row?.passwordHash).not.toContain('a long pass phrase');
@@ -54,7 +54,7 @@ describe('POST /api/register', () => {
 describe('verifyCredentials', () => {
   it('gives the same answer for a wrong password and an unknown e-mail', async () => {
     const user = await createUser('learner', { email: 'hazel@test.example' });
-    expect(await verifyCredentials('hazel@test.example', 'test-password-123', 'a1')).toMatchObject({ id: user.id, role: 'learner' });
+    expect(await verifyCredentials('hazel@test.example', 'test-password-123', 'a1')).toMatchObject({ id: user.id, roles: ['learner'] });
     expect(await verifyCredentials('hazel@test.example', 'wrong-password-1', 'a1')).toBeNull();
     expect(await verifyCredentials('nobody@test.example', 'wrong-password-1', 'a1')).toBeNull();
   });
@@ -69,18 +69,24 @@ describe('requireRole', () => {
     await expect(requireRole('learner')).resolves.toMatchObject({ id: learner.id });
     const admin = await createUser('admin');
     actAs(admin);
-    await expect(requireRole('coordinator')).resolves.toMatchObject({ role: 'admin' });
+    await expect(requireRole('coordinator')).resolves.toMatchObject({ roles: ['admin'] });
   });
 });
 
-describe('changeRole', () => {
-  it('changes a role with an audit entry, and refuses to demote oneself', async () => {
+describe('changeRoles', () => {
+  it('changes a set of roles with an audit entry, and refuses to remove one’s own admin role', async () => {
     const admin = await createUser('admin');
     const learner = await createUser('learner');
-    await changeRole(admin.id, { userId: learner.id, role: 'instructor' });
-    expect((await db().User.findByPk(learner.id))?.role).toBe('instructor');
-    expect(await db().AuditLog.count({ where: { action: 'user.role_changed' } })).toBe(1);
-    await expect(changeRole(admin.id, { userId: admin.id, role: 'learner' })).rejects.toMatchObject({ status: 409 });
+    await changeRoles(admin.id, { userId: learner.id, roles: ['instructor', 'learner'] });
+    expect((await db().User.findByPk(learner.id))?.roles).toEqual(['learner', 'instructor']);
+    const [entry] = await db().AuditLog.findAll({ where: { action: 'user.roles_changed' } });
+    expect(entry.data).toEqual({ from: ['learner'], to: ['learner', 'instructor'] });
+    // The same set again changes nothing and writes nothing.
+    await changeRoles(admin.id, { userId: learner.id, roles: ['learner', 'instructor'] });
+    expect(await db().AuditLog.count({ where: { action: 'user.roles_changed' } })).toBe(1);
+    await expect(changeRoles(admin.id, { userId: admin.id, roles: ['learner', 'coordinator'] })).rejects.toMatchObject({ status: 409 });
+    await changeRoles(admin.id, { userId: admin.id, roles: ['admin', 'learner'] });
+    expect((await db().User.findByPk(admin.id))?.roles).toEqual(['learner', 'admin']);
   });
 
   it('applies from the next request of a session that is already signed in, and an account removed is signed out', async () => {
@@ -88,20 +94,22 @@ describe('changeRole', () => {
     const instructor = await createUser('instructor');
     // The session token still says instructor (written at sign-in, as actAs encodes it).
     actAs(instructor);
-    await expect(requireRole('instructor')).resolves.toMatchObject({ id: instructor.id, role: 'instructor' });
-    await changeRole(admin.id, { userId: instructor.id, role: 'learner' });
+    await expect(requireRole('instructor')).resolves.toMatchObject({ id: instructor.id, roles: ['instructor'] });
+    await changeRoles(admin.id, { userId: instructor.id, roles: ['learner'] });
     await expect(requireRole('instructor')).rejects.toMatchObject({ status: 403 });
-    await expect(requireRole()).resolves.toMatchObject({ id: instructor.id, role: 'learner' });
-    await changeRole(admin.id, { userId: instructor.id, role: 'coordinator' });
-    await expect(requireRole('coordinator')).resolves.toMatchObject({ role: 'coordinator' });
-    // The browser's session (/api/auth/session runs the jwt callback) follows as well.
+    await expect(requireRole()).resolves.toMatchObject({ id: instructor.id, roles: ['learner'] });
+    await changeRoles(admin.id, { userId: instructor.id, roles: ['coordinator', 'learner'] });
+    await expect(requireRole('coordinator')).resolves.toMatchObject({ roles: ['learner', 'coordinator'] });
+    // The browser's session (/api/auth/session runs the jwt callback) follows as well; a token from
+    // before role sets (a single `role`) is still read, and rewritten with the set.
     const jwt = authOptions().callbacks!.jwt!;
     const token = await jwt({
       token: { uid: instructor.id, role: 'instructor', email: instructor.email, name: instructor.name, sv: 0, sat: Math.floor(Date.now() / 1000) },
       user: undefined as never,
       account: null,
     });
-    expect(token.role).toBe('coordinator');
+    expect(token.roles).toEqual(['learner', 'coordinator']);
+    expect(token.role).toBeUndefined();
     await db().User.destroy({ where: { id: instructor.id } });
     await expect(requireRole()).rejects.toMatchObject({ status: 401 });
   });
@@ -109,7 +117,13 @@ describe('changeRole', () => {
 
 describe('sessions that end', () => {
   const jwt = () => authOptions().callbacks!.jwt!;
-  const tokenOf = (user: SessionUser, stamp: { sv: number; sat: number }) => ({ uid: user.id, role: user.role, email: user.email, name: user.name, ...stamp });
+  const tokenOf = (user: SessionUser, stamp: { sv: number; sat: number }) => ({
+    uid: user.id,
+    roles: user.roles,
+    email: user.email,
+    name: user.name,
+    ...stamp,
+  });
   const now = () => Math.floor(Date.now() / 1000);
 
   it('ends every session of a user when the session version is raised, on the server and in the browser', async () => {
@@ -149,7 +163,7 @@ describe('sessions that end', () => {
     const before = now();
     const token = await jwt()({
       token: {} as never,
-      user: { id: String(learner.id), email: learner.email, name: learner.name, role: 'learner', sessionVersion: 3 },
+      user: { id: String(learner.id), email: learner.email, name: learner.name, roles: ['learner'], sessionVersion: 3 },
       account: null,
     });
     expect(token).toMatchObject({ uid: learner.id, sv: 3 });

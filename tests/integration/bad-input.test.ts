@@ -108,7 +108,7 @@ beforeAll(async () => {
   const sessionCookies = await Promise.all(
     (['learner', 'instructor', 'coordinator', 'admin'] as const).map(async (role) => {
       const u = users[role]!;
-      return `next-auth.session-token=${await encodeJwt({ token: { sub: String(u.id), uid: u.id, role, email: u.email, name: u.name }, secret })}`;
+      return `next-auth.session-token=${await encodeJwt({ token: { sub: String(u.id), uid: u.id, roles: [role], email: u.email, name: u.name }, secret })}`;
     }),
   );
   const { GET } = (await import('@/app/api/auth/[...nextauth]/route')) as unknown as { GET: Handler };

@@ -207,7 +207,7 @@ describe('claiming the refresher certificate', () => {
     const flagship = await eligibleEnrollment(courses.flagship, { name: 'Maeve Rourke' });
     await issueCertificate(flagship.enrollmentId, null);
     const refresher = await eligibleEnrollment(courses.refresher, { userId: flagship.userId, workshopId: null });
-    const learner = { id: flagship.userId, email: 'maeve@test.example', name: 'Maeve Rourke', role: 'learner' as const };
+    const learner = { id: flagship.userId, email: 'maeve@test.example', name: 'Maeve Rourke', roles: ['learner' as const] };
     const claim = (enrollmentId: number) => claimRoute(jsonRequest('/api/certificates/refresher', { enrollmentId }), {});
 
     actAs(await createUser('learner'));
@@ -227,7 +227,7 @@ describe('claiming the refresher certificate', () => {
     const flagship = await eligibleEnrollment(courses.flagship);
     await issueCertificate(flagship.enrollmentId, null);
     const refresher = await eligibleEnrollment(courses.refresher, { userId: flagship.userId, workshopId: null, skip: { finalExam: true } });
-    actAs({ id: flagship.userId, email: 'x@test.example', name: 'x', role: 'learner' });
+    actAs({ id: flagship.userId, email: 'x@test.example', name: 'x', roles: ['learner'] });
     const response = await claimRoute(jsonRequest('/api/certificates/refresher', { enrollmentId: refresher.enrollmentId }), {});
     expect(response.status).toBe(409);
     expect((await response.json()).missing).toEqual(['final-exam']);
@@ -240,7 +240,7 @@ describe('PDF download', () => {
     const issued = (await issueCertificate(enrollmentId, null)) as { serial: string; certificateId: number };
     const call = () => pdfRoute(new Request(`http://localhost/api/certificates/${issued.serial}/pdf`), params({ serial: issued.serial }));
     expect((await call()).status).toBe(401);
-    actAs({ id: userId, email: 'x@test.example', name: 'Ines Moreau', role: 'learner' });
+    actAs({ id: userId, email: 'x@test.example', name: 'Ines Moreau', roles: ['learner'] });
     const own = await call();
     expect(own.status).toBe(200);
     expect(own.headers.get('content-type')).toBe('application/pdf');
@@ -252,7 +252,7 @@ describe('PDF download', () => {
     actAs(await createUser('coordinator'));
     expect((await call()).status).toBe(200);
     await db().Certificate.update({ revokedAt: new Date(), revokeReason: 'test' }, { where: { id: issued.certificateId } });
-    actAs({ id: userId, email: 'x@test.example', name: 'Ines Moreau', role: 'learner' });
+    actAs({ id: userId, email: 'x@test.example', name: 'Ines Moreau', roles: ['learner'] });
     expect((await call()).status).toBe(409);
   });
 });

@@ -151,7 +151,7 @@ describe('loose photos', () => {
     expect((await read(learner, loose)).status).toBe(200);
     for (const viewer of [fixture.current.instructor, await createUser('coordinator'), await createUser('admin')]) {
       const answer = await read(viewer, loose);
-      expect(answer.status, viewer.role).toBe(403);
+      expect(answer.status, viewer.roles.join('+')).toBe(403);
       expect(answer.headers.get('content-type')).toMatch(/json/);
     }
     const { photoId } = await waitingRound();

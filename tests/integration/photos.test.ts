@@ -202,14 +202,14 @@ describe('GET /api/photos/[id]', () => {
     for (const person of staff) {
       actAs(person);
       const loose = await get();
-      expect(loose.status, person.role).toBe(403);
+      expect(loose.status, person.roles.join('+')).toBe(403);
       expect((await loose.json()).message).toMatch(/not part of a submission/);
     }
     // Once it belongs to a submission, every instructor and coordinator may see it.
     await submitPractical(learner, 'pickling-and-canning', GOOD_BATCH([Number(id)]));
     for (const person of staff) {
       actAs(person);
-      expect((await get()).status, person.role).toBe(200);
+      expect((await get()).status, person.roles.join('+')).toBe(200);
     }
 
     actAs(other);

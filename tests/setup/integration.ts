@@ -17,7 +17,7 @@ vi.mock('next/headers', async (importOriginal) => {
             {
               name: sessionCookieName(usesSecureCookies(process.env.NEXTAUTH_URL)),
               value: await encode({
-                token: { uid: user.id, role: user.role, email: user.email, name: user.name, sub: String(user.id) },
+                token: { uid: user.id, roles: user.roles, email: user.email, name: user.name, sub: String(user.id) },
                 secret: process.env.NEXTAUTH_SECRET!,
                 maxAge: 3600,
               }),

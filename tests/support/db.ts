@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { syncCourses } from '@/lib/courses/sync';
 import { hashPassword, type SessionUser } from '@/lib/auth/users';
-import type { Role } from '@/lib/roles';
+import { normalizeRoles, type Role } from '@/lib/roles';
 import { db } from '@/models';
 
 /** Empties every table (not the migration record) so each test file starts clean. */
@@ -20,17 +20,23 @@ export async function resetDatabase(): Promise<void> {
 
 let counter = 0;
 
-/** Creates a user with a role and a confirmed address (unless `confirmed: false`); the password is 'test-password-123'. */
-export async function createUser(role: Role = 'learner', overrides: Partial<{ email: string; name: string; confirmed: boolean }> = {}): Promise<SessionUser> {
+/** Creates a user with a role or a set of roles and a confirmed address (unless `confirmed: false`); the password is 'test-password-123'. */
+export async function createUser(
+  roles: Role | readonly Role[] = 'learner',
+  overrides: Partial<{ email: string; name: string; deactivatedAt: Date; confirmed: boolean }> = {},
+): Promise<SessionUser> {
   counter += 1;
+  const set = normalizeRoles(typeof roles === 'string' ? [roles] : roles);
+  const tag = set.join('-');
   const user = await db().User.create({
-    email: overrides.email ?? `${role}${counter}-${Date.now()}@test.example`,
-    name: overrides.name ?? `Test ${role} ${counter}`,
-    role,
+    email: overrides.email ?? `${tag}${counter}-${Date.now()}@test.example`,
+    name: overrides.name ?? `Test ${tag} ${counter}`,
+    roles: set,
+    deactivatedAt: overrides.deactivatedAt ?? null,
     passwordHash: await hashPassword('test-password-123'),
     emailVerifiedAt: overrides.confirmed === false ? null : new Date(),
   });
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
+  return { id: user.id, email: user.email, name: user.name, roles: user.roles };
 }
 
 /** The two courses of the catalog, brought in from content/courses/ as `npm run db:migrate` does. */

@@ -34,11 +34,11 @@ async function quickLearner(): Promise<SessionUser> {
   const user = await db().User.create({
     email: `bulk${quick}-${Date.now()}@test.example`,
     name: `Bulk learner ${quick}`,
-    role: 'learner',
+    roles: ['learner'],
     passwordHash: 'not-a-login',
     emailVerifiedAt: new Date(),
   });
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
+  return { id: user.id, email: user.email, name: user.name, roles: user.roles };
 }
 
 export async function enrolledLearner(

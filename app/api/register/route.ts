@@ -8,5 +8,5 @@ export const POST = route(async (request) => {
   const input = parseOrThrow(RegisterSchema, await readJson(request), 'registration form');
   await countRegistration(clientAddress(request.headers));
   const user = await registerLearner(input);
-  return Response.json({ user: { id: user.id, email: user.email, name: user.name, role: user.role } }, { status: 201 });
+  return Response.json({ user: { id: user.id, email: user.email, name: user.name, roles: user.roles } }, { status: 201 });
 });

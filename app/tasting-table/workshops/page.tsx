@@ -15,7 +15,7 @@ const OPENS_BEFORE_MS = 12 * 3600_000;
 
 export default async function InstructorWorkshopsPage() {
   const user = await requirePageRole('/tasting-table/workshops', 'instructor');
-  const everyone = roleAllows(user.role, ['coordinator']);
+  const everyone = roleAllows(user.roles, ['coordinator']);
   const workshops = await fetchWorkshopsForDesk(everyone ? {} : { instructorId: user.id });
   const rosters = await Promise.all(workshops.map((w) => fetchRoster({ workshopId: w.id })));
   const now = Date.now();

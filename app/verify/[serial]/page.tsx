@@ -30,7 +30,7 @@ export default async function VerifySerialPage({ params }: { params: Promise<{ s
           Too many certificate checks came from your address in the last few minutes. Please wait a little and try again.
         </div>
       ) : (
-        <VerificationResult result={result!} />
+        <VerificationResult result={result!} timeZone={program.timeZone} />
       )}
       <section aria-labelledby="check-another" className="space-y-3">
         <h2 id="check-another" className="text-lg font-bold">

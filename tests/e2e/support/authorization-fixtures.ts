@@ -1,5 +1,6 @@
 // The records the authorization walk needs, made in the browser-test database beside the demo seed:
-// two learners of their own (A and B), a past workshop of the demo instructor they are both in,
+// two learners of their own (A and B), an instructor who is nothing else (Ingrid: the demo instructor
+// is also a learner, the matrix's volunteer column), a past workshop of Ingrid's they are both in,
 // their enrollments and certificates (SQL), their quiz attempts and photos (through the app's own
 // routes, signed in as each). Nothing here touches the demo people the other browser tests use.
 import bcrypt from 'bcryptjs';
@@ -51,7 +52,7 @@ async function uploadPhoto(jar: Jar, jpeg: Uint8Array): Promise<number> {
   return ((await response.json()) as { photo: { id: number } }).photo.id;
 }
 
-export type MatrixPeople = { fixtures: Fixtures; emails: { a: string; b: string } };
+export type MatrixPeople = { fixtures: Fixtures; emails: { a: string; b: string; instructor: string } };
 
 export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
   const conn = await connect();
@@ -59,12 +60,18 @@ export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
     const now = new Date();
     const stamp = `${Date.now()}`;
     const ids = async (email: string) => (await one<{ id: number }>(conn, 'SELECT id FROM users WHERE email = ?', [email])).id;
-    const instructorId = await ids('instructor@cedarhollow.example');
     const coordinatorId = await ids('coordinator@cedarhollow.example');
     const course = async (slug: string) =>
       one<{ id: number; title: string; validityMonths: number }>(conn, 'SELECT id, title, validityMonths FROM courses WHERE slug = ?', [slug]);
     const flagship = await course('pickling-and-canning');
     const refresher = await course('volunteer-refresher');
+    const hash = bcrypt.hashSync(FIXTURE_PASSWORD, 10);
+    const emails = { a: `authz-a-${stamp}@test.example`, b: `authz-b-${stamp}@test.example`, instructor: `authz-i-${stamp}@test.example` };
+    const instructorId = await insert(
+      conn,
+      "INSERT INTO users (email, name, passwordHash, roles, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, 'instructor', ?, ?, ?)",
+      [emails.instructor, 'Ingrid Matrix', hash, now, now, now],
+    );
     const startsAt = new Date(now.getTime() - 40 * 86_400_000);
     const workshopId = await insert(
       conn,
@@ -81,12 +88,10 @@ export async function createAuthorizationFixtures(): Promise<MatrixPeople> {
         now,
       ],
     );
-    const hash = bcrypt.hashSync(FIXTURE_PASSWORD, 10);
-    const emails = { a: `authz-a-${stamp}@test.example`, b: `authz-b-${stamp}@test.example` };
     const person = async (email: string, name: string, refresherStatus: 'withdrawn' | 'active') => {
       const userId = await insert(
         conn,
-        "INSERT INTO users (email, name, passwordHash, role, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, 'learner', ?, ?, ?)",
+        "INSERT INTO users (email, name, passwordHash, roles, emailVerifiedAt, createdAt, updatedAt) VALUES (?, ?, ?, 'learner', ?, ?, ?)",
         [email, name, hash, now, now, now],
       );
       const enrollmentId = await insert(

@@ -6,7 +6,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import fc from 'fast-check';
 import { CRISPING_AGENTS, GAUGES, JAR_SIZES, PRODUCT_IDS, SALT_KINDS, SUGAR_KINDS } from '@/lib/preserving';
-import type { Role } from '@/lib/roles';
+import { ROLES, type Role } from '@/lib/roles';
 import {
   AVOID_IDS,
   MISSING_ID,
@@ -138,6 +138,15 @@ const reasonFields = (min: number, max: number, optional: boolean): Record<strin
   },
 });
 
+const roleSetField: FieldSpec = {
+  ok: fc.subarray([...ROLES], { minLength: 1 }),
+  bad: requiredBad(
+    notString,
+    nastyString,
+    fc.constantFrom([], ['superuser'], ['admin', 'root'], [null], [1], ['learner', 'instructor', 'coordinator', 'admin', 'learner']),
+  ),
+};
+
 const criterion = fc.record({ verdict: fc.constantFrom('met', 'not_met'), comment: fc.string({ maxLength: 20 }) });
 const reviewFields: Record<string, FieldSpec> = {
   decision: {
@@ -244,6 +253,19 @@ const registerFields: Record<string, FieldSpec> = {
     ),
   },
   password: { ok: fc.constant('a long pass phrase'), bad: requiredBad(notString, fc.string({ maxLength: 9 }), fc.constant('p'.repeat(201))) },
+};
+
+// Well-formed tokens that name no invitation: the sweep never accepts a real one.
+const acceptFields: Record<string, FieldSpec> = {
+  token: {
+    ok: fc.stringMatching(/^[A-Za-z0-9_-]{43}$/),
+    bad: requiredBad(
+      notString,
+      nastyString.filter((v) => !/^[A-Za-z0-9_-]{43}$/.test(v)),
+    ),
+  },
+  name: registerFields.name,
+  password: registerFields.password,
 };
 
 const WAIVER = /^[A-Z0-9-]{4,40}$/;
@@ -396,6 +418,11 @@ export const SWEEP: Record<string, SweepSpec> = {
       },
     }),
   },
+  'app/api/admin/invitations/route.ts#POST': { who: ['admin'], body: badJsonBodies({ email: registerFields.email, roles: roleSetField }) },
+  'app/api/invitations/accept/route.ts#POST': { who: EVERYONE, body: badJsonBodies(acceptFields) },
+  'app/api/admin/users/[id]/roles/route.ts#POST': { who: ['admin'], params: { id: idParam }, body: badJsonBodies({ roles: roleSetField }) },
+  'app/api/admin/users/[id]/deactivate/route.ts#POST': { who: ['admin'], params: { id: idParam } },
+  'app/api/admin/users/[id]/reactivate/route.ts#POST': { who: ['admin'], params: { id: idParam } },
   'app/api/desk/certificates/[id]/revoke/route.ts#POST': { who: DESK, params: { id: idParam }, body: badJsonBodies(reasonFields(5, 500, false)) },
   'app/api/desk/certificates/route.ts#POST': { who: DESK, body: badJsonBodies({ enrollmentIds: idsField(100) }) },
   'app/api/desk/enrollments/route.ts#GET': {

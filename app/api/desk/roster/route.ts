@@ -4,6 +4,8 @@ import { DeskFilterSchema } from '@/lib/validations/certificate';
 import { filteredIds, standingsInOrder, toDeskEnrollment } from '@/lib/desk/enrollments';
 import { rosterCsv } from '@/lib/desk/roster-csv';
 import { parseOrThrow, route } from '@/lib/errors';
+import { isoDay } from '@/lib/local-time';
+import { getProgramIdentity } from '@/lib/program/settings';
 
 const IdsSchema = z
   .string()
@@ -23,7 +25,8 @@ export const GET = route(async (request) => {
   const chosen = ids ?? (await filteredIds(filter, now));
   const rows = (await standingsInOrder(chosen, now)).map((s) => toDeskEnrollment(s, now));
   const csv = rosterCsv(rows);
-  const stamp = now.toISOString().slice(0, 10);
+  // The file is named for the program's day, not UTC's.
+  const stamp = isoDay(now, (await getProgramIdentity()).timeZone);
   return new Response(csv, {
     headers: {
       'Content-Type': 'text/csv; charset=utf-8',

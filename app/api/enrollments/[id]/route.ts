@@ -10,7 +10,7 @@ export const GET = route<{ params: Promise<{ id: string }> }>(async (_request, {
   if (!Number.isInteger(id) || id <= 0) throw new AppError('bad_request', 'That enrollment number is not valid.', { fields: { id: ['not a number'] } });
   const status = await fetchEnrollmentStatus({ id });
   // Someone else's enrollment is answered as missing, so its existence is not revealed.
-  if (!status || (status.userId !== user.id && !roleAllows(user.role, ['coordinator']))) throw new AppError('not_found', 'That enrollment does not exist.');
+  if (!status || (status.userId !== user.id && !roleAllows(user.roles, ['coordinator']))) throw new AppError('not_found', 'That enrollment does not exist.');
   const { userId: _userId, ...rest } = status;
   return Response.json({ enrollment: rest }, { headers: { 'Cache-Control': 'no-store' } });
 });

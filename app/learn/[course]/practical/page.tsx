@@ -8,6 +8,7 @@ import { Card } from '@/components/ui/card';
 import { findActiveEnrollment } from '@/lib/access';
 import { requirePageRole } from '@/lib/auth/guard';
 import { fetchCourseHeading, fetchLearnerPracticals, summarize } from '@/lib/practicals/data';
+import { getProgramIdentity } from '@/lib/program/settings';
 
 export const metadata: Metadata = { title: 'Practical batch' };
 
@@ -32,7 +33,7 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
     );
   }
 
-  const rounds = await fetchLearnerPracticals({ userId: user.id, enrollmentId: enrollment.id });
+  const [rounds, program] = await Promise.all([fetchLearnerPracticals({ userId: user.id, enrollmentId: enrollment.id }), getProgramIdentity()]);
   const latest = summarize(rounds);
   const canSubmit = !latest || latest.status === 'changes_requested';
 
@@ -53,14 +54,14 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
           with no flags is not thereby safe: discard any jar that leaks, bulges, spurts or smells off, without tasting it.
         </p>
       </aside>
-      <PracticalStatus courseSlug={slug} latest={latest} />
+      <PracticalStatus courseSlug={slug} latest={latest} timeZone={program.timeZone} />
       <PracticalForm
         courseSlug={slug}
         round={(latest?.round ?? 0) + 1}
         open={canSubmit}
         title={latest ? `Submit round ${latest.round + 1}` : 'Submit your batch'}
       />
-      <PracticalHistory rounds={rounds} />
+      <PracticalHistory rounds={rounds} timeZone={program.timeZone} />
     </div>
   );
 }

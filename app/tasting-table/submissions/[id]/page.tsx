@@ -14,18 +14,21 @@ import { requirePageRole } from '@/lib/auth/guard';
 import { computeExpectations } from '@/lib/practicals/checks';
 import { fetchSubmission } from '@/lib/practicals/data';
 import { decisionRightFor } from '@/lib/practicals/service';
+import { formatDateTime, formatShortDate } from '@/lib/local-time';
+import { getProgramIdentity } from '@/lib/program/settings';
 
 export const metadata: Metadata = { title: 'Practical submission' };
-
-const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
 
 export default async function SubmissionPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const viewer = await requirePageRole(`/tasting-table/submissions/${id}`, 'instructor');
   if (!/^\d{1,10}$/.test(id)) notFound();
-  const [submission, right] = await Promise.all([fetchSubmission({ id: Number(id) }), decisionRightFor(viewer, Number(id))]);
+  const [submission, right, program] = await Promise.all([fetchSubmission({ id: Number(id) }), decisionRightFor(viewer, Number(id)), getProgramIdentity()]);
   if (!submission || !right) notFound();
   const { round, earlierRounds, learner, course, workshop } = submission;
+  // Times in the learner's workshop's zone, or the program's for a learner without a workshop.
+  const timeZone = workshop?.timeZone ?? program.timeZone;
+  const when = (iso: string) => formatDateTime(iso, timeZone);
   const expected = computeExpectations(round.details);
 
   return (
@@ -41,9 +44,7 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
           <Badge tone={PRACTICAL_STATUS_TONE[round.status]}>{PRACTICAL_STATUS_LABEL[round.status]}</Badge>
           <span>
             {course.title} · submitted {when(round.submittedAt)}
-            {workshop
-              ? ` · workshop ${new Date(workshop.startsAt).toLocaleDateString('en-US', { dateStyle: 'medium', timeZone: 'UTC' })}, ${workshop.place.split(',')[0]}`
-              : ' · self-paced'}
+            {workshop ? ` · workshop ${formatShortDate(workshop.startsAt, workshop.timeZone)}, ${workshop.place.split(',')[0]}` : ' · self-paced'}
           </span>
         </p>
       </header>
@@ -59,7 +60,7 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
       {round.reviews.length ? (
         <Card title="Review">
           {round.reviews.map((r) => (
-            <ReviewSummary key={r.id} review={r} />
+            <ReviewSummary key={r.id} review={r} timeZone={timeZone} />
           ))}
         </Card>
       ) : null}
@@ -82,7 +83,7 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
                 </p>
                 <FlagList flags={r.flags} title={`Flags on round ${r.round}`} level="h3" />
                 {r.reviews.map((review) => (
-                  <ReviewSummary key={review.id} review={review} />
+                  <ReviewSummary key={review.id} review={review} timeZone={timeZone} />
                 ))}
               </div>
             </Card>

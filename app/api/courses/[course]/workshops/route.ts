@@ -6,7 +6,7 @@ import { AppError, route } from '@/lib/errors';
 export const GET = route<{ params: Promise<{ course: string }> }>(async (_request, { params }) => {
   const { course } = await params;
   const user = await getCurrentUser();
-  const workshops = await fetchUpcomingWorkshops({ courseSlug: course, userId: user?.role === 'learner' ? user.id : null });
+  const workshops = await fetchUpcomingWorkshops({ courseSlug: course, userId: user?.roles.includes('learner') ? user.id : null });
   if (!workshops) throw new AppError('not_found', 'There is no course with that name.');
   return Response.json({ workshops }, { headers: { 'Cache-Control': 'no-store' } });
 });
