@@ -9,7 +9,10 @@ export const metadata: Metadata = { title: 'Choose a new password' };
 export const dynamic = 'force-dynamic';
 
 const REFUSED = {
-  used: { title: 'This link has already been used', body: 'Each link sets a password once. If you still need a new password, ask for a new link.' },
+  used: {
+    title: 'This link has already been used',
+    body: 'Each link sets a password once, and a newer link replaces older ones. If you still need a new password, ask for a new link.',
+  },
   expired: { title: 'This link has expired', body: 'Links to set a new password work for an hour. Ask for a new one; it arrives in a minute or two.' },
   invalid: { title: 'This link does not work', body: 'The link is incomplete. Copy the whole link from the e-mail, or ask for a new one.' },
 };

@@ -48,7 +48,7 @@ export async function resetLinkState(token: string): Promise<TokenState['state']
 }
 
 const LINK_REFUSED: Record<'used' | 'expired' | 'invalid', string> = {
-  used: 'This link has already been used. Ask for a new one.',
+  used: 'This link has already been used, or a newer one replaced it. Ask for a new one.',
   expired: 'This link has expired: links work for an hour. Ask for a new one.',
   invalid: 'This link does not work. Copy the whole link from the e-mail, or ask for a new one.',
 };

@@ -83,7 +83,7 @@ describe('password reset by e-mail', () => {
     // Used twice: refused, and says so.
     const again = await completePOST(post('/api/password-reset/complete', { token, password: 'yet another pass phrase' }), {});
     expect(again.status).toBe(409);
-    expect(await again.json()).toMatchObject({ link: 'used', message: 'This link has already been used. Ask for a new one.' });
+    expect(await again.json()).toMatchObject({ link: 'used', message: 'This link has already been used, or a newer one replaced it. Ask for a new one.' });
     expect(await resetLinkState(token!)).toBe('used');
     expect(await verifyCredentials('rowan@test.example', 'yet another pass phrase', 'reset-test')).toBeNull();
   });
