@@ -49,5 +49,8 @@ export function describeRoles(roles: RoleSet): string {
   return labels.length === 1 ? labels[0] : `${labels.slice(0, -1).join(', ')} and ${labels[labels.length - 1]}`;
 }
 
+/** True when the set holds a staff role (instructor, coordinator, admin): such accounts are closed by an admin, not erased by their holder. */
+export const holdsStaffRole = (roles: RoleSet): boolean => roles.some((r) => r !== 'learner');
+
 /** Every role that, held alone, allows one of `allowed` (for finding staff in the database). */
 export const rolesAllowing = (allowed: readonly Role[]): Role[] => ROLES.filter((r) => roleAllows([r], allowed));

@@ -132,6 +132,9 @@ export async function exportZip(userId: number): Promise<Buffer> {
  * practicals, photos, tokens and queued e-mail go; enrollments, payments, issued certificates and
  * the audit log stay, under a pseudonym; every session ends and the account cannot sign in again.
  */
+/** Why an account that holds a staff role cannot erase itself (app/api/account, the deletion page). */
+export const STAFF_DELETION = 'Your account also holds a staff role. An admin closes staff accounts: ask an admin to remove your staff roles first.';
+
 export async function eraseAccount(userId: number, currentPassword: string): Promise<void> {
   const { User, LessonProgress, QuizAttempt, Practical, PracticalPhoto, AccountToken, OutboxEmail, Certificate, CertificateVersion, sequelize } = db();
   const user = await User.findByPk(userId, { rejectOnEmpty: new AppError('unauthorized') });

@@ -2,8 +2,9 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { DeleteAccountForm } from '@/components/account/account-forms';
 import { Card } from '@/components/ui/card';
-import { erasurePreview } from '@/lib/account/data';
+import { erasurePreview, STAFF_DELETION } from '@/lib/account/data';
 import { requirePageRole } from '@/lib/auth/guard';
+import { holdsStaffRole } from '@/lib/roles';
 
 export const metadata: Metadata = { title: 'Delete your account' };
 
@@ -43,9 +44,7 @@ export default async function DeleteAccountPage() {
           <Link href="/privacy">Why these are kept</Link>.
         </p>
       </Card>
-      <Card title="Delete my account">
-        <DeleteAccountForm />
-      </Card>
+      <Card title="Delete my account">{holdsStaffRole(user.roles) ? <p role="note">{STAFF_DELETION}</p> : <DeleteAccountForm />}</Card>
     </div>
   );
 }

@@ -163,7 +163,12 @@ const pages: PageRow[] = [
     expect: { visitor: 200, own: 200, other: 200, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 },
   },
   // Accounts that recover: every signed-in person has an account page; deletion is a learner's own.
-  { kind: 'page', pattern: '/account', probe: at('/account'), expect: { visitor: S, own: 200, other: NA, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 } },
+  {
+    kind: 'page',
+    pattern: '/account',
+    probe: at('/account'),
+    expect: { visitor: S, own: 200, other: NA, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 },
+  },
   { kind: 'page', pattern: '/account/delete', probe: at('/account/delete'), expect: LEARNER_PAGE },
   { kind: 'page', pattern: '/forgot-password', probe: at('/forgot-password'), expect: PUBLIC },
   { kind: 'page', pattern: '/reset-password', probe: at('/reset-password?token=not-a-token'), expect: PUBLIC },
@@ -244,7 +249,13 @@ const routes: RouteRow[] = [
   { kind: 'route', pattern: '/api/program/logo', method: 'GET', probe: at('/api/program/logo'), expect: PUBLIC },
   // The admin's program page: empty fields, and an upload without a logo, are refused on their merits.
   { kind: 'route', pattern: '/api/program', method: 'POST', probe: () => ({ path: '/api/program', body: {} }), expect: { ...ADMIN_WRITE, admin: 400 } },
-  { kind: 'route', pattern: '/api/program/logo', method: 'POST', probe: () => ({ path: '/api/program/logo', body: new FormData() }), expect: { ...ADMIN_WRITE, admin: 400 } },
+  {
+    kind: 'route',
+    pattern: '/api/program/logo',
+    method: 'POST',
+    probe: () => ({ path: '/api/program/logo', body: new FormData() }),
+    expect: { ...ADMIN_WRITE, admin: 400 },
+  },
   {
     kind: 'route',
     pattern: '/api/certificates/[serial]',
@@ -461,9 +472,21 @@ const routes: RouteRow[] = [
     probe: () => ({ path: '/api/account/sign-out-everywhere', body: {} }),
     expect: ACCOUNT_WRITE,
   },
-  { kind: 'route', pattern: '/api/account/confirmation', method: 'POST', probe: at('/api/account/confirmation'), expect: { visitor: 401, own: 409, other: NA, instructor: 409, coordinator: 409, admin: 409, volunteer: 409 } },
-  { kind: 'route', pattern: '/api/account/export', method: 'GET', probe: at('/api/account/export'), expect: { visitor: 401, own: 200, other: NA, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 } },
-  { kind: 'route', pattern: '/api/account', method: 'DELETE', probe: () => ({ path: '/api/account', body: {} }), expect: LEARNER_WRITE },
+  {
+    kind: 'route',
+    pattern: '/api/account/confirmation',
+    method: 'POST',
+    probe: at('/api/account/confirmation'),
+    expect: { visitor: 401, own: 409, other: NA, instructor: 409, coordinator: 409, admin: 409, volunteer: 409 },
+  },
+  {
+    kind: 'route',
+    pattern: '/api/account/export',
+    method: 'GET',
+    probe: at('/api/account/export'),
+    expect: { visitor: 401, own: 200, other: NA, instructor: 200, coordinator: 200, admin: 200, volunteer: 200 },
+  },
+  { kind: 'route', pattern: '/api/account', method: 'DELETE', probe: () => ({ path: '/api/account', body: {} }), expect: { ...LEARNER_WRITE, volunteer: 403 } },
 ];
 
 const actions: ActionRow[] = [];
