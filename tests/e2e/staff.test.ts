@@ -103,8 +103,8 @@ describe('the audit log viewer', () => {
     await filters.getByLabel('Kind of action').selectOption({ label: 'changed the roles of an account' });
     const yesterday = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
     const tomorrow = new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
-    await filters.getByLabel('From').fill(yesterday);
-    await filters.getByLabel('To').fill(tomorrow);
+    await filters.getByLabel('From', { exact: true }).fill(yesterday);
+    await filters.getByLabel('To', { exact: true }).fill(tomorrow);
     await filters.getByRole('button', { name: 'Show' }).click();
     await page.waitForURL((url) => url.pathname === '/desk/audit' && url.searchParams.get('action') === 'user.roles_changed');
     const url = new URL(page.url());
