@@ -347,9 +347,9 @@ const routes: RouteRow[] = [
   // Called by the payment service: the signature on the raw body is the only check, for everyone.
   {
     kind: 'route',
-    pattern: '/api/webhooks/stripe',
+    pattern: '/api/webhooks/payments',
     method: 'POST',
-    probe: () => ({ path: '/api/webhooks/stripe', body: '{}', headers: { 'content-type': 'application/json' } }),
+    probe: () => ({ path: '/api/webhooks/payments', body: '{}', headers: { 'content-type': 'application/json' } }),
     expect: [400, 400, NA, 400, 400, 400],
   },
 ];
