@@ -106,9 +106,9 @@ export function checkEligibility(course: CourseRequirements, facts: EnrollmentFa
   if (course.practicalRequired) {
     checks.push({
       key: 'practical',
-      label: 'Practical approved',
+      label: 'Practical batch passed the table',
       met: facts.practicalApproved,
-      detail: facts.practicalApproved ? 'An instructor approved the practical batch.' : 'No approved practical batch yet.',
+      detail: facts.practicalApproved ? 'An instructor passed the practical batch.' : 'No practical batch has passed the table yet.',
     });
   }
 

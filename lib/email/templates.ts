@@ -1,6 +1,7 @@
 // Every message Brinewright sends, each with a plain-text and an HTML part. Pure functions: they
 // build an OutgoingEmail for enqueueEmail() and do no I/O, so any module (and its tests) may call them.
 import { formatMoney, formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
+import { STATE_NAME, batchName } from '@/lib/practicals/words';
 import { RUBRIC_CRITERIA, type ReviewInput } from '@/lib/validations/practical';
 import type { OutgoingAttachment, OutgoingEmail } from './outbox';
 
@@ -212,7 +213,7 @@ export function workshopReminderEmail({
   ]);
 }
 
-/** Sent when an instructor has reviewed a round of a practical: the decision, the comment and the rubric. */
+/** Sent when an instructor has decided on a practical batch: the decision, the comment and the rubric. */
 export function practicalReviewedEmail({
   to,
   name,
@@ -238,18 +239,18 @@ export function practicalReviewedEmail({
   return compose(
     'practical.reviewed',
     to,
-    approved ? `Your practical batch is approved — ${courseTitle}` : `Your practical batch needs changes — ${courseTitle}`,
+    `${approved ? STATE_NAME.approved : STATE_NAME.changes_requested}: your practical batch for ${courseTitle}`,
     `Hello ${name},`,
     [
       {
         kind: 'p',
         text: approved
-          ? `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and approved it.`
-          : `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and asks for changes before it can be approved.`,
+          ? `${reviewerName} looked at your ${batchName(round)} at the Tasting table, and it passed the table.`
+          : `${reviewerName} looked at your ${batchName(round)} at the Tasting table and asks you for another batch before it can pass.`,
       },
-      ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'What to change'}: ${review.comment}` }] : []),
+      ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'For the next batch'}: ${review.comment}` }] : []),
       { kind: 'facts', rows: rubric },
-      { kind: 'button', label: approved ? 'See the review' : 'See the review and submit a new round', href: url },
+      { kind: 'button', label: approved ? 'See the notes' : 'See the notes and send another batch', href: url },
     ],
   );
 }
