@@ -3,7 +3,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { confirmEmailAddress, type ConfirmOutcome } from '@/lib/email/confirm';
 
-export const metadata: Metadata = { title: 'Confirm your e-mail address — Brinewright' };
+export const metadata: Metadata = { title: 'Confirm your e-mail address' };
 export const dynamic = 'force-dynamic';
 
 const COPY: Record<ConfirmOutcome, { title: string; body: string }> = {

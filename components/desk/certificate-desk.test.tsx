@@ -80,7 +80,7 @@ describe('CertificateDesk', () => {
     mockFetch([row(5, true), row(6, true)]);
     renderDesk();
     await screen.findByText('Learner 5');
-    const link = () => screen.getByRole('link', { name: /Export roster/ });
+    const link = () => screen.getByRole('link', { name: /Download the list \(spreadsheet\)/ });
     expect(link()).toHaveAttribute('href', '/api/desk/roster');
     await userEvent.selectOptions(screen.getByLabelText('Eligibility'), 'yes');
     expect(link()).toHaveAttribute('href', '/api/desk/roster?eligible=yes');

@@ -47,7 +47,7 @@ export type Check = {
   met: boolean;
   /** A short sentence for the checklist: what is done, or what is missing. */
   detail: string;
-  /** The slugs still missing (lessons, quizzes). */
+  /** The slugs still missing (lessons, quizzes); the desk names them by title (lib/desk/enrollments.ts). */
   missing?: string[];
 };
 

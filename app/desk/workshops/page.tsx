@@ -9,7 +9,7 @@ import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format
 import { fetchCourseOptions, fetchInstructorOptions, fetchWorkshopsForDesk } from '@/lib/enrollment/queries';
 import { saveWorkshopAction } from './actions';
 
-export const metadata: Metadata = { title: 'Workshops — Certificate desk' };
+export const metadata: Metadata = { title: 'Workshops' };
 export const dynamic = 'force-dynamic';
 
 export default async function DeskWorkshopsPage() {

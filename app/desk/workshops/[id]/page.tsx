@@ -8,7 +8,7 @@ import { fetchCourseOptions, fetchInstructorOptions, fetchWorkshopsForDesk } fro
 import { toZonedInput } from '@/lib/enrollment/time';
 import { saveWorkshopAction } from '../actions';
 
-export const metadata: Metadata = { title: 'Edit workshop — Certificate desk' };
+export const metadata: Metadata = { title: 'Edit a workshop' };
 export const dynamic = 'force-dynamic';
 
 export default async function EditWorkshopPage({ params }: { params: Promise<{ id: string }> }) {

@@ -16,7 +16,7 @@ import { fetchSubmission } from '@/lib/practicals/data';
 import { decisionRightFor } from '@/lib/practicals/service';
 import { batchName, batchTitle } from '@/lib/practicals/words';
 
-export const metadata: Metadata = { title: 'Practical submission' };
+export const metadata: Metadata = { title: 'Practical batch at the Tasting table' };
 
 const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
 
