@@ -42,7 +42,8 @@ export function FlagList({
           <p className="mt-1 text-sm text-ink-soft">Nothing to double-check so far.</p>
         ) : flags.length === 0 ? (
           <p className="mt-1 text-sm text-ink-soft">
-            Nothing to double-check: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested recipe.
+            Nothing to double-check: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested
+            recipe.
           </p>
         ) : (
           <ul className="mt-2 space-y-2" data-testid="flags">

@@ -119,8 +119,8 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
     <Card title={title}>
       <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-describedby="practical-form-intro">
         <p id="practical-form-intro" className="text-sm text-ink-soft">
-          {round > 1 ? `This is your ${batchName(round)}. ` : ''}Enter what you actually did. Something to double-check does not stop you from sending: it tells you and
-          your instructor where the batch differs from the published numbers.
+          {round > 1 ? `This is your ${batchName(round)}. ` : ''}Enter what you actually did. Something to double-check does not stop you from sending: it tells
+          you and your instructor where the batch differs from the published numbers.
         </p>
 
         <fieldset className="grid gap-4 md:grid-cols-2">

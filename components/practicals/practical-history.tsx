@@ -12,8 +12,7 @@ export function ReviewSummary({ review }: { review: RoundView['reviews'][number]
   return (
     <div className="space-y-2 rounded-lg border border-brine-100 bg-white p-3" data-testid="review-summary">
       <p className="text-sm">
-        <Badge tone={PRACTICAL_STATUS_TONE[review.decision]}>{STATE_NAME[review.decision]}</Badge> by{' '}
-        {review.reviewerName}, {when(review.createdAt)}
+        <Badge tone={PRACTICAL_STATUS_TONE[review.decision]}>{STATE_NAME[review.decision]}</Badge> by {review.reviewerName}, {when(review.createdAt)}
       </p>
       {review.comment ? (
         <p className="text-sm">

@@ -41,7 +41,10 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
       setServerError(errorMessage(e, 'The review could not be saved. Please try again.'));
       return;
     }
-    toast.show(input.decision === 'approved' ? 'The batch passed the table. The learner gets an e-mail.' : 'Another batch asked for. The learner gets an e-mail.', 'success');
+    toast.show(
+      input.decision === 'approved' ? 'The batch passed the table. The learner gets an e-mail.' : 'Another batch asked for. The learner gets an e-mail.',
+      'success',
+    );
     router.refresh();
   };
 

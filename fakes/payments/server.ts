@@ -275,9 +275,15 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   function createSession(params: Record<string, unknown>): { status: number; body: unknown } {
     const items = (params.line_items as Array<Record<string, unknown>> | undefined) ?? [];
     if (params.mode !== 'payment')
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'The practice server takes one-off payments only (mode=payment).', param: 'mode' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'The practice server takes one-off payments only (mode=payment).', param: 'mode' } },
+      };
     if (!items.length)
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'line_items is missing: say what is being paid for.', param: 'line_items' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'line_items is missing: say what is being paid for.', param: 'line_items' } },
+      };
     let total = 0;
     let currency = '';
     const names: string[] = [];
@@ -288,7 +294,9 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       if (!price || !Number.isInteger(amount) || amount < 0 || !price.currency) {
         return {
           status: 400,
-          body: { error: { type: 'invalid_request_error', message: 'Every line item needs price_data with a currency and a unit_amount.', param: 'line_items' } },
+          body: {
+            error: { type: 'invalid_request_error', message: 'Every line item needs price_data with a currency and a unit_amount.', param: 'line_items' },
+          },
         };
       }
       total += amount * quantity;
@@ -296,7 +304,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       names.push(String((price.product_data as Record<string, unknown> | undefined)?.name ?? 'Item'));
     }
     if (!params.success_url)
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'success_url is missing: say where the browser goes after paying.', param: 'success_url' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'success_url is missing: say where the browser goes after paying.', param: 'success_url' } },
+      };
     const created = now();
     const expiresAt = params.expires_at ? Number(params.expires_at) : created + 24 * 3600;
     if (expiresAt < created + 30 * 60 - 5 || expiresAt > created + 24 * 3600 + 5) {
@@ -340,7 +351,14 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     if (!intent)
       return {
         status: 404,
-        body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no payment_intent '${intentId}'.`, param: 'payment_intent' } },
+        body: {
+          error: {
+            type: 'invalid_request_error',
+            code: 'resource_missing',
+            message: `The practice server has no payment_intent '${intentId}'.`,
+            param: 'payment_intent',
+          },
+        },
       };
     const left = intent.amount - intent.refunded;
     const amount = params.amount === undefined ? left : Number(params.amount);
@@ -398,11 +416,17 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       const s = sessions.get(m[1]);
       result = s
         ? { status: 200, body: publicSession(s) }
-        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no checkout.session '${m[1]}'.` } } };
+        : {
+            status: 404,
+            body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no checkout.session '${m[1]}'.` } },
+          };
     } else if (req.method === 'POST' && (m = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(path))) {
       const s = sessions.get(m[1]);
       if (!s)
-        result = { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no checkout.session '${m[1]}'.` } } };
+        result = {
+          status: 404,
+          body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no checkout.session '${m[1]}'.` } },
+        };
       else if (s.status !== 'open')
         result = {
           status: 400,
@@ -422,7 +446,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       const r = refunds.get(m[1]);
       result = r
         ? { status: 200, body: r }
-        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no refund '${m[1]}'.` } } };
+        : {
+            status: 404,
+            body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no refund '${m[1]}'.` } },
+          };
     } else if (req.method === 'GET' && (m = /^\/v1\/payment_intents\/([\w-]+)$/.exec(path))) {
       const p = intents.get(m[1]);
       result = p
@@ -438,7 +465,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
               latest_charge: null,
             },
           }
-        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no payment_intent '${m[1]}'.` } } };
+        : {
+            status: 404,
+            body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no payment_intent '${m[1]}'.` } },
+          };
     }
     if (!result) return stripeError(res, 404, 'invalid_request_error', `Unrecognized request URL (${req.method}: ${path}).`);
     if (idemKey && result.status < 500) idempotent.set(idemKey, result);

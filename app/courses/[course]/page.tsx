@@ -59,10 +59,8 @@ export default async function CoursePage({ params }: Props) {
         )}
       </section>
       <div className="max-w-prose">{content}</div>
-      <section id="workshops" aria-labelledby="dates-heading" className="scroll-mt-6 space-y-4">
-        <h2 id="dates-heading" className="sr-only">
-          Workshop dates and the course fee
-        </h2>
+      {/* The fee sits with the workshop dates it is paid for. */}
+      <div id="workshops" className="scroll-mt-6 space-y-4">
         <section aria-label="Course fee" className="max-w-prose rounded-jar border-l-4 border-copper-500 bg-copper-50 px-4 py-3">
           <p>
             <span className="font-semibold">Course fee: {formatFee(course.feeCents, course.currency)}</span>, paid when you choose a workshop date below (or
@@ -70,7 +68,7 @@ export default async function CoursePage({ params }: Props) {
           </p>
         </section>
         <CourseWorkshops courseSlug={course.slug} />
-      </section>
+      </div>
       <section aria-labelledby="requirements-heading" className="max-w-prose space-y-2">
         <h2 id="requirements-heading" className="text-2xl font-bold">
           To earn the certificate
