@@ -121,13 +121,13 @@ describe('enrolling and paying in the browser', () => {
 
     await page.goto('/desk/payments');
     const row = page.getByRole('row').filter({ hasText: 'Hazel Quill' });
-    await row.getByText('Paid').waitFor();
+    await row.getByText('Paid', { exact: true }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
     await row.getByRole('button', { name: 'Refund Hazel Quill' }).click();
     const dialog = page.getByRole('dialog', { name: /Refund \$45\.00 to Hazel Quill/ });
     await dialog.getByLabel('Reason (kept in the audit log)').fill('Cannot attend');
     await dialog.getByRole('button', { name: 'Refund $45.00' }).click();
-    await page.getByRole('row').filter({ hasText: 'Hazel Quill' }).getByText('Refunded', { exact: true }).waitFor();
+    await page.getByRole('row').filter({ hasText: 'Hazel Quill' }).getByText('Paid, then refunded', { exact: true }).waitFor();
     const to = (await mailbox()).find((m) => m.subject.startsWith('Welcome') && m.text.includes('Hazel Quill'))!.to[0];
     const refund = await messageTo(to, /^Refund issued: Safe Pickling and Water-Bath Canning$/);
     expect(refund.text).toContain('Refunded: $45.00');
