@@ -4,7 +4,10 @@ import { Card } from '@/components/ui/card';
 
 const STEPS = [
   { title: 'Read and calculate', text: 'Lessons on acidity, salt, headspace and processing, each with a working calculator beside the idea it teaches.' },
-  { title: 'Prove it', text: 'Quizzes graded on the server, a hands-on workshop with an instructor, and a practical batch you photograph at home.' },
+  {
+    title: 'Prove it',
+    text: 'Quizzes marked as soon as you hand them in, a hands-on workshop with an instructor, and a practical batch you photograph at home.',
+  },
   { title: 'Get certified', text: 'Your coordinator issues a certificate with a serial and a QR code that anyone can verify.' },
 ];
 

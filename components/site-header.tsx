@@ -3,6 +3,7 @@ import { Logo } from '@/components/logo';
 import { LinkPending } from '@/components/ui/link-pending';
 import { PUBLIC_NAV } from '@/lib/nav';
 import { ProgramBadge } from './program/program-badge';
+import { HeaderMenu } from './header-menu';
 import { UserNav } from './user-nav';
 
 /** Static header; the signed-in part is a client leaf so public pages stay static. */
@@ -20,15 +21,17 @@ export function SiteHeader() {
           <Logo />
         </Link>
         <ProgramBadge />
-        <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-x-4 gap-y-1">
-          {PUBLIC_NAV.map((item) => (
-            <Link key={item.href} href={item.href} className="relative text-sm font-medium text-brine-50 no-underline hover:text-white hover:underline">
-              {item.label}
-              <LinkPending />
-            </Link>
-          ))}
-        </nav>
-        <UserNav />
+        <HeaderMenu>
+          <nav aria-label="Main" className="flex flex-col gap-2 md:flex-1 md:flex-row md:flex-wrap md:items-center md:gap-x-4 md:gap-y-1">
+            {PUBLIC_NAV.map((item) => (
+              <Link key={item.href} href={item.href} className="relative text-sm font-medium text-brine-50 no-underline hover:text-white hover:underline">
+                {item.label}
+                <LinkPending />
+              </Link>
+            ))}
+          </nav>
+          <UserNav />
+        </HeaderMenu>
       </div>
     </header>
   );

@@ -12,7 +12,7 @@ async function main() {
   const appUrl = (process.env.APP_URL ?? 'http://localhost:3000').replace(/\/$/, '');
   const payments = await startFakePayments({
     port: Number(process.env.STRIPE_API_PORT ?? 12111),
-    webhookUrl: process.env.FAKE_PAYMENTS_WEBHOOK_URL ?? `${appUrl}/api/webhooks/stripe`,
+    webhookUrl: process.env.FAKE_PAYMENTS_WEBHOOK_URL ?? `${appUrl}/api/webhooks/payments`,
     webhookSecret: process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_brinewright_local_signing_secret',
     apiKey: process.env.STRIPE_SECRET_KEY ?? 'sk_test_brinewright_local',
     retryBaseMs: Number(process.env.FAKE_PAYMENTS_RETRY_MS ?? 1000),

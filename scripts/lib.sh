@@ -46,7 +46,7 @@ demo_env() {
   export STRIPE_API_HOST="${STRIPE_API_HOST:-127.0.0.1}" STRIPE_API_PORT="${STRIPE_API_PORT:-12111}" STRIPE_API_PROTOCOL="${STRIPE_API_PROTOCOL:-http}"
   export SMTP_HOST="${SMTP_HOST:-127.0.0.1}" SMTP_PORT="${SMTP_PORT:-2525}" FAKE_MAILBOX_PORT="${FAKE_MAILBOX_PORT:-2580}"
   export MAILBOX_URL="${MAILBOX_URL:-http://127.0.0.1:$FAKE_MAILBOX_PORT}"
-  export FAKE_PAYMENTS_WEBHOOK_URL="${FAKE_PAYMENTS_WEBHOOK_URL:-http://127.0.0.1:$port/api/webhooks/stripe}"
+  export FAKE_PAYMENTS_WEBHOOK_URL="${FAKE_PAYMENTS_WEBHOOK_URL:-http://127.0.0.1:$port/api/webhooks/payments}"
 }
 
 # Migrations, demo data and (unless SKIP_BUILD=1 finds one) a production build.
@@ -67,7 +67,7 @@ demo_accounts() {
     coordinator  coordinator@cedarhollow.example   demo-coordinator-pass
     admin        admin@cedarhollow.example         demo-admin-pass
   Local mailbox (every e-mail the demo sends): $MAILBOX_URL
-  Test cards on the local checkout page: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined
+  Practice payment page (no money moves): card 4600 4600 4600 4604 pays, 4600 4600 9090 9096 is turned down
 MSG
 }
 

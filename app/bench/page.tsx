@@ -46,9 +46,9 @@ export default function BenchPage() {
         <aside role="note" aria-label="Safety" className="max-w-prose rounded-jar border-l-4 border-beet-600 bg-beet-50 px-5 py-4">
           <p className="font-display font-bold text-beet-700">These tools check arithmetic. They never call a recipe safe.</p>
           <p className="mt-1 text-ink">
-            Botulism cannot be seen, smelled or tasted. Can only from tested recipes of recognised food-safety authorities, keep their proportions of vinegar,
-            water and salt, process for the full time at your altitude, and follow your local extension office, local codes and licensed practice where they
-            apply. Boiling water, steam, hot glass and lime can hurt: work with care.
+            Botulism cannot be seen, smelled or tasted. Put up food only from tested recipes of recognised food-safety authorities, keep their proportions of
+            vinegar, water and salt, process for the full time at your altitude, and follow your local extension office, local codes and licensed practice where
+            they apply. Boiling water, steam, hot glass and lime can hurt: work with care.
           </p>
         </aside>
         <nav aria-label="Calculators on this page">

@@ -4,7 +4,7 @@ import { ButtonLink } from '@/components/ui/button';
 import { LinkOutcome } from '@/components/account/link-outcome';
 import { confirmEmailAddress, type ConfirmOutcome } from '@/lib/email/confirm';
 
-export const metadata: Metadata = { title: 'Confirm your e-mail address — Brinewright' };
+export const metadata: Metadata = { title: 'Confirm your e-mail address' };
 export const dynamic = 'force-dynamic';
 
 const COPY: Record<ConfirmOutcome, { title: string; body: string }> = {

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import { Select } from '@/components/ui/select';
 import { TextField } from '@/components/ui/text-field';
-import { PRODUCE_WATER_SOURCE, brineAcidity } from '@/lib/preserving/acidity';
+import { PH_CAUTION_PLAIN, PH_METHOD, PRODUCE_WATER_SOURCE, brineAcidity } from '@/lib/preserving/acidity';
 import { RULES } from '@/lib/preserving/errors';
 import { PRODUCT_OPTIONS, WEAKEST_TESTED, isProductId } from '@/lib/preserving/products';
 import { convert } from '@/lib/preserving/units';
@@ -51,6 +51,11 @@ export function BrineCalculator({ headingLevel, defaultProduct }: { headingLevel
       result={
         r ? (
           <div className="space-y-2">
+            <p className="text-sm font-semibold" data-testid="brine-meaning">
+              {r.belowTested
+                ? `This liquid is weaker than ${r.tested.weakest ? 'any tested liquid Brinewright knows' : 'the tested recipe’s liquid'}: do not use it in place of the recipe’s own.`
+                : `This liquid holds at least as much acid as ${r.tested.weakest ? 'the weakest tested liquid Brinewright knows' : 'the tested recipe’s liquid'}. That is arithmetic only: follow the tested recipe in full.`}
+            </p>
             {r.warnings.length ? (
               <ul className="list-disc space-y-1 pl-5 text-sm font-medium text-beet-700" data-testid="brine-warnings">
                 {r.warnings.map((w) => (
@@ -81,7 +86,7 @@ export function BrineCalculator({ headingLevel, defaultProduct }: { headingLevel
               <div>
                 <dt className="text-sm text-ink-soft">pH of the liquid before the produce goes in (estimate)</dt>
                 <dd data-testid="brine-ph">
-                  {fmt(r.estimatedPh, 2)} <span className="block text-xs text-honey-700">{r.phCaution}</span>
+                  {fmt(r.estimatedPh, 2)} <span className="block text-xs text-honey-700">{PH_CAUTION_PLAIN}</span>
                 </dd>
               </div>
               {r.equilibratedAcidityPct !== undefined ? (
@@ -91,11 +96,14 @@ export function BrineCalculator({ headingLevel, defaultProduct }: { headingLevel
                 </div>
               ) : null}
             </dl>
-            <p className="text-xs text-ink-soft">
-              Tested liquid: {r.tested.source}
-              {r.tested.confidence === 'memory' ? ' (from memory, not yet confirmed)' : ''}. Dissolved sugar is not counted in the volume, here or in the tested
-              liquid.
-            </p>
+            <details className="text-xs text-ink-soft">
+              <summary className="cursor-pointer text-sm font-semibold text-brine-800">How this is worked out</summary>
+              <p className="mt-1">
+                Acetic acid is the vinegar&apos;s share of the liquid times its strength. The pH comes from the {PH_METHOD}. Tested liquid: {r.tested.source}
+                {r.tested.confidence === 'memory' ? ' (from memory, not yet confirmed)' : ''}. Dissolved sugar is not counted in the volume, here or in the
+                tested liquid.
+              </p>
+            </details>
           </div>
         ) : (
           <ResultMessage outcome={outcome} />

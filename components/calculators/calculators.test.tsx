@@ -104,6 +104,12 @@ describe('BrineCalculator', () => {
     render(<BrineCalculator />);
     expect(screen.getByTestId('brine-acid')).toHaveTextContent('2.5 g per 100 mL');
     expect(screen.getByTestId('brine-ph')).toHaveTextContent('2.57');
+    expect(screen.getByTestId('brine-meaning')).toHaveTextContent(
+      'at least as much acid as the weakest tested liquid Brinewright knows. That is arithmetic only',
+    );
+    // The equation's name is in the "how this is worked out" fold, not beside the number.
+    expect(screen.getByTestId('brine-ph')).not.toHaveTextContent('weak-acid equation');
+    expect(screen.getByText('How this is worked out').closest('details')).toHaveTextContent('weak-acid equation, acetic acid pKa 4.756');
     await retype(user, screen.getByLabelText('Water'), '0');
     expect(screen.getByTestId('brine-acid')).toHaveTextContent('5 g per 100 mL');
     expect(screen.getByTestId('brine-ph')).toHaveTextContent('2.42');
@@ -123,6 +129,8 @@ describe('BrineCalculator', () => {
       '0.45% acetic acid, weaker than the weakest tested liquid Brinewright knows, that of quick fresh-pack dill pickles (2.14%)',
     );
     expect(screen.getByTestId('brine-tested')).toHaveTextContent('This liquid is weaker.');
+    // What it means for the jar comes first, and stays a warning.
+    expect(screen.getByTestId('brine-meaning')).toHaveTextContent('This liquid is weaker than any tested liquid Brinewright knows: do not use it');
   });
 
   it("compares with the chosen product's tested liquid (pickled hot peppers: 5 cups vinegar to 1 cup water, 4.17 %)", async () => {
@@ -223,11 +231,11 @@ describe('PressureCalculator', () => {
   it('gives the dial-gauge pounds by altitude (USDA Guide 4 tables: 11 / 12 / 13 / 14)', async () => {
     const user = userEvent.setup();
     render(<PressureCalculator />);
-    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('11 psi');
+    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('11 pounds (psi) on a dial gauge');
     await retype(user, screen.getByLabelText('Altitude'), '5000');
-    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('13 psi');
+    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('13 pounds (psi)');
     await user.selectOptions(screen.getByLabelText('Gauge type'), 'weighted');
-    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('15 psi');
+    expect(screen.getByTestId('pressure-pounds')).toHaveTextContent('15 pounds (psi)');
     await retype(user, screen.getByLabelText('Altitude'), '');
     expect(screen.getByLabelText('Altitude')).toHaveAccessibleDescription(expect.stringContaining('Enter the altitude in feet as a number.'));
   });
@@ -238,7 +246,11 @@ describe('BoilingPointCalculator', () => {
     const user = userEvent.setup();
     render(<BoilingPointCalculator />);
     expect(screen.getByTestId('boiling-point')).toHaveTextContent('202.8 °F (94.9 °C)');
+    // What the number means for the jar comes first; the pressure and the model sit in the fold.
+    expect(screen.getByTestId('boiling-meaning')).toHaveTextContent('At this height water boils 9.2 °F cooler than at sea level');
+    expect(screen.getByText('How this is worked out')).toBeInTheDocument();
     await retype(user, screen.getByLabelText('Altitude'), '0');
+    expect(screen.getByTestId('boiling-meaning')).toHaveTextContent('about its sea-level temperature (212 °F)');
     expect(screen.getByTestId('boiling-point')).toHaveTextContent('212 °F (100 °C)');
     expect(screen.getByLabelText('Altitude')).toHaveAccessibleDescription(expect.stringContaining('= 0 m'));
   });

@@ -30,12 +30,12 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
       intro="Low-acid foods need a pressure canner. The pressure rises with altitude; the tested recipe's minutes stay the same."
       headingLevel={headingLevel}
       lesson={LESSONS.processing}
-      caution="Have a dial gauge tested for accuracy every year, vent the canner 10 minutes before pressurizing, and let it depressurize on its own (USDA Complete Guide to Home Canning, Guide 1, 'Using pressure canners'; Pacific Northwest Extension PNW 421)."
+      caution="Have a dial gauge tested for accuracy every year. Before you close the vent, let steam pour from it for a full 10 minutes; when the time is up, turn off the heat and let the gauge fall to zero by itself before you open the canner (USDA Complete Guide to Home Canning, Guide 1, 'Using pressure canners'; Pacific Northwest Extension PNW 421)."
       result={
         r ? (
           <div className="space-y-1">
             <p className="text-xl font-bold" data-testid="pressure-pounds">
-              {r.pounds} psi ({fmt(r.pounds * 6.894757, 0)} kPa) on a {r.gauge} gauge
+              {r.pounds} pounds (psi) on a {r.gauge} gauge
             </p>
             <p className="text-sm">
               Steam inside at that pressure: about {fmt(r.steam.fahrenheit, 1)} °F ({fmt(r.steam.celsius, 1)} °C).
@@ -45,7 +45,13 @@ export function PressureCalculator({ headingLevel }: { headingLevel?: 2 | 3 }) {
                 The USDA tables stop at 8,000 ft for dial gauges: check your tested recipe and your local extension office.
               </p>
             ) : null}
-            <p className="text-xs text-ink-soft">Source: {r.source}</p>
+            <details className="text-xs text-ink-soft">
+              <summary className="cursor-pointer text-sm font-semibold text-brine-800">How this is worked out</summary>
+              <p className="mt-1">
+                {r.pounds} psi is {fmt(r.pounds * 6.894757, 0)} kPa above the air around the canner; the steam temperature adds that to the air pressure at your
+                altitude (standard atmosphere) and reads the boiling point of water there. Source: {r.source}
+              </p>
+            </details>
           </div>
         ) : (
           <ResultMessage outcome={outcome} />

@@ -8,7 +8,7 @@ import { CertificateDesk, ISSUE_BATCH } from './certificate-desk';
 
 const checks = (met: boolean) => [
   { key: 'fee', label: 'Fee paid or waived', met: true, detail: 'Fee paid.' },
-  { key: 'practical', label: 'Practical approved', met, detail: met ? 'Approved.' : 'No approved practical batch yet.' },
+  { key: 'practical', label: 'Practical batch passed the table', met, detail: met ? 'Passed.' : 'No practical batch has passed the table yet.' },
 ];
 
 const row = (id: number, eligible: boolean): DeskEnrollment => ({
@@ -58,7 +58,7 @@ describe('CertificateDesk', () => {
     renderDesk();
     const blocked = (await screen.findByText('Learner 2')).closest('tr')!;
     expect(within(blocked).getByText('1 missing')).toBeInTheDocument();
-    expect(within(blocked).getByText(/No approved practical batch yet/)).toBeInTheDocument();
+    expect(within(blocked).getByText(/No practical batch has passed the table yet/)).toBeInTheDocument();
     expect(within(screen.getByText('Learner 1').closest('tr')!).getByText('All requirements met')).toBeInTheDocument();
   });
 
@@ -80,7 +80,7 @@ describe('CertificateDesk', () => {
     mockFetch([row(5, true), row(6, true)]);
     renderDesk();
     await screen.findByText('Learner 5');
-    const link = () => screen.getByRole('link', { name: /Export roster/ });
+    const link = () => screen.getByRole('link', { name: /Download the list \(spreadsheet\)/ });
     expect(link()).toHaveAttribute('href', '/api/desk/roster');
     await userEvent.selectOptions(screen.getByLabelText('Eligibility'), 'yes');
     expect(link()).toHaveAttribute('href', '/api/desk/roster?eligible=yes');

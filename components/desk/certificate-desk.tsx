@@ -152,7 +152,7 @@ export function CertificateDesk() {
           Issue certificates{eligibleSelected.length ? ` (${eligibleSelected.length})` : ''}
         </Button>
         <a className={buttonClasses('secondary')} href={rosterHref} download>
-          Export roster (CSV){selected.size ? ` — ${selected.size} selected` : ''}
+          Download the list (spreadsheet){selected.size ? ` — ${selected.size} chosen` : ''}
         </a>
         {selected.size ? (
           <Button variant="ghost" onClick={() => setSelected(new Map())}>

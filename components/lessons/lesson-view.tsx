@@ -44,7 +44,7 @@ export async function LessonView({ courseSlug, lessonSlug }: { courseSlug: strin
           <p className="text-lg text-ink-soft">{lesson.summary}</p>
           <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
             <span>About {formatMinutes(lesson.minutes)} to read</span>
-            {lesson.preview ? <Badge tone="copper">Free preview</Badge> : null}
+            {lesson.preview ? <Badge tone="copper">Open to everyone</Badge> : null}
           </p>
         </header>
         {/* On narrow screens the contents come after the title, not above it; the side column holds them on wide ones. */}

@@ -13,7 +13,7 @@ describe('TableOfContents', () => {
         ]}
       />,
     );
-    const nav = screen.getByRole('navigation', { name: 'On this page' });
+    const nav = screen.getByRole('navigation', { name: 'In this lesson' });
     const top = within(nav).getAllByRole('list')[0];
     const items = within(top)
       .getAllByRole('listitem')

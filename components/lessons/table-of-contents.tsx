@@ -1,7 +1,7 @@
 import type { TocEntry } from '@/lib/content/headings';
 import { cn } from '@/lib/cn';
 
-/** "On this page": the lesson's h2 and h3 headings, h3 nested under the h2 before it. */
+/** "In this lesson": the lesson's h2 and h3 headings, h3 nested under the h2 before it. */
 export function TableOfContents({ entries, className }: { entries: TocEntry[]; className?: string }) {
   if (entries.length === 0) return null;
   const groups: { entry: TocEntry; children: TocEntry[] }[] = [];
@@ -13,8 +13,8 @@ export function TableOfContents({ entries, className }: { entries: TocEntry[]; c
   return (
     // Named by aria-label rather than by the heading's id: a lesson page renders it twice (after the
     // title on narrow screens, in the side column on wide ones), and an id must be unique.
-    <nav aria-label="On this page" data-lesson-nav className={cn('text-sm', className)}>
-      <h2 className="mb-2 font-display text-sm font-bold tracking-wide text-brine-800 uppercase">On this page</h2>
+    <nav aria-label="In this lesson" data-lesson-nav className={cn('text-sm', className)}>
+      <h2 className="mb-2 font-display text-sm font-bold tracking-wide text-brine-800 uppercase">In this lesson</h2>
       <ol className="space-y-1.5 border-l border-brine-100">
         {groups.map(({ entry, children }) => (
           <li key={entry.id}>

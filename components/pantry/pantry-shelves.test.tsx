@@ -42,6 +42,29 @@ describe('PantryShelves', () => {
     expect(screen.getByText(/1 of 2 jars full/)).toBeInTheDocument();
   }, 20_000);
 
+  it('shows the shelves the page read on the server at once, and a shelf-sized placeholder without them', async () => {
+    let answer: (r: Response) => void = () => undefined;
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(() => new Promise<Response>((resolve) => (answer = resolve))),
+    );
+    const { unmount } = render(
+      <SWRConfig value={{ provider: () => new Map(), dedupingInterval: 0 }}>
+        <PantryShelves initial={{ shelves: [shelf] }} />
+      </SWRConfig>,
+    );
+    // No loading state: the jars are there on the first render, before the route answers.
+    expect(screen.getByRole('img', { name: 'Acidity: read, quiz passed' })).toHaveAttribute('data-fill', '1');
+    expect(screen.queryByRole('status')).toBeNull();
+    unmount();
+    renderFresh();
+    const placeholder = screen.getByRole('status');
+    expect(placeholder).toHaveTextContent('Opening your Pantry…');
+    expect(placeholder.querySelectorAll('.h-28')).toHaveLength(9);
+    answer(Response.json({ shelves: [shelf] }));
+    await screen.findByRole('img', { name: 'Acidity: read, quiz passed' });
+  }, 20_000);
+
   it('an empty Pantry points to the courses; an error offers a retry', async () => {
     vi.stubGlobal(
       'fetch',

@@ -9,6 +9,23 @@ import { Card } from '@/components/ui/card';
 import type { Shelf } from '@/lib/progress/shelf';
 import { Jar } from './jar';
 
+/** A shelf-sized stand-in while the shelves load: one shelf of nine empty jars, so the page below keeps its place. */
+function ShelfPlaceholder() {
+  return (
+    <div role="status" aria-busy="true" className="rounded-jar border border-brine-100 bg-white p-5 shadow-shelf">
+      <p className="mb-4 text-ink-soft">Opening your Pantry…</p>
+      <div className="flex flex-wrap items-start gap-x-4 gap-y-6 border-b-8 border-copper-700/70 pb-1" aria-hidden="true">
+        {Array.from({ length: 9 }, (_, i) => (
+          <div key={i} className="flex w-24 flex-col items-center">
+            <div className="h-28 w-20 animate-pulse rounded-jar bg-paper-deep" />
+            <div className="mt-1 h-8 w-20 rounded bg-paper-deep" />
+          </div>
+        ))}
+      </div>
+    </div>
+  );
+}
+
 const STATUS = {
   awaiting_payment: ['Awaiting payment', 'honey'],
   active: ['Active', 'brine'],
@@ -16,19 +33,17 @@ const STATUS = {
   withdrawn: ['Withdrawn', 'beet'],
 } as const;
 
-/** The learner's courses as shelves of jars, one jar per lesson, from GET /api/pantry. */
-export function PantryShelves() {
+/**
+ * The learner's courses as shelves of jars, one jar per lesson, from GET /api/pantry. The page hands
+ * in the shelves it read on the server, so the first paint already has them and nothing below moves.
+ */
+export function PantryShelves({ initial }: { initial?: { shelves: Shelf[] } }) {
   const { data, error, isLoading, mutate } = useSWR<{ shelves: Shelf[] }, FetchError>('/api/pantry', (url: string) => fetchJson(url), {
     revalidateOnFocus: true,
+    fallbackData: initial,
   });
 
-  if (isLoading) {
-    return (
-      <p role="status" className="text-ink-soft">
-        Opening your Pantry…
-      </p>
-    );
-  }
+  if (isLoading && !data) return <ShelfPlaceholder />;
   if (error) {
     return (
       <Card>

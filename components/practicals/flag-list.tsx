@@ -16,7 +16,7 @@ const CHECK_LABEL: Record<Flag['check'], string> = {
 /** The automatic checks that failed, each with its reason; empty shows a quiet all-clear line. */
 export function FlagList({
   flags,
-  title = 'Automatic checks',
+  title = 'Numbers to double-check',
   live = false,
   level = 'h2',
   notChecked = [],
@@ -39,10 +39,11 @@ export function FlagList({
       <Heading className="text-base font-bold">{title}</Heading>
       <div aria-live={live ? 'polite' : undefined}>
         {flags.length === 0 && notChecked.length > 0 ? (
-          <p className="mt-1 text-sm text-ink-soft">No flags so far.</p>
+          <p className="mt-1 text-sm text-ink-soft">Nothing to double-check so far.</p>
         ) : flags.length === 0 ? (
           <p className="mt-1 text-sm text-ink-soft">
-            No flags: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested recipe.
+            Nothing to double-check: the numbers entered match the published tables Brinewright checks. That does not make a batch safe; follow the tested
+            recipe.
           </p>
         ) : (
           <ul className="mt-2 space-y-2" data-testid="flags">

@@ -65,9 +65,9 @@ describe('PracticalForm', () => {
   it('shows the flag for a too-short process time as the learner types, and keeps what was typed when a photo fails', async () => {
     const user = userEvent.setup();
     render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
-    const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });
+    const live = screen.getByRole('region', { name: 'Numbers to double-check (as you type)' });
     // Nothing entered yet: no all-clear, and the box names what it has not checked.
-    expect(within(live).getByText('No flags so far.')).toBeInTheDocument();
+    expect(within(live).getByText('Nothing to double-check so far.')).toBeInTheDocument();
     expect(within(live).queryByText(/match the published tables/)).toBeNull();
     expect(within(live).getByTestId('not-checked').textContent).toMatch(
       /^Not checked yet, until you enter them: Product, Pack, Jar size, Headspace measured, Vinegar used, Water used, Processing method, Altitude, Minutes processed, Jars not sealed\.$/,
@@ -93,7 +93,7 @@ describe('PracticalForm', () => {
   it("asks fermented pickles for the brine's salt and flags a brine weaker by weight than the tested one", async () => {
     const user = userEvent.setup();
     render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
-    const live = screen.getByRole('region', { name: 'Automatic checks (as you type)' });
+    const live = screen.getByRole('region', { name: 'Numbers to double-check (as you type)' });
     expect(screen.queryByLabelText('Salt in the brine')).toBeNull();
     await user.selectOptions(screen.getByLabelText('Product'), 'fermented-dill-pickles');
     expect(within(live).getByTestId('not-checked').textContent).toMatch(/Water used, Salt in the brine, Processing method/);
@@ -113,7 +113,7 @@ describe('PracticalForm', () => {
     const fetchSpy = vi.fn();
     vi.stubGlobal('fetch', fetchSpy);
     render(<PracticalForm courseSlug="pickling-and-canning" round={1} open title="Submit your batch" />);
-    await user.click(screen.getByRole('button', { name: 'Submit round 1 for review' }));
+    await user.click(screen.getByRole('button', { name: 'Send my first batch to an instructor' }));
     expect(await screen.findByText('Name the tested recipe you followed.')).toBeInTheDocument();
     expect(screen.getByText(/Add at least 2 photos/)).toBeInTheDocument();
     expect(screen.getByLabelText('Tested recipe followed')).toHaveAttribute('aria-invalid', 'true');

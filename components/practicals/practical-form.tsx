@@ -18,6 +18,7 @@ import {
   type PracticalForm as FormValues,
   type PracticalFormInput,
 } from '@/lib/validations/practical';
+import { batchName } from '@/lib/practicals/words';
 import { FlagList } from './flag-list';
 import { PhotoUploader } from './photo-uploader';
 import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
@@ -96,7 +97,7 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
       for (const [key, messages] of Object.entries(e instanceof FetchError ? e.fields : {})) {
         setError(key.replace(/^practical\./, '') as keyof PracticalFormInput, { message: messages[0] });
       }
-      setServerError(errorMessage(e, 'The practical could not be submitted. Please try again.'));
+      setServerError(errorMessage(e, 'Your batch could not be sent. Please try again.'));
     }
   };
 
@@ -104,10 +105,10 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
     return (
       <Card className="space-y-4" data-testid="practical-submitted">
         <div role="status" className="rounded-jar border border-brine-300 bg-brine-50 p-4">
-          <h2 className="text-lg font-bold">Round {result.round} is at the Tasting table</h2>
-          <p className="text-sm text-ink-soft">An instructor will review your batch and photos. You will get an e-mail when it is reviewed.</p>
+          <h2 className="text-lg font-bold">Your {batchName(result.round)} is at the Tasting table</h2>
+          <p className="text-sm text-ink-soft">An instructor will look at your batch and photos. You will get an e-mail when they have.</p>
         </div>
-        <FlagList flags={result.flags} title="Flags sent with your submission" />
+        <FlagList flags={result.flags} title="What the instructor will double-check" />
       </Card>
     );
   }
@@ -118,8 +119,8 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
     <Card title={title}>
       <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-describedby="practical-form-intro">
         <p id="practical-form-intro" className="text-sm text-ink-soft">
-          {round > 1 ? `This is round ${round}. ` : ''}Enter what you actually did. A flag does not stop you from submitting: it tells you and your instructor
-          where the batch differs from the published numbers.
+          {round > 1 ? `This is your ${batchName(round)}. ` : ''}Enter what you actually did. Something to double-check does not stop you from sending: it tells
+          you and your instructor where the batch differs from the published numbers.
         </p>
 
         <fieldset className="grid gap-4 md:grid-cols-2">
@@ -248,10 +249,10 @@ export function PracticalForm({ courseSlug, round, open, title }: { courseSlug: 
           <FieldError id="practical-photos-error" message={errors.photoIds?.message} />
         </div>
 
-        <FlagList flags={flags} live notChecked={notChecked} title="Automatic checks (as you type)" />
+        <FlagList flags={flags} live notChecked={notChecked} title="Numbers to double-check (as you type)" />
 
         <FormAlert message={serverError} />
-        <SubmitButton pending={isSubmitting}>Submit round {round} for review</SubmitButton>
+        <SubmitButton pending={isSubmitting}>Send my {batchName(round)} to an instructor</SubmitButton>
       </form>
     </Card>
   );

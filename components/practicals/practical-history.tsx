@@ -2,6 +2,7 @@ import { Badge } from '@/components/ui/badge';
 import { formatDateTime } from '@/lib/local-time';
 import type { RoundView } from '@/lib/practicals/data';
 import { RUBRIC_CRITERIA } from '@/lib/validations/practical';
+import { STATE_NAME, batchName, batchTitle } from '@/lib/practicals/words';
 import { FlagList } from './flag-list';
 import { PRACTICAL_STATUS_LABEL, PRACTICAL_STATUS_TONE } from './practical-status';
 
@@ -10,12 +11,12 @@ export function ReviewSummary({ review, timeZone }: { review: RoundView['reviews
   return (
     <div className="space-y-2 rounded-lg border border-brine-100 bg-white p-3" data-testid="review-summary">
       <p className="text-sm">
-        <Badge tone={review.decision === 'approved' ? 'brine' : 'beet'}>{review.decision === 'approved' ? 'Approved' : 'Changes requested'}</Badge> by{' '}
-        {review.reviewerName}, {formatDateTime(review.createdAt, timeZone)}
+        <Badge tone={PRACTICAL_STATUS_TONE[review.decision]}>{STATE_NAME[review.decision]}</Badge> by {review.reviewerName},{' '}
+        {formatDateTime(review.createdAt, timeZone)}
       </p>
       {review.comment ? (
         <p className="text-sm">
-          <span className="font-semibold">{review.decision === 'approved' ? 'Comment' : 'What to change'}:</span> {review.comment}
+          <span className="font-semibold">{review.decision === 'approved' ? 'Comment' : 'For the next batch'}:</span> {review.comment}
         </p>
       ) : null}
       <ul className="grid gap-1 text-sm sm:grid-cols-2">
@@ -35,21 +36,21 @@ export function ReviewSummary({ review, timeZone }: { review: RoundView['reviews
   );
 }
 
-/** Every round of a practical, newest first, with its flags, photos and reviews. */
+/** Every batch of a practical, newest first, with its flags, photos and reviews. */
 export function PracticalHistory({ rounds, timeZone }: { rounds: RoundView[]; timeZone: string }) {
   if (!rounds.length) return null;
   return (
     <section aria-labelledby="practical-history" className="space-y-4">
       <h2 id="practical-history" className="text-xl font-bold">
-        Your rounds
+        Your batches
       </h2>
       <ol className="space-y-4">
         {rounds.map((r) => (
           <li key={r.id} className="space-y-3 rounded-jar border border-brine-100 bg-white p-4 shadow-shelf" data-testid={`round-${r.round}`}>
             <div className="flex flex-wrap items-center gap-2">
-              <h3 className="font-display text-lg font-bold">Round {r.round}</h3>
+              <h3 className="font-display text-lg font-bold">{batchTitle(r.round)}</h3>
               <Badge tone={PRACTICAL_STATUS_TONE[r.status]}>{PRACTICAL_STATUS_LABEL[r.status]}</Badge>
-              <span className="text-sm text-ink-soft">submitted {formatDateTime(r.submittedAt, timeZone)}</span>
+              <span className="text-sm text-ink-soft">sent {formatDateTime(r.submittedAt, timeZone)}</span>
             </div>
             <p className="text-sm text-ink-soft">
               {[
@@ -63,17 +64,17 @@ export function PracticalHistory({ rounds, timeZone }: { rounds: RoundView[]; ti
                 .join(' · ')}
             </p>
             {r.photos.length ? (
-              <ul className="flex flex-wrap gap-2" aria-label={`Photos of round ${r.round}`}>
+              <ul className="flex flex-wrap gap-2" aria-label={`Photos of the ${batchName(r.round)}`}>
                 {r.photos.map((p, i) => (
                   <li key={p.id}>
                     <a href={p.url} target="_blank" rel="noreferrer">
-                      <img src={p.thumbnailUrl} alt={`Round ${r.round}, photo ${i + 1}`} className="h-16 w-16 rounded object-cover" />
+                      <img src={p.thumbnailUrl} alt={`${batchTitle(r.round)}, photo ${i + 1}`} className="h-16 w-16 rounded object-cover" />
                     </a>
                   </li>
                 ))}
               </ul>
             ) : null}
-            <FlagList flags={r.flags} title={`Flags on round ${r.round}`} level="h4" />
+            <FlagList flags={r.flags} title={`To double-check on the ${batchName(r.round)}`} level="h4" />
             {r.reviews.map((review) => (
               <ReviewSummary key={review.id} review={review} timeZone={timeZone} />
             ))}

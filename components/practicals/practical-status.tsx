@@ -2,12 +2,13 @@ import Link from 'next/link';
 import { Badge, type Tone } from '@/components/ui/badge';
 import { cn } from '@/lib/cn';
 import { formatShortDate } from '@/lib/local-time';
+import { STATE_NAME, batchTitle, type PracticalState } from '@/lib/practicals/words';
 
-export type PracticalStatusValue = 'submitted' | 'changes_requested' | 'approved';
+export type PracticalStatusValue = PracticalState;
 
 export type PracticalStatusProps = {
   courseSlug: string;
-  /** The newest round, or null when nothing has been submitted yet. */
+  /** The newest batch, or null when nothing has been submitted yet. */
   latest: {
     round: number;
     status: PracticalStatusValue;
@@ -20,12 +21,9 @@ export type PracticalStatusProps = {
   className?: string;
 };
 
-export const PRACTICAL_STATUS_LABEL: Record<PracticalStatusValue, string> = {
-  submitted: 'Waiting at the Tasting table',
-  changes_requested: 'Changes requested',
-  approved: 'Approved',
-};
-export const PRACTICAL_STATUS_TONE: Record<PracticalStatusValue, Tone> = { submitted: 'honey', changes_requested: 'beet', approved: 'brine' };
+export const PRACTICAL_STATUS_LABEL: Record<PracticalStatusValue, string> = STATE_NAME;
+// Honey while it waits, copper when the learner has another batch to make, brine once it passed.
+export const PRACTICAL_STATUS_TONE: Record<PracticalStatusValue, Tone> = { submitted: 'honey', changes_requested: 'copper', approved: 'brine' };
 
 /** A small panel with where a learner's practical stands: for the Pantry and the practical page. */
 export function PracticalStatus({ courseSlug, latest, timeZone, className }: PracticalStatusProps) {
@@ -39,8 +37,8 @@ export function PracticalStatus({ courseSlug, latest, timeZone, className }: Pra
       </div>
       {latest ? (
         <p className="text-ink-soft">
-          Round {latest.round}, submitted {day(latest.submittedAt)}
-          {latest.flagCount ? ` with ${latest.flagCount} automatic flag${latest.flagCount === 1 ? '' : 's'}` : ''}.
+          {batchTitle(latest.round)}, sent {day(latest.submittedAt)}
+          {latest.flagCount ? ` with ${latest.flagCount} thing${latest.flagCount === 1 ? '' : 's'} to double-check` : ''}.
           {latest.review ? ` Reviewed by ${latest.review.reviewerName} on ${day(latest.review.createdAt)}.` : ''}
         </p>
       ) : (
@@ -48,11 +46,11 @@ export function PracticalStatus({ courseSlug, latest, timeZone, className }: Pra
       )}
       {latest?.review?.decision === 'changes_requested' && latest.review.comment ? (
         <p>
-          <span className="font-semibold">What to change:</span> {latest.review.comment}
+          <span className="font-semibold">For the next batch:</span> {latest.review.comment}
         </p>
       ) : null}
       <Link href={href} className="font-semibold">
-        {!latest ? 'Submit your practical' : latest.status === 'changes_requested' ? 'See the review and submit again' : 'See your practical'}
+        {!latest ? 'Submit your practical' : latest.status === 'changes_requested' ? 'See the notes and send another batch' : 'See your practical'}
       </Link>
     </div>
   );

@@ -112,13 +112,13 @@ describe('QuizRunner', () => {
       await user.click(await screen.findByLabelText('5 percent'));
       await user.click(screen.getByLabelText('False'));
       await user.type(screen.getByLabelText('Your answer'), 'fifteen');
-      await user.click(screen.getByRole('button', { name: 'Submit answers' }));
+      await user.click(screen.getByRole('button', { name: 'Hand in my answers' }));
       expect(await screen.findByText('Enter a number, such as 15 or 2.5.')).toBeInTheDocument();
       expect(screen.getByLabelText('Your answer')).toHaveAttribute('aria-invalid', 'true');
       expect(fetchMock.mock.calls.filter(([u]) => String(u).endsWith('/submit'))).toHaveLength(0);
 
       await user.clear(screen.getByLabelText('Your answer'));
-      await user.click(screen.getByRole('button', { name: 'Submit answers' }));
+      await user.click(screen.getByRole('button', { name: 'Hand in my answers' }));
       const result = await screen.findByTestId('quiz-result');
       const submitCall = fetchMock.mock.calls.find(([u]) => String(u).endsWith('/submit'))!;
       expect(JSON.parse(String(submitCall[1]!.body))).toEqual({ answers: { one: 'c2', tf: false } });

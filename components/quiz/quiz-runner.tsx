@@ -112,10 +112,10 @@ export function QuizRunner({ intro }: { intro: Intro }) {
       <Card>
         {intro.description ? <p className="mb-3">{intro.description}</p> : null}
         <ul className="mb-4 list-disc space-y-1 pl-5 text-ink-soft">
-          <li>{intro.questionCount} questions, graded when you submit.</li>
+          <li>{intro.questionCount} questions, marked as soon as you hand them in.</li>
           <li>{intro.timeLimitMinutes ? `You have ${intro.timeLimitMinutes} minutes once you start.` : 'No time limit.'}</li>
           {intro.attemptLimit ? <li>{`Up to ${intro.attemptLimit.max} attempts in any ${intro.attemptLimit.windowHours} hours.`}</li> : null}
-          <li>Your answers are kept in this browser until you submit, if the page reloads.</li>
+          <li>Your answers are kept in this browser until you hand them in, if the page reloads.</li>
         </ul>
         {problem ? (
           <p className="mb-3 text-beet-700" role="alert">
@@ -148,7 +148,7 @@ export function QuizRunner({ intro }: { intro: Intro }) {
         </p>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <SubmitButton pending={form.formState.isSubmitting}>Submit answers</SubmitButton>
+        <SubmitButton pending={form.formState.isSubmitting}>Hand in my answers</SubmitButton>
         {answered < attempt.questions.length ? <p className="text-sm text-ink-soft">Unanswered questions count as wrong.</p> : null}
       </div>
     </form>

@@ -49,5 +49,5 @@ export function answeredCount(questions: PublicQuestion[], values: FormValues): 
   return Object.keys(toAnswers(questions, values).answers).length;
 }
 
-export const UNIT_LABELS: Record<string, string> = { min: 'minutes', psi: 'psig', F: '°F', C: '°C', in: 'inches', '%': 'percent', 'fl-oz': 'fl oz' };
+export const UNIT_LABELS: Record<string, string> = { min: 'minutes', psi: 'pounds (psi)', F: '°F', C: '°C', in: 'inches', '%': 'percent', 'fl-oz': 'fl oz' };
 export const unitLabel = (u: string) => UNIT_LABELS[u] ?? u;

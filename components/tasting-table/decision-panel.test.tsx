@@ -19,7 +19,7 @@ describe('DecisionPanel', () => {
 
   it('shows the rubric to someone who may decide, and no claim button', () => {
     render(<DecisionPanel practicalId={3} round={1} right={{ may: true, as: 'workshop instructor' }} claim={null} viewer={instructor} />);
-    expect(screen.getByRole('form', { name: 'Review of round 1' })).toBeInTheDocument();
+    expect(screen.getByRole('form', { name: 'Review of the first batch' })).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Claim this submission' })).toBeNull();
   });
 

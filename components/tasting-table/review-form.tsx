@@ -11,10 +11,11 @@ import { FieldError, TextArea, TextField } from '@/components/ui/text-field';
 import { useToast } from '@/components/ui/toast';
 import { RUBRIC_CRITERIA, reviewSchema, type ReviewInput } from '@/lib/validations/practical';
 import { errorMessage, FetchError, postJson } from '@/lib/fetcher';
+import { DECISION_ACTION, batchName } from '@/lib/practicals/words';
 
 type FormInput = input<typeof reviewSchema>;
 
-/** The rubric, criterion by criterion, and the decision on one round. */
+/** The rubric, criterion by criterion, and the decision on one batch. */
 export function ReviewForm({ practicalId, round }: { practicalId: number; round: number }) {
   const router = useRouter();
   const toast = useToast();
@@ -40,12 +41,15 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
       setServerError(errorMessage(e, 'The review could not be saved. Please try again.'));
       return;
     }
-    toast.show(input.decision === 'approved' ? 'Approved. The learner gets an e-mail.' : 'Changes requested. The learner gets an e-mail.', 'success');
+    toast.show(
+      input.decision === 'approved' ? 'The batch passed the table. The learner gets an e-mail.' : 'Another batch asked for. The learner gets an e-mail.',
+      'success',
+    );
     router.refresh();
   };
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-5" aria-label={`Review of round ${round}`}>
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-5" aria-label={`Review of the ${batchName(round)}`}>
       <div className="space-y-4">
         {RUBRIC_CRITERIA.map((c) => {
           const err = errors.rubric?.[c.id];
@@ -78,16 +82,16 @@ export function ReviewForm({ practicalId, round }: { practicalId: number; round:
       <fieldset className="space-y-2" aria-describedby={errors.decision ? 'decision-error' : undefined}>
         <legend className="font-display text-lg font-bold">Decision</legend>
         <label className="flex items-center gap-2">
-          <input type="radio" value="approved" {...register('decision')} /> Approve this round
+          <input type="radio" value="approved" {...register('decision')} /> {DECISION_ACTION.approved}
         </label>
         <label className="flex items-center gap-2">
-          <input type="radio" value="changes_requested" {...register('decision')} /> Ask for changes
+          <input type="radio" value="changes_requested" {...register('decision')} /> {DECISION_ACTION.changes_requested}
         </label>
         <FieldError id="decision-error" message={errors.decision?.message} />
       </fieldset>
 
       <TextArea
-        label={decision === 'changes_requested' ? 'What to change (required)' : 'Comment for the learner'}
+        label={decision === 'changes_requested' ? 'What to do differently next batch (required)' : 'Comment for the learner'}
         id="review-comment"
         error={errors.comment?.message}
         {...register('comment')}

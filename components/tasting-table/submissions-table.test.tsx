@@ -60,7 +60,7 @@ describe('the Tasting table filters in the address', () => {
     expect(screen.getByLabelText('Status')).toHaveValue('approved');
     await waitFor(() => expect(requested.some((u) => u.includes('status=approved') && u.includes('page=2'))).toBe(true));
 
-    await userEvent.selectOptions(screen.getByLabelText('Flags'), 'yes');
+    await userEvent.selectOptions(screen.getByLabelText('To double-check'), 'yes');
     // A new filter starts again at page 1, which is the default and so not written.
     await waitFor(() => expect(window.location.search).toBe('?status=approved&flagged=yes'));
     await waitFor(() => expect(requested.at(-1)).toContain('flagged=yes'));

@@ -15,19 +15,18 @@ import { tastingTableQuerySchema, type TastingSort } from '@/lib/validations/pra
 import { rememberTableView } from './back-to-table';
 import { fetchJson } from '@/lib/fetcher';
 import { formatShortDate } from '@/lib/local-time';
+import { batchName } from '@/lib/practicals/words';
 
 type Filters = { page: number; sort: TastingSort; status: string; workshop: string; flagged: string; olderThanDays: string };
 
 const STATUS_OPTIONS = [
   { value: 'all', label: 'Every status' },
-  { value: 'submitted', label: 'Waiting for review' },
-  { value: 'changes_requested', label: 'Changes requested' },
-  { value: 'approved', label: 'Approved' },
+  ...(['submitted', 'changes_requested', 'approved'] as const).map((value) => ({ value, label: PRACTICAL_STATUS_LABEL[value] })),
 ];
 const FLAG_OPTIONS = [
-  { value: 'any', label: 'Flagged or not' },
-  { value: 'yes', label: 'Flagged only' },
-  { value: 'no', label: 'No flags only' },
+  { value: 'any', label: 'Either' },
+  { value: 'yes', label: 'Something to double-check' },
+  { value: 'no', label: 'Nothing to double-check' },
 ];
 const AGE_OPTIONS = [
   { value: '', label: 'Any age' },
@@ -38,7 +37,7 @@ const AGE_OPTIONS = [
 const SORT_OPTIONS: { value: TastingSort; label: string }[] = [
   { value: 'oldest', label: 'Oldest first' },
   { value: 'newest', label: 'Newest first' },
-  { value: 'flags', label: 'Most flags first' },
+  { value: 'flags', label: 'Most to double-check first' },
   { value: 'learner', label: 'Learner name' },
   { value: 'status', label: 'Status' },
 ];
@@ -145,7 +144,7 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
           value={filters.workshop}
           onChange={(e) => set({ workshop: e.target.value })}
         />
-        <Select label="Flags" options={FLAG_OPTIONS} value={filters.flagged} onChange={(e) => set({ flagged: e.target.value })} />
+        <Select label="To double-check" options={FLAG_OPTIONS} value={filters.flagged} onChange={(e) => set({ flagged: e.target.value })} />
         <Select label="Age" options={AGE_OPTIONS} value={filters.olderThanDays} onChange={(e) => set({ olderThanDays: e.target.value })} />
         <Select label="Sort" options={SORT_OPTIONS} value={filters.sort} onChange={(e) => set({ sort: e.target.value as TastingSort })} />
       </div>
@@ -164,9 +163,9 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
           <tr>
             <TH>{sortHeader('Learner', 'learner')}</TH>
             <TH>Product</TH>
-            <TH>Round</TH>
+            <TH>Batch</TH>
             <TH>{sortHeader('Status', 'status')}</TH>
-            <TH>{sortHeader('Flags', 'flags')}</TH>
+            <TH>{sortHeader('To double-check', 'flags')}</TH>
             <TH>Workshop</TH>
             <TH>{sortHeader('Age', 'oldest')}</TH>
           </tr>
@@ -193,11 +192,11 @@ export function SubmissionsTable({ workshops }: { workshops: WorkshopOption[] })
                   </Link>
                 </TD>
                 <TD>{productName(row.product)}</TD>
-                <TD>{row.round}</TD>
+                <TD>{batchName(row.round)}</TD>
                 <TD>
                   <Badge tone={PRACTICAL_STATUS_TONE[row.status]}>{PRACTICAL_STATUS_LABEL[row.status]}</Badge>
                 </TD>
-                <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">none</span>}</TD>
+                <TD>{row.flagCount ? <Badge tone="honey">{`⚑ ${row.flagCount}`}</Badge> : <span className="text-ink-soft">nothing</span>}</TD>
                 <TD>
                   {row.workshopPlace
                     ? `${formatShortDate(row.workshopStartsAt!, row.workshopTimeZone ?? 'UTC')} · ${row.workshopPlace.split(',')[0]}`

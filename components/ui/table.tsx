@@ -1,11 +1,27 @@
-import type { ComponentProps, ReactNode } from 'react';
+import { useId, type ComponentProps, type ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 
+/**
+ * A table that scrolls sideways inside its own box on a narrow screen, never the page: the box is a
+ * region named by the caption and reachable by keyboard, so it can be scrolled without a mouse.
+ * It is `relative` so that visually hidden labels inside (absolutely placed) stay in the box too.
+ */
 export function Table({ caption, className, children, ...rest }: ComponentProps<'table'> & { caption?: ReactNode }) {
+  const id = useId();
   return (
-    <div className="overflow-x-auto rounded-jar border border-brine-100 bg-white shadow-shelf">
+    <div
+      role="region"
+      aria-labelledby={caption ? `${id}-caption` : undefined}
+      aria-label={caption ? undefined : 'Table'}
+      tabIndex={0}
+      className="relative max-w-full overflow-x-auto rounded-jar border border-brine-100 bg-white shadow-shelf"
+    >
       <table className={cn('w-full border-collapse text-left text-sm', className)} {...rest}>
-        {caption ? <caption className="px-4 pt-3 pb-1 text-left font-display text-base text-brine-900">{caption}</caption> : null}
+        {caption ? (
+          <caption id={`${id}-caption`} className="px-4 pt-3 pb-1 text-left font-display text-base text-brine-900">
+            {caption}
+          </caption>
+        ) : null}
         {children}
       </table>
     </div>

@@ -1,5 +1,5 @@
 // A local stand-in for the hosted payment service, spoken to by the real `stripe` SDK through its
-// host/port/protocol options. It keeps everything in memory, serves a card form, and delivers
+// host/port/protocol options. It keeps everything in memory, serves a practice card form, and delivers
 // webhooks signed with the SDK's own generateTestHeaderString, retrying with backoff until the app
 // answers 2xx.
 import crypto from 'node:crypto';
@@ -7,10 +7,10 @@ import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import Stripe from 'stripe';
 import { decodeForm } from './form';
+import { CARDS, luhnValid, spaced } from './cards';
 import { checkoutPage } from './page';
 
-/** Test card numbers (the common test-card conventions). */
-export const CARDS = { pays: '4242424242424242', declined: '4000000000000002' } as const;
+export { CARDS } from './cards';
 
 export type FakeSession = {
   id: string;
@@ -63,7 +63,7 @@ export type Delivery = {
 export type FakePaymentsOptions = {
   port?: number;
   host?: string;
-  /** Where events go, e.g. http://127.0.0.1:3000/api/webhooks/stripe. None: events are only recorded. */
+  /** Where events go, e.g. http://127.0.0.1:3000/api/webhooks/payments. None: events are only recorded. */
   webhookUrl?: string;
   webhookSecret: string;
   /** When given, API calls must carry `Authorization: Bearer <apiKey>`. */
@@ -124,12 +124,13 @@ function readBody(req: http.IncomingMessage): Promise<string> {
 
 function cardCheck(values: Record<string, string>): string | null {
   const card = digits(values.card ?? '');
-  if (!/^\d{12,19}$/.test(card)) return 'Enter the card number (12 to 19 digits).';
+  if (!/^\d{12,19}$/.test(card)) return 'Type the card number: 12 to 19 digits, spaces allowed.';
+  if (!luhnValid(card)) return 'One of the digits of that card number is mistyped: check it against the card.';
   const exp = /^(\d{2})\s*\/\s*(\d{2})$/.exec(values.exp ?? '');
-  if (!exp || Number(exp[1]) < 1 || Number(exp[1]) > 12) return 'Enter the expiry as MM/YY.';
+  if (!exp || Number(exp[1]) < 1 || Number(exp[1]) > 12) return 'Type the expiry date as month and year, like 09/31.';
   const end = new Date(Date.UTC(2000 + Number(exp[2]), Number(exp[1]), 1));
-  if (end.getTime() <= Date.now()) return 'That card has expired.';
-  if (!/^\d{3,4}$/.test(values.cvc ?? '')) return 'Enter the 3 or 4 digit security code.';
+  if (end.getTime() <= Date.now()) return 'That expiry date has passed: use a date still to come.';
+  if (!/^\d{3,4}$/.test(values.cvc ?? '')) return 'Type the security code: the 3 or 4 digits on the card.';
   return null;
 }
 
@@ -251,12 +252,15 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
 
   function pay(sessionId: string, card: string): { ok: boolean; error?: string; redirect?: string } {
     const s = sessions.get(sessionId);
-    if (!s) return { ok: false, error: 'No such checkout.' };
-    if (s.status !== 'open') return { ok: false, error: `This checkout is ${s.status === 'complete' ? 'already paid' : 'no longer open'}.` };
+    if (!s) return { ok: false, error: 'There is no practice payment with that address.' };
+    if (s.status !== 'open') return { ok: false, error: s.status === 'complete' ? 'This fee is already paid.' : 'This practice payment has closed.' };
     const number = digits(card);
-    if (number === CARDS.declined) return { ok: false, error: 'Your card was declined. Try another card.' };
+    if (number === CARDS.declined) return { ok: false, error: 'The card’s bank turned this payment down, so nothing was paid. Try another card.' };
     if (number !== CARDS.pays)
-      return { ok: false, error: 'This test server accepts only its test cards: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined.' };
+      return {
+        ok: false,
+        error: `This practice page takes only its practice numbers: ${spaced(CARDS.pays)} goes through, ${spaced(CARDS.declined)} is turned down.`,
+      };
     const intent = randomId('pi');
     intents.set(intent, { id: intent, amount: s.amount_total, currency: s.currency, refunded: 0, session: s.id });
     s.status = 'complete';
@@ -271,9 +275,15 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
   function createSession(params: Record<string, unknown>): { status: number; body: unknown } {
     const items = (params.line_items as Array<Record<string, unknown>> | undefined) ?? [];
     if (params.mode !== 'payment')
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'This server supports mode=payment only.', param: 'mode' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'The practice server takes one-off payments only (mode=payment).', param: 'mode' } },
+      };
     if (!items.length)
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Missing required param: line_items.', param: 'line_items' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'line_items is missing: say what is being paid for.', param: 'line_items' } },
+      };
     let total = 0;
     let currency = '';
     const names: string[] = [];
@@ -284,7 +294,9 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       if (!price || !Number.isInteger(amount) || amount < 0 || !price.currency) {
         return {
           status: 400,
-          body: { error: { type: 'invalid_request_error', message: 'Each line item needs price_data with currency and unit_amount.', param: 'line_items' } },
+          body: {
+            error: { type: 'invalid_request_error', message: 'Every line item needs price_data with a currency and a unit_amount.', param: 'line_items' },
+          },
         };
       }
       total += amount * quantity;
@@ -292,13 +304,16 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       names.push(String((price.product_data as Record<string, unknown> | undefined)?.name ?? 'Item'));
     }
     if (!params.success_url)
-      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Missing required param: success_url.', param: 'success_url' } } };
+      return {
+        status: 400,
+        body: { error: { type: 'invalid_request_error', message: 'success_url is missing: say where the browser goes after paying.', param: 'success_url' } },
+      };
     const created = now();
     const expiresAt = params.expires_at ? Number(params.expires_at) : created + 24 * 3600;
     if (expiresAt < created + 30 * 60 - 5 || expiresAt > created + 24 * 3600 + 5) {
       return {
         status: 400,
-        body: { error: { type: 'invalid_request_error', message: 'expires_at must be between 30 minutes and 24 hours from now.', param: 'expires_at' } },
+        body: { error: { type: 'invalid_request_error', message: 'expires_at has to fall between 30 minutes and 24 hours from now.', param: 'expires_at' } },
       };
     }
     const id = randomId('cs');
@@ -336,19 +351,26 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     if (!intent)
       return {
         status: 404,
-        body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such payment_intent: '${intentId}'`, param: 'payment_intent' } },
+        body: {
+          error: {
+            type: 'invalid_request_error',
+            code: 'resource_missing',
+            message: `The practice server has no payment_intent '${intentId}'.`,
+            param: 'payment_intent',
+          },
+        },
       };
     const left = intent.amount - intent.refunded;
     const amount = params.amount === undefined ? left : Number(params.amount);
     if (left <= 0)
       return {
         status: 400,
-        body: { error: { type: 'invalid_request_error', code: 'charge_already_refunded', message: 'This payment has already been refunded.' } },
+        body: { error: { type: 'invalid_request_error', code: 'charge_already_refunded', message: 'Every cent of this payment has been refunded already.' } },
       };
     if (!Number.isInteger(amount) || amount <= 0 || amount > left)
       return {
         status: 400,
-        body: { error: { type: 'invalid_request_error', code: 'amount_too_large', message: `Refund amount must be between 1 and ${left}.`, param: 'amount' } },
+        body: { error: { type: 'invalid_request_error', code: 'amount_too_large', message: `A refund here can be from 1 to ${left} cents.`, param: 'amount' } },
       };
     intent.refunded += amount;
     const refund: FakeRefund = {
@@ -394,18 +416,24 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       const s = sessions.get(m[1]);
       result = s
         ? { status: 200, body: publicSession(s) }
-        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such checkout.session: '${m[1]}'` } } };
+        : {
+            status: 404,
+            body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no checkout.session '${m[1]}'.` } },
+          };
     } else if (req.method === 'POST' && (m = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(path))) {
       const s = sessions.get(m[1]);
       if (!s)
-        result = { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such checkout.session: '${m[1]}'` } } };
+        result = {
+          status: 404,
+          body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no checkout.session '${m[1]}'.` } },
+        };
       else if (s.status !== 'open')
         result = {
           status: 400,
           body: {
             error: {
               type: 'invalid_request_error',
-              message: `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${s.status}".`,
+              message: `Only an open checkout session can be closed early; this one is ${s.status}.`,
             },
           },
         };
@@ -418,7 +446,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
       const r = refunds.get(m[1]);
       result = r
         ? { status: 200, body: r }
-        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such refund: '${m[1]}'` } } };
+        : {
+            status: 404,
+            body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no refund '${m[1]}'.` } },
+          };
     } else if (req.method === 'GET' && (m = /^\/v1\/payment_intents\/([\w-]+)$/.exec(path))) {
       const p = intents.get(m[1]);
       result = p
@@ -434,7 +465,10 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
               latest_charge: null,
             },
           }
-        : { status: 404, body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `No such payment_intent: '${m[1]}'` } } };
+        : {
+            status: 404,
+            body: { error: { type: 'invalid_request_error', code: 'resource_missing', message: `The practice server has no payment_intent '${m[1]}'.` } },
+          };
     }
     if (!result) return stripeError(res, 404, 'invalid_request_error', `Unrecognized request URL (${req.method}: ${path}).`);
     if (idemKey && result.status < 500) idempotent.set(idemKey, result);
@@ -449,7 +483,7 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
     };
     if (!s)
       return html(
-        '<!doctype html><html lang="en"><head><title>Checkout not found</title></head><body><main><h1>Checkout not found</h1></main></body></html>',
+        '<!doctype html><html lang="en"><head><title>No such practice payment · Brinewright</title></head><body><main><h1>There is no practice payment at this address</h1></main></body></html>',
         404,
       );
     if (req.method === 'GET') return html(checkoutPage(s));
@@ -507,12 +541,12 @@ export function startFakePayments(options: FakePaymentsOptions): Promise<FakePay
           : null;
     if (!handler) {
       res.writeHead(404, { 'content-type': 'text/plain' });
-      res.end('Local test payment server: nothing here.');
+      res.end('Brinewright practice payment server: nothing at this address.');
       return;
     }
     handler.catch((error) => {
       log(`error: ${error instanceof Error ? error.stack : error}`);
-      if (!res.headersSent) stripeError(res, 500, 'api_error', 'The fake payment server failed.');
+      if (!res.headersSent) stripeError(res, 500, 'api_error', 'The practice payment server broke while answering; see its log.');
     });
   });
 

@@ -49,7 +49,7 @@ export type Check = {
   met: boolean;
   /** A short sentence for the checklist: what is done, or what is missing. */
   detail: string;
-  /** The slugs still missing (lessons, quizzes). */
+  /** The slugs still missing (lessons, quizzes); the desk names them by title (lib/desk/enrollments.ts). */
   missing?: string[];
 };
 
@@ -108,9 +108,9 @@ export function checkEligibility(course: CourseRequirements, facts: EnrollmentFa
   if (course.practicalRequired) {
     checks.push({
       key: 'practical',
-      label: 'Practical approved',
+      label: 'Practical batch passed the table',
       met: facts.practicalApproved,
-      detail: facts.practicalApproved ? 'An instructor approved the practical batch.' : 'No approved practical batch yet.',
+      detail: facts.practicalApproved ? 'An instructor passed the practical batch.' : 'No practical batch has passed the table yet.',
     });
   }
 

@@ -6,6 +6,8 @@ import type { Check } from '@/lib/certificates/eligibility';
 import type { DeskFilter, DeskQuery } from '@/lib/validations/certificate';
 import { certificateState, type CertificateState } from '@/lib/certificates/validity';
 import type { EnrollmentStatus } from '@/lib/enrollment-status';
+import { getLesson } from '@/lib/content';
+import { getBank } from '@/lib/quiz/bank';
 
 export type DeskEnrollment = {
   id: number;
@@ -87,6 +89,13 @@ export async function filteredIds(filter: DeskFilter, now = new Date()): Promise
   return (await standingsInOrder(ids, now)).filter((s) => s.eligibility.eligible === want).map((s) => s.row.id);
 }
 
+/** A check whose missing lessons and quizzes are named by their titles, as the coordinator reads them. */
+function titled(courseSlug: string, check: Check): Check {
+  if (!check.missing?.length) return check;
+  const title = (slug: string) => (check.key === 'lessons' ? getLesson(courseSlug, slug)?.title : getBank(slug)?.title) ?? slug;
+  return { ...check, missing: check.missing.map(title) };
+}
+
 export function toDeskEnrollment(s: EnrollmentStanding, now = new Date()): DeskEnrollment {
   const { row } = s;
   return {
@@ -99,7 +108,7 @@ export function toDeskEnrollment(s: EnrollmentStanding, now = new Date()): DeskE
       row.workshopId && row.workshopStartsAt ? { id: row.workshopId, startsAt: row.workshopStartsAt.toISOString(), place: row.workshopPlace ?? '' } : null,
     status: row.status,
     eligible: s.eligibility.eligible && !row.certificate,
-    checks: s.eligibility.checks,
+    checks: s.eligibility.checks.map((c) => titled(row.courseSlug, c)),
     certificate: row.certificate
       ? {
           id: row.certificate.id,

@@ -119,7 +119,7 @@ describe('e-mail templates', () => {
     expect(revoked.text).toContain('Reason given: <img src=x>');
   });
 
-  it('the review e-mail names the round, each rubric line and the page to open', () => {
+  it('the review e-mail names the batch in words, each rubric line and the page to open', () => {
     const m = practicalReviewedEmail({
       to: 'a@test.example',
       name: 'Ana',
@@ -129,9 +129,9 @@ describe('e-mail templates', () => {
       reviewerName: 'Ines',
       url: 'http://x/learn/safe-pickling/practical',
     });
-    expect(m.subject).toBe('Your practical batch needs changes — Safe Pickling');
-    expect(m.text).toContain('Ines reviewed round 2 of your practical batch');
-    expect(m.text).toContain('What to change: Use new lids.');
+    expect(m.subject).toBe('Needs another batch: your practical batch for Safe Pickling');
+    expect(m.text).toContain('Ines looked at your second batch at the Tasting table and asks you for another batch');
+    expect(m.text).toContain('For the next batch: Use new lids.');
     expect(m.text).toContain(`${RUBRIC_CRITERIA[0].label}: not met (Headspace <1/4 in)`);
     expect(m.text).toContain(`${RUBRIC_CRITERIA[1].label}: met`);
     expect(m.text).toContain('http://x/learn/safe-pickling/practical');

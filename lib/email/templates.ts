@@ -3,6 +3,7 @@
 import { formatMoney, formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
 import { formatDateTime } from '@/lib/local-time';
 import { describeRoles, type Role } from '@/lib/roles';
+import { STATE_NAME, batchName } from '@/lib/practicals/words';
 import { RUBRIC_CRITERIA, type ReviewInput } from '@/lib/validations/practical';
 import type { OutgoingAttachment, OutgoingEmail } from './outbox';
 
@@ -214,7 +215,7 @@ export function workshopReminderEmail({
   ]);
 }
 
-/** Sent when an instructor has reviewed a round of a practical: the decision, the comment and the rubric. */
+/** Sent when an instructor has decided on a practical batch: the decision, the comment and the rubric. */
 export function practicalReviewedEmail({
   to,
   name,
@@ -240,18 +241,18 @@ export function practicalReviewedEmail({
   return compose(
     'practical.reviewed',
     to,
-    approved ? `Your practical batch is approved — ${courseTitle}` : `Your practical batch needs changes — ${courseTitle}`,
+    `${approved ? STATE_NAME.approved : STATE_NAME.changes_requested}: your practical batch for ${courseTitle}`,
     `Hello ${name},`,
     [
       {
         kind: 'p',
         text: approved
-          ? `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and approved it.`
-          : `${reviewerName} reviewed round ${round} of your practical batch at the Tasting table and asks for changes before it can be approved.`,
+          ? `${reviewerName} looked at your ${batchName(round)} at the Tasting table, and it passed the table.`
+          : `${reviewerName} looked at your ${batchName(round)} at the Tasting table and asks you for another batch before it can pass.`,
       },
-      ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'What to change'}: ${review.comment}` }] : []),
+      ...(review.comment ? [{ kind: 'p' as const, text: `${approved ? 'Comment' : 'For the next batch'}: ${review.comment}` }] : []),
       { kind: 'facts', rows: rubric },
-      { kind: 'button', label: approved ? 'See the review' : 'See the review and submit a new round', href: url },
+      { kind: 'button', label: approved ? 'See the notes' : 'See the notes and send another batch', href: url },
     ],
   );
 }

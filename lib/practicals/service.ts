@@ -138,8 +138,8 @@ export async function submitPractical(user: SessionUser, courseSlug: string, for
   return sequelize.transaction(async (transaction) => {
     const latest = await Practical.findOne({ where: { enrollmentId: enrollment.id }, order: [['round', 'DESC']], lock: transaction.LOCK.UPDATE, transaction });
     if (latest?.status === 'submitted')
-      throw new AppError('conflict', 'Your last round is still waiting at the Tasting table; you can submit again once it is reviewed.');
-    if (latest?.status === 'approved') throw new AppError('conflict', 'Your practical is already approved.');
+      throw new AppError('conflict', 'Your last batch is still waiting at the Tasting table; you can send another once an instructor has decided on it.');
+    if (latest?.status === 'approved') throw new AppError('conflict', 'Your practical batch has already passed the table.');
     const photos = await PracticalPhoto.findAll({
       where: { id: { [Op.in]: photoIds }, userId: user.id, practicalId: null },
       lock: transaction.LOCK.UPDATE,
@@ -214,7 +214,7 @@ export async function claimPractical(viewer: SessionUser, practicalId: number) {
     const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!practical) throw new AppError('not_found', 'There is no such submission.');
     if (practical.userId === viewer.id) throw new AppError('forbidden', REFUSAL.own);
-    if (practical.status !== 'submitted') throw new AppError('conflict', 'This round has already been reviewed.');
+    if (practical.status !== 'submitted') throw new AppError('conflict', 'This batch has already been decided on.');
     if (practical.claimedById === viewer.id) return { practicalId: practical.id, claimedById: viewer.id };
     if (practical.claimedById !== null) throw new AppError('conflict', REFUSAL.claimed_by_other);
     await practical.update({ claimedById: viewer.id, claimedAt: new Date() }, { transaction });
@@ -256,7 +256,7 @@ export async function reviewPractical(reviewer: SessionUser, practicalId: number
     const practical = await Practical.findByPk(practicalId, { lock: transaction.LOCK.UPDATE, transaction });
     if (!practical) throw new AppError('not_found', 'There is no such submission.');
     requireDecisionRight(reviewer, practical, await workshopInstructorOf(practical.enrollmentId, transaction));
-    if (practical.status !== 'submitted') throw new AppError('conflict', 'This round has already been reviewed.');
+    if (practical.status !== 'submitted') throw new AppError('conflict', 'This batch has already been decided on.');
     const [learner, enrollment] = await Promise.all([
       User.findByPk(practical.userId, { transaction }),
       Enrollment.findByPk(practical.enrollmentId, { transaction }),

@@ -25,8 +25,12 @@ export const MIN_FOOD_VINEGAR_ACIDITY_PCT = 4;
 export const MAX_TABLE_VINEGAR_ACIDITY_PCT = 7;
 
 /** Shown beside every estimated pH: it is the liquid's, before the produce goes in. */
-export const PH_CAUTION =
-  'This is the pH of the liquid alone, before the produce goes in (weak-acid equation, acetic acid pKa 4.756, CRC Handbook). Produce buffers the acid, so the jar settles higher: only the tested recipe, or a calibrated pH meter, tells you the finished pH.';
+/** How the liquid's pH is estimated, for the calculator's "how this is worked out" fold. */
+export const PH_METHOD = 'weak-acid equation, acetic acid pKa 4.756, CRC Handbook';
+/** The caution in plain words, shown beside the pH wherever it appears. */
+export const PH_CAUTION_PLAIN =
+  'This is the pH of the liquid alone, before the produce goes in. Produce buffers the acid, so the jar settles higher: only the tested recipe, or a calibrated pH meter, tells you the finished pH.';
+export const PH_CAUTION = PH_CAUTION_PLAIN.replace('before the produce goes in.', `before the produce goes in (${PH_METHOD}).`);
 
 export type BrineAcidityInput = {
   vinegarMl: number;

@@ -30,6 +30,14 @@ describe('buildShelf', () => {
     const exam = buildShelf({ ...base, ...allDone, passedQuizzes: [...allDone.passedQuizzes, 'c--final-exam'] });
     expect(exam.finalExam).toEqual({ quizSlug: 'c--final-exam', passed: true });
     expect(exam.next?.href).toBe('/courses/c');
+    // With every jar full, what is left is said by name; the practical's page when the batch is among it.
+    const done = { ...base, ...allDone, passedQuizzes: [...allDone.passedQuizzes, 'c--final-exam'] };
+    expect(buildShelf({ ...done, remaining: ['practical batch', 'workshop'] }).next).toEqual({
+      label: 'Every jar is full. Still to do: practical batch, workshop',
+      href: '/learn/c/practical',
+    });
+    expect(buildShelf({ ...done, remaining: ['workshop'] }).next).toEqual({ label: 'Every jar is full. Still to do: workshop', href: '/courses/c' });
+    expect(buildShelf({ ...done, remaining: [] }).next?.label).toBe('Every jar is full and every requirement is met. See the course');
   });
 
   it("a course whose final exam is also its lessons' quiz shows no separate exam; payment and withdrawal steps", () => {

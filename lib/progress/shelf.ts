@@ -9,6 +9,8 @@ export type ShelfCourseInput = {
   lessons: ShelfLessonInput[];
   read: Record<string, string>;
   passedQuizzes: string[];
+  /** Requirements beyond the jars still missing, in plain words ("practical batch", "workshop"); unknown when absent. */
+  remaining?: string[];
 };
 
 export type Jar = {
@@ -34,6 +36,14 @@ export type Shelf = {
   filled: number;
   next: NextStep;
 };
+
+/** The plain name of each requirement beyond the jars, for "Still to do: …". */
+export const STILL_TO_DO = {
+  fee: 'course fee',
+  practical: 'practical batch',
+  workshop: 'workshop',
+  'prior-certificate': 'an earlier certificate',
+} as const;
 
 /** The accessible name of a jar, e.g. "Acidity: read, quiz passed". */
 export function jarLabel(title: string, read: boolean, quizPassed: boolean): string {
@@ -82,5 +92,8 @@ function nextStep(input: ShelfCourseInput, jars: Jar[], finalExam: Shelf['finalE
   if (first && !first.read) return { label: `Read lesson ${first.order}: ${first.title}`, href: `/learn/${input.slug}/${first.lessonSlug}` };
   if (first) return { label: `Take the quiz for lesson ${first.order}: ${first.title}`, href: `/quiz/${first.quizSlug}` };
   if (finalExam && !finalExam.passed) return { label: 'Take the final exam', href: `/quiz/${finalExam.quizSlug}` };
-  return { label: 'Every jar is full. See the course page for what remains', href: course };
+  const remaining = input.remaining ?? [];
+  if (remaining.length === 0) return { label: 'Every jar is full and every requirement is met. See the course', href: course };
+  const href = remaining.includes(STILL_TO_DO.practical) ? `/learn/${input.slug}/practical` : course;
+  return { label: `Every jar is full. Still to do: ${remaining.join(', ')}`, href };
 }

@@ -93,7 +93,7 @@ const criterion = z
 
 export const reviewSchema = z
   .object({
-    decision: z.enum(['approved', 'changes_requested'], { error: 'Choose approve or ask for changes.' }),
+    decision: z.enum(['approved', 'changes_requested'], { error: 'Choose to pass this batch or ask for another batch.' }),
     rubric: z.object(Object.fromEntries(RUBRIC_CRITERIA.map((c) => [c.id, criterion])) as Record<RubricCriterionId, typeof criterion>),
     comment: z.string().trim().max(2000, 'Keep the comment under 2,000 characters.').default(''),
   })

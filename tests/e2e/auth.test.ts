@@ -36,7 +36,7 @@ describe('sign-in and roles in the browser', () => {
 
     const response = await page.goto('/desk');
     expect(response?.status()).toBe(403);
-    expect(await page.getByRole('heading', { name: 'This page is for another role' }).count()).toBe(1);
+    expect(await page.getByRole('heading', { name: 'This page is for other people in the program' }).count()).toBe(1);
     expect(await seriousViolations(page)).toEqual([]);
 
     await page.getByRole('button', { name: 'Sign out' }).click();

@@ -47,24 +47,26 @@ describe('enrolling and paying in the browser', () => {
 
     await first.getByRole('button', { name: 'Enroll in this workshop' }).click();
     await page.waitForURL(/\/pay\/cs_test_/);
+    await page.getByRole('heading', { name: 'Practice payment for Safe Pickling and Water-Bath Canning' }).waitFor();
+    expect(await page.getByText('no money moves and no card is charged').count()).toBe(1);
     expect(await page.getByText('$45.00').first().textContent()).toBe('$45.00');
     expect(await seriousViolations(page)).toEqual([]);
 
-    // The declined test card first: the page says so and stays open.
-    await page.getByLabel('Card number').fill('4000 0000 0000 0002');
+    // The practice card that is turned down first: the page says so and stays open.
+    await page.getByLabel('Card number').fill('4600 4600 9090 9096');
     await page.getByLabel('Expiry (MM/YY)').fill('12/34');
     await page.getByLabel('Security code').fill('123');
     await page.getByLabel('Name on card').fill('Hazel Quill');
-    await page.getByRole('button', { name: /^Pay/ }).click();
-    await page.getByRole('alert').filter({ hasText: 'Your card was declined' }).waitFor();
+    await page.getByRole('button', { name: 'Pay the course fee ($45.00)' }).click();
+    await page.getByRole('alert').filter({ hasText: 'The card’s bank turned this payment down' }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
 
     // Webhooks are held back for a moment, so the success page is seen waiting for the payment.
     const payments = process.env.E2E_PAYMENTS_URL!;
     await fetch(`${payments}/_fake/webhooks/pause`, { method: 'POST' });
     try {
-      await page.getByLabel('Card number').fill('4242 4242 4242 4242');
-      await page.getByRole('button', { name: /^Pay/ }).click();
+      await page.getByLabel('Card number').fill('4600 4600 4600 4604');
+      await page.getByRole('button', { name: 'Pay the course fee ($45.00)' }).click();
       await page.waitForURL(/\/checkout\/success\?session_id=cs_test_/);
       await page.getByRole('heading', { name: 'Confirming your payment…' }).waitFor();
       expect(await seriousViolations(page)).toEqual([]);
@@ -109,13 +111,13 @@ describe('enrolling and paying in the browser', () => {
 
     await page.goto('/desk/payments');
     const row = page.getByRole('row').filter({ hasText: 'Hazel Quill' });
-    await row.getByText('Paid').waitFor();
+    await row.getByText('Paid', { exact: true }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
     await row.getByRole('button', { name: 'Refund Hazel Quill' }).click();
     const dialog = page.getByRole('dialog', { name: /Refund \$45\.00 to Hazel Quill/ });
     await dialog.getByLabel('Reason (kept in the audit log)').fill('Cannot attend');
     await dialog.getByRole('button', { name: 'Refund $45.00' }).click();
-    await page.getByRole('row').filter({ hasText: 'Hazel Quill' }).getByText('Refunded', { exact: true }).waitFor();
+    await page.getByRole('row').filter({ hasText: 'Hazel Quill' }).getByText('Paid, then refunded', { exact: true }).waitFor();
     const to = (await mailbox()).find((m) => m.subject.startsWith('Welcome') && m.text.includes('Hazel Quill'))!.to[0];
     const refund = await messageTo(to, /^Refund issued: Safe Pickling and Water-Bath Canning$/);
     expect(refund.text).toContain('Refunded: $45.00');

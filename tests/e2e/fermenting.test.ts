@@ -64,7 +64,7 @@ describe('the fermenting lesson in the browser', () => {
     await page.locator('fieldset[data-question]').first().waitFor();
     expect(await page.locator('fieldset[data-question]').count()).toBe(bank.questions.length);
     await answerChoices(page, bank.questions);
-    await page.getByRole('button', { name: 'Submit answers' }).click();
+    await page.getByRole('button', { name: 'Hand in my answers' }).click();
     const result = page.getByTestId('quiz-result');
     await result.waitFor();
     expect(await result.getByRole('heading', { level: 2 }).textContent()).toBe('Passed: 100 %');

@@ -63,7 +63,7 @@ describe('lessons in the browser', () => {
     expect(response?.status()).toBe(200);
     await browser.network.quiet();
     expect(await page.getByRole('heading', { level: 1, name: preview.title }).count()).toBe(1);
-    const toc = page.getByRole('navigation', { name: 'On this page' });
+    const toc = page.getByRole('navigation', { name: 'In this lesson' });
     expect(await toc.getByRole('link').count()).toBeGreaterThan(2);
     expect(await page.getByRole('heading', { name: 'After this lesson you can' }).count()).toBe(1);
     expect(await page.getByRole('heading', { name: 'Sources' }).count()).toBe(1);
@@ -94,7 +94,7 @@ describe('lessons in the browser', () => {
       await page.setViewportSize({ width: 390, height: 844 });
       await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
       const title = page.getByRole('heading', { level: 1, name: preview.title });
-      const toc = page.getByRole('navigation', { name: 'On this page' });
+      const toc = page.getByRole('navigation', { name: 'In this lesson' });
       expect(await toc.count()).toBe(1);
       const [titleBox, tocBox] = [await title.boundingBox(), await toc.boundingBox()];
       expect(tocBox!.y).toBeGreaterThan(titleBox!.y + titleBox!.height);
@@ -113,7 +113,7 @@ describe('lessons in the browser', () => {
     await page.goto(`/learn/pickling-and-canning/${preview.slug}`);
     await page.emulateMedia({ media: 'print' });
     expect(await page.locator('header[data-site-header]').isVisible()).toBe(false);
-    expect(await page.getByRole('navigation', { name: 'On this page' }).isVisible()).toBe(false);
+    expect(await page.getByRole('navigation', { name: 'In this lesson' }).isVisible()).toBe(false);
     expect(await page.getByRole('region', { name: 'Brine acidity' }).isVisible()).toBe(false);
     expect(await page.locator('[data-print-note]').first().isVisible()).toBe(true);
     expect(await page.getByRole('heading', { level: 1, name: preview.title }).isVisible()).toBe(true);

@@ -54,7 +54,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     await page.getByLabel('Jars sealed').fill('4');
     await page.getByLabel('Jars not sealed').fill('0');
 
-    const liveFlags = page.getByRole('region', { name: 'Automatic checks (as you type)' });
+    const liveFlags = page.getByRole('region', { name: 'Numbers to double-check (as you type)' });
     await liveFlags.getByText('shorter than the published 15 min').waitFor();
     expect(await liveFlags.getByRole('listitem').count()).toBe(1);
 
@@ -63,9 +63,9 @@ describe('practical batch from the learner to the Tasting table', () => {
     expect(await page.getByRole('img', { name: /Photo 1: jars-1\.jpg/ }).count()).toBe(1);
     expect(await seriousViolations(page)).toEqual([]);
 
-    await page.getByRole('button', { name: 'Submit round 1 for review' }).click();
-    await page.getByRole('heading', { name: 'Round 1 is at the Tasting table' }).waitFor();
-    const sent = page.getByRole('region', { name: 'Flags sent with your submission' });
+    await page.getByRole('button', { name: 'Send my first batch to an instructor' }).click();
+    await page.getByRole('heading', { name: 'Your first batch is at the Tasting table' }).waitFor();
+    const sent = page.getByRole('region', { name: 'What the instructor will double-check' });
     await sent.getByText(/Processed 10 min, shorter than the published 15 min/).waitFor();
     expect(await sent.getByText(/Processed 10 min, shorter than the published 15 min/).count()).toBe(1);
 
@@ -78,7 +78,7 @@ describe('practical batch from the learner to the Tasting table', () => {
         .getByText(/shorter than the published 15 min/)
         .count(),
     ).toBe(1);
-    expect(await page.getByRole('button', { name: /Submit round/ }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: /^Send my .* batch to an instructor$/ }).count()).toBe(0);
     expect(await seriousViolations(page)).toEqual([]);
   });
 
@@ -88,7 +88,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     await signIn(page, 'instructor@cedarhollow.example', 'demo-instructor-pass');
     await page.goto('/tasting-table');
     await page.getByRole('heading', { name: 'Tasting table', level: 1 }).waitFor();
-    await page.getByLabel('Flags').selectOption('yes');
+    await page.getByLabel('To double-check').selectOption('yes');
     const row = page.getByTestId('submission-row').filter({ hasText: 'Maren Osei' });
     await row.waitFor();
     // The demo seed adds two other flagged batches waiting for review (seeders/20261201160000-demo-practicals.js).
@@ -99,18 +99,18 @@ describe('practical batch from the learner to the Tasting table', () => {
     // The filter is in the address, so the browser's back button from the submission keeps it.
     await page.waitForURL(/\/tasting-table\?flagged=yes$/);
     await row.getByRole('link', { name: 'Maren Osei' }).click();
-    await page.getByRole('heading', { name: 'Maren Osei, round 1' }).waitFor();
+    await page.getByRole('heading', { name: 'Maren Osei, first batch' }).waitFor();
     await page.goBack();
     await page.waitForURL(/\/tasting-table\?flagged=yes$/);
-    await expect.poll(() => page.getByLabel('Flags').inputValue()).toBe('yes');
+    await expect.poll(() => page.getByLabel('To double-check').inputValue()).toBe('yes');
     await row.waitFor();
     await row.getByRole('link', { name: 'Maren Osei' }).click();
-    await page.getByRole('heading', { name: 'Maren Osei, round 1' }).waitFor();
+    await page.getByRole('heading', { name: 'Maren Osei, first batch' }).waitFor();
     // And the page's own link back returns to the same view.
     await expect.poll(() => page.getByRole('link', { name: '← All submissions' }).getAttribute('href')).toBe('/tasting-table?flagged=yes');
     expect(
       await page
-        .getByRole('region', { name: 'Automatic flags' })
+        .getByRole('region', { name: 'Numbers to double-check' })
         .getByText(/shorter than the published 15 min/)
         .count(),
     ).toBe(1);
@@ -128,7 +128,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     expect(await seriousViolations(page)).toEqual([]);
 
     // Approving with a criterion left open is refused in the form.
-    await page.getByLabel('Approve this round').check();
+    await page.getByLabel('Pass this batch').check();
     await page.getByRole('button', { name: 'Save the review' }).click();
     expect(await page.getByText('Choose met or not met.').count()).toBeGreaterThan(0);
     for (const group of await page
@@ -140,7 +140,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     await page.getByLabel('Comment for the learner').fill('Clean rims and good seals. Next time process for the full 15 minutes at your altitude.');
     await page.getByRole('button', { name: 'Save the review' }).click();
     await page.getByTestId('review-summary').waitFor();
-    expect(await page.getByTestId('review-summary').getByText('Approved').count()).toBe(1);
+    expect(await page.getByTestId('review-summary').getByText('Passed the table').count()).toBe(1);
     expect(await page.getByRole('button', { name: 'Save the review' }).count()).toBe(0);
     expect(await seriousViolations(page)).toEqual([]);
   });
@@ -150,7 +150,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     await context.clearCookies();
     await signIn(page, 'learner@cedarhollow.example', 'demo-learner-pass');
     await page.goto('/learn/pickling-and-canning/practical');
-    await page.getByTestId('practical-status').getByText('Approved').waitFor();
+    await page.getByTestId('practical-status').getByText('Passed the table').waitFor();
     expect(
       await page
         .getByTestId('round-1')
@@ -162,7 +162,7 @@ describe('practical batch from the learner to the Tasting table', () => {
     // The Pantry shows the same review beside the course.
     await page.goto('/pantry');
     const panel = page.getByRole('region', { name: 'Practical batches' }).getByTestId('practical-status');
-    await panel.getByText('Approved').waitFor();
+    await panel.getByText('Passed the table').waitFor();
     expect(await seriousViolations(page)).toEqual([]);
   });
 });

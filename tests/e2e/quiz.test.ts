@@ -61,7 +61,7 @@ describe('quiz, progress and the Pantry in the browser', () => {
         .isChecked(),
     ).toBe(true);
 
-    await page.getByRole('button', { name: 'Submit answers' }).click();
+    await page.getByRole('button', { name: 'Hand in my answers' }).click();
     const result = page.getByTestId('quiz-result');
     await result.waitFor();
     expect(await result.getByRole('heading', { level: 2 }).textContent()).toBe('Passed: 100 %');

@@ -10,6 +10,8 @@ import { loadStandings } from '@/lib/certificates/facts';
 import { normalizeSerial } from '@/lib/certificates/serial';
 import { fetchLearnerCertificates, verifySerial } from '@/lib/certificates/lookup';
 import { db } from '@/models';
+import { getBank } from '@/lib/quiz/bank';
+import { requirementsForCourse } from '@/lib/certificates/requirements';
 import { createCourses, createUser, resetDatabase } from '../support/db';
 import { jsonRequest, params } from '../support/request';
 import { actAs } from '../support/session';
@@ -263,7 +265,7 @@ describe('desk table route', () => {
     actAs(coordinator);
     const eligible = [];
     for (let i = 0; i < 3; i++) eligible.push((await eligibleEnrollment(courses.flagship)).enrollmentId);
-    const blocked = (await eligibleEnrollment(courses.flagship, { skip: { practical: true } })).enrollmentId;
+    const blocked = (await eligibleEnrollment(courses.flagship, { skip: { practical: true, quizzes: true } })).enrollmentId;
     await issueCertificate(eligible[0], coordinator.id);
     const get = async (qs: string) => (await deskRoute(new Request(`http://localhost/api/desk/enrollments?${qs}`), {})).json();
     const page1 = await get('pageSize=5&page=1');
@@ -273,6 +275,11 @@ describe('desk table route', () => {
     const no = await get('eligible=no');
     expect(no.items.map((i: { id: number }) => i.id)).toEqual([blocked]);
     expect(no.items[0].checks.find((c: { key: string }) => c.key === 'practical').met).toBe(false);
+    // The quizzes still to pass are named by their titles (content/quizzes), never by slug.
+    const quizzes = no.items[0].checks.find((c: { key: string }) => c.key === 'quizzes');
+    expect(quizzes.missing.length).toBeGreaterThan(0);
+    expect(quizzes.missing).toContain(getBank(requirementsForCourse('pickling-and-canning').quizSlugs[0])!.title);
+    for (const name of quizzes.missing) expect(name).not.toMatch(/--/);
     const certified = await get('eligible=certified');
     expect(certified.items.map((i: { id: number }) => i.id)).toEqual([eligible[0]]);
     expect(certified.items[0].certificate.state).toBe('valid');

@@ -131,7 +131,7 @@ describe('who may decide on a practical', () => {
     expect((await approve(fixture.current.instructor, practicalId)).status).toBe(201);
     const decided = await claimAs(instructor, practicalId);
     expect(decided.status).toBe(409);
-    expect((await decided.json()).message).toMatch(/already been reviewed/);
+    expect((await decided.json()).message).toMatch(/already been decided on/);
     actAs(await createUser('learner'));
     expect(
       (await claim(new Request(`http://localhost:3000/api/practicals/${practicalId}/claim`, { method: 'POST' }), params({ id: String(practicalId) }))).status,

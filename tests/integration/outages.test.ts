@@ -23,8 +23,8 @@ import { jsonRequest, params } from '../support/request';
 import { actAs } from '../support/session';
 import { payWithCard, startHarness, type Harness } from '../support/enrollment-fakes';
 
-// Test cards follow the common test-card convention: 4242 4242 4242 4242 succeeds.
-const GOOD = '4242 4242 4242 4242';
+// Brinewright's own practice card that pays (fakes/payments/cards.ts).
+const GOOD = '4600 4600 4600 4604';
 const SEATS = 40;
 
 /** A TCP relay in front of the fake payment server; stop() refuses connections and cuts open ones. */

@@ -3,7 +3,7 @@ import { WAIVER_REFUSED } from '@/lib/enrollment/waivers';
 import { POST as enrollPOST } from '@/app/api/enrollments/route';
 import { POST as refundPOST } from '@/app/api/enrollments/[id]/refund/route';
 import { GET as workshopsGET } from '@/app/api/courses/[course]/workshops/route';
-import { POST as webhookPOST } from '@/app/api/webhooks/stripe/route';
+import { POST as webhookPOST } from '@/app/api/webhooks/payments/route';
 import { startFakePayments } from '@/fakes/payments/server';
 import { getCourse } from '@/lib/content';
 import { releaseStaleCheckouts } from '@/lib/payments/reconcile';
@@ -13,9 +13,9 @@ import { jsonRequest, params } from '../support/request';
 import { actAs } from '../support/session';
 import { API_KEY, WEBHOOK_SECRET, payWithCard, sessionIdOf, signedHeader, startHarness, type Harness } from '../support/enrollment-fakes';
 
-// Test cards follow the common test-card convention: 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is declined.
-const GOOD = '4242 4242 4242 4242';
-const DECLINED = '4000 0000 0000 0002';
+// Brinewright's own practice cards (fakes/payments/cards.ts): 4600 4600 4600 4604 pays, 4600 4600 9090 9096 is turned down.
+const GOOD = '4600 4600 4600 4604';
+const DECLINED = '4600 4600 9090 9096';
 
 let h: Harness;
 let courseId: number;
@@ -120,7 +120,7 @@ describe('paying through the fake payment server', () => {
     const { body } = await enroll(learner);
     const declined = await payWithCard(body.url, DECLINED);
     expect(declined.status).toBe(402);
-    expect(declined.body).toContain('Your card was declined');
+    expect(declined.body).toContain('The card’s bank turned this payment down, so nothing was paid.');
     await h.payments.settle();
     expect(deliveriesFor(sessionIdOf(body.url))).toHaveLength(0);
     expect((await enrollmentOf(learner.id))!.status).toBe('awaiting_payment');
@@ -249,7 +249,7 @@ describe('the webhook endpoint', () => {
     const responses = await Promise.all(
       Array.from({ length: 5 }, () =>
         webhookPOST(
-          new Request('http://localhost:3000/api/webhooks/stripe', {
+          new Request('http://localhost:3000/api/webhooks/payments', {
             method: 'POST',
             headers: { 'stripe-signature': signedHeader(completed.payload) },
             body: completed.payload,
@@ -280,7 +280,7 @@ describe('the webhook endpoint', () => {
       livemode: false,
     });
     const response = await webhookPOST(
-      new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
+      new Request('http://localhost:3000/api/webhooks/payments', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
       {},
     );
     expect(response.status).toBe(200);
@@ -312,7 +312,7 @@ describe('the webhook endpoint', () => {
         data: { object: session },
       });
       const response = await webhookPOST(
-        new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
+        new Request('http://localhost:3000/api/webhooks/payments', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
         {},
       );
       expect(response.status).toBe(200);
@@ -345,7 +345,7 @@ describe('the webhook endpoint', () => {
       data: { object: session },
     });
     const post = (headers: Record<string, string>, raw = payload) =>
-      webhookPOST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers, body: raw }), {});
+      webhookPOST(new Request('http://localhost:3000/api/webhooks/payments', { method: 'POST', headers, body: raw }), {});
 
     expect((await post({})).status).toBe(400);
     expect((await post({ 'stripe-signature': signedHeader(payload, 'whsec_someone_else') })).status).toBe(400);
@@ -373,7 +373,7 @@ describe('the webhook endpoint', () => {
       data: { object: { id: 'cus_1', object: 'customer' } },
     });
     const response = await webhookPOST(
-      new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
+      new Request('http://localhost:3000/api/webhooks/payments', { method: 'POST', headers: { 'stripe-signature': signedHeader(payload) }, body: payload }),
       {},
     );
     expect(response.status).toBe(200);

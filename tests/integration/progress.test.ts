@@ -10,6 +10,7 @@ import { createCourses, createUser } from '../support/db';
 import { jsonRequest, params } from '../support/request';
 import { actAs } from '../support/session';
 import { answersFor, enroll, freshLearner } from '../support/quiz-support';
+import { eligibleEnrollment } from '../support/certificate-fixtures';
 
 let courses: Awaited<ReturnType<typeof createCourses>>;
 let learner: Awaited<ReturnType<typeof createUser>>;
@@ -95,6 +96,14 @@ describe('GET /api/pantry', () => {
     expect(acidity()).toMatchObject({ fill: 1, label: `${title}: read, quiz passed` });
     expect(shelf.filled).toBe(1);
     expect(shelf.finalExam).toEqual({ quizSlug: 'pickling-and-canning--final-exam', passed: false });
+  });
+
+  it("with every jar full, names what the certificate still needs (the desk's own checks) and points to the practical", async () => {
+    const { userId } = await eligibleEnrollment(courses.flagship, { skip: { practical: true, attended: true } });
+    actAs({ id: userId, email: 'x@test.example', name: 'Jo', roles: ['learner'] });
+    const [shelf] = await shelves();
+    expect(shelf.filled).toBe(shelf.jars.length);
+    expect(shelf.next).toEqual({ label: 'Every jar is full. Still to do: practical batch, workshop', href: '/learn/pickling-and-canning/practical' });
   });
 
   it("a failed quiz does not fill the jar; another learner's progress never shows; staff get 403", async () => {

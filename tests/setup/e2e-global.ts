@@ -50,7 +50,7 @@ export default async function setup() {
     SMTP_PORT: String(port + 2),
     FAKE_MAILBOX_PORT: String(port + 3),
     MAILBOX_URL: `http://127.0.0.1:${port + 3}`,
-    FAKE_PAYMENTS_WEBHOOK_URL: `${baseUrl}/api/webhooks/stripe`,
+    FAKE_PAYMENTS_WEBHOOK_URL: `${baseUrl}/api/webhooks/payments`,
     FAKE_PAYMENTS_RETRY_MS: '500',
     WORKER_POLL_MS: '300',
     WORKER_BACKOFF_MS: '1000',

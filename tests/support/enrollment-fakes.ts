@@ -28,7 +28,7 @@ export function signedHeader(payload: string, secret = WEBHOOK_SECRET): string {
 export async function startHarness(): Promise<Harness> {
   let failing = 0;
   let calls = 0;
-  const { POST } = await import('../../app/api/webhooks/stripe/route');
+  const { POST } = await import('../../app/api/webhooks/payments/route');
   const hook = http.createServer((req, res) => {
     let body = '';
     req.setEncoding('utf8');
@@ -42,12 +42,12 @@ export async function startHarness(): Promise<Harness> {
       }
       const headers = new Headers();
       for (const [k, v] of Object.entries(req.headers)) if (typeof v === 'string') headers.set(k, v);
-      const response = await POST(new Request('http://localhost:3000/api/webhooks/stripe', { method: 'POST', headers, body }), {});
+      const response = await POST(new Request('http://localhost:3000/api/webhooks/payments', { method: 'POST', headers, body }), {});
       res.writeHead(response.status, { 'content-type': 'application/json' }).end(await response.text());
     });
   });
   await new Promise<void>((r) => hook.listen(0, '127.0.0.1', () => r()));
-  const hookUrl = `http://127.0.0.1:${(hook.address() as AddressInfo).port}/api/webhooks/stripe`;
+  const hookUrl = `http://127.0.0.1:${(hook.address() as AddressInfo).port}/api/webhooks/payments`;
   const payments = await startFakePayments({
     webhookUrl: hookUrl,
     webhookSecret: WEBHOOK_SECRET,

@@ -4,7 +4,7 @@ import { Card } from '@/components/ui/card';
 import { requirePageRole } from '@/lib/auth/guard';
 import { fetchEnrollmentStatus } from '@/lib/enrollment/queries';
 
-export const metadata: Metadata = { title: 'Payment not finished — Brinewright' };
+export const metadata: Metadata = { title: 'Payment not finished' };
 export const dynamic = 'force-dynamic';
 
 export default async function CheckoutCancelPage({ searchParams }: { searchParams: Promise<{ enrollment?: string | string[] }> }) {

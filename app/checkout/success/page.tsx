@@ -5,7 +5,7 @@ import { Card } from '@/components/ui/card';
 import { requirePageRole } from '@/lib/auth/guard';
 import { fetchEnrollmentIdForSession, fetchEnrollmentStatus } from '@/lib/enrollment/queries';
 
-export const metadata: Metadata = { title: 'Enrollment — Brinewright' };
+export const metadata: Metadata = { title: 'Your enrollment' };
 export const dynamic = 'force-dynamic';
 
 type Search = { session_id?: string | string[]; enrollment?: string | string[] };

@@ -3,10 +3,10 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { CourseWorkshops } from '@/components/enrollment/course-workshops';
 import { mdxComponents } from '@/components/mdx';
-import { Badge } from '@/components/ui/badge';
+import { CourseShelf } from '@/components/lessons/course-shelf';
 import { ButtonLink } from '@/components/ui/button';
 import { courseParams, getCourse, getLessons } from '@/lib/content';
-import { formatFee, formatMinutes } from '@/lib/content/format';
+import { formatFee } from '@/lib/content/format';
 import { requirementText } from '@/lib/content/versions';
 import { compileContent } from '@/lib/content/mdx';
 
@@ -28,75 +28,63 @@ export default async function CoursePage({ params }: Props) {
   const { content } = await compileContent({ file: course.file, body: course.body, components: mdxComponents });
   const first = lessons[0];
   return (
-    <div className="grid gap-10 lg:grid-cols-[minmax(0,1fr)_20rem]">
-      <div className="min-w-0 space-y-8">
-        <header className="space-y-3">
-          <p className="text-sm font-semibold tracking-wide text-copper-700 uppercase">
-            <Link href="/courses" className="text-copper-700 no-underline hover:underline">
-              Courses
-            </Link>
+    <div className="space-y-10">
+      <header className="space-y-3">
+        <p className="text-sm font-semibold tracking-wide text-copper-700 uppercase">
+          <Link href="/courses" className="text-copper-700 no-underline hover:underline">
+            Courses
+          </Link>
+        </p>
+        <h1 className="text-3xl leading-tight font-bold md:text-4xl">{course.title}</h1>
+        <p className="max-w-prose text-lg text-ink-soft">{course.summary}</p>
+        {first ? (
+          <ButtonLink href={`/learn/${course.slug}/${first.slug}`}>
+            {first.preview ? 'Read the first lesson, open to everyone' : 'Start the first lesson'}
+          </ButtonLink>
+        ) : null}
+      </header>
+      <section aria-labelledby="lessons-heading" className="space-y-3">
+        <h2 id="lessons-heading" className="text-2xl font-bold">
+          The course&apos;s shelf
+        </h2>
+        {lessons.length === 0 ? (
+          <p className="text-ink-soft">The lessons of this course are being written.</p>
+        ) : (
+          <>
+            <p className="max-w-prose text-sm text-ink-soft">
+              One jar for each lesson. The jars fill on your own Pantry shelf as you read each lesson and pass its quiz.
+            </p>
+            <CourseShelf courseSlug={course.slug} lessons={lessons} />
+          </>
+        )}
+      </section>
+      <div className="max-w-prose">{content}</div>
+      {/* The fee sits with the workshop dates it is paid for. */}
+      <div id="workshops" className="scroll-mt-6 space-y-4">
+        <section aria-label="Course fee" className="max-w-prose rounded-jar border-l-4 border-copper-500 bg-copper-50 px-4 py-3">
+          <p>
+            <span className="font-semibold">Course fee: {formatFee(course.feeCents, course.currency)}</span>, paid when you choose a workshop date below (or
+            covered by a fee waiver code from your program).
           </p>
-          <h1 className="text-3xl leading-tight font-bold md:text-4xl">{course.title}</h1>
-          <p className="max-w-prose text-lg text-ink-soft">{course.summary}</p>
-          {first ? (
-            <ButtonLink href={`/learn/${course.slug}/${first.slug}`}>{first.preview ? 'Read the first lesson free' : 'Start the first lesson'}</ButtonLink>
-          ) : null}
-        </header>
-        <div className="max-w-prose">{content}</div>
-        <section aria-labelledby="lessons-heading" className="space-y-3">
-          <h2 id="lessons-heading" className="text-2xl font-bold">
-            Lessons
-          </h2>
-          {lessons.length === 0 ? (
-            <p className="text-ink-soft">The lessons of this course are being written.</p>
-          ) : (
-            <ol className="divide-y divide-brine-100 rounded-jar border border-brine-100 bg-white">
-              {lessons.map((lesson) => (
-                <li key={lesson.slug} className="flex flex-wrap items-baseline gap-x-3 gap-y-1 px-4 py-3">
-                  <span className="w-6 font-display font-bold text-copper-600" aria-hidden="true">
-                    {lesson.order}
-                  </span>
-                  <span className="min-w-0 flex-1">
-                    <Link href={`/learn/${course.slug}/${lesson.slug}`} className="font-semibold">
-                      {lesson.title}
-                    </Link>
-                    <span className="block text-sm text-ink-soft">{lesson.summary}</span>
-                  </span>
-                  <span className="text-sm text-ink-soft">{formatMinutes(lesson.minutes)}</span>
-                  {lesson.preview ? <Badge tone="copper">Free preview</Badge> : <Badge>Enrolled learners</Badge>}
-                </li>
-              ))}
-            </ol>
-          )}
         </section>
-        <div id="workshops" className="scroll-mt-6">
-          <CourseWorkshops courseSlug={course.slug} />
-        </div>
+        <CourseWorkshops courseSlug={course.slug} />
       </div>
-      <aside className="space-y-6 lg:sticky lg:top-6 lg:self-start">
-        <section aria-labelledby="fee-heading" className="rounded-jar border border-brine-100 bg-white p-5 shadow-shelf">
-          <h2 id="fee-heading" className="text-lg font-bold">
-            Course fee
-          </h2>
-          <p className="mt-1 font-display text-3xl font-bold text-brine-800">{formatFee(course.feeCents, course.currency)}</p>
-          <p className="mt-1 text-sm text-ink-soft">
-            Pass mark {course.passMarkPct}% · certificate valid {course.validityMonths} months
-          </p>
-        </section>
-        <section aria-labelledby="requirements-heading" className="rounded-jar border border-brine-100 bg-white p-5 shadow-shelf">
-          <h2 id="requirements-heading" className="mb-2 text-lg font-bold">
-            To earn the certificate
-          </h2>
-          <ul className="list-disc space-y-1.5 pl-5 text-sm">
-            {course.requirements.map((requirement) => (
-              <li key={requirement}>{requirementText(requirement, lessons.length)}</li>
-            ))}
-          </ul>
-          <p className="mt-3 text-sm">
-            <Link href={`/courses/${course.slug}/changes`}>What changed in this course</Link>
-          </p>
-        </section>
-      </aside>
+      <section aria-labelledby="requirements-heading" className="max-w-prose space-y-2">
+        <h2 id="requirements-heading" className="text-2xl font-bold">
+          To earn the certificate
+        </h2>
+        <ul className="list-disc space-y-1.5 pl-5">
+          {course.requirements.map((requirement) => (
+            <li key={requirement}>{requirementText(requirement, lessons.length)}</li>
+          ))}
+        </ul>
+        <p className="text-sm text-ink-soft">
+          Quizzes pass at {course.passMarkPct}%. The certificate is valid for {course.validityMonths} months.
+        </p>
+        <p className="text-sm">
+          <Link href={`/courses/${course.slug}/changes`}>What changed in this course</Link>
+        </p>
+      </section>
     </div>
   );
 }

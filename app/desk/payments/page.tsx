@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { STATUS_LABEL } from '@/components/desk/labels';
 import { RefundButton } from '@/components/desk-admin/refund-button';
 import { Badge, type Tone } from '@/components/ui/badge';
 import { EmptyRow, Table, TBody, TD, TH, THead, TR } from '@/components/ui/table';
@@ -6,12 +7,17 @@ import { requirePageRole } from '@/lib/auth/guard';
 import { formatMoney, formatWorkshopDate } from '@/lib/enrollment/format';
 import { fetchPaymentsForDesk } from '@/lib/enrollment/queries';
 
-export const metadata: Metadata = { title: 'Payments and refunds — Certificate desk' };
+export const metadata: Metadata = { title: 'Payments and refunds' };
 export const dynamic = 'force-dynamic';
 
 const TONE: Record<string, Tone> = { paid: 'brine', pending: 'honey', expired: 'neutral', refunded: 'copper' };
-const LABEL: Record<string, string> = { paid: 'Paid', pending: 'Checkout open', expired: 'Checkout expired', refunded: 'Refunded' };
-const ENROLLMENT: Record<string, string> = { awaiting_payment: 'Awaiting payment', active: 'Active', completed: 'Completed', withdrawn: 'Withdrawn' };
+// In the words a coordinator uses: whether the fee came in, and what happened to the seat.
+const LABEL: Record<string, string> = {
+  paid: 'Paid',
+  pending: 'Not paid yet, seat held',
+  expired: 'Never paid, seat let go',
+  refunded: 'Paid, then refunded',
+};
 
 export default async function DeskPaymentsPage() {
   await requirePageRole('/desk/payments', 'coordinator');
@@ -56,7 +62,7 @@ export default async function DeskPaymentsPage() {
               <TD>
                 <Badge tone={TONE[p.status] ?? 'neutral'}>{LABEL[p.status] ?? p.status}</Badge>
               </TD>
-              <TD>{ENROLLMENT[p.enrollmentStatus] ?? p.enrollmentStatus}</TD>
+              <TD>{STATUS_LABEL[p.enrollmentStatus as keyof typeof STATUS_LABEL] ?? p.enrollmentStatus}</TD>
               <TD>
                 {p.status === 'paid' && p.enrollmentStatus !== 'completed' ? (
                   <RefundButton enrollmentId={p.enrollmentId} learnerName={p.learnerName} amount={formatMoney(p.amountCents, p.currency)} />

@@ -6,7 +6,7 @@ import { requirePageRole } from '@/lib/auth/guard';
 import { fetchDeskReports } from '@/lib/desk/reports';
 import { STATUS_LABEL } from '@/components/desk/labels';
 
-export const metadata: Metadata = { title: 'Reports · Certificate desk' };
+export const metadata: Metadata = { title: 'Reports for funders' };
 export const dynamic = 'force-dynamic';
 
 const money = (cents: number, currency: string) => new Intl.NumberFormat('en-US', { style: 'currency', currency: currency.toUpperCase() }).format(cents / 100);

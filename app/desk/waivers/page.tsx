@@ -6,7 +6,7 @@ import { EmptyRow, Table, TBody, TD, TH, THead, TR } from '@/components/ui/table
 import { requirePageRole } from '@/lib/auth/guard';
 import { fetchCourseOptions, fetchWaivers } from '@/lib/enrollment/queries';
 
-export const metadata: Metadata = { title: 'Fee waivers — Certificate desk' };
+export const metadata: Metadata = { title: 'Fee waivers' };
 export const dynamic = 'force-dynamic';
 
 const day = (iso: string) => new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' }).format(new Date(iso));

@@ -8,7 +8,7 @@ import { requirePageRole } from '@/lib/auth/guard';
 import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format';
 import { fetchCourseOptions, fetchInstructorOptions, fetchWorkshopsForDesk } from '@/lib/enrollment/queries';
 
-export const metadata: Metadata = { title: 'Workshops — Certificate desk' };
+export const metadata: Metadata = { title: 'Workshops' };
 export const dynamic = 'force-dynamic';
 
 export default async function DeskWorkshopsPage() {

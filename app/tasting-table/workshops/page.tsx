@@ -7,7 +7,7 @@ import { formatWorkshopDate, formatWorkshopTimes } from '@/lib/enrollment/format
 import { fetchRoster, fetchWorkshopsForDesk } from '@/lib/enrollment/queries';
 import { roleAllows } from '@/lib/roles';
 
-export const metadata: Metadata = { title: 'My workshops — Tasting table' };
+export const metadata: Metadata = { title: 'My workshops' };
 export const dynamic = 'force-dynamic';
 
 // Attendance opens on the day of the workshop (12 hours before it starts), as the server checks.

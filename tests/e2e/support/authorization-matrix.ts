@@ -442,9 +442,9 @@ const routes: RouteRow[] = [
   // Called by the payment service: the signature on the raw body is the only check, for everyone.
   {
     kind: 'route',
-    pattern: '/api/webhooks/stripe',
+    pattern: '/api/webhooks/payments',
     method: 'POST',
-    probe: () => ({ path: '/api/webhooks/stripe', body: '{}', headers: { 'content-type': 'application/json' } }),
+    probe: () => ({ path: '/api/webhooks/payments', body: '{}', headers: { 'content-type': 'application/json' } }),
     expect: { visitor: 400, own: 400, other: NA, instructor: 400, coordinator: 400, admin: 400, volunteer: 400 },
   },
   // Accounts that recover. The bodies fail validation, so no demo account changes; the demo accounts are confirmed (409: nothing to send).

@@ -492,7 +492,7 @@ export const SWEEP: Record<string, SweepSpec> = {
   'app/api/tools/salt/route.ts#GET': tool(['salt', 'amount', 'unit', 'waterMl'], { salt: fc.constantFrom(...SALT_KINDS, 'rock'), unit }),
   'app/api/waivers/route.ts#GET': { who: DESK, query: badQuery([]), mayAnswerOk: true },
   'app/api/waivers/route.ts#POST': { who: DESK, body: badJsonBodies(waiverFields) },
-  'app/api/webhooks/stripe/route.ts#POST': { who: EVERYONE, special: 'webhook' },
+  'app/api/webhooks/payments/route.ts#POST': { who: EVERYONE, special: 'webhook' },
 };
 
 // Ids 1..50 are the fixture's rows (users, courses, one enrollment): generated values never name them.

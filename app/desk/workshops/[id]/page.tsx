@@ -7,7 +7,7 @@ import { requirePageRole } from '@/lib/auth/guard';
 import { fetchCourseOptions, fetchInstructorOptions, fetchWorkshopsForDesk } from '@/lib/enrollment/queries';
 import { toZonedInput } from '@/lib/enrollment/time';
 
-export const metadata: Metadata = { title: 'Edit workshop — Certificate desk' };
+export const metadata: Metadata = { title: 'Edit a workshop' };
 export const dynamic = 'force-dynamic';
 
 export default async function EditWorkshopPage({ params }: { params: Promise<{ id: string }> }) {

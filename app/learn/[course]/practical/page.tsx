@@ -9,6 +9,7 @@ import { findActiveEnrollment } from '@/lib/access';
 import { requirePageRole } from '@/lib/auth/guard';
 import { fetchCourseHeading, fetchLearnerPracticals, summarize } from '@/lib/practicals/data';
 import { getProgramIdentity } from '@/lib/program/settings';
+import { batchName } from '@/lib/practicals/words';
 
 export const metadata: Metadata = { title: 'Practical batch' };
 
@@ -51,7 +52,7 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
         <p className="font-semibold">Caution</p>
         <p>
           Follow a tested recipe from a recognised food-safety authority exactly, and your local extension office&apos;s guidance for your altitude. A batch
-          with no flags is not thereby safe: discard any jar that leaks, bulges, spurts or smells off, without tasting it.
+          with nothing to double-check is not thereby safe: discard any jar that leaks, bulges, spurts or smells off, without tasting it.
         </p>
       </aside>
       <PracticalStatus courseSlug={slug} latest={latest} timeZone={program.timeZone} />
@@ -59,7 +60,7 @@ export default async function PracticalPage({ params }: { params: Promise<{ cour
         courseSlug={slug}
         round={(latest?.round ?? 0) + 1}
         open={canSubmit}
-        title={latest ? `Submit round ${latest.round + 1}` : 'Submit your batch'}
+        title={latest ? `Send your ${batchName(latest.round + 1)}` : 'Send your batch'}
       />
       <PracticalHistory rounds={rounds} timeZone={program.timeZone} />
     </div>

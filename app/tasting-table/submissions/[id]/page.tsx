@@ -16,8 +16,9 @@ import { fetchSubmission } from '@/lib/practicals/data';
 import { decisionRightFor } from '@/lib/practicals/service';
 import { formatDateTime, formatShortDate } from '@/lib/local-time';
 import { getProgramIdentity } from '@/lib/program/settings';
+import { batchName, batchTitle } from '@/lib/practicals/words';
 
-export const metadata: Metadata = { title: 'Practical submission' };
+export const metadata: Metadata = { title: 'Practical batch at the Tasting table' };
 
 export default async function SubmissionPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
@@ -38,12 +39,12 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
       </p>
       <header className="space-y-1">
         <h1 className="text-3xl font-bold">
-          {learner.name}, round {round.round}
+          {learner.name}, {batchName(round.round)}
         </h1>
         <p className="flex flex-wrap items-center gap-2 text-ink-soft">
           <Badge tone={PRACTICAL_STATUS_TONE[round.status]}>{PRACTICAL_STATUS_LABEL[round.status]}</Badge>
           <span>
-            {course.title} · submitted {when(round.submittedAt)}
+            {course.title} · sent {when(round.submittedAt)}
             {workshop ? ` · workshop ${formatShortDate(workshop.startsAt, workshop.timeZone)}, ${workshop.place.split(',')[0]}` : ' · self-paced'}
           </span>
         </p>
@@ -51,8 +52,8 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
 
       <div className="grid gap-6 lg:grid-cols-2">
         <div className="space-y-4">
-          <PhotoViewer photos={round.photos} label={`Photos of round ${round.round}`} />
-          <FlagList flags={round.flags} title="Automatic flags" />
+          <PhotoViewer photos={round.photos} label={`Photos of the ${batchName(round.round)}`} />
+          <FlagList flags={round.flags} title="Numbers to double-check" />
         </div>
         <BatchDetails details={round.details} expected={expected} />
       </div>
@@ -71,17 +72,17 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
       ) : null}
 
       {earlierRounds.length ? (
-        <section aria-labelledby="earlier-rounds" className="space-y-3">
-          <h2 id="earlier-rounds" className="text-xl font-bold">
-            Earlier rounds
+        <section aria-labelledby="earlier-batches" className="space-y-3">
+          <h2 id="earlier-batches" className="text-xl font-bold">
+            Earlier batches
           </h2>
           {earlierRounds.map((r) => (
-            <Card key={r.id} title={`Round ${r.round} (${PRACTICAL_STATUS_LABEL[r.status].toLowerCase()})`}>
+            <Card key={r.id} title={`${batchTitle(r.round)}: ${PRACTICAL_STATUS_LABEL[r.status]}`}>
               <div className="space-y-3">
                 <p className="text-sm text-ink-soft">
-                  Submitted {when(r.submittedAt)}. <Link href={`/tasting-table/submissions/${r.id}`}>Open round {r.round}</Link>
+                  Sent {when(r.submittedAt)}. <Link href={`/tasting-table/submissions/${r.id}`}>Open the {batchName(r.round)}</Link>
                 </p>
-                <FlagList flags={r.flags} title={`Flags on round ${r.round}`} level="h3" />
+                <FlagList flags={r.flags} title={`To double-check on the ${batchName(r.round)}`} level="h3" />
                 {r.reviews.map((review) => (
                   <ReviewSummary key={review.id} review={review} timeZone={timeZone} />
                 ))}
