@@ -9,7 +9,7 @@ import { CLOSED_MESSAGE } from '@/lib/users/invitation-state';
 import { findInvitation } from '@/lib/users/invitations';
 import { InvitationTokenSchema } from '@/lib/validations/invitation';
 
-export const metadata: Metadata = { title: 'Your invitation — Brinewright' };
+export const metadata: Metadata = { title: 'Your invitation' };
 export const dynamic = 'force-dynamic';
 
 export default async function InvitationPage({ searchParams }: { searchParams: Promise<{ token?: string | string[] }> }) {

@@ -88,6 +88,7 @@ describe('every page fits a 390 px phone and passes axe at 390 px and 1280 px', 
         const { path } = row.probe(fixtures, subject);
         for (const size of [PHONE, DESKTOP]) {
           await page.setViewportSize(size);
+          const started = Date.now();
           const response = await page.goto(path);
           if (response?.status() !== 200) {
             problems.push({ page: path, who: subject, width: size.width, what: `answered ${response?.status()}` });
@@ -106,7 +107,8 @@ describe('every page fits a 390 px phone and passes axe at 390 px and 1280 px', 
           }
           for (const v of await seriousViolations(page)) found.push(`axe ${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
           problems.push(...found.map((what) => ({ page: path, who: subject, width: size.width, what })));
-          if (process.env.E2E_LOG_PAGES) console.log(`[phone] ${path} as ${subject} at ${size.width}px: ${found.join(' | ') || 'fits, axe clean'}`);
+          if (process.env.E2E_LOG_PAGES)
+            console.log(`[phone] ${path} as ${subject} at ${size.width}px (${Date.now() - started} ms): ${found.join(' | ') || 'fits, axe clean'}`);
         }
       }
     }

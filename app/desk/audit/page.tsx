@@ -8,7 +8,7 @@ import { formatDateTime } from '@/lib/local-time';
 import { getProgramIdentity } from '@/lib/program/settings';
 import { AuditQuerySchema, type AuditQuery } from '@/lib/validations/audit';
 
-export const metadata: Metadata = { title: 'Audit log — Certificate desk' };
+export const metadata: Metadata = { title: 'Audit log at the Certificate desk' };
 
 type Props = { searchParams: Promise<Record<string, string | string[] | undefined>> };
 const one = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
@@ -25,7 +25,7 @@ function pageHref(query: AuditQuery, page: number): string {
   return text ? `/desk/audit?${text}` : '/desk/audit';
 }
 
-const field = 'mt-1 rounded-lg border border-ink-faint/40 bg-white px-2 py-1.5 font-normal';
+const field = 'mt-1 max-w-full rounded-lg border border-ink-faint/40 bg-white px-2 py-1.5 font-normal';
 
 export default async function AuditLogPage({ searchParams }: Props) {
   await requirePageRole('/desk/audit', 'coordinator');
@@ -42,7 +42,7 @@ export default async function AuditLogPage({ searchParams }: Props) {
         there. Entries are only ever added.
       </p>
       <form method="get" action="/desk/audit" aria-label="Filter the audit log" className="flex flex-wrap items-end gap-3">
-        <label className="flex flex-col text-sm font-medium">
+        <label className="flex min-w-0 max-w-full flex-col text-sm font-medium">
           Person
           <select name="person" defaultValue={query.person ? String(query.person) : ''} className={field}>
             <option value="">Anyone</option>
@@ -53,7 +53,7 @@ export default async function AuditLogPage({ searchParams }: Props) {
             ))}
           </select>
         </label>
-        <label className="flex flex-col text-sm font-medium">
+        <label className="flex min-w-0 max-w-full flex-col text-sm font-medium">
           Kind of action
           <select name="action" defaultValue={query.action ?? ''} className={field}>
             <option value="">Any action</option>
@@ -64,11 +64,11 @@ export default async function AuditLogPage({ searchParams }: Props) {
             ))}
           </select>
         </label>
-        <label className="flex flex-col text-sm font-medium">
+        <label className="flex min-w-0 max-w-full flex-col text-sm font-medium">
           From
           <input type="date" name="from" defaultValue={query.from ?? ''} className={field} />
         </label>
-        <label className="flex flex-col text-sm font-medium">
+        <label className="flex min-w-0 max-w-full flex-col text-sm font-medium">
           To
           <input type="date" name="to" defaultValue={query.to ?? ''} className={field} />
         </label>
