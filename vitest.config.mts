@@ -1,6 +1,7 @@
 import path from 'node:path';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vitest/config';
+import { integrationWorkers } from './tests/setup/integration-databases';
 
 const root = path.dirname(new URL(import.meta.url).pathname);
 const alias = {
@@ -41,7 +42,8 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           globalSetup: ['tests/setup/integration-global.ts'],
           setupFiles: ['tests/setup/integration.ts'],
-          fileParallelism: false,
+          // Files run side by side, each worker on its own database (tests/setup/integration-databases.ts).
+          maxWorkers: integrationWorkers(),
           // After the unit and component tests, before the browser tests (whose build runs meanwhile).
           sequence: { groupOrder: 1 },
           testTimeout: 30_000,

@@ -1,5 +1,12 @@
 import { afterAll, vi } from 'vitest';
 import type { SessionUser } from '../../lib/auth/users';
+import { workerDatabaseUrl } from './integration-databases';
+
+// This worker's own database (tests/setup/integration-global.ts built one per worker).
+if (!process.env.BRINEWRIGHT_WORKER_DATABASE) {
+  process.env.DATABASE_URL = workerDatabaseUrl(process.env.DATABASE_URL!, Number(process.env.VITEST_POOL_ID ?? 1));
+  process.env.BRINEWRIGHT_WORKER_DATABASE = '1';
+}
 
 // Route handlers read the session from next-auth's session cookie (lib/auth/guard.ts); tests choose
 // who is signed in with actAs() from tests/support/session.ts. The mocked cookie store carries a real

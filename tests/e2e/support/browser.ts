@@ -74,12 +74,16 @@ export async function signIn(page: Page, email: string, password: string) {
  * Follows the page's requests so a test can wait for its network to go quiet, and, when it does
  * not, name the requests still open (Playwright's `networkidle` only says that it timed out).
  * Start it before the first navigation it should cover (openBrowser starts one as `network`).
+ * Link prefetches (the `next-router-prefetch` header) are not followed.
  * E2E_LOG_REQUESTS=1 prints each request and how long it took.
  */
 export function watchNetwork(page: Page) {
   const open = new Map<object, { url: string; since: number }>();
   let lastChange = Date.now();
   page.on('request', (request) => {
+    // Next's <Link> prefetches the routes its visible links point to; they are the router's
+    // speculation, not the page's content, and the browser may hold them open at low priority.
+    if (request.headers()['next-router-prefetch']) return;
     open.set(request, { url: `${request.method()} ${request.url()}`, since: Date.now() });
     if (process.env.E2E_LOG_REQUESTS) console.log('[req]', request.method(), request.url());
     lastChange = Date.now();
