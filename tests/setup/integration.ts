@@ -1,12 +1,11 @@
 import { afterAll, vi } from 'vitest';
 import type { SessionUser } from '../../lib/auth/users';
-import { workerDatabaseUrl } from './integration-databases';
+import { claimWorkerDatabase, integrationWorkers } from './integration-databases';
 
-// This worker's own database (tests/setup/integration-global.ts built one per worker).
-if (!process.env.BRINEWRIGHT_WORKER_DATABASE) {
-  process.env.DATABASE_URL = workerDatabaseUrl(process.env.DATABASE_URL!, Number(process.env.VITEST_POOL_ID ?? 1));
-  process.env.BRINEWRIGHT_WORKER_DATABASE = '1';
-}
+// This file's own database for as long as it runs (tests/setup/integration-global.ts built one per slot).
+process.env.BRINEWRIGHT_BASE_DATABASE_URL ??= process.env.DATABASE_URL;
+const slot = await claimWorkerDatabase(process.env.BRINEWRIGHT_BASE_DATABASE_URL!, integrationWorkers());
+process.env.DATABASE_URL = slot.url;
 
 // Route handlers read the session from next-auth's session cookie (lib/auth/guard.ts); tests choose
 // who is signed in with actAs() from tests/support/session.ts. The mocked cookie store carries a real
@@ -48,4 +47,5 @@ afterAll(async () => {
   await g.__brinewrightSequelize?.close();
   g.__brinewrightSequelize = undefined;
   (globalThis as { __brinewrightModels?: unknown }).__brinewrightModels = undefined;
+  await slot.release();
 });
