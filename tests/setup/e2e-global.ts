@@ -34,6 +34,8 @@ export default async function setup() {
     ...process.env,
     NODE_ENV: 'production' as const,
     NEXT_TELEMETRY_DISABLED: '1',
+    // Types are checked by `npm run typecheck` (in CI); the tests' build only needs the bundle.
+    BRINEWRIGHT_SKIP_TYPECHECK: '1',
     NEXT_DIST_DIR: distDir,
     DATABASE_URL: url,
     NEXTAUTH_URL: baseUrl,

@@ -52,7 +52,8 @@ export async function seriousViolations(page: Page): Promise<AxeViolation[]> {
   // streamed in, which can be a moment after its content shows. Wait for a title (at most 5 s);
   // a page without one is still reported by axe below.
   await page.waitForFunction(() => document.title.trim() !== '', undefined, { timeout: 5_000 }).catch(() => undefined);
-  await page.addScriptTag({ content: AXE_SOURCE });
+  // Once per document: a second run on the same page (after a resize, say) reuses it.
+  if (!(await page.evaluate(() => 'axe' in window))) await page.addScriptTag({ content: AXE_SOURCE });
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: AxeViolation[] }> } }).axe;
     const result = await axe.run(document, { resultTypes: ['violations'] });
