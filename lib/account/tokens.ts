@@ -30,8 +30,10 @@ export async function issueToken(
   const now = options.now ?? new Date();
   const token = crypto.randomBytes(32).toString('base64url');
   await AccountToken.update({ usedAt: now }, { where: { userId, purpose, usedAt: null, expiresAt: { [Op.gt]: now } }, transaction: options.transaction });
+  // Made and expiring by the same clock reading, so a link lives exactly its minutes.
+  const expiresAt = new Date(now.getTime() + options.validMinutes * 60_000);
   await AccountToken.create(
-    { userId, purpose, tokenHash: hashToken(token), newEmail: options.newEmail ?? null, expiresAt: new Date(now.getTime() + options.validMinutes * 60_000) },
+    { userId, purpose, tokenHash: hashToken(token), newEmail: options.newEmail ?? null, expiresAt, createdAt: now },
     { transaction: options.transaction },
   );
   return token;
