@@ -1,7 +1,7 @@
 import path from 'node:path';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vitest/config';
-import { integrationWorkers } from './tests/setup/integration-databases';
+import { slotCount } from './tests/setup/slots';
 
 const root = path.dirname(new URL(import.meta.url).pathname);
 const alias = {
@@ -42,8 +42,8 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           globalSetup: ['tests/setup/integration-global.ts'],
           setupFiles: ['tests/setup/integration.ts'],
-          // Files run side by side, each worker on its own database (tests/setup/integration-databases.ts).
-          maxWorkers: integrationWorkers(),
+          // Files run side by side, each on its own database (tests/setup/slots.ts).
+          maxWorkers: slotCount('INTEGRATION_WORKERS'),
           // After the unit and component tests, before the browser tests (whose build runs meanwhile).
           sequence: { groupOrder: 1 },
           testTimeout: 30_000,
@@ -59,7 +59,8 @@ export default defineConfig({
           globalSetup: ['tests/setup/e2e-global.ts'],
           // Waits for the build and the app, which the global setup starts in the background.
           setupFiles: ['tests/setup/e2e.ts'],
-          fileParallelism: false,
+          // Files run side by side, each against its own app, database and fakes (tests/setup/slots.ts).
+          maxWorkers: slotCount('E2E_WORKERS'),
           sequence: { groupOrder: 2 },
           testTimeout: 90_000,
           hookTimeout: 300_000,

@@ -63,7 +63,7 @@ process.on('SIGINT', () => process.exit(130));
 function appEnv(): NodeJS.ProcessEnv {
   const secretFile = path.join(root, '.data', 'nextauth-secret');
   const secret = fs.existsSync(secretFile) ? fs.readFileSync(secretFile, 'utf8').trim() : 'bench-secret-0123456789abcdef';
-  // Both pages measured are static; the database is only named so the app's configuration check passes.
+  // Neither page reads the database for a signed-out visitor; it is only named so the configuration check passes.
   const databaseUrl = process.env.DATABASE_URL ?? execFileSync('bash', [path.join(root, 'scripts/db.sh'), 'url', 'brinewright'], { encoding: 'utf8' }).trim();
   return {
     ...process.env,

@@ -2,14 +2,22 @@ import os from 'node:os';
 import path from 'node:path';
 import fs from 'node:fs';
 import sharp from 'sharp';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createSequelize } from '../../lib/db';
 import { baseUrl, openBrowser, seriousViolations, signIn } from './support/browser';
 
 describe('the program settings page', () => {
   let browser: Awaited<ReturnType<typeof openBrowser>>;
   const logoFile = path.join(os.tmpdir(), `brinewright-e2e-logo-${process.pid}.png`);
 
+  // The demo program as the seed made it, put back afterwards for the browser files that follow on this app.
+  let sequelize: Sequelize;
+  let seeded: Record<string, unknown>[] = [];
+
   beforeAll(async () => {
+    sequelize = createSequelize(process.env.E2E_DATABASE_URL!, { poolMax: 1 });
+    seeded = await sequelize.query('SELECT * FROM program_settings', { type: QueryTypes.SELECT });
     browser = await openBrowser();
     await sharp({ create: { width: 600, height: 300, channels: 4, background: '#b4572b' } })
       .png()
@@ -18,6 +26,11 @@ describe('the program settings page', () => {
   afterAll(async () => {
     await browser?.close();
     fs.rmSync(logoFile, { force: true });
+    await sequelize.transaction(async (transaction) => {
+      await sequelize.query('DELETE FROM program_settings', { transaction });
+      if (seeded.length) await sequelize.getQueryInterface().bulkInsert('program_settings', seeded, { transaction });
+    });
+    await sequelize.close();
   });
 
   it('the admin sees the demo program, changes it with a logo, and the header, the logo route and the verification page follow', async () => {

@@ -6,6 +6,11 @@ import path from 'node:path';
 // app it builds and starts in the background answers, or why it will not.
 export type E2eState = { status: 'ready'; pid: number } | { status: 'failed'; message: string };
 
+/** Slot `slot`'s app port (1-based): E2E_PORT for the first, then 10 apart (each app's fakes take the next three ports). */
+export function e2eSlotPort(basePort: number, slot: number): number {
+  return basePort + 10 * (slot - 1);
+}
+
 /** One file per port, so several checkouts with their own E2E_PORT do not read each other's. */
 export function e2eStatePath(port: number): string {
   return path.join(os.tmpdir(), `brinewright-e2e-${port}.json`);

@@ -1,11 +1,11 @@
 import { afterAll, vi } from 'vitest';
 import type { SessionUser } from '../../lib/auth/users';
-import { claimWorkerDatabase, integrationWorkers } from './integration-databases';
+import { claimSlot, slotCount, slotDatabaseUrl } from './slots';
 
 // This file's own database for as long as it runs (tests/setup/integration-global.ts built one per slot).
 process.env.BRINEWRIGHT_BASE_DATABASE_URL ??= process.env.DATABASE_URL;
-const slot = await claimWorkerDatabase(process.env.BRINEWRIGHT_BASE_DATABASE_URL!, integrationWorkers());
-process.env.DATABASE_URL = slot.url;
+const slot = await claimSlot(process.env.BRINEWRIGHT_BASE_DATABASE_URL!, slotCount('INTEGRATION_WORKERS'));
+process.env.DATABASE_URL = slotDatabaseUrl(process.env.BRINEWRIGHT_BASE_DATABASE_URL!, slot.slot);
 
 // Route handlers read the session from next-auth's session cookie (lib/auth/guard.ts); tests choose
 // who is signed in with actAs() from tests/support/session.ts. The mocked cookie store carries a real
