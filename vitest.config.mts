@@ -1,6 +1,7 @@
 import path from 'node:path';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vitest/config';
+import { LongestFirstSequencer } from './tests/setup/sequencer';
 import { slotCount } from './tests/setup/slots';
 
 const root = path.dirname(new URL(import.meta.url).pathname);
@@ -14,6 +15,7 @@ export default defineConfig({
   plugins: [react()],
   resolve: { alias },
   test: {
+    sequence: { sequencer: LongestFirstSequencer },
     projects: [
       {
         extends: true,
