@@ -22,6 +22,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createSequelize } from '../../lib/db';
 import { rebuildDatabase, waitForOk } from '../../lib/migrator';
 import { startAppServer, stopAppServer } from '../../scripts/app-server';
+import { mariadbOptions } from '../support/mariadb-options';
 
 const root = path.resolve(__dirname, '../..');
 const run = promisify(execFile);
@@ -123,18 +124,10 @@ function answersFor(questions: PublicQuestion[]) {
 async function firstConnection(starting: Promise<unknown>): Promise<number> {
   let failed: unknown = null;
   starting.catch((error) => (failed = error));
-  const url = new URL(dbUrl);
   for (;;) {
     if (failed) throw failed;
     try {
-      const conn = await mariadb.createConnection({
-        host: url.hostname,
-        port: Number(url.port),
-        user: decodeURIComponent(url.username),
-        password: decodeURIComponent(url.password),
-        database: url.pathname.slice(1),
-        connectTimeout: 250,
-      });
+      const conn = await mariadb.createConnection({ ...mariadbOptions(dbUrl), connectTimeout: 250 });
       const at = Date.now();
       await conn.end();
       return at;

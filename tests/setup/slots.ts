@@ -2,6 +2,7 @@
 // its own database (brinewright_test_1, brinewright_test_2, …), a browser file against its own app,
 // database and fakes. The global setups build one of each per slot; each file claims a free slot.
 import * as mariadb from 'mariadb';
+import { mariadbOptions } from '../support/mariadb-options';
 
 /** How many slots (and vitest workers) a project uses: the variable's value, 2 by default (two cores here). */
 export function slotCount(variable: 'INTEGRATION_WORKERS' | 'E2E_WORKERS'): number {
@@ -24,14 +25,8 @@ export function slotDatabaseUrl(baseUrl: string, slot: number): string {
  * connection. vitest's own worker number is not used: a worker kept from an earlier group can repeat it.
  */
 export async function claimSlot(baseUrl: string, slots: number): Promise<{ slot: number; release: () => Promise<void> }> {
-  const url = new URL(baseUrl);
-  const conn = await mariadb.createConnection({
-    host: url.hostname,
-    port: Number(url.port),
-    user: decodeURIComponent(url.username),
-    password: decodeURIComponent(url.password),
-  });
-  const name = url.pathname.slice(1);
+  const conn = await mariadb.createConnection(mariadbOptions(baseUrl, false));
+  const name = new URL(baseUrl).pathname.slice(1);
   for (const until = Date.now() + 30 * 60_000; Date.now() < until;) {
     for (const slot of slotList(slots)) {
       const [row] = await conn.query('SELECT GET_LOCK(?, 0) AS got', [`${name}_slot_${slot}`]);

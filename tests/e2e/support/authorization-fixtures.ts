@@ -7,6 +7,7 @@ import bcrypt from 'bcryptjs';
 import mariadb from 'mariadb';
 import sharp from 'sharp';
 import { generateSerial } from '../../../lib/certificates/serial';
+import { mariadbOptions } from '../../support/mariadb-options';
 import type { Fixtures } from './authorization-matrix';
 import { send, signInHttp, type Jar } from './http';
 
@@ -17,13 +18,8 @@ type Conn = mariadb.Connection;
 export async function connect(): Promise<Conn> {
   const raw = process.env.E2E_DATABASE_URL;
   if (!raw) throw new Error('E2E_DATABASE_URL is not set');
-  const url = new URL(raw);
   return mariadb.createConnection({
-    host: url.hostname,
-    port: Number(url.port || 3306),
-    user: decodeURIComponent(url.username),
-    password: decodeURIComponent(url.password),
-    database: url.pathname.slice(1),
+    ...mariadbOptions(raw),
     bigIntAsNumber: true,
     insertIdAsNumber: true,
   });
