@@ -59,6 +59,10 @@ const nextConfig = {
   expireTime: 600,
   experimental: {
     authInterrupts: true,
+    // Turbopack keeps a build cache in the dist folder (on by default): a second build on the same
+    // checkout takes about half the CPU. A clean clone (CI) has none to reuse, and writing it costs
+    // about 10 s, so .ci/run turns it off with BRINEWRIGHT_BUILD_CACHE=0.
+    turbopackFileSystemCacheForBuild: process.env.BRINEWRIGHT_BUILD_CACHE !== '0',
   },
   async headers() {
     return [

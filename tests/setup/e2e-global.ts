@@ -10,6 +10,7 @@ import { slotCount, slotDatabaseUrl, slotList } from './slots';
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const servers: ChildProcess[] = [];
 let build: ChildProcess | undefined;
+let stopping = false;
 const services: ChildProcess[] = [];
 
 /** `next build` without blocking this process's event loop (vitest runs the other projects meanwhile). */
@@ -64,22 +65,26 @@ export default async function setup() {
     return { slot, port, databaseUrl, env: slotEnv(port, databaseUrl, distDir) };
   });
   for (const { port } of slots) fs.rmSync(e2eStatePath(port), { force: true });
-  await Promise.all(slots.map((s) => rebuildDatabase(s.databaseUrl, { allowed: /^brinewright_e2e\w*$/, purpose: 'browser tests', seed: true })));
-
-  // The local fakes (payments, SMTP + mailbox) and the worker of each slot.
   const tsx = path.join(root, 'node_modules/.bin/tsx');
   process.once('exit', () => [...services, ...servers].forEach((child) => child.kill('SIGTERM')));
-  for (const { port, env } of slots) {
-    services.push(spawn(tsx, ['scripts/fakes.ts'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] }));
-    services.push(spawn(tsx, ['--conditions=react-server', 'scripts/worker.ts'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] }));
-    await waitForOk(`http://127.0.0.1:${port + 1}/_fake/health`, 30_000);
-  }
 
-  // The build and the app starts run in the background: the browser files come last (vitest.config.mts,
-  // sequence.groupOrder), so the unit, component and integration tests run meanwhile, and
-  // tests/setup/e2e.ts holds each browser file until its slot's state file says the app answers.
+  // Everything else runs in the background: the browser files come last in their group
+  // (tests/setup/sequencer.ts), so the other tests run meanwhile, and tests/setup/e2e.ts holds each
+  // browser file until its slot's state file says the app answers (or why it did not start).
+  // First each slot's database (migrated and seeded: the build may read it), then the build, and
+  // beside it each slot's fakes (payments, SMTP + mailbox) and worker; then each slot's app.
   const ready = (async () => {
-    if (process.env.E2E_SKIP_BUILD !== '1' || !fs.existsSync(path.join(root, distDir, 'BUILD_ID'))) await runBuild(slots[0].env);
+    await Promise.all(slots.map(({ databaseUrl }) => rebuildDatabase(databaseUrl, { allowed: /^brinewright_e2e\w*$/, purpose: 'browser tests', seed: true })));
+    if (stopping) return;
+    const reuse = process.env.E2E_SKIP_BUILD === '1' && fs.existsSync(path.join(root, distDir, 'BUILD_ID'));
+    const built = reuse ? Promise.resolve() : runBuild(slots[0].env);
+    built.catch(() => undefined); // awaited below, after the fakes
+    for (const { env } of slots) {
+      services.push(spawn(tsx, ['scripts/fakes.ts'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] }));
+      services.push(spawn(tsx, ['--conditions=react-server', 'scripts/worker.ts'], { cwd: root, env, stdio: ['ignore', 'ignore', 'inherit'] }));
+    }
+    await Promise.all(slots.map(({ port }) => waitForOk(`http://127.0.0.1:${port + 1}/_fake/health`, 60_000)));
+    await built;
     build = undefined;
     await Promise.all(
       slots.map(async ({ port, env }) => {
@@ -99,6 +104,7 @@ export default async function setup() {
   });
 
   return async () => {
+    stopping = true;
     build?.kill('SIGTERM');
     await ready;
     for (const child of [...servers, ...services]) child.kill('SIGTERM');

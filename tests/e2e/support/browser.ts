@@ -12,13 +12,13 @@ export const baseUrl = () => {
   return url;
 };
 
-/** A fresh headless Debian Chromium with an empty profile (relative addresses go to `base`, the e2e app by default). */
+/** A fresh Debian headless Chromium (chromium-headless-shell, which scripts/lib.sh installs) with an empty profile (relative addresses go to `base`, the e2e app by default). */
 export async function openBrowser(
   base: string = baseUrl(),
 ): Promise<{ context: BrowserContext; page: Page; network: ReturnType<typeof watchNetwork>; close: () => Promise<void> }> {
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'brinewright-e2e-'));
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium-headless-shell',
     headless: true,
     args: [
       '--headless',
