@@ -4,7 +4,7 @@
 import * as mariadb from 'mariadb';
 import { mariadbOptions } from '../support/mariadb-options';
 
-/** How many slots (and vitest workers) a project uses: the variable's value, 2 by default (two cores here). */
+/** How many slots a project has (at most that many of its files run at once): the variable's value, 2 by default (two cores here). */
 export function slotCount(variable: 'INTEGRATION_WORKERS' | 'E2E_WORKERS'): number {
   const n = Number(process.env[variable] ?? 2);
   return Number.isInteger(n) && n >= 1 ? n : 2;
